@@ -1,0 +1,10 @@
+import type { QueryInterface } from 'sequelize';
+import * as m0001 from './20261201-0001-platform';
+
+export interface MigrationModule {
+  up: (p: { context: QueryInterface }) => Promise<void>;
+  down: (p: { context: QueryInterface }) => Promise<void>;
+}
+
+/** Every migration, in order. Add new files here; never edit or reorder one that has shipped. */
+export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [['20261201-0001-platform', m0001]];

@@ -1,0 +1,141 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import connectSessionSequelize from 'connect-session-sequelize';
+import { csrfSync } from 'csrf-sync';
+import express, { type Express, type RequestHandler } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { Sequelize } from 'sequelize';
+import type { Env } from './config/env';
+import { AppError } from './errors/app-error';
+import { mount } from './lib/routes';
+import type { Logger } from './logger';
+import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { initModels } from './models';
+import { accountRouter } from './modules/account/account.router';
+import { adminRouter } from './modules/admin/admin.router';
+import type { AuthDeps } from './modules/auth/auth.service';
+import { authRouter } from './modules/auth/auth.router';
+import { createPassport } from './modules/auth/passport';
+import { clubRouter } from './modules/club/club.router';
+import { healthRouter } from './modules/health/health.router';
+
+export interface AppDeps {
+  env: Env;
+  sequelize: Sequelize;
+  logger: Logger;
+}
+
+export interface BuiltApp {
+  app: Express;
+  /** Stops timers the app owns (session expiry sweeps). */
+  close: () => void;
+}
+
+/** Builds the Express app: middleware, routers, 404 and the error handler. Does not listen. */
+export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
+  initModels(sequelize);
+  const app = express();
+  app.set('trust proxy', 'loopback');
+  app.disable('x-powered-by');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          'default-src': ["'self'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'script-src': ["'self'"],
+          'connect-src': ["'self'"],
+          'frame-ancestors': ["'none'"],
+          'form-action': ["'self'"],
+          'upgrade-insecure-requests': env.COOKIE_SECURE ? [] : null,
+          'report-uri': ['/api/csp-report'],
+        },
+      },
+      strictTransportSecurity: env.COOKIE_SECURE,
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health/ping' },
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+    }),
+  );
+
+  const SequelizeStore = connectSessionSequelize(session.Store);
+  const store = new SequelizeStore({
+    db: sequelize,
+    table: 'Session',
+    checkExpirationInterval: 15 * 60_000,
+    expiration: env.SESSION_MAX_AGE_H * 3600_000,
+    extendDefaultFields: (defaults: { data: string; expires: Date }, s: { passport?: { user?: number } }) => ({
+      data: defaults.data,
+      expires: defaults.expires,
+      userId: s.passport?.user ?? null,
+    }),
+  });
+
+  const authDeps: AuthDeps = { sequelize, publicUrl: env.PUBLIC_URL, bcryptCost: env.BCRYPT_COST };
+  const passport = createPassport(authDeps);
+  const { csrfSynchronisedProtection, generateToken } = csrfSync({
+    getTokenFromRequest: (req) => {
+      const h = req.headers['x-csrf-token'];
+      return typeof h === 'string' ? h : undefined;
+    },
+  });
+  const csrf: RequestHandler = (req, res, next) => {
+    csrfSynchronisedProtection(req, res, (err?: unknown) => {
+      if (err) next(new AppError('CSRF_INVALID', 'Your session token is missing or stale. Reload the page and try again.'));
+      else next();
+    });
+  };
+
+  const api = express.Router();
+  // Routes that must see the raw body or come from outside a browser session are mounted before the JSON parser and CSRF check.
+  api.post('/csp-report', express.json({ type: ['application/csp-report', 'application/json', 'application/reports+json'], limit: '20kb' }), (req, res) => {
+    logger.warn({ csp: req.body as unknown }, 'csp violation');
+    res.status(204).end();
+  });
+  mount(app, '/api', api);
+
+  app.use('/api', express.json({ limit: '200kb' }));
+  app.use(
+    '/api',
+    session({
+      name: 'rw.sid',
+      secret: env.SESSION_SECRET,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: env.COOKIE_SECURE, maxAge: env.SESSION_MAX_AGE_H * 3600_000 },
+    }),
+  );
+  app.use('/api', passport.initialize(), passport.session());
+  app.use('/api', csrf);
+
+  const newCsrfToken = (req: express.Request) => generateToken(req, true);
+  mount(app, '/api/health', healthRouter(sequelize));
+  mount(app, '/api/auth', authRouter({ ...authDeps, env, passport, newCsrfToken }));
+  mount(app, '/api/account', accountRouter(authDeps));
+  mount(app, '/api/admin', adminRouter(sequelize));
+  mount(app, '/api/club', clubRouter());
+
+  app.use('/api', notFoundHandler);
+
+  const webDist = env.WEB_DIST;
+  if (webDist && existsSync(join(webDist, 'index.html'))) {
+    app.use('/assets', express.static(join(webDist, 'assets'), { immutable: true, maxAge: '365d', index: false }));
+    app.use(express.static(webDist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => {
+      res.set('Cache-Control', 'no-cache').sendFile(join(webDist, 'index.html'));
+    });
+  }
+  app.use(errorHandler(logger));
+
+  return { app, close: () => (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.() };
+}

@@ -1,0 +1,32 @@
+import type { Sequelize } from 'sequelize';
+import { AuditEvent, initAuditEvent } from './audit-event.model';
+import { ClubSetting, initClubSetting } from './club-setting.model';
+import { EmailToken, initEmailToken } from './email-token.model';
+import { Harbor, initHarbor } from './harbor.model';
+import { OutboxEmail, initOutboxEmail } from './outbox-email.model';
+import { Session, initSession } from './session.model';
+import { User, initUser } from './user.model';
+import { UserRole, initUserRole } from './user-role.model';
+
+let initialised: Sequelize | null = null;
+
+/** Initialises every model on `sequelize` and wires associations. Models are process-wide: the first instance wins. */
+export function initModels(sequelize: Sequelize) {
+  if (initialised) return;
+  initUser(sequelize);
+  initUserRole(sequelize);
+  initEmailToken(sequelize);
+  initSession(sequelize);
+  initHarbor(sequelize);
+  initClubSetting(sequelize);
+  initOutboxEmail(sequelize);
+  initAuditEvent(sequelize);
+
+  User.hasMany(UserRole, { as: 'roles', foreignKey: 'userId' });
+  UserRole.belongsTo(User, { foreignKey: 'userId' });
+  EmailToken.belongsTo(User, { foreignKey: 'userId' });
+  AuditEvent.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
+  initialised = sequelize;
+}
+
+export { AuditEvent, ClubSetting, EmailToken, Harbor, OutboxEmail, Session, User, UserRole };

@@ -1,0 +1,25 @@
+import { Router } from 'express';
+import type { Sequelize } from 'sequelize';
+import { z } from 'zod';
+import { setRolesSchema, userListQuerySchema } from '@app/shared';
+import { currentUser, requireRole } from '../../middleware/require-auth';
+import { toUserDto } from '../auth/user.presenter';
+import { listUsers, setRoles } from './users.service';
+
+const userParams = z.object({ userId: z.coerce.number().int().positive('Unknown user') });
+
+export function adminRouter(sequelize: Sequelize) {
+  const r = Router();
+  r.use(requireRole('admin'));
+  r.get('/users', async (req, res) => {
+    const { q } = userListQuerySchema.parse(req.query);
+    res.json({ data: (await listUsers(q)).map(toUserDto) });
+  });
+  r.put('/users/:userId/roles', async (req, res) => {
+    const { userId } = userParams.parse(req.params);
+    const { roles } = setRolesSchema.parse(req.body);
+    const user = await setRoles(sequelize, currentUser(req), userId, roles);
+    res.json({ data: { user: toUserDto(user) } });
+  });
+  return r;
+}

@@ -1,0 +1,155 @@
+import { randomBytes } from 'node:crypto';
+import bcrypt from 'bcryptjs';
+import type { Sequelize, Transaction } from 'sequelize';
+import type { ResetConfirmInput, SignupInput } from '@app/shared';
+import { AppError } from '../../errors/app-error';
+import { Session, User, UserRole } from '../../models';
+import { recordAudit } from '../audit/audit.service';
+import { enqueueEmail } from '../mail/outbox.service';
+import { actionEmail } from '../mail/templates';
+import { consumeToken, issueToken } from './tokens';
+
+export interface AuthDeps {
+  sequelize: Sequelize;
+  publicUrl: string;
+  bcryptCost: number;
+}
+
+// A bcrypt hash of a random string at the configured cost, compared when the e-mail is unknown so that both
+// paths take the same time and sign-in does not reveal which addresses have accounts.
+const dummyHashes = new Map<number, string>();
+const dummyHash = (cost: number) => {
+  let h = dummyHashes.get(cost);
+  if (!h) dummyHashes.set(cost, (h = bcrypt.hashSync(randomBytes(16).toString('hex'), cost)));
+  return h;
+};
+
+export const findUserByEmail = (email: string) =>
+  User.findOne({ where: { email: email.toLowerCase() }, include: [{ model: UserRole, as: 'roles' }] });
+
+export const findUserById = (id: number) => User.findByPk(id, { include: [{ model: UserRole, as: 'roles' }] });
+
+/**
+ * Creates an unverified member and e-mails a verification link. When the address is already registered, the
+ * owner gets a "you already have an account" note instead, so sign-up never reveals who is a member.
+ */
+export async function signup(deps: AuthDeps, input: SignupInput): Promise<void> {
+  const existing = await findUserByEmail(input.email);
+  if (existing) {
+    await enqueueEmail(
+      actionEmail({
+        to: existing.email,
+        kind: 'signup-existing',
+        subject: 'You already have a Rodewise account',
+        greeting: `Hello ${existing.displayName},`,
+        lines: ['Someone (perhaps you) tried to join Rodewise with this e-mail address, which already has an account.'],
+        actionLabel: 'Reset your password',
+        actionUrl: `${deps.publicUrl}/reset`,
+      }),
+    );
+    return;
+  }
+  const passwordHash = await bcrypt.hash(input.password, deps.bcryptCost);
+  await deps.sequelize.transaction(async (transaction) => {
+    const user = await User.create({ email: input.email, displayName: input.displayName, passwordHash, emailVerifiedAt: null }, { transaction });
+    await UserRole.create({ userId: user.id, role: 'member', grantedById: null }, { transaction });
+    await sendVerification(deps, user, transaction);
+  });
+}
+
+async function sendVerification(deps: AuthDeps, user: User, transaction?: Transaction) {
+  const token = await issueToken(user.id, 'verify', transaction);
+  await enqueueEmail(
+    actionEmail({
+      to: user.email,
+      kind: 'verify-email',
+      subject: 'Confirm your e-mail for Rodewise',
+      greeting: `Welcome aboard, ${user.displayName}.`,
+      lines: ['Please confirm this e-mail address to finish joining your club on Rodewise. The link works for 48 hours.'],
+      actionLabel: 'Confirm my e-mail',
+      actionUrl: `${deps.publicUrl}/verify-email?token=${token}`,
+    }),
+    transaction,
+  );
+}
+
+/** Sends a fresh verification link to an unverified account; silent for unknown or verified addresses. */
+export async function resendVerification(deps: AuthDeps, email: string): Promise<void> {
+  const user = await findUserByEmail(email);
+  if (!user || user.emailVerifiedAt) return;
+  await sendVerification(deps, user);
+}
+
+/** Marks the e-mail verified; 410 for a used or expired link. */
+export async function verifyEmail(deps: AuthDeps, token: string): Promise<User> {
+  const userId = await deps.sequelize.transaction(async (t) => {
+    const id = await consumeToken(token, 'verify', t);
+    await User.update({ emailVerifiedAt: new Date() }, { where: { id }, transaction: t });
+    return id;
+  });
+  const user = await findUserById(userId);
+  if (!user) throw new AppError('GONE', 'This account no longer exists');
+  return user;
+}
+
+/** Checks e-mail + password. Throws UNAUTHENTICATED (same message for both failures) or EMAIL_NOT_VERIFIED. */
+export async function checkCredentials(deps: AuthDeps, email: string, password: string): Promise<User> {
+  const user = await findUserByEmail(email);
+  const ok = await bcrypt.compare(password, user?.passwordHash ?? dummyHash(deps.bcryptCost));
+  if (!user || !ok) throw new AppError('UNAUTHENTICATED', 'E-mail or password is wrong');
+  if (!user.emailVerifiedAt) {
+    throw new AppError('EMAIL_NOT_VERIFIED', 'Please confirm your e-mail first: use the link we sent, or ask for a new one.');
+  }
+  return user;
+}
+
+/** E-mails a reset link when the account exists; the caller always answers 202. */
+export async function requestPasswordReset(deps: AuthDeps, email: string): Promise<void> {
+  const user = await findUserByEmail(email);
+  if (!user) return;
+  const token = await issueToken(user.id, 'reset');
+  await enqueueEmail(
+    actionEmail({
+      to: user.email,
+      kind: 'password-reset',
+      subject: 'Reset your Rodewise password',
+      greeting: `Hello ${user.displayName},`,
+      lines: ['We received a request to reset your password. The link works once, for one hour.'],
+      actionLabel: 'Choose a new password',
+      actionUrl: `${deps.publicUrl}/reset-password?token=${token}`,
+      footer: 'If you did not ask for this, ignore this e-mail: your password stays as it is.',
+    }),
+  );
+}
+
+/** Sets a new password from a reset link, signs the user out everywhere, and confirms by e-mail. */
+export async function confirmPasswordReset(deps: AuthDeps, input: ResetConfirmInput): Promise<void> {
+  const passwordHash = await bcrypt.hash(input.password, deps.bcryptCost);
+  await deps.sequelize.transaction(async (t) => {
+    const userId = await consumeToken(input.token, 'reset', t);
+    const user = await User.findByPk(userId, { transaction: t, lock: t.LOCK.UPDATE });
+    if (!user) throw new AppError('GONE', 'This account no longer exists');
+    await user.update({ passwordHash, emailVerifiedAt: user.emailVerifiedAt ?? new Date() }, { transaction: t });
+    await Session.destroy({ where: { userId }, transaction: t });
+    await recordAudit({ actorId: userId, area: 'auth', action: 'password.reset', subjectType: 'user', subjectId: String(userId) }, t);
+    await enqueueEmail(
+      actionEmail({
+        to: user.email,
+        kind: 'password-changed',
+        subject: 'Your Rodewise password was changed',
+        greeting: `Hello ${user.displayName},`,
+        lines: ['Your password was just changed and every device was signed out.'],
+        footer: 'If this was not you, reset your password now and tell your club admin.',
+      }),
+      t,
+    );
+  });
+}
+
+/** Changes the password of a signed-in user after checking the current one. */
+export async function changePassword(deps: AuthDeps, user: User, currentPassword: string, newPassword: string) {
+  if (!(await bcrypt.compare(currentPassword, user.passwordHash))) {
+    throw new AppError('VALIDATION_FAILED', 'Some fields need attention', { currentPassword: 'This is not your current password' });
+  }
+  await user.update({ passwordHash: await bcrypt.hash(newPassword, deps.bcryptCost) });
+}

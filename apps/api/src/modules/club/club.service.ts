@@ -1,0 +1,25 @@
+import { z } from 'zod';
+import { ClubSetting, Harbor } from '../../models';
+
+/** Every club setting, with its schema and default. Stored as JSON in club_settings. */
+export const SETTINGS = {
+  clubName: z.string().min(2).max(100).default('Your club'),
+  listingRequiresPaidUp: z.boolean().default(true),
+  substantialEditRatio: z.number().min(0).max(1).default(0.2),
+  membersOnlyPostsAllowed: z.boolean().default(true),
+} as const;
+export type SettingKey = keyof typeof SETTINGS;
+export type SettingValue<K extends SettingKey> = z.infer<(typeof SETTINGS)[K]>;
+
+/** Reads one setting, falling back to its default when unset or invalid. */
+export async function getSetting<K extends SettingKey>(key: K): Promise<SettingValue<K>> {
+  const row = await ClubSetting.findByPk(key);
+  const parsed = SETTINGS[key].safeParse(row?.value);
+  return (parsed.success ? parsed.data : SETTINGS[key].parse(undefined)) as SettingValue<K>;
+}
+
+export async function setSetting<K extends SettingKey>(key: K, value: SettingValue<K>) {
+  await ClubSetting.upsert({ key, value: SETTINGS[key].parse(value) });
+}
+
+export const listHarbors = () => Harbor.findAll({ order: [['name', 'ASC']] });

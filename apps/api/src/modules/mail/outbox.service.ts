@@ -1,0 +1,118 @@
+import nodemailer, { type Transporter } from 'nodemailer';
+import { Op, type Sequelize, type Transaction } from 'sequelize';
+import type { Env } from '../../config/env';
+import type { Logger } from '../../logger';
+import { OutboxEmail } from '../../models';
+
+export interface OutgoingEmail {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+  kind: string;
+}
+
+/** Stores a message in the outbox (inside the caller's transaction when given); the worker sends it. */
+export async function enqueueEmail(mail: OutgoingEmail, transaction?: Transaction): Promise<OutboxEmail> {
+  return OutboxEmail.create(
+    { toAddress: mail.to, subject: mail.subject, textBody: mail.text, htmlBody: mail.html ?? null, kind: mail.kind, lockedUntil: null, lastError: null, sentAt: null },
+    { transaction },
+  );
+}
+
+export function createTransport(env: Env): Transporter {
+  return nodemailer.createTransport({
+    host: env.SMTP_HOST,
+    port: env.SMTP_PORT,
+    secure: false,
+    ignoreTLS: true,
+    connectionTimeout: 3000,
+    greetingTimeout: 3000,
+    socketTimeout: 5000,
+  });
+}
+
+/** Backoff after `attempts` failures: 2 s, 4 s, 8 s … capped at 5 minutes. */
+export const backoffMs = (attempts: number) => Math.min(300_000, 2000 * 2 ** Math.max(0, attempts - 1));
+
+const LOCK_MS = 60_000;
+
+/**
+ * Claims due messages with SELECT … FOR UPDATE SKIP LOCKED (so several API processes never send the same row),
+ * sends them, and records the outcome. Returns how many were sent and how many failed this round.
+ */
+export async function drainOutbox(sequelize: Sequelize, transport: Transporter, from: string, logger?: Logger, limit = 25) {
+  const now = new Date();
+  const claimed = await sequelize.transaction(async (t) => {
+    const rows = await OutboxEmail.findAll({
+      where: {
+        status: { [Op.in]: ['pending', 'sending'] },
+        nextAttemptAt: { [Op.lte]: now },
+        [Op.or]: [{ lockedUntil: null }, { lockedUntil: { [Op.lt]: now } }],
+      },
+      order: [['id', 'ASC']],
+      limit,
+      lock: t.LOCK.UPDATE,
+      skipLocked: true,
+      transaction: t,
+    });
+    if (rows.length) {
+      await OutboxEmail.update(
+        { status: 'sending', lockedUntil: new Date(now.getTime() + LOCK_MS) },
+        { where: { id: rows.map((r) => r.id) }, transaction: t },
+      );
+    }
+    return rows;
+  });
+  let sent = 0;
+  let failed = 0;
+  for (const row of claimed) {
+    try {
+      await transport.sendMail({
+        from,
+        to: row.toAddress,
+        subject: row.subject,
+        text: row.textBody,
+        html: row.htmlBody ?? undefined,
+        messageId: `<outbox-${row.id}@rodewise.local>`,
+      });
+      await row.update({ status: 'sent', sentAt: new Date(), lockedUntil: null, attempts: row.attempts + 1, lastError: null });
+      sent += 1;
+    } catch (err) {
+      const attempts = row.attempts + 1;
+      const message = err instanceof Error ? err.message : String(err);
+      await row.update({
+        status: attempts >= 50 ? 'failed' : 'pending',
+        attempts,
+        lockedUntil: null,
+        lastError: message.slice(0, 500),
+        nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
+      });
+      logger?.warn({ outboxId: row.id, attempts, err: message }, 'mail not sent; will retry');
+      failed += 1;
+    }
+  }
+  return { sent, failed, claimed: claimed.length };
+}
+
+/** Polls the outbox every `intervalMs`; returns a stop function. Errors (database or SMTP down) are logged and retried. */
+export function startOutboxWorker(sequelize: Sequelize, transport: Transporter, env: Env, logger: Logger) {
+  let stopped = false;
+  let timer: NodeJS.Timeout | undefined;
+  const tick = async () => {
+    if (stopped) return;
+    try {
+      let r;
+      do r = await drainOutbox(sequelize, transport, env.MAIL_FROM, logger);
+      while (!stopped && r.claimed > 0 && r.failed === 0);
+    } catch (err) {
+      logger.debug({ err }, 'outbox round skipped');
+    }
+    if (!stopped) timer = setTimeout(() => void tick(), env.OUTBOX_INTERVAL_MS);
+  };
+  timer = setTimeout(() => void tick(), 200);
+  return () => {
+    stopped = true;
+    if (timer) clearTimeout(timer);
+  };
+}

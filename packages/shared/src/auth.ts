@@ -1,0 +1,89 @@
+import { z } from 'zod';
+
+export const ROLES = ['member', 'moderator', 'treasurer', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
+export const roleSchema = z.enum(ROLES);
+
+export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+const email = z
+  .string({ error: 'E-mail is required' })
+  .trim()
+  .toLowerCase()
+  .min(1, 'E-mail is required')
+  .max(254, 'E-mail is too long')
+  .pipe(z.email('Enter a valid e-mail address'));
+
+/** Password rules shared by sign-up, reset and change. */
+export const passwordSchema = z
+  .string({ error: 'Password is required' })
+  .min(10, 'Use at least 10 characters')
+  .max(200, 'Use at most 200 characters');
+
+export const signupSchema = z.object({
+  email,
+  password: passwordSchema,
+  displayName: z
+    .string({ error: 'Name is required' })
+    .trim()
+    .min(2, 'Name needs at least 2 characters')
+    .max(80, 'Name is too long'),
+});
+export type SignupInput = z.infer<typeof signupSchema>;
+
+export const loginSchema = z.object({
+  email,
+  password: z.string({ error: 'Password is required' }).min(1, 'Password is required').max(200),
+});
+export type LoginInput = z.infer<typeof loginSchema>;
+
+export const tokenSchema = z.object({
+  token: z.string({ error: 'Token is required' }).min(20, 'The link is incomplete').max(200),
+});
+export type TokenInput = z.infer<typeof tokenSchema>;
+
+export const resetRequestSchema = z.object({ email });
+export type ResetRequestInput = z.infer<typeof resetRequestSchema>;
+
+export const resetConfirmSchema = tokenSchema.extend({ password: passwordSchema });
+export type ResetConfirmInput = z.infer<typeof resetConfirmSchema>;
+
+export const updateAccountSchema = z
+  .object({
+    displayName: signupSchema.shape.displayName.optional(),
+    unitSystem: z.enum(UNIT_SYSTEMS).optional(),
+  })
+  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+export type UpdateAccountInput = z.infer<typeof updateAccountSchema>;
+
+export const changePasswordSchema = z.object({
+  currentPassword: z.string({ error: 'Current password is required' }).min(1, 'Current password is required'),
+  newPassword: passwordSchema,
+});
+export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
+
+export const setRolesSchema = z.object({
+  roles: z.array(roleSchema).max(ROLES.length).transform((r) => [...new Set(r)]),
+});
+export type SetRolesInput = z.infer<typeof setRolesSchema>;
+
+export const userListQuerySchema = z.object({
+  q: z.string().trim().max(100).optional(),
+});
+
+export interface UserDto {
+  id: number;
+  email: string;
+  displayName: string;
+  roles: Role[];
+  emailVerified: boolean;
+  unitSystem: UnitSystem;
+  memberSince: string; // ISO date
+}
+
+/** GET /api/auth/me: the signed-in user (or null) and the CSRF token to send as `X-CSRF-Token`. */
+export interface SessionDto {
+  user: UserDto | null;
+  csrfToken: string;
+}
