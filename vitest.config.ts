@@ -22,7 +22,17 @@ export default defineConfig({
         extends: './vite.config.ts',
         test: { name: 'web', root: 'apps/web', include: ['src/**/*.test.tsx', 'src/**/*.test.ts'], environment: 'jsdom' },
       },
-      { test: { name: 'e2e', root: 'tests', include: ['e2e/**/*.test.ts'], fileParallelism: false, testTimeout: 60000, hookTimeout: 60000 } },
+      {
+        test: {
+          name: 'e2e',
+          root: 'tests',
+          include: ['e2e/**/*.test.ts'],
+          globalSetup: ['e2e/global-setup.ts'],
+          fileParallelism: false,
+          testTimeout: 60000,
+          hookTimeout: 120000,
+        },
+      },
     ],
   },
 });

@@ -1,0 +1,82 @@
+import type { ChildProcess } from 'node:child_process';
+import { existsSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import type { TestProject } from 'vitest/node';
+import { dbEnv, profileConfig, provision, recreateDatabase, ROOT, startServer } from '../../scripts/lib/mariadb.mjs';
+import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseUrl: string;
+    mailUrl: string;
+    paymentsUrl: string;
+  }
+}
+
+export const E2E_PORTS = { api: 4410, smtp: 4425, mailHttp: 4426, payments: 4430 };
+const children: ChildProcess[] = [];
+
+/** The whole stack as a member would meet it: built client served by the API, fakes, seeded demo club. */
+export async function setup(project: TestProject) {
+  if (!existsSync(join(ROOT, 'dist/web/index.html'))) throw new Error('Build the client first: npx vite build');
+  const cfg = profileConfig('test');
+  await startServer(cfg, { quiet: true });
+  const database = 'rodewise_test_e2e';
+  provision(cfg, [database]);
+  recreateDatabase(cfg, database);
+  const baseUrl = `http://127.0.0.1:${E2E_PORTS.api}`;
+  const env = { ...dbEnv(cfg, database), NODE_ENV: 'production', PUBLIC_URL: baseUrl, LOG_LEVEL: 'warn' };
+  mustRun(TSX, ['apps/api/src/cli/seed.ts'], { env, stdio: 'ignore' });
+
+  for (const d of ['e2e-mail', 'e2e-payments']) rmSync(join(ROOT, '.data', d), { recursive: true, force: true });
+  children.push(
+    startService('mail', TSX, ['apps/fake-mail/src/main.ts'], { FAKE_MAIL_SMTP_PORT: String(E2E_PORTS.smtp), FAKE_MAIL_HTTP_PORT: String(E2E_PORTS.mailHttp), FAKE_MAIL_DIR: join(ROOT, '.data/e2e-mail') }, { quiet: true }),
+  );
+  const hasPayments = existsSync(join(ROOT, 'apps/fake-payments/src/main.ts'));
+  if (hasPayments) {
+    children.push(
+      startService(
+        'payments',
+        TSX,
+        ['apps/fake-payments/src/main.ts'],
+        {
+          FAKE_PAYMENTS_PORT: String(E2E_PORTS.payments),
+          FAKE_PAYMENTS_DIR: join(ROOT, '.data/e2e-payments'),
+          FAKE_PAYMENTS_WEBHOOK_URL: `${baseUrl}/api/payments/webhook`,
+          FAKE_PAYMENTS_PUBLIC_URL: `http://127.0.0.1:${E2E_PORTS.payments}`,
+        },
+        { quiet: true },
+      ),
+    );
+  }
+  children.push(
+    startService(
+      'api',
+      TSX,
+      ['apps/api/src/server.ts'],
+      {
+        ...env,
+        PORT: String(E2E_PORTS.api),
+        SMTP_PORT: String(E2E_PORTS.smtp),
+        MAIL_INBOX_URL: `http://127.0.0.1:${E2E_PORTS.mailHttp}`,
+        STRIPE_HOST: '127.0.0.1',
+        STRIPE_PORT: String(E2E_PORTS.payments),
+        STRIPE_PROTOCOL: 'http',
+        WEB_DIST: join(ROOT, 'dist/web'),
+        LOGIN_RATE_LIMIT: '200',
+        OUTBOX_INTERVAL_MS: '250',
+      },
+      { quiet: true },
+    ),
+  );
+  await waitForHttp(`${baseUrl}/api/health`);
+  await waitForHttp(`http://127.0.0.1:${E2E_PORTS.mailHttp}/api/health`);
+  if (hasPayments) await waitForHttp(`http://127.0.0.1:${E2E_PORTS.payments}/api/health`);
+  project.provide('baseUrl', baseUrl);
+  project.provide('mailUrl', `http://127.0.0.1:${E2E_PORTS.mailHttp}`);
+  project.provide('paymentsUrl', `http://127.0.0.1:${E2E_PORTS.payments}`);
+}
+
+export async function teardown() {
+  await Promise.all(children.map((c) => stopService(c)));
+}
