@@ -1,0 +1,55 @@
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
+import { paths } from '../config/paths';
+import { AppLayout } from './layout/app-layout';
+import { PageFallback } from './layout/page-fallback';
+import { RouteErrorBoundary } from './routes/route-error';
+
+/**
+ * Every screen, lazy-loaded so each becomes its own chunk. To add one: a path in `config/paths.ts`,
+ * a file in `app/routes/`, and one entry here (and a nav item in `config/nav.ts` if it belongs there).
+ */
+export const SCREEN_ROUTES: RouteObject[] = [
+  { index: true, lazy: async () => ({ Component: (await import('./routes/home')).HomeRoute }) },
+  {
+    path: paths.signIn.path,
+    lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }),
+  },
+  {
+    path: paths.signUp.path,
+    lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }),
+  },
+  {
+    path: paths.verifyEmail.path,
+    lazy: async () => ({ Component: (await import('./routes/verify-email')).VerifyEmailRoute }),
+  },
+  {
+    path: paths.resetPassword.path,
+    lazy: async () => ({ Component: (await import('./routes/reset-password')).ResetPasswordRoute }),
+  },
+  {
+    path: paths.account.path,
+    lazy: async () => ({ Component: (await import('./routes/account')).AccountRoute }),
+  },
+  {
+    path: paths.adminUsers.path,
+    lazy: async () => ({ Component: (await import('./routes/admin-users')).AdminUsersRoute }),
+  },
+  {
+    path: '*',
+    lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
+  },
+];
+
+/** The whole route tree: the layout around every screen, with an error boundary inside the layout. */
+export const APP_ROUTES: RouteObject[] = [
+  {
+    path: '/',
+    Component: AppLayout,
+    HydrateFallback: PageFallback,
+    ErrorBoundary: RouteErrorBoundary,
+    children: [{ ErrorBoundary: RouteErrorBoundary, children: SCREEN_ROUTES }],
+  },
+];
+
+/** Creates the browser router for the app. */
+export const createAppRouter = () => createBrowserRouter(APP_ROUTES);

@@ -1,0 +1,24 @@
+/** Route paths (for the router) and href builders (for links). Add a screen here first. */
+export const paths = {
+  home: { path: '/', href: () => '/' },
+  signIn: {
+    path: '/sign-in',
+    href: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
+  },
+  signUp: { path: '/join', href: () => '/join' },
+  verifyEmail: { path: '/verify-email', href: () => '/verify-email' },
+  resetPassword: { path: '/reset-password', href: () => '/reset-password' },
+  account: { path: '/account', href: () => '/account' },
+  adminUsers: { path: '/admin/users', href: () => '/admin/users' },
+} as const;
+
+/**
+ * Returns `next` when it is a path inside this app (starts with one `/`), else the home path.
+ * Keeps a crafted `?next=` from sending someone to another site after sign-in.
+ */
+export function safeNextPath(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) {
+    return paths.home.href();
+  }
+  return next;
+}

@@ -1,0 +1,90 @@
+import { updateAccountSchema, type UserDto } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useId } from 'react';
+import { useForm } from 'react-hook-form';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { FormError } from '../../../components/ui/form-error';
+import { TextField } from '../../../components/ui/text-field';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useUpdateAccount } from '../api/update-account';
+
+export interface AccountProfileFormProps {
+  user: UserDto;
+}
+
+const UNIT_CHOICES = [
+  { value: 'metric', label: 'Metric', example: 'metres, kilograms, kilonewtons' },
+  { value: 'imperial', label: 'Imperial', example: 'feet, pounds, pound-force' },
+] as const;
+
+/** Edits the name other members see and the units every figure is shown in. */
+export function AccountProfileForm({ user }: AccountProfileFormProps) {
+  const update = useUpdateAccount();
+  const unitErrorId = useId();
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isDirty },
+    reset,
+  } = useForm({
+    resolver: zodResolver(updateAccountSchema),
+    defaultValues: { displayName: user.displayName, unitSystem: user.unitSystem },
+  });
+
+  const onSubmit = handleSubmit(async (input) => {
+    try {
+      const { user: saved } = await update.mutateAsync(input);
+      reset({ displayName: saved.displayName, unitSystem: saved.unitSystem });
+    } catch (error) {
+      applyServerErrors(error, setError, ['displayName', 'unitSystem']);
+    }
+  });
+
+  return (
+    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
+      <FormError message={errors.root?.server?.message} />
+      {update.isSuccess && !isDirty && <Alert tone="success">Your profile is saved.</Alert>}
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        required
+        error={errors.displayName?.message}
+        {...register('displayName')}
+      />
+      <fieldset
+        className="flex flex-col gap-2"
+        aria-describedby={errors.unitSystem ? unitErrorId : undefined}
+      >
+        <legend className="mb-1 text-sm font-bold">Units</legend>
+        {UNIT_CHOICES.map((choice) => (
+          <label key={choice.value} className="flex min-h-11 items-center gap-3 text-base">
+            <input
+              type="radio"
+              value={choice.value}
+              className="size-5 accent-signal-600"
+              {...register('unitSystem')}
+            />
+            <span>
+              {choice.label} <span className="text-sm text-ink-600">({choice.example})</span>
+            </span>
+          </label>
+        ))}
+        {errors.unitSystem && (
+          <p id={unitErrorId} className="text-sm font-bold text-flare-700">
+            {errors.unitSystem.message}
+          </p>
+        )}
+      </fieldset>
+      <Button
+        type="submit"
+        isPending={update.isPending}
+        pendingLabel="Saving…"
+        className="self-start"
+      >
+        Save profile
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,99 @@
+import { passwordSchema } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { Link } from 'react-router-dom';
+import { z } from 'zod';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { FormError } from '../../../components/ui/form-error';
+import { TextField } from '../../../components/ui/text-field';
+import { paths } from '../../../config/paths';
+import { ApiError } from '../../../lib/api-client';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useConfirmPasswordReset } from '../api/confirm-password-reset';
+
+const newPasswordFormSchema = z
+  .object({ password: passwordSchema, confirmPassword: z.string() })
+  .refine((values) => values.password === values.confirmPassword, {
+    path: ['confirmPassword'],
+    message: "The two passwords don't match",
+  });
+
+export interface ResetPasswordFormProps {
+  token: string;
+}
+
+function isDeadLink(error: unknown): boolean {
+  return (
+    error instanceof ApiError &&
+    (error.code === 'GONE' || (error.code === 'VALIDATION_FAILED' && 'token' in error.fields))
+  );
+}
+
+/** Sets a new password with the token from the e-mailed reset link. */
+export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
+  const confirm = useConfirmPasswordReset();
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors },
+  } = useForm({
+    resolver: zodResolver(newPasswordFormSchema),
+    defaultValues: { password: '', confirmPassword: '' },
+  });
+
+  const onSubmit = handleSubmit(async ({ password }) => {
+    try {
+      await confirm.mutateAsync({ token, password });
+    } catch (error) {
+      if (!isDeadLink(error)) applyServerErrors(error, setError, ['password']);
+    }
+  });
+
+  if (confirm.isSuccess) {
+    return (
+      <Alert tone="success" title="Password changed">
+        <p>
+          You can now <Link to={paths.signIn.href()}>sign in</Link> with your new password.
+        </p>
+      </Alert>
+    );
+  }
+  if (isDeadLink(confirm.error)) {
+    return (
+      <Alert tone="error" title="This reset link no longer works">
+        <p>
+          It has been used already or has expired.{' '}
+          <Link to={paths.resetPassword.href()}>Ask for a new link</Link>.
+        </p>
+      </Alert>
+    );
+  }
+
+  return (
+    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
+      <FormError message={errors.root?.server?.message} />
+      <TextField
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters."
+        required
+        error={errors.password?.message}
+        {...register('password')}
+      />
+      <TextField
+        label="Repeat new password"
+        type="password"
+        autoComplete="new-password"
+        required
+        error={errors.confirmPassword?.message}
+        {...register('confirmPassword')}
+      />
+      <Button type="submit" isPending={confirm.isPending} pendingLabel="Saving…">
+        Save new password
+      </Button>
+    </form>
+  );
+}

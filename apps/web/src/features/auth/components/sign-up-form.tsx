@@ -1,0 +1,83 @@
+import { signupSchema } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { Link } from 'react-router-dom';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { FormError } from '../../../components/ui/form-error';
+import { TextField } from '../../../components/ui/text-field';
+import { paths } from '../../../config/paths';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useSignup } from '../api/signup';
+
+const FIELDS = ['email', 'password', 'displayName'] as const;
+
+/** Creates an account; on success it asks the person to confirm the address from their inbox. */
+export function SignUpForm() {
+  const signup = useSignup();
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors },
+  } = useForm({
+    resolver: zodResolver(signupSchema),
+    defaultValues: { email: '', password: '', displayName: '' },
+  });
+
+  const onSubmit = handleSubmit(async (input) => {
+    try {
+      await signup.mutateAsync(input);
+    } catch (error) {
+      applyServerErrors(error, setError, FIELDS);
+    }
+  });
+
+  if (signup.isSuccess) {
+    return (
+      <Alert tone="success" title="Check your inbox">
+        <p>
+          We sent a confirmation link to {signup.data.user.email}. Open it to finish joining, then{' '}
+          <Link to={paths.signIn.href()}>sign in</Link>.
+        </p>
+      </Alert>
+    );
+  }
+
+  return (
+    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
+      <FormError message={errors.root?.server?.message} />
+      <TextField
+        label="Your name"
+        hint="Shown to other members on posts and listings."
+        autoComplete="name"
+        required
+        error={errors.displayName?.message}
+        {...register('displayName')}
+      />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        required
+        error={errors.email?.message}
+        {...register('email')}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters. A few unrelated words make a strong one."
+        required
+        error={errors.password?.message}
+        {...register('password')}
+      />
+      <Button type="submit" isPending={signup.isPending} pendingLabel="Creating your account…">
+        Create account
+      </Button>
+      <p className="text-sm">
+        Already a member? <Link to={paths.signIn.href()}>Sign in</Link>
+      </p>
+    </form>
+  );
+}

@@ -1,0 +1,17 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { RouterProvider } from 'react-router-dom';
+import { AppProvider } from './app/provider';
+import { createAppRouter } from './app/router';
+import './styles/index.css';
+
+const rootElement = document.getElementById('root');
+if (!rootElement) throw new Error('index.html has no #root element');
+
+createRoot(rootElement).render(
+  <StrictMode>
+    <AppProvider>
+      <RouterProvider router={createAppRouter()} />
+    </AppProvider>
+  </StrictMode>,
+);
