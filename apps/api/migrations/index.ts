@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import * as m0001 from './20261201-0001-platform';
+import * as m0002 from './20261201-0002-boats-and-plans';
 
 export interface MigrationModule {
   up: (p: { context: QueryInterface }) => Promise<void>;
@@ -7,4 +8,7 @@ export interface MigrationModule {
 }
 
 /** Every migration, in order. Add new files here; never edit or reorder one that has shipped. */
-export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [['20261201-0001-platform', m0001]];
+export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [
+  ['20261201-0001-platform', m0001],
+  ['20261201-0002-boats-and-plans', m0002],
+];

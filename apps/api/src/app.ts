@@ -18,8 +18,10 @@ import { adminRouter } from './modules/admin/admin.router';
 import type { AuthDeps } from './modules/auth/auth.service';
 import { authRouter } from './modules/auth/auth.router';
 import { createPassport } from './modules/auth/passport';
+import { boatsRouter } from './modules/boats/boats.router';
 import { clubRouter } from './modules/club/club.router';
 import { healthRouter } from './modules/health/health.router';
+import { tacklePlansRouter } from './modules/tackle-plans/tackle-plans.router';
 
 export interface AppDeps {
   env: Env;
@@ -124,6 +126,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   mount(app, '/api/account', accountRouter(authDeps));
   mount(app, '/api/admin', adminRouter(sequelize));
   mount(app, '/api/club', clubRouter());
+  mount(app, '/api/boats', boatsRouter());
+  mount(app, '/api/tackle-plans', tacklePlansRouter());
 
   app.use('/api', notFoundHandler);
 

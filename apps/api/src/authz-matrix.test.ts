@@ -33,6 +33,16 @@ const MATRIX: Record<string, Row> = {
   'GET /api/admin/users': ADMIN,
   'PUT /api/admin/users/:userId/roles': ADMIN,
   'GET /api/club': PUBLIC,
+  'GET /api/boats': SIGNED_IN,
+  'POST /api/boats': SIGNED_IN,
+  'GET /api/boats/:boatId': SIGNED_IN,
+  'PATCH /api/boats/:boatId': SIGNED_IN,
+  'DELETE /api/boats/:boatId': SIGNED_IN,
+  'GET /api/tackle-plans': SIGNED_IN,
+  'POST /api/tackle-plans': SIGNED_IN,
+  'GET /api/tackle-plans/:planId': SIGNED_IN,
+  'PUT /api/tackle-plans/:planId': SIGNED_IN,
+  'DELETE /api/tackle-plans/:planId': SIGNED_IN,
 };
 
 const built = createTestApp({ LOGIN_RATE_LIMIT: '10000' });

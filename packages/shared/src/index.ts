@@ -1,3 +1,4 @@
 export * from './auth';
+export * from './boats';
 export * from './club';
 export * from './errors';

@@ -1,5 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { AuditEvent, initAuditEvent } from './audit-event.model';
+import { Boat, initBoat } from './boat.model';
+import { TacklePlan, initTacklePlan } from './tackle-plan.model';
 import { ClubSetting, initClubSetting } from './club-setting.model';
 import { EmailToken, initEmailToken } from './email-token.model';
 import { Harbor, initHarbor } from './harbor.model';
@@ -21,12 +23,18 @@ export function initModels(sequelize: Sequelize) {
   initClubSetting(sequelize);
   initOutboxEmail(sequelize);
   initAuditEvent(sequelize);
+  initBoat(sequelize);
+  initTacklePlan(sequelize);
 
   User.hasMany(UserRole, { as: 'roles', foreignKey: 'userId' });
   UserRole.belongsTo(User, { foreignKey: 'userId' });
   EmailToken.belongsTo(User, { foreignKey: 'userId' });
   AuditEvent.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
+  User.hasMany(Boat, { foreignKey: 'ownerId' });
+  Boat.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
+  Boat.hasMany(TacklePlan, { as: 'plans', foreignKey: 'boatId' });
+  TacklePlan.belongsTo(Boat, { foreignKey: 'boatId' });
   initialised = sequelize;
 }
 
-export { AuditEvent, ClubSetting, EmailToken, Harbor, OutboxEmail, Session, User, UserRole };
+export { AuditEvent, Boat, ClubSetting, TacklePlan, EmailToken, Harbor, OutboxEmail, Session, User, UserRole };

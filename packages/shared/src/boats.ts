@@ -1,0 +1,117 @@
+import { z } from 'zod';
+
+export const HULLS = ['sail', 'power', 'multihull'] as const;
+export type Hull = (typeof HULLS)[number];
+export const CHAIN_GRADE_IDS = ['G30', 'G43', 'G70', 'G80', 'G100'] as const;
+export const ANCHOR_KINDS = ['plow', 'claw', 'fluke', 'scoop', 'grapnel', 'fisherman'] as const;
+export const BOTTOMS = ['sand', 'mud', 'clay', 'weed', 'rock'] as const;
+export const CONNECTOR_KINDS = ['shackle', 'swivel', 'link', 'splice', 'other'] as const;
+export const PLAN_CONDITIONS = ['everyday', 'storm', 'hurricane-hole', 'custom'] as const;
+export type PlanCondition = (typeof PLAN_CONDITIONS)[number];
+
+const num = (label: string, min: number, max: number, unit: string) =>
+  z
+    .number({ error: `${label} must be a number` })
+    .finite(`${label} must be a number`)
+    .min(min, `${label} must be at least ${min} ${unit}`)
+    .max(max, `${label} must be at most ${max} ${unit}`);
+
+/** Chain size: a trade size in inches or a metric nominal size in mm (exactly one). */
+export const chainSizeSchema = z
+  .object({
+    grade: z.enum(CHAIN_GRADE_IDS, { error: 'Choose a chain grade' }),
+    tradeSizeIn: num('Trade size', 0.1, 2, 'in').optional(),
+    nominalMm: num('Nominal size', 3, 50, 'mm').optional(),
+  })
+  .refine((c) => (c.tradeSizeIn === undefined) !== (c.nominalMm === undefined), {
+    message: 'Give either a trade size (in) or a metric size (mm)',
+    path: ['tradeSizeIn'],
+  });
+
+/** Everything a boat profile holds; stored in SI units. */
+export const boatInputSchema = z.object({
+  name: z.string({ error: 'Name is required' }).trim().min(1, 'Name is required').max(80, 'Name is too long'),
+  hull: z.enum(HULLS, { error: 'Choose sail, power or multihull' }),
+  loaM: num('Length overall', 2, 60, 'm'),
+  beamM: num('Beam', 0.5, 20, 'm').nullable().optional(),
+  displacementKg: num('Displacement', 50, 500000, 'kg').nullable().optional(),
+  draftM: num('Draft', 0.1, 10, 'm').nullable().optional(),
+  bowHeightM: num('Bow-roller height', 0, 8, 'm').default(1),
+  gypsy: chainSizeSchema.nullable().optional(),
+  homeHarborId: z.number().int().positive().nullable().optional(),
+});
+export type BoatInput = z.input<typeof boatInputSchema>;
+export const boatPatchSchema = boatInputSchema.partial().refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+
+export interface BoatDto {
+  id: number;
+  name: string;
+  hull: Hull;
+  loaM: number;
+  beamM: number | null;
+  displacementKg: number | null;
+  draftM: number | null;
+  bowHeightM: number;
+  gypsy: z.infer<typeof chainSizeSchema> | null;
+  homeHarborId: number | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export const planComponentsSchema = z.object({
+  anchor: z.object({ type: z.enum(ANCHOR_KINDS, { error: 'Choose an anchor type' }), massKg: num('Anchor mass', 0.5, 500, 'kg') }).optional(),
+  chain: chainSizeSchema.and(z.object({ lengthM: num('Chain length', 0, 500, 'm') })).optional(),
+  rode: z
+    .object({
+      material: z.enum(['nylon', 'polyester']),
+      construction: z.enum(['three-strand', 'double-braid']),
+      diameterMm: num('Rope diameter', 6, 40, 'mm'),
+      lengthM: num('Rope length', 0, 500, 'm'),
+    })
+    .optional(),
+  snubber: z.object({ material: z.enum(['nylon', 'polyester']), diameterMm: num('Snubber diameter', 6, 40, 'mm'), lengthM: num('Snubber length', 0.5, 60, 'm') }).optional(),
+  connectors: z
+    .array(
+      z.object({
+        label: z.string().trim().min(1, 'Name the connector').max(60),
+        kind: z.enum(CONNECTOR_KINDS),
+        nominalIn: num('Shackle size', 0.1, 2, 'in').optional(),
+        wllN: num('Working load limit', 1, 2_000_000, 'N').optional(),
+        minBreakN: num('Breaking strength', 1, 10_000_000, 'N').optional(),
+      }),
+    )
+    .max(12, 'At most 12 connectors')
+    .default([]),
+});
+export type PlanComponents = z.infer<typeof planComponentsSchema>;
+
+export const tacklePlanInputSchema = z.object({
+  boatId: z.number({ error: 'Choose a boat' }).int().positive('Choose a boat'),
+  name: z.string().trim().min(1, 'Name the plan').max(80),
+  condition: z.enum(PLAN_CONDITIONS),
+  windKn: num('Design wind', 5, 120, 'kn'),
+  depthM: num('Depth', 0.5, 100, 'm'),
+  tideM: num('Tidal rise', 0, 15, 'm').default(0),
+  bottom: z.enum(BOTTOMS).optional(),
+  components: planComponentsSchema,
+  notes: z.string().max(4000, 'Notes are too long').default(''),
+});
+export type TacklePlanInput = z.input<typeof tacklePlanInputSchema>;
+export const tacklePlanPatchSchema = tacklePlanInputSchema.omit({ boatId: true }).partial();
+
+export interface TacklePlanDto {
+  id: number;
+  boatId: number;
+  name: string;
+  condition: PlanCondition;
+  windKn: number;
+  depthM: number;
+  tideM: number;
+  bottom: (typeof BOTTOMS)[number] | null;
+  components: PlanComponents;
+  notes: string;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export const idParam = (name: string) => z.object({ [name]: z.coerce.number().int().positive(`Unknown ${name}`) });
