@@ -1,0 +1,187 @@
+// Public API of @app/calc: ground-tackle engineering, SI units inside, no I/O.
+export { CalcInputError, withFieldPrefix } from './errors';
+export {
+  AIR_DENSITY_KGPM3,
+  DEFAULT_DESIGN_FACTOR,
+  FRESH_WATER_DENSITY_KGPM3,
+  SEA_WATER_DENSITY_KGPM3,
+  STANDARD_GRAVITY_MPS2,
+  STEEL_DENSITY_KGPM3,
+} from './constants';
+export { STANDARD_CAUTIONS } from './cautions';
+
+export {
+  KG_PER_LB,
+  LBF_PER_SHORT_TON,
+  M_PER_FT,
+  MM_PER_IN,
+  MPS_PER_KN,
+  N_PER_LBF,
+  N_PER_SHORT_TON,
+  ftToM,
+  inToMm,
+  kgToLb,
+  kgToN,
+  knToMps,
+  lbToKg,
+  lbfToN,
+  mmToIn,
+  mpsToKn,
+  mToFt,
+  nToKg,
+  nToLbf,
+  nToShortTon,
+  shortTonToN,
+} from './units/units';
+export {
+  UNIT_SYSTEMS,
+  formatForce,
+  formatLength,
+  formatMass,
+  inchFractionLabel,
+  type FormatLengthOptions,
+  type FormatOptions,
+  type UnitSystem,
+} from './units/format';
+export { units } from './units/unit-group';
+
+export {
+  ABYC_BEAM_POWER_FT,
+  ABYC_BEAM_SAIL_FT,
+  ABYC_LOA_FT,
+  ABYC_LOAD_15KN_LB,
+  ABYC_LOAD_30KN_LB,
+  ABYC_LOAD_42KN_LB,
+  ABYC_WIND_KN,
+  HULL_TYPES,
+  HULL_TYPE_LABELS,
+  MULTIHULL_LOAD_FACTOR,
+  type HullType,
+} from './tables/abyc-h40';
+export {
+  CHAIN_BREAK_FACTOR,
+  CHAIN_GRADES,
+  CHAIN_GRADE_LABELS,
+  CHAIN_ROWS,
+  CHAIN_TRADE_SIZES_IN,
+  type ChainGrade,
+  type ChainRow,
+} from './tables/chain-cfr';
+export {
+  SHACKLE_DESIGN_FACTOR,
+  SHACKLE_ROWS,
+  SHACKLE_SIZES_IN,
+  type ShackleRow,
+} from './tables/shackle-rrc';
+export {
+  ROPE_CONSTRUCTIONS,
+  ROPE_CONSTRUCTION_LABELS,
+  ROPE_DIAMETERS_IN,
+  ROPE_DIAMETERS_MM,
+  ROPE_MATERIALS,
+  ROPE_MATERIAL_LABELS,
+  type RopeConstruction,
+  type RopeMaterial,
+} from './tables/rope-nylon';
+export {
+  ANCHOR_SUGGESTED_MARGIN,
+  ANCHOR_TYPES,
+  ANCHOR_TYPE_LABELS,
+  BOTTOM_TYPES,
+  BOTTOM_TYPE_LABELS,
+  HOLDING_RATIO,
+  type AnchorType,
+  type BottomType,
+} from './tables/anchor-holding';
+
+export {
+  designLoad,
+  loadAtWindLb,
+  type DesignLoadInput,
+  type DesignLoadResult,
+  type RowMode,
+} from './loads/design-load';
+export {
+  chainSpec,
+  chainSpecMetric,
+  type ChainSpecInput,
+  type ChainSpecMetricInput,
+  type ChainSpecResult,
+} from './ratings/chain-spec';
+export { shackleSpec, type ShackleSpecInput, type ShackleSpecResult } from './ratings/shackle-spec';
+export { ropeSpec, type RopeSpecInput, type RopeSpecResult } from './ratings/rope-spec';
+
+export {
+  WATER_TYPES,
+  catenary,
+  submergedWeightNPerM,
+  suspendedLengthM,
+  type CatenaryInput,
+  type CatenaryResult,
+  type WaterType,
+} from './geometry/catenary';
+export {
+  SCOPE_LADDER,
+  scope,
+  scopeRatio,
+  scopeRung,
+  type ScopeInput,
+  type ScopeRatioInput,
+  type ScopeResult,
+  type ScopeRung,
+} from './geometry/scope';
+export {
+  swingRadius,
+  type SwingRadiusInput,
+  type SwingRadiusResult,
+} from './geometry/swing-radius';
+
+export {
+  weakestLink,
+  type BreakFactor,
+  type RatedComponent,
+  type WeakestComponent,
+  type WeakestLinkInput,
+  type WeakestLinkResult,
+  type WllMargin,
+} from './checks/weakest-link';
+
+export {
+  anchorSuggestion,
+  type AnchorSuggestionInput,
+  type AnchorSuggestionResult,
+} from './advice/anchor-suggestion';
+export {
+  nylonChoiceLabel,
+  rodeSuggestion,
+  type ChainChoice,
+  type NylonChoice,
+  type RodeSuggestionInput,
+  type RodeSuggestionResult,
+} from './advice/rode-suggestion';
+export {
+  nylonStrain,
+  snubberSuggestion,
+  type SnubberSuggestionInput,
+  type SnubberSuggestionResult,
+} from './advice/snubber-suggestion';
+
+export {
+  CONNECTOR_KINDS,
+  CONNECTOR_KIND_LABELS,
+  checkPlanInput,
+  type CheckedPlan,
+  type ConnectorKind,
+  type PlanBoat,
+  type PlanComponents,
+  type PlanConnector,
+  type TacklePlanInput,
+} from './plan/plan-input';
+export {
+  SPLICE_EFFICIENCY,
+  type PlanChainRating,
+  type PlanConnectorRating,
+  type PlanRopeRating,
+  type RatingSource,
+} from './plan/rate-components';
+export { tacklePlan, type PlanAnchorCheck, type TacklePlanResult } from './plan/tackle-plan';

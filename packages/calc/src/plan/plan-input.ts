@@ -1,0 +1,233 @@
+import { CalcInputError } from '../errors';
+import { DEFAULT_DESIGN_FACTOR } from '../constants';
+import {
+  optionalBoolean,
+  optionalNumber,
+  requireLabel,
+  requireNumber,
+  requireObject,
+  requireOneOf,
+} from '../internal/validate';
+import { HULL_TYPES, type HullType } from '../tables/abyc-h40';
+import {
+  ANCHOR_TYPES,
+  BOTTOM_TYPES,
+  type AnchorType,
+  type BottomType,
+} from '../tables/anchor-holding';
+import { CHAIN_GRADES, type ChainGrade } from '../tables/chain-cfr';
+import {
+  ROPE_CONSTRUCTIONS,
+  ROPE_MATERIALS,
+  type RopeConstruction,
+  type RopeMaterial,
+} from '../tables/rope-nylon';
+import { WATER_TYPES, type WaterType } from '../geometry/catenary';
+
+/** Kinds of connector between rode parts. */
+export type ConnectorKind = 'shackle' | 'swivel' | 'link' | 'splice' | 'other';
+/** Every connector kind, for pickers. */
+export const CONNECTOR_KINDS: readonly ConnectorKind[] = [
+  'shackle',
+  'swivel',
+  'link',
+  'splice',
+  'other',
+];
+/** Human labels for the connector kinds. */
+export const CONNECTOR_KIND_LABELS: Readonly<Record<ConnectorKind, string>> = {
+  shackle: 'shackle',
+  swivel: 'swivel',
+  link: 'connecting link',
+  splice: 'splice (rope to chain)',
+  other: 'other fitting',
+};
+
+/** The boat a plan is for. */
+export interface PlanBoat {
+  loaM: number;
+  beamM?: number;
+  hull: HullType;
+  displacementKg?: number;
+  /** Bow-roller height above the water, m. */
+  bowHeightM: number;
+}
+
+/** A connector in the rode; shackles can be rated from the table by `nominalIn`. */
+export interface PlanConnector {
+  label: string;
+  kind: ConnectorKind;
+  nominalIn?: number;
+  wllN?: number;
+  minBreakN?: number;
+}
+
+/** The ground tackle of a plan; every part is optional. */
+export interface PlanComponents {
+  anchor?: { type: AnchorType; massKg: number };
+  /** Give `tradeSizeIn` (table sizes) or `nominalMm` (metric), not both. */
+  chain?: { grade: ChainGrade; tradeSizeIn?: number; nominalMm?: number; lengthM: number };
+  rode?: {
+    material: RopeMaterial;
+    construction: RopeConstruction;
+    diameterMm: number;
+    lengthM: number;
+  };
+  snubber?: {
+    material: RopeMaterial;
+    construction?: RopeConstruction;
+    diameterMm: number;
+    lengthM: number;
+  };
+  connectors?: PlanConnector[];
+}
+
+/** Input of `tacklePlan`. */
+export interface TacklePlanInput {
+  boat: PlanBoat;
+  /** Design wind, kn (more than 0, at most 100). */
+  windKn: number;
+  /** Depth where the boat anchors, m (0–300). */
+  depthM: number;
+  /** Tidal rise still to come, m (default 0). */
+  tideM?: number;
+  bottom?: BottomType;
+  water?: WaterType;
+  /** Breaking strength ÷ load required (default 4). */
+  designFactor?: number;
+  /** Rate rope and snubber wet (default true). */
+  wet?: boolean;
+  /** Allow sizes and boats beyond the tables (results are flagged). */
+  extrapolate?: boolean;
+  components: PlanComponents;
+}
+
+/** The checked and normalised plan input. */
+export interface CheckedPlan {
+  boat: PlanBoat;
+  windKn: number;
+  depthM: number;
+  tideM: number;
+  bottom: BottomType | undefined;
+  water: WaterType;
+  designFactor: number;
+  wet: boolean;
+  extrapolate: boolean;
+  components: PlanComponents & { connectors: PlanConnector[] };
+}
+
+const positive = { min: 0, minExclusive: true };
+
+function optionalPositive(value: unknown, field: string, max: number): number | undefined {
+  return value === undefined ? undefined : requireNumber(value, field, { ...positive, max });
+}
+
+function checkBoat(value: unknown): PlanBoat {
+  const raw = requireObject(value, 'boat');
+  const boat: PlanBoat = {
+    loaM: requireNumber(raw.loaM, 'boat.loaM', { ...positive, max: 120 }),
+    hull: requireOneOf(raw.hull, 'boat.hull', HULL_TYPES),
+    bowHeightM: requireNumber(raw.bowHeightM, 'boat.bowHeightM', { min: 0, max: 10 }),
+  };
+  const beamM = optionalPositive(raw.beamM, 'boat.beamM', 40);
+  if (beamM !== undefined) boat.beamM = beamM;
+  const displacementKg = optionalPositive(raw.displacementKg, 'boat.displacementKg', 500000);
+  if (displacementKg !== undefined) boat.displacementKg = displacementKg;
+  return boat;
+}
+
+function checkChain(value: unknown): NonNullable<PlanComponents['chain']> {
+  const f = 'components.chain';
+  const raw = requireObject(value, f);
+  const chain: NonNullable<PlanComponents['chain']> = {
+    grade: requireOneOf(raw.grade, `${f}.grade`, CHAIN_GRADES),
+    lengthM: requireNumber(raw.lengthM, `${f}.lengthM`, { ...positive, max: 1000 }),
+  };
+  const hasIn = raw.tradeSizeIn !== undefined;
+  const hasMm = raw.nominalMm !== undefined;
+  if (hasIn === hasMm) {
+    throw new CalcInputError(
+      `${f}.tradeSizeIn`,
+      `${f}.tradeSizeIn: give tradeSizeIn or nominalMm, exactly one`,
+    );
+  }
+  if (hasIn) chain.tradeSizeIn = requireNumber(raw.tradeSizeIn, `${f}.tradeSizeIn`, positive);
+  else chain.nominalMm = requireNumber(raw.nominalMm, `${f}.nominalMm`, positive);
+  return chain;
+}
+
+function checkRope(value: unknown, f: string, maxLengthM: number) {
+  const raw = requireObject(value, f);
+  return {
+    material: requireOneOf(raw.material, `${f}.material`, ROPE_MATERIALS),
+    construction: requireOneOf(
+      raw.construction ?? 'three-strand',
+      `${f}.construction`,
+      ROPE_CONSTRUCTIONS,
+    ),
+    diameterMm: requireNumber(raw.diameterMm, `${f}.diameterMm`, positive),
+    lengthM: requireNumber(raw.lengthM, `${f}.lengthM`, { ...positive, max: maxLengthM }),
+  };
+}
+
+function checkConnectors(value: unknown): PlanConnector[] {
+  if (value === undefined) return [];
+  if (!Array.isArray(value) || value.length > 20) {
+    throw new CalcInputError(
+      'components.connectors',
+      'components.connectors must be a list of at most 20',
+    );
+  }
+  return (value as unknown[]).map((item, i) => {
+    const f = `components.connectors[${i}]`;
+    const raw = requireObject(item, f);
+    const connector: PlanConnector = {
+      label: requireLabel(raw.label, `${f}.label`),
+      kind: requireOneOf(raw.kind, `${f}.kind`, CONNECTOR_KINDS),
+    };
+    const nominalIn = optionalPositive(raw.nominalIn, `${f}.nominalIn`, 2);
+    const wllN = optionalPositive(raw.wllN, `${f}.wllN`, 1e7);
+    const minBreakN = optionalPositive(raw.minBreakN, `${f}.minBreakN`, 1e8);
+    if (nominalIn !== undefined) connector.nominalIn = nominalIn;
+    if (wllN !== undefined) connector.wllN = wllN;
+    if (minBreakN !== undefined) connector.minBreakN = minBreakN;
+    if (wllN !== undefined && minBreakN !== undefined && minBreakN < wllN) {
+      throw new CalcInputError(`${f}.minBreakN`, `${f}.minBreakN must be at least its wllN`);
+    }
+    return connector;
+  });
+}
+
+/** Checks a plan input, throwing {@link CalcInputError} with the full field path. */
+export function checkPlanInput(input: unknown): CheckedPlan {
+  const raw = requireObject(input, '');
+  const boat = checkBoat(raw.boat);
+  const comps = requireObject(raw.components ?? {}, 'components');
+  const components: CheckedPlan['components'] = { connectors: checkConnectors(comps.connectors) };
+  if (comps.anchor !== undefined) {
+    const a = requireObject(comps.anchor, 'components.anchor');
+    components.anchor = {
+      type: requireOneOf(a.type, 'components.anchor.type', ANCHOR_TYPES),
+      massKg: requireNumber(a.massKg, 'components.anchor.massKg', { ...positive, max: 1000 }),
+    };
+  }
+  if (comps.chain !== undefined) components.chain = checkChain(comps.chain);
+  if (comps.rode !== undefined) components.rode = checkRope(comps.rode, 'components.rode', 1000);
+  if (comps.snubber !== undefined)
+    components.snubber = checkRope(comps.snubber, 'components.snubber', 100);
+  return {
+    boat,
+    windKn: requireNumber(raw.windKn, 'windKn', { min: 0, minExclusive: true, max: 100 }),
+    depthM: requireNumber(raw.depthM, 'depthM', { min: 0, max: 300 }),
+    tideM: optionalNumber(raw.tideM, 'tideM', 0, { min: 0, max: 20 }),
+    bottom: raw.bottom === undefined ? undefined : requireOneOf(raw.bottom, 'bottom', BOTTOM_TYPES),
+    water: requireOneOf(raw.water ?? 'sea', 'water', WATER_TYPES),
+    designFactor: optionalNumber(raw.designFactor, 'designFactor', DEFAULT_DESIGN_FACTOR, {
+      min: 1,
+      max: 20,
+    }),
+    wet: optionalBoolean(raw.wet, 'wet', true),
+    extrapolate: optionalBoolean(raw.extrapolate, 'extrapolate', false),
+    components,
+  };
+}

@@ -1,0 +1,166 @@
+import { interpolateLinear } from '../internal/interpolate';
+import {
+  optionalBoolean,
+  optionalNumber,
+  requireNumber,
+  requireObject,
+  requireOneOf,
+} from '../internal/validate';
+import { STANDARD_CAUTIONS } from '../cautions';
+import {
+  NYLON_DOUBLE_BRAID_WLL,
+  NYLON_THREE_STRAND_MBS,
+  NYLON_THREE_STRAND_WLL,
+  NYLON_WET_LOSS_DEFAULT,
+  POLYESTER_STRENGTH_FRACTION,
+  POLYESTER_TIE_DOWN_FACTOR,
+  ROPE_CONSTRUCTIONS,
+  ROPE_MATERIALS,
+  type RopeConstruction,
+  type RopeMaterial,
+  type RopePoint,
+} from '../tables/rope-nylon';
+import { MM_PER_IN, N_PER_LBF } from '../units/units';
+
+/** Input of {@link ropeSpec}. */
+export interface RopeSpecInput {
+  material: RopeMaterial;
+  construction: RopeConstruction;
+  /** Diameter, mm; 9.5–25.5 mm (3/8–1 in, the tables) unless `extrapolate` (4–40 mm). */
+  diameterMm: number;
+  /** Wet line: nylon loses strength when wet; polyester about none. */
+  wet?: boolean;
+  /** Strength lost by wet nylon, 0–0.6; default 0.15 (UFC 4-159-03; Gerr says about half). */
+  wetLossFraction?: number;
+  /** When given, wllN = minBreakN ÷ designFactor instead of the tie-down rating. */
+  designFactor?: number;
+  extrapolate?: boolean;
+}
+
+/** Ratings of a rope. */
+export interface RopeSpecResult {
+  /** Minimum breaking strength, N (after the wet loss when `wet`). */
+  minBreakN: number;
+  /** Working load limit used for checks, N: tie-down rating or minBreak ÷ designFactor. */
+  wllN: number;
+  /** The cargo tie-down WLL, N (49 CFR 393.108 for nylon; derived for polyester). */
+  tieDownWllN: number;
+  wllBasis: 'tie-down' | 'design-factor';
+  extrapolated: boolean;
+  basis: string;
+  cautions: string[];
+}
+
+const MIN_MM = 9.5;
+const MAX_MM = 25.5;
+
+function perArea(points: readonly RopePoint[]): { xs: number[]; ks: number[] } {
+  return {
+    xs: points.map((p) => p.diameterIn),
+    ks: points.map((p) => p.lbf / (p.diameterIn * p.diameterIn)),
+  };
+}
+
+const MBS_3S = perArea(NYLON_THREE_STRAND_MBS);
+const WLL_3S = perArea(NYLON_THREE_STRAND_WLL);
+const WLL_DB = perArea(NYLON_DOUBLE_BRAID_WLL);
+
+/** lbf at diameter d (in): strength per d² interpolated between rows, held at the ends. */
+function byArea(table: { xs: number[]; ks: number[] }, dIn: number): number {
+  const first = table.xs[0] ?? 0;
+  const last = table.xs[table.xs.length - 1] ?? 0;
+  const clamped = Math.min(Math.max(dIn, first), last);
+  return interpolateLinear(table.xs, table.ks, clamped) * dIn * dIn;
+}
+
+/**
+ * Ratings of nylon or polyester rope by diameter. Nylon three-strand breaking strength from
+ * general engineering tables (seen), interpolated as strength per d²; double braid = that ×
+ * the ratio of the CFR double-braid to three-strand tie-down limits (derived); polyester =
+ * 0.9 × nylon (from memory). Wet nylon loses `wetLossFraction` (default 15 %, UFC; Gerr says
+ * about half). wllN is the 49 CFR 393.108 tie-down limit (seen, a cargo rating with a design
+ * factor of about 9–12) unless `designFactor` is given.
+ */
+export function ropeSpec(input: RopeSpecInput): RopeSpecResult {
+  const raw = requireObject(input, '');
+  const material = requireOneOf(raw.material, 'material', ROPE_MATERIALS);
+  const construction = requireOneOf(raw.construction, 'construction', ROPE_CONSTRUCTIONS);
+  const extrapolate = optionalBoolean(raw.extrapolate, 'extrapolate', false);
+  const diameterMm = requireNumber(raw.diameterMm, 'diameterMm', {
+    min: extrapolate ? 4 : MIN_MM,
+    max: extrapolate ? 40 : MAX_MM,
+    hint: extrapolate ? 'mm' : 'mm (3/8–1 in, the rope tables) unless extrapolate is true',
+  });
+  const wet = optionalBoolean(raw.wet, 'wet', false);
+  const wetLoss = optionalNumber(raw.wetLossFraction, 'wetLossFraction', NYLON_WET_LOSS_DEFAULT, {
+    min: 0,
+    max: 0.6,
+  });
+  const designFactor =
+    raw.designFactor === undefined
+      ? undefined
+      : requireNumber(raw.designFactor, 'designFactor', { min: 1, max: 20 });
+  const dIn = diameterMm / MM_PER_IN;
+  const braid = construction === 'double-braid';
+  const wll3s = byArea(WLL_3S, dIn);
+  const braidRatio = braid ? byArea(WLL_DB, dIn) / wll3s : 1;
+  const nylonDryLbf = byArea(MBS_3S, dIn) * braidRatio;
+  const dryLbf = material === 'nylon' ? nylonDryLbf : nylonDryLbf * POLYESTER_STRENGTH_FRACTION;
+  const wetFactor = wet && material === 'nylon' ? 1 - wetLoss : 1;
+  const minBreakN = dryLbf * wetFactor * N_PER_LBF;
+  const tieDownLbf = material === 'nylon' ? wll3s * braidRatio : dryLbf / POLYESTER_TIE_DOWN_FACTOR;
+  const tieDownWllN = tieDownLbf * N_PER_LBF;
+  const extrapolated = diameterMm < MIN_MM || diameterMm > MAX_MM;
+  return {
+    minBreakN,
+    wllN: designFactor === undefined ? tieDownWllN : minBreakN / designFactor,
+    tieDownWllN,
+    wllBasis: designFactor === undefined ? 'tie-down' : 'design-factor',
+    extrapolated,
+    basis: describe(material, braid, wet, wetLoss, designFactor, extrapolated),
+    cautions: ropeCautions(material, wet),
+  };
+}
+
+function describe(
+  material: RopeMaterial,
+  braid: boolean,
+  wet: boolean,
+  wetLoss: number,
+  designFactor: number | undefined,
+  extrapolated: boolean,
+): string {
+  const strength = braid
+    ? 'Breaking strength of nylon three-strand from engineering tables (seen) × the ratio of the 49 CFR double-braid to three-strand limits (derived)'
+    : 'Breaking strength of nylon three-strand from engineering tables (seen)';
+  const fibre =
+    material === 'polyester' ? ', taken as 0.9 × nylon for polyester (from memory)' : '';
+  const water =
+    wet && material === 'nylon'
+      ? `, less ${Math.round(wetLoss * 100)} % for wet nylon (UFC 4-159-03 says about 15 %, Gerr about half)`
+      : '';
+  const wll =
+    designFactor === undefined
+      ? material === 'nylon'
+        ? ' Working load limit: the 49 CFR 393.108 cargo tie-down limit (seen), about a ninth to a twelfth of breaking.'
+        : ' Working load limit: breaking ÷ 12, the cargo tie-down factor the nylon rows imply (derived).'
+      : ` Working load limit: breaking ÷ ${designFactor}, the chosen design factor.`;
+  const beyond = extrapolated
+    ? ' This diameter is outside 3/8–1 in and is extrapolated with d².'
+    : '';
+  return `${strength}${fibre}${water}.${wll}${beyond}`;
+}
+
+function ropeCautions(material: RopeMaterial, wet: boolean): string[] {
+  const list = [
+    ...STANDARD_CAUTIONS,
+    'Chafe at the bow roller or fairlead can cut a rope rode in hours: protect it and inspect it.',
+    'Knots roughly halve a rope’s strength; a well-made eye splice keeps most of it.',
+  ];
+  if (material === 'nylon' && !wet) {
+    list.push(
+      'Nylon is weaker wet; these figures are dry. Sources differ on how much (15 % to half).',
+    );
+  }
+  return list;
+}
