@@ -3,7 +3,7 @@ export function SkipLink() {
   return (
     <a
       href="#main"
-      className="sr-only rounded-md bg-sand-50 px-4 py-2 font-bold text-ink-900 focus:not-sr-only focus:fixed focus:top-2 focus:left-2 focus:z-50"
+      className="sr-only rounded-md bg-sand-50 font-bold text-ink-900 shadow-card focus:not-sr-only focus:fixed focus:top-3 focus:left-3 focus:z-50 focus:px-4 focus:py-2"
     >
       Skip to content
     </a>
