@@ -6,7 +6,14 @@ export default defineConfig({
     projects: [
       { test: { name: 'calc', root: 'packages/calc', include: ['src/**/*.test.ts'] } },
       { test: { name: 'shared', root: 'packages/shared', include: ['src/**/*.test.ts'] } },
-      { test: { name: 'fakes', root: 'apps', include: ['fake-*/src/**/*.test.ts'], fileParallelism: false } },
+      {
+        test: {
+          name: 'fakes',
+          root: 'apps',
+          include: ['fake-*/src/**/*.test.ts'],
+          fileParallelism: false,
+        },
+      },
       {
         test: {
           name: 'api',
@@ -20,7 +27,13 @@ export default defineConfig({
       },
       {
         extends: './vite.config.ts',
-        test: { name: 'web', root: 'apps/web', include: ['src/**/*.test.tsx', 'src/**/*.test.ts'], environment: 'jsdom' },
+        test: {
+          name: 'web',
+          root: 'apps/web',
+          include: ['src/**/*.test.tsx', 'src/**/*.test.ts'],
+          environment: 'jsdom',
+          setupFiles: ['src/testing/setup.ts'],
+        },
       },
       {
         test: {

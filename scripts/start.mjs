@@ -32,7 +32,11 @@ async function main() {
 
   const mailDir = join(ROOT, '.data', 'fake-mail');
   children.push(
-    startService('mail', TSX, ['apps/fake-mail/src/main.ts'], { FAKE_MAIL_SMTP_PORT: String(PORTS.smtp), FAKE_MAIL_HTTP_PORT: String(PORTS.mailHttp), FAKE_MAIL_DIR: mailDir }),
+    startService('mail', TSX, ['apps/fake-mail/src/main.ts'], {
+      FAKE_MAIL_SMTP_PORT: String(PORTS.smtp),
+      FAKE_MAIL_HTTP_PORT: String(PORTS.mailHttp),
+      FAKE_MAIL_DIR: mailDir,
+    }),
   );
   if (existsSync(join(ROOT, 'apps/fake-payments/src/main.ts'))) {
     children.push(
@@ -57,7 +61,10 @@ async function main() {
       LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
     }),
   );
-  if (dev) children.push(startService('web', 'npx', ['vite', '--host', '127.0.0.1'], { API_PORT: String(PORTS.api) }));
+  if (dev)
+    children.push(
+      startService('web', 'npx', ['vite', '--host', '127.0.0.1'], { API_PORT: String(PORTS.api) }),
+    );
 
   await waitForHttp(`http://127.0.0.1:${PORTS.api}/api/health`);
   console.log(`

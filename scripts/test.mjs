@@ -25,9 +25,20 @@ function vitest(phase, projects, extraEnv = {}) {
   const out = join(resultsDir, `${phase}.json`);
   rmSync(out, { force: true });
   const t0 = Date.now();
-  const code = run('npx', ['vitest', 'run', ...projects.flatMap((p) => ['--project', p]), '--reporter=default', '--reporter=json', `--outputFile.json=${out}`], {
-    env: extraEnv,
-  });
+  const code = run(
+    'npx',
+    [
+      'vitest',
+      'run',
+      ...projects.flatMap((p) => ['--project', p]),
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile.json=${out}`,
+    ],
+    {
+      env: extraEnv,
+    },
+  );
   let passed = 0;
   let failed = 0;
   let skipped = 0;
@@ -41,7 +52,9 @@ function vitest(phase, projects, extraEnv = {}) {
   tally.passed += passed;
   tally.failed += failed;
   tally.skipped += skipped;
-  lines.push(`${failed ? 'FAIL' : 'ok  '} ${phase}: ${passed} passed, ${failed} failed (${((Date.now() - t0) / 1000).toFixed(1)} s)`);
+  lines.push(
+    `${failed ? 'FAIL' : 'ok  '} ${phase}: ${passed} passed, ${failed} failed (${((Date.now() - t0) / 1000).toFixed(1)} s)`,
+  );
 }
 
 const cfg = profileConfig('test');
@@ -58,7 +71,11 @@ try {
   }
   if (only('unit')) vitest('unit+api', ['calc', 'shared', 'fakes', 'web', 'api']);
   if (only('e2e')) {
-    ensureDebianPackages('/usr/bin/chromium', ['chromium'], 'end-to-end tests in headless Chromium');
+    ensureDebianPackages(
+      '/usr/bin/chromium',
+      ['chromium'],
+      'end-to-end tests in headless Chromium',
+    );
     const built = run('npx', ['vite', 'build', '--logLevel', 'warn']) === 0;
     tally[built ? 'passed' : 'failed'] += 1;
     lines.push(`${built ? 'ok  ' : 'FAIL'} production build (vite build)`);
@@ -73,5 +90,7 @@ try {
 
 console.log('\n── Rodewise test summary ──');
 for (const l of lines) console.log(l);
-console.log(`${tally.passed} passed, ${tally.failed} failed${tally.skipped ? `, ${tally.skipped} skipped` : ''}`);
+console.log(
+  `${tally.passed} passed, ${tally.failed} failed${tally.skipped ? `, ${tally.skipped} skipped` : ''}`,
+);
 process.exit(tally.failed ? 1 : 0);

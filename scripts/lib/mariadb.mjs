@@ -10,7 +10,10 @@ export const ROOT = resolve(new URL('../..', import.meta.url).pathname);
 /** Instance settings per profile. `dev` serves `npm start`; `test` is a separate server so the two never collide. */
 export function profileConfig(profile = 'dev') {
   const isTest = profile === 'test';
-  const dataDir = resolve(ROOT, process.env.DB_DATA_DIR ?? (isTest ? '.data/mariadb-test' : '.data/mariadb'));
+  const dataDir = resolve(
+    ROOT,
+    process.env.DB_DATA_DIR ?? (isTest ? '.data/mariadb-test' : '.data/mariadb'),
+  );
   return {
     profile,
     dataDir,
@@ -27,10 +30,14 @@ export function profileConfig(profile = 'dev') {
 }
 
 function client(cfg, args, input) {
-  return spawnSync('mariadb', ['--no-defaults', `--socket=${cfg.socket}`, '-uroot', '--batch', ...args], {
-    input,
-    encoding: 'utf8',
-  });
+  return spawnSync(
+    'mariadb',
+    ['--no-defaults', `--socket=${cfg.socket}`, '-uroot', '--batch', ...args],
+    {
+      input,
+      encoding: 'utf8',
+    },
+  );
 }
 
 /** Runs SQL as root over the instance's socket; throws with the server's message on failure. */
@@ -42,9 +49,13 @@ export function rootSql(cfg, sql) {
 
 export function isRunning(cfg) {
   if (!existsSync(cfg.socket)) return false;
-  const r = spawnSync('mariadb-admin', ['--no-defaults', `--socket=${cfg.socket}`, '-uroot', 'ping'], {
-    encoding: 'utf8',
-  });
+  const r = spawnSync(
+    'mariadb-admin',
+    ['--no-defaults', `--socket=${cfg.socket}`, '-uroot', 'ping'],
+    {
+      encoding: 'utf8',
+    },
+  );
   return r.status === 0;
 }
 
@@ -55,7 +66,8 @@ export async function startServer(cfg, { quiet = false } = {}) {
   if (cfg.external) return cfg;
   ensureDebianPackages('mariadbd', ['mariadb-server', 'mariadb-client'], 'the Rodewise database');
   if (isRunning(cfg)) {
-    if (!quiet) console.log(`[db] MariaDB (${cfg.profile}) already running on ${cfg.host}:${cfg.port}`);
+    if (!quiet)
+      console.log(`[db] MariaDB (${cfg.profile}) already running on ${cfg.host}:${cfg.port}`);
     return cfg;
   }
   mkdirSync(cfg.dataDir, { recursive: true });
@@ -63,10 +75,17 @@ export async function startServer(cfg, { quiet = false } = {}) {
     if (!quiet) console.log(`[db] initialising ${cfg.dataDir}`);
     const init = spawnSync(
       'mariadb-install-db',
-      ['--no-defaults', `--datadir=${cfg.dataDir}`, '--user=root', '--skip-test-db', '--auth-root-authentication-method=socket'],
+      [
+        '--no-defaults',
+        `--datadir=${cfg.dataDir}`,
+        '--user=root',
+        '--skip-test-db',
+        '--auth-root-authentication-method=socket',
+      ],
       { encoding: 'utf8' },
     );
-    if (init.status !== 0) throw new Error(`mariadb-install-db failed:\n${init.stdout}\n${init.stderr}`);
+    if (init.status !== 0)
+      throw new Error(`mariadb-install-db failed:\n${init.stdout}\n${init.stderr}`);
   }
   const log = openSync(cfg.logFile, 'a');
   const args = [
@@ -96,7 +115,9 @@ export async function startServer(cfg, { quiet = false } = {}) {
     if (exited !== null) break;
     await sleep(100);
   }
-  const tail = existsSync(cfg.logFile) ? readFileSync(cfg.logFile, 'utf8').split('\n').slice(-15).join('\n') : '';
+  const tail = existsSync(cfg.logFile)
+    ? readFileSync(cfg.logFile, 'utf8').split('\n').slice(-15).join('\n')
+    : '';
   throw new Error(`MariaDB did not start (port ${cfg.port} busy?). Last log lines:\n${tail}`);
 }
 
@@ -109,7 +130,9 @@ export function provision(cfg, databases = [cfg.database]) {
     `ALTER USER ${u} IDENTIFIED BY '${cfg.password}';`,
   ];
   for (const db of databases) {
-    stmts.push(`CREATE DATABASE IF NOT EXISTS \`${db}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`);
+    stmts.push(
+      `CREATE DATABASE IF NOT EXISTS \`${db}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`,
+    );
     stmts.push(
       `GRANT SELECT, INSERT, UPDATE, DELETE, CREATE, ALTER, INDEX, DROP, REFERENCES, LOCK TABLES, CREATE TEMPORARY TABLES ON \`${db}\`.* TO ${u};`,
     );
@@ -119,7 +142,10 @@ export function provision(cfg, databases = [cfg.database]) {
 
 /** Drops and recreates a database (tests start from an empty schema). */
 export function recreateDatabase(cfg, db) {
-  rootSql(cfg, `DROP DATABASE IF EXISTS \`${db}\`; CREATE DATABASE \`${db}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`);
+  rootSql(
+    cfg,
+    `DROP DATABASE IF EXISTS \`${db}\`; CREATE DATABASE \`${db}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`,
+  );
 }
 
 export async function stopServer(cfg, { quiet = false } = {}) {
@@ -128,7 +154,9 @@ export async function stopServer(cfg, { quiet = false } = {}) {
     if (!quiet) console.log(`[db] MariaDB (${cfg.profile}) is not running`);
     return;
   }
-  spawnSync('mariadb-admin', ['--no-defaults', `--socket=${cfg.socket}`, '-uroot', 'shutdown'], { stdio: 'inherit' });
+  spawnSync('mariadb-admin', ['--no-defaults', `--socket=${cfg.socket}`, '-uroot', 'shutdown'], {
+    stdio: 'inherit',
+  });
   for (let i = 0; i < 100 && existsSync(cfg.pidFile); i += 1) await sleep(100);
   if (!quiet) console.log(`[db] MariaDB (${cfg.profile}) stopped`);
 }

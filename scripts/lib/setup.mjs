@@ -18,7 +18,12 @@ export function ensureDeps() {
 
 /** Runs a command to completion with inherited output; returns its exit code. */
 export function run(cmd, args, opts = {}) {
-  const r = spawnSync(cmd, args, { cwd: ROOT, stdio: 'inherit', ...opts, env: { ...process.env, ...(opts.env ?? {}) } });
+  const r = spawnSync(cmd, args, {
+    cwd: ROOT,
+    stdio: 'inherit',
+    ...opts,
+    env: { ...process.env, ...(opts.env ?? {}) },
+  });
   return r.status ?? 1;
 }
 
@@ -63,7 +68,11 @@ export async function waitForHttp(url, timeoutMs = 60000) {
 
 /** Starts a long-running child with a name prefix on its output; returns the ChildProcess. */
 export function startService(name, cmd, args, env, { quiet = false } = {}) {
-  const child = spawn(cmd, args, { cwd: ROOT, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+  const child = spawn(cmd, args, {
+    cwd: ROOT,
+    env: { ...process.env, ...env },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
   const prefix = (chunk) =>
     chunk
       .toString()

@@ -12,7 +12,15 @@ export function launch(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
   });
 }
 
@@ -31,7 +39,9 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: /sign in/i }).click();
-  await page.waitForFunction(() => !location.pathname.startsWith('/sign-in'), undefined, { timeout: 15000 });
+  await page.waitForFunction(() => !location.pathname.startsWith('/sign-in'), undefined, {
+    timeout: 15000,
+  });
 }
 
 interface MailDto {
@@ -42,7 +52,11 @@ interface MailDto {
 }
 
 /** Waits for a message to `to` whose subject contains `subject` in the fake inbox. */
-export async function waitForMail(to: string, subject: string, timeoutMs = 15000): Promise<MailDto> {
+export async function waitForMail(
+  to: string,
+  subject: string,
+  timeoutMs = 15000,
+): Promise<MailDto> {
   const end = Date.now() + timeoutMs;
   while (Date.now() < end) {
     const url = new URL('/api/messages', mailUrl());

@@ -2,7 +2,14 @@ import type { ChildProcess } from 'node:child_process';
 import { existsSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { TestProject } from 'vitest/node';
-import { dbEnv, profileConfig, provision, recreateDatabase, ROOT, startServer } from '../../scripts/lib/mariadb.mjs';
+import {
+  dbEnv,
+  profileConfig,
+  provision,
+  recreateDatabase,
+  ROOT,
+  startServer,
+} from '../../scripts/lib/mariadb.mjs';
 import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
 
 declare module 'vitest' {
@@ -13,24 +20,43 @@ declare module 'vitest' {
   }
 }
 
-export const E2E_PORTS = { api: 4410, smtp: 4425, mailHttp: 4426, payments: 4430 };
+// E2E_PORT_BASE and E2E_DB let two runs share the machine without colliding.
+const base = Number(process.env.E2E_PORT_BASE ?? 4410);
+export const E2E_PORTS = { api: base, smtp: base + 15, mailHttp: base + 16, payments: base + 20 };
 const children: ChildProcess[] = [];
 
 /** The whole stack as a member would meet it: built client served by the API, fakes, seeded demo club. */
 export async function setup(project: TestProject) {
-  if (!existsSync(join(ROOT, 'dist/web/index.html'))) throw new Error('Build the client first: npx vite build');
+  if (!existsSync(join(ROOT, 'dist/web/index.html')))
+    throw new Error('Build the client first: npx vite build');
   const cfg = profileConfig('test');
   await startServer(cfg, { quiet: true });
-  const database = 'rodewise_test_e2e';
+  const database = process.env.E2E_DB ?? 'rodewise_test_e2e';
   provision(cfg, [database]);
   recreateDatabase(cfg, database);
   const baseUrl = `http://127.0.0.1:${E2E_PORTS.api}`;
-  const env = { ...dbEnv(cfg, database), NODE_ENV: 'production', PUBLIC_URL: baseUrl, LOG_LEVEL: 'warn' };
+  const env = {
+    ...dbEnv(cfg, database),
+    NODE_ENV: 'production',
+    PUBLIC_URL: baseUrl,
+    LOG_LEVEL: 'warn',
+  };
   mustRun(TSX, ['apps/api/src/cli/seed.ts'], { env, stdio: 'ignore' });
 
-  for (const d of ['e2e-mail', 'e2e-payments']) rmSync(join(ROOT, '.data', d), { recursive: true, force: true });
+  for (const d of [`${database}-mail`, `${database}-payments`])
+    rmSync(join(ROOT, '.data', d), { recursive: true, force: true });
   children.push(
-    startService('mail', TSX, ['apps/fake-mail/src/main.ts'], { FAKE_MAIL_SMTP_PORT: String(E2E_PORTS.smtp), FAKE_MAIL_HTTP_PORT: String(E2E_PORTS.mailHttp), FAKE_MAIL_DIR: join(ROOT, '.data/e2e-mail') }, { quiet: true }),
+    startService(
+      'mail',
+      TSX,
+      ['apps/fake-mail/src/main.ts'],
+      {
+        FAKE_MAIL_SMTP_PORT: String(E2E_PORTS.smtp),
+        FAKE_MAIL_HTTP_PORT: String(E2E_PORTS.mailHttp),
+        FAKE_MAIL_DIR: join(ROOT, '.data', `${database}-mail`),
+      },
+      { quiet: true },
+    ),
   );
   const hasPayments = existsSync(join(ROOT, 'apps/fake-payments/src/main.ts'));
   if (hasPayments) {
@@ -41,7 +67,7 @@ export async function setup(project: TestProject) {
         ['apps/fake-payments/src/main.ts'],
         {
           FAKE_PAYMENTS_PORT: String(E2E_PORTS.payments),
-          FAKE_PAYMENTS_DIR: join(ROOT, '.data/e2e-payments'),
+          FAKE_PAYMENTS_DIR: join(ROOT, '.data', `${database}-payments`),
           FAKE_PAYMENTS_WEBHOOK_URL: `${baseUrl}/api/payments/webhook`,
           FAKE_PAYMENTS_PUBLIC_URL: `http://127.0.0.1:${E2E_PORTS.payments}`,
         },

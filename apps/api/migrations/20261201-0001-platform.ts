@@ -26,7 +26,10 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     granted_by_id: { ...fk('users', 'SET NULL'), allowNull: true },
     created_at: ts,
   });
-  await qi.addIndex('user_roles', ['user_id', 'role'], { unique: true, name: 'user_roles_user_role' });
+  await qi.addIndex('user_roles', ['user_id', 'role'], {
+    unique: true,
+    name: 'user_roles_user_role',
+  });
   await qi.createTable('email_tokens', {
     id,
     user_id: { ...fk('users'), allowNull: false },
@@ -90,7 +93,16 @@ export async function up({ context: qi }: { context: QueryInterface }) {
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
-  for (const t of ['audit_events', 'outbox_emails', 'club_settings', 'harbors', 'sessions', 'email_tokens', 'user_roles', 'users']) {
+  for (const t of [
+    'audit_events',
+    'outbox_emails',
+    'club_settings',
+    'harbors',
+    'sessions',
+    'email_tokens',
+    'user_roles',
+    'users',
+  ]) {
     await qi.dropTable(t);
   }
 }

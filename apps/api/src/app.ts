@@ -65,7 +65,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
     pinoHttp({
       logger,
       autoLogging: { ignore: (req) => req.url === '/api/health/ping' },
-      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+      customLogLevel: (_req, res, err) =>
+        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug',
     }),
   );
 
@@ -75,7 +76,10 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
     table: 'Session',
     checkExpirationInterval: 15 * 60_000,
     expiration: env.SESSION_MAX_AGE_H * 3600_000,
-    extendDefaultFields: (defaults: { data: string; expires: Date }, s: { passport?: { user?: number } }) => ({
+    extendDefaultFields: (
+      defaults: { data: string; expires: Date },
+      s: { passport?: { user?: number } },
+    ) => ({
       data: defaults.data,
       expires: defaults.expires,
       userId: s.passport?.user ?? null,
@@ -92,17 +96,30 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   });
   const csrf: RequestHandler = (req, res, next) => {
     csrfSynchronisedProtection(req, res, (err?: unknown) => {
-      if (err) next(new AppError('CSRF_INVALID', 'Your session token is missing or stale. Reload the page and try again.'));
+      if (err)
+        next(
+          new AppError(
+            'CSRF_INVALID',
+            'Your session token is missing or stale. Reload the page and try again.',
+          ),
+        );
       else next();
     });
   };
 
   const api = express.Router();
   // Routes that must see the raw body or come from outside a browser session are mounted before the JSON parser and CSRF check.
-  api.post('/csp-report', express.json({ type: ['application/csp-report', 'application/json', 'application/reports+json'], limit: '20kb' }), (req, res) => {
-    logger.warn({ csp: req.body as unknown }, 'csp violation');
-    res.status(204).end();
-  });
+  api.post(
+    '/csp-report',
+    express.json({
+      type: ['application/csp-report', 'application/json', 'application/reports+json'],
+      limit: '20kb',
+    }),
+    (req, res) => {
+      logger.warn({ csp: req.body as unknown }, 'csp violation');
+      res.status(204).end();
+    },
+  );
   mount(app, '/api', api);
 
   app.use('/api', express.json({ limit: '200kb' }));
@@ -114,10 +131,16 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
       store,
       resave: false,
       saveUninitialized: false,
-      cookie: { httpOnly: true, sameSite: 'lax', secure: env.COOKIE_SECURE, maxAge: env.SESSION_MAX_AGE_H * 3600_000 },
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: env.COOKIE_SECURE,
+        maxAge: env.SESSION_MAX_AGE_H * 3600_000,
+      },
     }),
   );
-  app.use('/api', passport.initialize(), passport.session());
+  // @types/passport types session() as `any`; it is a plain Express middleware.
+  app.use('/api', passport.initialize(), passport.session() as RequestHandler);
   app.use('/api', csrf);
 
   const newCsrfToken = (req: express.Request) => generateToken(req, true);
@@ -133,7 +156,10 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
 
   const webDist = env.WEB_DIST;
   if (webDist && existsSync(join(webDist, 'index.html'))) {
-    app.use('/assets', express.static(join(webDist, 'assets'), { immutable: true, maxAge: '365d', index: false }));
+    app.use(
+      '/assets',
+      express.static(join(webDist, 'assets'), { immutable: true, maxAge: '365d', index: false }),
+    );
     app.use(express.static(webDist, { index: false, maxAge: '1h' }));
     app.get('/{*splat}', (_req, res) => {
       res.set('Cache-Control', 'no-cache').sendFile(join(webDist, 'index.html'));
@@ -141,5 +167,9 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   }
   app.use(errorHandler(logger));
 
-  return { app, close: () => (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.() };
+  return {
+    app,
+    close: () =>
+      (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.(),
+  };
 }

@@ -9,7 +9,13 @@ type Expect = 'ok' | 401 | 403;
 type Row = Record<Who, Expect>;
 
 const PUBLIC: Row = { visitor: 'ok', member: 'ok', moderator: 'ok', treasurer: 'ok', admin: 'ok' };
-const SIGNED_IN: Row = { visitor: 401, member: 'ok', moderator: 'ok', treasurer: 'ok', admin: 'ok' };
+const SIGNED_IN: Row = {
+  visitor: 401,
+  member: 'ok',
+  moderator: 'ok',
+  treasurer: 'ok',
+  admin: 'ok',
+};
 const ADMIN: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 403, admin: 'ok' };
 
 /**
@@ -59,7 +65,8 @@ let targetId = 0;
 
 beforeAll(async () => {
   await resetDb();
-  for (const [who, roles] of Object.entries(ROLE_SETS)) emails[who as Who] = (await buildUser({ roles })).email;
+  for (const [who, roles] of Object.entries(ROLE_SETS))
+    emails[who as Who] = (await buildUser({ roles })).email;
   targetId = (await buildUser()).id;
 });
 
@@ -72,7 +79,12 @@ describe('authorization matrix', () => {
     expect(Object.keys(MATRIX).filter((k) => !registered.includes(k))).toEqual([]);
   });
 
-  const cases = routes.flatMap((r) => (['visitor', 'member', 'moderator', 'treasurer', 'admin'] as Who[]).map((who) => ({ ...r, who })));
+  const cases = routes.flatMap((r) =>
+    (['visitor', 'member', 'moderator', 'treasurer', 'admin'] as Who[]).map((who) => ({
+      ...r,
+      who,
+    })),
+  );
   it.each(cases)('$method $path as $who', async ({ method, path, who }) => {
     const row = MATRIX[`${method} ${path}`];
     expect(row, `no matrix row for ${method} ${path}`).toBeDefined();
@@ -84,7 +96,8 @@ describe('authorization matrix', () => {
     const verb = method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
     const res = verb === 'get' ? await c.get(url) : await c[verb](url, {});
     const expected = row[who];
-    if (expected === 'ok') expect([401, 403], `${who} ${method} ${url} → ${res.status}`).not.toContain(res.status);
+    if (expected === 'ok')
+      expect([401, 403], `${who} ${method} ${url} → ${res.status}`).not.toContain(res.status);
     else expect(res.status).toBe(expected);
     expect(res.status).toBeLessThan(500);
   });

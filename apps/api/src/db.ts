@@ -13,7 +13,12 @@ export function createSequelize(env: Env, logger?: Logger): Sequelize {
     password: env.DB_PASSWORD,
     logging: logger ? (sql) => logger.trace({ sql }, 'sql') : false,
     pool: { max: env.DB_POOL_MAX, min: 0, acquire: 8000, idle: 10000, evict: 5000 },
-    dialectOptions: { connectTimeout: 3000, timezone: 'Z', bigIntAsNumber: true, decimalAsNumber: true },
+    dialectOptions: {
+      connectTimeout: 3000,
+      timezone: 'Z',
+      bigIntAsNumber: true,
+      decimalAsNumber: true,
+    },
     timezone: '+00:00',
     define: { underscored: true, charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' },
     retry: { max: 0 },

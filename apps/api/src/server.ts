@@ -20,7 +20,9 @@ const { app, close } = createApp({ env, sequelize, logger });
 const stopOutbox = startOutboxWorker(sequelize, createTransport(env), env, logger);
 const server = createServer(app);
 server.keepAliveTimeout = 65_000;
-server.listen(env.PORT, '127.0.0.1', () => logger.info(`Rodewise API listening on http://127.0.0.1:${env.PORT}`));
+server.listen(env.PORT, '127.0.0.1', () =>
+  logger.info(`Rodewise API listening on http://127.0.0.1:${env.PORT}`),
+);
 
 let closing = false;
 async function shutdown(signal: string) {

@@ -4,5 +4,7 @@ import { migrateUp } from '../migrator';
 
 const sequelize = createSequelize(loadEnv());
 const applied = await migrateUp(sequelize);
-console.log(applied.length ? `[migrate] applied ${applied.join(', ')}` : '[migrate] schema is up to date');
+console.log(
+  applied.length ? `[migrate] applied ${applied.join(', ')}` : '[migrate] schema is up to date',
+);
 await sequelize.close();

@@ -10,7 +10,9 @@ const sequelize = createSequelize(env);
 initModels(sequelize);
 await migrateUp(sequelize);
 const seeded = await seedDemo(sequelize, env.BCRYPT_COST);
-console.log(seeded ? '[seed] demo club created' : '[seed] database already has users; demo seed skipped');
+console.log(
+  seeded ? '[seed] demo club created' : '[seed] database already has users; demo seed skipped',
+);
 console.log(`[seed] demo sign-ins (password for all: ${DEMO_PASSWORD}):`);
 for (const u of DEMO_USERS) console.log(`   ${u.email.padEnd(32)} ${u.roles.join(', ')}`);
 await sequelize.close();

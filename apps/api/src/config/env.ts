@@ -1,8 +1,6 @@
 import { z } from 'zod';
 
-const bool = z
-  .enum(['0', '1', 'true', 'false'])
-  .transform((v) => v === '1' || v === 'true');
+const bool = z.enum(['0', '1', 'true', 'false']).transform((v) => v === '1' || v === 'true');
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -15,7 +13,10 @@ const envSchema = z.object({
   DB_PASSWORD: z.string().default('rodewise-local-only'),
   DB_POOL_MAX: z.coerce.number().int().min(1).default(20),
   SESSION_SECRET: z.string().min(16).default('rodewise-local-session-secret-change-me'),
-  SESSION_MAX_AGE_H: z.coerce.number().positive().default(24 * 14),
+  SESSION_MAX_AGE_H: z.coerce
+    .number()
+    .positive()
+    .default(24 * 14),
   COOKIE_SECURE: bool.default(false),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
@@ -47,6 +48,7 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   const e = parsed.data;
   // Production cost is at least 12 (OWASP password storage guidance); tests use the minimum to stay fast.
   const cost = e.BCRYPT_COST ?? (e.NODE_ENV === 'test' ? 4 : 12);
-  if (e.NODE_ENV === 'production' && cost < 12) throw new Error('BCRYPT_COST must be at least 12 in production');
+  if (e.NODE_ENV === 'production' && cost < 12)
+    throw new Error('BCRYPT_COST must be at least 12 in production');
   return { ...e, BCRYPT_COST: cost };
 }

@@ -24,10 +24,12 @@ export function listRoutes(app: Express): RouteEntry[] {
   const walk = (stack: LayerLike[], base: string) => {
     for (const layer of stack) {
       if (layer.route) {
-        for (const m of Object.keys(layer.route.methods)) out.push({ method: m.toUpperCase(), path: base + layer.route.path });
+        for (const m of Object.keys(layer.route.methods))
+          out.push({ method: m.toUpperCase(), path: base + layer.route.path });
       } else if (layer.handle?.stack) {
         const p = mountPaths.get(layer.handle);
-        if (p === undefined) throw new Error('A router was mounted without mount(): its routes cannot be listed');
+        if (p === undefined)
+          throw new Error('A router was mounted without mount(): its routes cannot be listed');
         walk(layer.handle.stack, base + p);
       }
     }

@@ -25,12 +25,33 @@ export function zodFields(err: ZodError): Record<string, string> {
 
 /** True for errors that mean MariaDB is unreachable, as opposed to a bad query. */
 export function isDbDown(err: unknown): boolean {
-  if (err instanceof ConnectionError || err instanceof ConnectionAcquireTimeoutError || err instanceof TimeoutError) return true;
-  const code = (err as { code?: unknown; parent?: { code?: unknown } } | null)?.parent?.code ?? (err as { code?: unknown } | null)?.code;
-  return typeof code === 'string' && ['ECONNREFUSED', 'ER_GET_CONNECTION_TIMEOUT', 'ER_SOCKET_UNEXPECTED_CLOSE', 'ECONNRESET', 'ER_CONNECTION_ALREADY_CLOSED', 'EPIPE'].includes(code);
+  if (
+    err instanceof ConnectionError ||
+    err instanceof ConnectionAcquireTimeoutError ||
+    err instanceof TimeoutError
+  )
+    return true;
+  const code =
+    (err as { code?: unknown; parent?: { code?: unknown } } | null)?.parent?.code ??
+    (err as { code?: unknown } | null)?.code;
+  return (
+    typeof code === 'string' &&
+    [
+      'ECONNREFUSED',
+      'ER_GET_CONNECTION_TIMEOUT',
+      'ER_SOCKET_UNEXPECTED_CLOSE',
+      'ECONNRESET',
+      'ER_CONNECTION_ALREADY_CLOSED',
+      'EPIPE',
+    ].includes(code)
+  );
 }
 
-function body(code: ErrorBody['error']['code'], message: string, fields?: Record<string, string>): ErrorBody {
+function body(
+  code: ErrorBody['error']['code'],
+  message: string,
+  fields?: Record<string, string>,
+): ErrorBody {
   return { error: fields ? { code, message, fields } : { code, message } };
 }
 
@@ -64,17 +85,35 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     if (isDbDown(err)) {
       logger.warn({ err }, 'database unavailable');
-      res.status(503).set('Retry-After', '5').json(body('DB_UNAVAILABLE', 'The club database is not reachable right now. Nothing was changed; please try again in a minute.'));
+      res
+        .status(503)
+        .set('Retry-After', '5')
+        .json(
+          body(
+            'DB_UNAVAILABLE',
+            'The club database is not reachable right now. Nothing was changed; please try again in a minute.',
+          ),
+        );
       return;
     }
     if (err instanceof multer.MulterError) {
       const tooBig = err.code === 'LIMIT_FILE_SIZE';
       const field = err.field ?? 'files';
-      const message = tooBig ? 'A file is larger than the limit' : err.code === 'LIMIT_FILE_COUNT' || err.code === 'LIMIT_UNEXPECTED_FILE' ? 'Too many files' : err.message;
-      res.status(tooBig ? 413 : 400).json(body(tooBig ? 'PAYLOAD_TOO_LARGE' : 'VALIDATION_FAILED', message, { [field]: message }));
+      const message = tooBig
+        ? 'A file is larger than the limit'
+        : err.code === 'LIMIT_FILE_COUNT' || err.code === 'LIMIT_UNEXPECTED_FILE'
+          ? 'Too many files'
+          : err.message;
+      res
+        .status(tooBig ? 413 : 400)
+        .json(
+          body(tooBig ? 'PAYLOAD_TOO_LARGE' : 'VALIDATION_FAILED', message, { [field]: message }),
+        );
       return;
     }
-    const status = (err as { status?: unknown; statusCode?: unknown } | null)?.status ?? (err as { statusCode?: unknown } | null)?.statusCode;
+    const status =
+      (err as { status?: unknown; statusCode?: unknown } | null)?.status ??
+      (err as { statusCode?: unknown } | null)?.statusCode;
     const type = (err as { type?: unknown } | null)?.type;
     if (type === 'entity.too.large') {
       res.status(413).json(body('PAYLOAD_TOO_LARGE', 'The request is too large'));
@@ -85,7 +124,14 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       return;
     }
     if (typeof status === 'number' && status >= 400 && status < 500) {
-      res.status(status).json(body(status === 403 ? 'FORBIDDEN' : 'VALIDATION_FAILED', 'The request could not be processed'));
+      res
+        .status(status)
+        .json(
+          body(
+            status === 403 ? 'FORBIDDEN' : 'VALIDATION_FAILED',
+            'The request could not be processed',
+          ),
+        );
       return;
     }
     if (err instanceof BaseError) logger.error({ err, path: req.path }, 'database error');

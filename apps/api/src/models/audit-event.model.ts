@@ -1,9 +1,19 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export type AuditArea = 'auth' | 'admin' | 'moderation' | 'treasury' | 'payments' | 'exchange';
 
 /** Append-only log of who did what, when and why. Never updated or deleted. */
-export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreationAttributes<AuditEvent>> {
+export class AuditEvent extends Model<
+  InferAttributes<AuditEvent>,
+  InferCreationAttributes<AuditEvent>
+> {
   declare id: CreationOptional<number>;
   declare actorId: number | null;
   declare area: AuditArea;

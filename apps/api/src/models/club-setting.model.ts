@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** Key → JSON value; read through the club-settings service, which knows each key's schema and default. */
-export class ClubSetting extends Model<InferAttributes<ClubSetting>, InferCreationAttributes<ClubSetting>> {
+export class ClubSetting extends Model<
+  InferAttributes<ClubSetting>,
+  InferCreationAttributes<ClubSetting>
+> {
   declare key: string;
   declare value: unknown;
   declare updatedAt: CreationOptional<Date>;

@@ -1,9 +1,19 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export type EmailTokenKind = 'verify' | 'reset';
 
 /** A single-use e-mailed token; only its SHA-256 hash is stored. */
-export class EmailToken extends Model<InferAttributes<EmailToken>, InferCreationAttributes<EmailToken>> {
+export class EmailToken extends Model<
+  InferAttributes<EmailToken>,
+  InferCreationAttributes<EmailToken>
+> {
   declare id: CreationOptional<number>;
   declare userId: number;
   declare kind: EmailTokenKind;

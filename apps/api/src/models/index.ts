@@ -37,4 +37,15 @@ export function initModels(sequelize: Sequelize) {
   initialised = sequelize;
 }
 
-export { AuditEvent, Boat, ClubSetting, TacklePlan, EmailToken, Harbor, OutboxEmail, Session, User, UserRole };
+export {
+  AuditEvent,
+  Boat,
+  ClubSetting,
+  TacklePlan,
+  EmailToken,
+  Harbor,
+  OutboxEmail,
+  Session,
+  User,
+  UserRole,
+};

@@ -1,9 +1,19 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 export type OutboxStatus = 'pending' | 'sending' | 'sent' | 'failed';
 
 /** Mail waits here until the SMTP server accepts it, so an outage loses nothing. */
-export class OutboxEmail extends Model<InferAttributes<OutboxEmail>, InferCreationAttributes<OutboxEmail>> {
+export class OutboxEmail extends Model<
+  InferAttributes<OutboxEmail>,
+  InferCreationAttributes<OutboxEmail>
+> {
   declare id: CreationOptional<number>;
   declare toAddress: string;
   declare subject: string;

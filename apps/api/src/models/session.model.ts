@@ -1,4 +1,10 @@
-import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** express-session rows, read and written by connect-session-sequelize. */
 export class Session extends Model<InferAttributes<Session>, InferCreationAttributes<Session>> {

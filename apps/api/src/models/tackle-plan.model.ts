@@ -1,8 +1,18 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { PlanComponents, PlanCondition, TacklePlanDto } from '@app/shared';
 
 /** A saved set of ground tackle for one boat and one named condition. */
-export class TacklePlan extends Model<InferAttributes<TacklePlan>, InferCreationAttributes<TacklePlan>> {
+export class TacklePlan extends Model<
+  InferAttributes<TacklePlan>,
+  InferCreationAttributes<TacklePlan>
+> {
   declare id: CreationOptional<number>;
   declare boatId: number;
   declare ownerId: number;

@@ -3,7 +3,14 @@ import { join } from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { startFakeMail, type FakeMail } from '@app/fake-mail';
 // Plain JS orchestration helpers shared with scripts/test.mjs.
-import { dbEnv, profileConfig, provision, recreateDatabase, ROOT, startServer } from '../../../../scripts/lib/mariadb.mjs';
+import {
+  dbEnv,
+  profileConfig,
+  provision,
+  recreateDatabase,
+  ROOT,
+  startServer,
+} from '../../../../scripts/lib/mariadb.mjs';
 import { createSequelize } from '../db';
 import { loadEnv } from '../config/env';
 import { migrateUp } from '../migrator';
@@ -21,7 +28,8 @@ let mail: FakeMail | undefined;
 /** Starts the test MariaDB (own port and data dir), recreates the api test database, migrates it, starts the mail sink. */
 export async function setup(project: TestProject) {
   const cfg = profileConfig('test');
-  const database = 'rodewise_test_api';
+  // Own database per runner, so parallel test runs (API_TEST_DB=…) never truncate each other's rows.
+  const database = process.env.API_TEST_DB ?? 'rodewise_test_api';
   await startServer(cfg, { quiet: true });
   provision(cfg, [database]);
   recreateDatabase(cfg, database);
@@ -30,9 +38,14 @@ export async function setup(project: TestProject) {
   await migrateUp(sequelize);
   await sequelize.close();
 
-  const mailDir = join(ROOT, '.data', 'test-mail-api');
+  const mailDir = join(ROOT, '.data', `test-mail-${database}`);
   rmSync(mailDir, { recursive: true, force: true });
-  mail = await startFakeMail({ smtpPort: 0, httpPort: 0, dataDir: mailDir, onError: () => undefined });
+  mail = await startFakeMail({
+    smtpPort: 0,
+    httpPort: 0,
+    dataDir: mailDir,
+    onError: () => undefined,
+  });
   project.provide('dbEnv', env);
   project.provide('mailSmtpPort', mail.smtpPort);
   project.provide('mailHttpUrl', mail.httpUrl);

@@ -36,7 +36,9 @@ export function testDb() {
 }
 
 /** Builds the real app against the test database. */
-export function createTestApp(overrides: Record<string, string> = {}): BuiltApp & { env: Env; sequelize: Sequelize } {
+export function createTestApp(
+  overrides: Record<string, string> = {},
+): BuiltApp & { env: Env; sequelize: Sequelize } {
   const { sequelize } = testDb();
   const env = testEnv(overrides);
   return { ...createApp({ env, sequelize, logger: createLogger('silent') }), env, sequelize };
@@ -59,7 +61,9 @@ export const TEST_PASSWORD = 'correct-horse-battery';
 let seq = 0;
 
 /** A verified user with the given roles (member by default). */
-export async function buildUser(opts: { roles?: Role[]; verified?: boolean; email?: string; displayName?: string } = {}) {
+export async function buildUser(
+  opts: { roles?: Role[]; verified?: boolean; email?: string; displayName?: string } = {},
+) {
   seq += 1;
   const user = await User.create({
     email: opts.email ?? `user${seq}-${Date.now()}@test.example`,
@@ -67,7 +71,8 @@ export async function buildUser(opts: { roles?: Role[]; verified?: boolean; emai
     passwordHash: await bcrypt.hash(TEST_PASSWORD, 4),
     emailVerifiedAt: opts.verified === false ? null : new Date(),
   });
-  for (const role of opts.roles ?? ['member']) await UserRole.create({ userId: user.id, role, grantedById: null });
+  for (const role of opts.roles ?? ['member'])
+    await UserRole.create({ userId: user.id, role, grantedById: null });
   return user;
 }
 

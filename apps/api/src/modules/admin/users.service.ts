@@ -8,8 +8,15 @@ import { actionEmail } from '../mail/templates';
 
 /** Users matching `q` (name or e-mail), with roles, for the admin page. */
 export function listUsers(q?: string) {
-  const where = q ? { [Op.or]: [{ email: { [Op.like]: `%${q}%` } }, { displayName: { [Op.like]: `%${q}%` } }] } : {};
-  return User.findAll({ where, include: [{ model: UserRole, as: 'roles' }], order: [['displayName', 'ASC']], limit: 500 });
+  const where = q
+    ? { [Op.or]: [{ email: { [Op.like]: `%${q}%` } }, { displayName: { [Op.like]: `%${q}%` } }] }
+    : {};
+  return User.findAll({
+    where,
+    include: [{ model: UserRole, as: 'roles' }],
+    order: [['displayName', 'ASC']],
+    limit: 500,
+  });
 }
 
 /**
@@ -18,18 +25,36 @@ export function listUsers(q?: string) {
  */
 export async function setRoles(sequelize: Sequelize, actor: User, userId: number, roles: Role[]) {
   if (actor.id === userId && actor.hasRole('admin') && !roles.includes('admin')) {
-    throw new AppError('CONFLICT', 'You cannot remove your own admin role. Ask another admin.', { roles: 'Keep admin for yourself' });
+    throw new AppError('CONFLICT', 'You cannot remove your own admin role. Ask another admin.', {
+      roles: 'Keep admin for yourself',
+    });
   }
   await sequelize.transaction(async (t) => {
-    const user = await User.findByPk(userId, { include: [{ model: UserRole, as: 'roles' }], transaction: t, lock: t.LOCK.UPDATE });
+    const user = await User.findByPk(userId, {
+      include: [{ model: UserRole, as: 'roles' }],
+      transaction: t,
+      lock: t.LOCK.UPDATE,
+    });
     if (!user) throw notFound('User');
     const before = user.roleNames;
     const added = roles.filter((r) => !before.includes(r));
     const removed = before.filter((r) => !roles.includes(r));
     if (!added.length && !removed.length) return;
-    if (removed.length) await UserRole.destroy({ where: { userId, role: removed }, transaction: t });
-    for (const role of added) await UserRole.create({ userId, role, grantedById: actor.id }, { transaction: t });
-    await recordAudit({ actorId: actor.id, area: 'admin', action: 'roles.set', subjectType: 'user', subjectId: String(userId), details: { before, after: [...roles].sort(), added, removed } }, t);
+    if (removed.length)
+      await UserRole.destroy({ where: { userId, role: removed }, transaction: t });
+    for (const role of added)
+      await UserRole.create({ userId, role, grantedById: actor.id }, { transaction: t });
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'admin',
+        action: 'roles.set',
+        subjectType: 'user',
+        subjectId: String(userId),
+        details: { before, after: [...roles].sort(), added, removed },
+      },
+      t,
+    );
     await enqueueEmail(
       actionEmail({
         to: user.email,

@@ -14,7 +14,12 @@ export interface AuditInput {
 /** Appends one row to the audit log (inside the caller's transaction when given). */
 export async function recordAudit(input: AuditInput, transaction?: Transaction) {
   return AuditEvent.create(
-    { ...input, subjectId: input.subjectId ?? null, reason: input.reason ?? null, details: input.details ?? null },
+    {
+      ...input,
+      subjectId: input.subjectId ?? null,
+      reason: input.reason ?? null,
+      details: input.details ?? null,
+    },
     { transaction },
   );
 }

@@ -1,7 +1,20 @@
-import { Router, type NextFunction, type Request, type Response } from 'express';
-import type { PassportStatic } from 'passport';
+import {
+  Router,
+  type NextFunction,
+  type Request,
+  type RequestHandler,
+  type Response,
+} from 'express';
+import type { createPassport } from './passport';
 import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
-import { loginSchema, resetConfirmSchema, resetRequestSchema, signupSchema, tokenSchema, type SessionDto } from '@app/shared';
+import {
+  loginSchema,
+  resetConfirmSchema,
+  resetRequestSchema,
+  signupSchema,
+  tokenSchema,
+  type SessionDto,
+} from '@app/shared';
 import type { Env } from '../../config/env';
 import { AppError } from '../../errors/app-error';
 import type { User } from '../../models';
@@ -10,9 +23,17 @@ import { toUserDto } from './user.presenter';
 
 export interface AuthRouterDeps extends auth.AuthDeps {
   env: Env;
-  passport: PassportStatic;
+  passport: ReturnType<typeof createPassport>;
   newCsrfToken: (req: Request) => string;
 }
+
+const toError = (err: unknown): Error =>
+  err instanceof Error ? err : new Error(typeof err === 'string' ? err : 'authentication failed');
+
+const emailOf = (body: unknown) => {
+  const e = (body as { email?: unknown } | undefined)?.email;
+  return typeof e === 'string' ? e.toLowerCase() : '';
+};
 
 const limited = (limit: number, windowMs: number, what: string) =>
   rateLimit({
@@ -21,19 +42,29 @@ const limited = (limit: number, windowMs: number, what: string) =>
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     // Per address and per account, so one member's typos don't lock out the clubhouse Wi-Fi.
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '0.0.0.0')}|${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`,
+    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '0.0.0.0')}|${emailOf(req.body)}`,
     handler: (_req, res) => {
-      res.status(429).json({ error: { code: 'RATE_LIMITED', message: `Too many ${what} attempts. Wait a few minutes and try again.` } });
+      res.status(429).json({
+        error: {
+          code: 'RATE_LIMITED',
+          message: `Too many ${what} attempts. Wait a few minutes and try again.`,
+        },
+      });
     },
   });
 
 /** The session DTO, with a fresh CSRF token bound to the current session. */
 export function sessionDto(req: Request, newCsrfToken: (req: Request) => string): SessionDto {
-  return { user: req.user ? toUserDto(req.user) : null, csrfToken: req.session.csrfToken ?? newCsrfToken(req) };
+  return {
+    user: req.user ? toUserDto(req.user) : null,
+    csrfToken: req.session.csrfToken ?? newCsrfToken(req),
+  };
 }
 
 function logIn(req: Request, user: User): Promise<void> {
-  return new Promise((resolve, reject) => req.login(user, (err: unknown) => (err ? reject(err as Error) : resolve())));
+  return new Promise((resolve, reject) =>
+    req.login(user, (err: unknown) => (err ? reject(toError(err)) : resolve())),
+  );
 }
 
 export function authRouter(deps: AuthRouterDeps) {
@@ -67,11 +98,16 @@ export function authRouter(deps: AuthRouterDeps) {
     const input = loginSchema.parse(req.body);
     req.body = input;
     const user = await new Promise<User>((resolve, reject) => {
-      deps.passport.authenticate('local', { session: false }, (err: unknown, u: User | false) => {
-        if (err) reject(err as Error);
-        else if (!u) reject(new AppError('UNAUTHENTICATED', 'E-mail or password is wrong'));
-        else resolve(u);
-      })(req, res, next);
+      const handler = deps.passport.authenticate(
+        'local',
+        { session: false },
+        (err: unknown, u: User | false) => {
+          if (err) reject(toError(err));
+          else if (!u) reject(new AppError('UNAUTHENTICATED', 'E-mail or password is wrong'));
+          else resolve(u);
+        },
+      ) as RequestHandler;
+      void handler(req, res, next);
     });
     // req.login regenerates the session id (no fixation); the CSRF token is renewed with it.
     await logIn(req, user);
@@ -80,7 +116,9 @@ export function authRouter(deps: AuthRouterDeps) {
   });
 
   r.post('/logout', async (req, res) => {
-    await new Promise<void>((resolve, reject) => req.logout((err: unknown) => (err ? reject(err as Error) : resolve())));
+    await new Promise<void>((resolve, reject) =>
+      req.logout((err: unknown) => (err ? reject(toError(err)) : resolve())),
+    );
     req.session.csrfToken = undefined;
     res.json({ data: sessionDto(req, deps.newCsrfToken) });
   });

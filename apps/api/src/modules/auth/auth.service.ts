@@ -25,9 +25,13 @@ const dummyHash = (cost: number) => {
 };
 
 export const findUserByEmail = (email: string) =>
-  User.findOne({ where: { email: email.toLowerCase() }, include: [{ model: UserRole, as: 'roles' }] });
+  User.findOne({
+    where: { email: email.toLowerCase() },
+    include: [{ model: UserRole, as: 'roles' }],
+  });
 
-export const findUserById = (id: number) => User.findByPk(id, { include: [{ model: UserRole, as: 'roles' }] });
+export const findUserById = (id: number) =>
+  User.findByPk(id, { include: [{ model: UserRole, as: 'roles' }] });
 
 /**
  * Creates an unverified member and e-mails a verification link. When the address is already registered, the
@@ -42,7 +46,9 @@ export async function signup(deps: AuthDeps, input: SignupInput): Promise<void> 
         kind: 'signup-existing',
         subject: 'You already have a Rodewise account',
         greeting: `Hello ${existing.displayName},`,
-        lines: ['Someone (perhaps you) tried to join Rodewise with this e-mail address, which already has an account.'],
+        lines: [
+          'Someone (perhaps you) tried to join Rodewise with this e-mail address, which already has an account.',
+        ],
         actionLabel: 'Reset your password',
         actionUrl: `${deps.publicUrl}/reset`,
       }),
@@ -51,7 +57,10 @@ export async function signup(deps: AuthDeps, input: SignupInput): Promise<void> 
   }
   const passwordHash = await bcrypt.hash(input.password, deps.bcryptCost);
   await deps.sequelize.transaction(async (transaction) => {
-    const user = await User.create({ email: input.email, displayName: input.displayName, passwordHash, emailVerifiedAt: null }, { transaction });
+    const user = await User.create(
+      { email: input.email, displayName: input.displayName, passwordHash, emailVerifiedAt: null },
+      { transaction },
+    );
     await UserRole.create({ userId: user.id, role: 'member', grantedById: null }, { transaction });
     await sendVerification(deps, user, transaction);
   });
@@ -65,7 +74,9 @@ async function sendVerification(deps: AuthDeps, user: User, transaction?: Transa
       kind: 'verify-email',
       subject: 'Confirm your e-mail for Rodewise',
       greeting: `Welcome aboard, ${user.displayName}.`,
-      lines: ['Please confirm this e-mail address to finish joining your club on Rodewise. The link works for 48 hours.'],
+      lines: [
+        'Please confirm this e-mail address to finish joining your club on Rodewise. The link works for 48 hours.',
+      ],
       actionLabel: 'Confirm my e-mail',
       actionUrl: `${deps.publicUrl}/verify-email?token=${token}`,
     }),
@@ -93,12 +104,19 @@ export async function verifyEmail(deps: AuthDeps, token: string): Promise<User> 
 }
 
 /** Checks e-mail + password. Throws UNAUTHENTICATED (same message for both failures) or EMAIL_NOT_VERIFIED. */
-export async function checkCredentials(deps: AuthDeps, email: string, password: string): Promise<User> {
+export async function checkCredentials(
+  deps: AuthDeps,
+  email: string,
+  password: string,
+): Promise<User> {
   const user = await findUserByEmail(email);
   const ok = await bcrypt.compare(password, user?.passwordHash ?? dummyHash(deps.bcryptCost));
   if (!user || !ok) throw new AppError('UNAUTHENTICATED', 'E-mail or password is wrong');
   if (!user.emailVerifiedAt) {
-    throw new AppError('EMAIL_NOT_VERIFIED', 'Please confirm your e-mail first: use the link we sent, or ask for a new one.');
+    throw new AppError(
+      'EMAIL_NOT_VERIFIED',
+      'Please confirm your e-mail first: use the link we sent, or ask for a new one.',
+    );
   }
   return user;
 }
@@ -123,15 +141,30 @@ export async function requestPasswordReset(deps: AuthDeps, email: string): Promi
 }
 
 /** Sets a new password from a reset link, signs the user out everywhere, and confirms by e-mail. */
-export async function confirmPasswordReset(deps: AuthDeps, input: ResetConfirmInput): Promise<void> {
+export async function confirmPasswordReset(
+  deps: AuthDeps,
+  input: ResetConfirmInput,
+): Promise<void> {
   const passwordHash = await bcrypt.hash(input.password, deps.bcryptCost);
   await deps.sequelize.transaction(async (t) => {
     const userId = await consumeToken(input.token, 'reset', t);
     const user = await User.findByPk(userId, { transaction: t, lock: t.LOCK.UPDATE });
     if (!user) throw new AppError('GONE', 'This account no longer exists');
-    await user.update({ passwordHash, emailVerifiedAt: user.emailVerifiedAt ?? new Date() }, { transaction: t });
+    await user.update(
+      { passwordHash, emailVerifiedAt: user.emailVerifiedAt ?? new Date() },
+      { transaction: t },
+    );
     await Session.destroy({ where: { userId }, transaction: t });
-    await recordAudit({ actorId: userId, area: 'auth', action: 'password.reset', subjectType: 'user', subjectId: String(userId) }, t);
+    await recordAudit(
+      {
+        actorId: userId,
+        area: 'auth',
+        action: 'password.reset',
+        subjectType: 'user',
+        subjectId: String(userId),
+      },
+      t,
+    );
     await enqueueEmail(
       actionEmail({
         to: user.email,
@@ -147,9 +180,16 @@ export async function confirmPasswordReset(deps: AuthDeps, input: ResetConfirmIn
 }
 
 /** Changes the password of a signed-in user after checking the current one. */
-export async function changePassword(deps: AuthDeps, user: User, currentPassword: string, newPassword: string) {
+export async function changePassword(
+  deps: AuthDeps,
+  user: User,
+  currentPassword: string,
+  newPassword: string,
+) {
   if (!(await bcrypt.compare(currentPassword, user.passwordHash))) {
-    throw new AppError('VALIDATION_FAILED', 'Some fields need attention', { currentPassword: 'This is not your current password' });
+    throw new AppError('VALIDATION_FAILED', 'Some fields need attention', {
+      currentPassword: 'This is not your current password',
+    });
   }
   await user.update({ passwordHash: await bcrypt.hash(newPassword, deps.bcryptCost) });
 }

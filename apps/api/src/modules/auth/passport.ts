@@ -6,12 +6,15 @@ import { findUserById, checkCredentials, type AuthDeps } from './auth.service';
 export function createPassport(deps: AuthDeps) {
   const passport = new Passport();
   passport.use(
-    new LocalStrategy({ usernameField: 'email', passwordField: 'password', session: true }, (email, password, done) => {
-      checkCredentials(deps, email, password).then(
-        (user) => done(null, user),
-        (err: unknown) => done(err),
-      );
-    }),
+    new LocalStrategy(
+      { usernameField: 'email', passwordField: 'password', session: true },
+      (email, password, done) => {
+        checkCredentials(deps, email, password).then(
+          (user) => done(null, user),
+          (err: unknown) => done(err),
+        );
+      },
+    ),
   );
   passport.serializeUser((user, done) => done(null, user.id));
   passport.deserializeUser((id: number, done) => {

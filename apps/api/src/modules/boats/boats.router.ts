@@ -22,7 +22,11 @@ export function boatsRouter() {
   });
   r.patch('/:boatId', async (req, res) => {
     const { boatId } = params.parse(req.params);
-    const boat = await boats.updateBoat(currentUser(req), Number(boatId), boatPatchSchema.parse(req.body));
+    const boat = await boats.updateBoat(
+      currentUser(req),
+      Number(boatId),
+      boatPatchSchema.parse(req.body),
+    );
     res.json({ data: toBoatDto(boat) });
   });
   r.delete('/:boatId', async (req, res) => {

@@ -7,7 +7,8 @@ type BoatInput = z.output<typeof boatInputSchema>;
 type BoatPatch = z.output<typeof boatPatchSchema>;
 
 /** The actor's boats, newest first. */
-export const listBoats = (actor: User) => Boat.findAll({ where: { ownerId: actor.id }, order: [['createdAt', 'DESC']] });
+export const listBoats = (actor: User) =>
+  Boat.findAll({ where: { ownerId: actor.id }, order: [['createdAt', 'DESC']] });
 
 /** One of the actor's boats; someone else's boat is reported as not found (no existence oracle). */
 export async function getOwnBoat(actor: User, boatId: number): Promise<Boat> {
@@ -17,7 +18,10 @@ export async function getOwnBoat(actor: User, boatId: number): Promise<Boat> {
 }
 
 async function checkHarbor(id: number | null | undefined) {
-  if (id && !(await Harbor.findByPk(id))) throw new AppError('VALIDATION_FAILED', 'Some fields need attention', { homeHarborId: 'Choose one of the club harbours' });
+  if (id && !(await Harbor.findByPk(id)))
+    throw new AppError('VALIDATION_FAILED', 'Some fields need attention', {
+      homeHarborId: 'Choose one of the club harbours',
+    });
 }
 
 export async function createBoat(actor: User, input: BoatInput) {

@@ -6,7 +6,14 @@ const built = createTestApp();
 afterAll(() => built.close());
 beforeEach(resetDb);
 
-const sloop = { name: 'Test Sloop', hull: 'sail', loaM: 9.75, beamM: 3.35, displacementKg: 5400, bowHeightM: 1.2 };
+const sloop = {
+  name: 'Test Sloop',
+  hull: 'sail',
+  loaM: 9.75,
+  beamM: 3.35,
+  displacementKg: 5400,
+  bowHeightM: 1.2,
+};
 
 describe('boat profiles', () => {
   it('creates, lists, updates and deletes the member’s own boat', async () => {
@@ -15,10 +22,18 @@ describe('boat profiles', () => {
     await c.signIn(user.email);
     const created = await c.post('/api/boats', sloop);
     expect(created.status).toBe(201);
-    expect(created.body.data).toMatchObject({ name: 'Test Sloop', hull: 'sail', loaM: 9.75, bowHeightM: 1.2, gypsy: null });
+    expect(created.body.data).toMatchObject({
+      name: 'Test Sloop',
+      hull: 'sail',
+      loaM: 9.75,
+      bowHeightM: 1.2,
+      gypsy: null,
+    });
     const id = created.body.data.id as number;
     expect((await c.get('/api/boats')).body.data).toHaveLength(1);
-    const patched = await c.patch(`/api/boats/${id}`, { gypsy: { grade: 'G43', tradeSizeIn: 0.3125 } });
+    const patched = await c.patch(`/api/boats/${id}`, {
+      gypsy: { grade: 'G43', tradeSizeIn: 0.3125 },
+    });
     expect(patched.status).toBe(200);
     expect(patched.body.data.gypsy).toEqual({ grade: 'G43', tradeSizeIn: 0.3125 });
     expect((await c.delete(`/api/boats/${id}`)).status).toBe(204);
@@ -29,7 +44,13 @@ describe('boat profiles', () => {
     const user = await buildUser();
     const c = await client(built.app);
     await c.signIn(user.email);
-    const res = await c.post('/api/boats', { name: '', hull: 'raft', loaM: -3, beamM: 'wide', gypsy: { grade: 'G43' } });
+    const res = await c.post('/api/boats', {
+      name: '',
+      hull: 'raft',
+      loaM: -3,
+      beamM: 'wide',
+      gypsy: { grade: 'G43' },
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toMatchObject({
       name: expect.any(String),

@@ -7,7 +7,13 @@ export function healthRouter(sequelize: Sequelize) {
   r.get('/', async (_req, res) => {
     const up = await isDbUp(sequelize);
     if (up) res.json({ data: { status: 'ok', db: 'up' } });
-    else res.status(503).json({ error: { code: 'DB_UNAVAILABLE', message: 'The club database is not reachable right now.' } });
+    else
+      res.status(503).json({
+        error: {
+          code: 'DB_UNAVAILABLE',
+          message: 'The club database is not reachable right now.',
+        },
+      });
   });
   // A trivial JSON route: the ceiling that benchmarks compare real routes with.
   r.get('/ping', (_req, res) => {

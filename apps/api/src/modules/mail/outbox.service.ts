@@ -13,9 +13,21 @@ export interface OutgoingEmail {
 }
 
 /** Stores a message in the outbox (inside the caller's transaction when given); the worker sends it. */
-export async function enqueueEmail(mail: OutgoingEmail, transaction?: Transaction): Promise<OutboxEmail> {
+export async function enqueueEmail(
+  mail: OutgoingEmail,
+  transaction?: Transaction,
+): Promise<OutboxEmail> {
   return OutboxEmail.create(
-    { toAddress: mail.to, subject: mail.subject, textBody: mail.text, htmlBody: mail.html ?? null, kind: mail.kind, lockedUntil: null, lastError: null, sentAt: null },
+    {
+      toAddress: mail.to,
+      subject: mail.subject,
+      textBody: mail.text,
+      htmlBody: mail.html ?? null,
+      kind: mail.kind,
+      lockedUntil: null,
+      lastError: null,
+      sentAt: null,
+    },
     { transaction },
   );
 }
@@ -33,7 +45,8 @@ export function createTransport(env: Env): Transporter {
 }
 
 /** Backoff after `attempts` failures: 2 s, 4 s, 8 s … capped at 5 minutes. */
-export const backoffMs = (attempts: number) => Math.min(300_000, 2000 * 2 ** Math.max(0, attempts - 1));
+export const backoffMs = (attempts: number) =>
+  Math.min(300_000, 2000 * 2 ** Math.max(0, attempts - 1));
 
 const LOCK_MS = 60_000;
 
@@ -41,7 +54,13 @@ const LOCK_MS = 60_000;
  * Claims due messages with SELECT … FOR UPDATE SKIP LOCKED (so several API processes never send the same row),
  * sends them, and records the outcome. Returns how many were sent and how many failed this round.
  */
-export async function drainOutbox(sequelize: Sequelize, transport: Transporter, from: string, logger?: Logger, limit = 25) {
+export async function drainOutbox(
+  sequelize: Sequelize,
+  transport: Transporter,
+  from: string,
+  logger?: Logger,
+  limit = 25,
+) {
   const now = new Date();
   const claimed = await sequelize.transaction(async (t) => {
     const rows = await OutboxEmail.findAll({
@@ -76,7 +95,13 @@ export async function drainOutbox(sequelize: Sequelize, transport: Transporter, 
         html: row.htmlBody ?? undefined,
         messageId: `<outbox-${row.id}@rodewise.local>`,
       });
-      await row.update({ status: 'sent', sentAt: new Date(), lockedUntil: null, attempts: row.attempts + 1, lastError: null });
+      await row.update({
+        status: 'sent',
+        sentAt: new Date(),
+        lockedUntil: null,
+        attempts: row.attempts + 1,
+        lastError: null,
+      });
       sent += 1;
     } catch (err) {
       const attempts = row.attempts + 1;
@@ -96,7 +121,12 @@ export async function drainOutbox(sequelize: Sequelize, transport: Transporter, 
 }
 
 /** Polls the outbox every `intervalMs`; returns a stop function. Errors (database or SMTP down) are logged and retried. */
-export function startOutboxWorker(sequelize: Sequelize, transport: Transporter, env: Env, logger: Logger) {
+export function startOutboxWorker(
+  sequelize: Sequelize,
+  transport: Transporter,
+  env: Env,
+  logger: Logger,
+) {
   let stopped = false;
   let timer: NodeJS.Timeout | undefined;
   const tick = async () => {

@@ -3,7 +3,16 @@ import type { OutgoingEmail } from './outbox.service';
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 /** A plain message with one call to action; text and HTML say the same. */
-export function actionEmail(opts: { to: string; kind: string; subject: string; greeting: string; lines: string[]; actionLabel?: string; actionUrl?: string; footer?: string }): OutgoingEmail {
+export function actionEmail(opts: {
+  to: string;
+  kind: string;
+  subject: string;
+  greeting: string;
+  lines: string[];
+  actionLabel?: string;
+  actionUrl?: string;
+  footer?: string;
+}): OutgoingEmail {
   const text = [
     opts.greeting,
     '',

@@ -1,4 +1,4 @@
-import { tacklePlan, type PlanComponents as CalcComponents, type TacklePlanResult } from '@app/calc';
+import { tacklePlan, type TacklePlanResult } from '@app/calc';
 import type { PlanComponents } from '@app/shared';
 import type { Boat } from '../../models';
 
@@ -28,6 +28,6 @@ export function computePlan(boat: Boat, plan: PlanConditions): TacklePlanResult 
     tideM: plan.tideM ?? 0,
     ...(plan.bottom ? { bottom: plan.bottom } : {}),
     extrapolate: true,
-    components: plan.components as CalcComponents,
+    components: plan.components,
   });
 }

@@ -24,7 +24,11 @@ export function tacklePlansRouter() {
     res.json({ data: (await plans.listPlans(currentUser(req), boatId)).map(toTacklePlanDto) });
   });
   r.post('/', async (req, res) => {
-    res.status(201).json({ data: withResult(await plans.createPlan(currentUser(req), tacklePlanInputSchema.parse(req.body))) });
+    res.status(201).json({
+      data: withResult(
+        await plans.createPlan(currentUser(req), tacklePlanInputSchema.parse(req.body)),
+      ),
+    });
   });
   r.get('/:planId', async (req, res) => {
     const { planId } = params.parse(req.params);
@@ -32,7 +36,15 @@ export function tacklePlansRouter() {
   });
   r.put('/:planId', async (req, res) => {
     const { planId } = params.parse(req.params);
-    res.json({ data: withResult(await plans.updatePlan(currentUser(req), Number(planId), tacklePlanPatchSchema.parse(req.body))) });
+    res.json({
+      data: withResult(
+        await plans.updatePlan(
+          currentUser(req),
+          Number(planId),
+          tacklePlanPatchSchema.parse(req.body),
+        ),
+      ),
+    });
   });
   r.delete('/:planId', async (req, res) => {
     const { planId } = params.parse(req.params);

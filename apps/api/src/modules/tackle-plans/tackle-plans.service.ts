@@ -10,12 +10,17 @@ type PlanInput = z.output<typeof tacklePlanInputSchema>;
 type PlanPatch = z.output<typeof tacklePlanPatchSchema>;
 
 /** Runs the plan through @app/calc; an input the engineering rejects (RangeError) becomes a 400 naming the field. */
-export function validatePlan(boat: Boat, plan: Pick<PlanInput, 'windKn' | 'depthM' | 'tideM' | 'bottom' | 'components'>) {
+export function validatePlan(
+  boat: Boat,
+  plan: Pick<PlanInput, 'windKn' | 'depthM' | 'tideM' | 'bottom' | 'components'>,
+) {
   try {
     return computePlan(boat, plan);
   } catch (err) {
     if (err instanceof CalcInputError) {
-      throw new AppError('VALIDATION_FAILED', 'The plan cannot be computed', { [err.field || 'components']: err.message });
+      throw new AppError('VALIDATION_FAILED', 'The plan cannot be computed', {
+        [err.field || 'components']: err.message,
+      });
     }
     throw err;
   }
@@ -23,7 +28,10 @@ export function validatePlan(boat: Boat, plan: Pick<PlanInput, 'windKn' | 'depth
 
 export async function listPlans(actor: User, boatId?: number) {
   if (boatId) await getOwnBoat(actor, boatId);
-  return TacklePlan.findAll({ where: boatId ? { ownerId: actor.id, boatId } : { ownerId: actor.id }, order: [['updatedAt', 'DESC']] });
+  return TacklePlan.findAll({
+    where: boatId ? { ownerId: actor.id, boatId } : { ownerId: actor.id },
+    order: [['updatedAt', 'DESC']],
+  });
 }
 
 /** One of the actor's plans with its boat; another member's plan reads as not found. */
@@ -37,14 +45,26 @@ export async function getOwnPlan(actor: User, planId: number) {
 export async function createPlan(actor: User, input: PlanInput) {
   const boat = await getOwnBoat(actor, input.boatId);
   validatePlan(boat, input);
-  if ((await TacklePlan.count({ where: { boatId: boat.id } })) >= 30) throw new AppError('CONFLICT', 'A boat can keep at most 30 plans');
-  const plan = await TacklePlan.create({ ...input, bottom: input.bottom ?? null, ownerId: actor.id });
+  if ((await TacklePlan.count({ where: { boatId: boat.id } })) >= 30)
+    throw new AppError('CONFLICT', 'A boat can keep at most 30 plans');
+  const plan = await TacklePlan.create({
+    ...input,
+    bottom: input.bottom ?? null,
+    ownerId: actor.id,
+  });
   return { plan, boat };
 }
 
 export async function updatePlan(actor: User, planId: number, input: PlanPatch) {
   const { plan, boat } = await getOwnPlan(actor, planId);
-  const merged = { windKn: plan.windKn, depthM: plan.depthM, tideM: plan.tideM, bottom: plan.bottom ?? undefined, components: plan.components, ...input };
+  const merged = {
+    windKn: plan.windKn,
+    depthM: plan.depthM,
+    tideM: plan.tideM,
+    bottom: plan.bottom ?? undefined,
+    components: plan.components,
+    ...input,
+  };
   validatePlan(boat, merged);
   await plan.update(input);
   return { plan, boat };

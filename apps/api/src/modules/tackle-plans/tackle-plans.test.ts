@@ -26,26 +26,56 @@ async function memberWithBoat(): Promise<{ c: Client; boatId: number }> {
 describe('tackle plans', () => {
   it('saves a plan and returns the same figures @app/calc computes, for 30 kn and 60 kn', async () => {
     const { c, boatId } = await memberWithBoat();
-    const everyday = await c.post('/api/tackle-plans', { boatId, name: 'Everyday', condition: 'everyday', windKn: 30, depthM: 6, tideM: 1, components });
+    const everyday = await c.post('/api/tackle-plans', {
+      boatId,
+      name: 'Everyday',
+      condition: 'everyday',
+      windKn: 30,
+      depthM: 6,
+      tideM: 1,
+      components,
+    });
     expect(everyday.status).toBe(201);
-    const storm = await c.post('/api/tackle-plans', { boatId, name: 'Hurricane hole', condition: 'hurricane-hole', windKn: 60, depthM: 6, tideM: 1, components });
+    const storm = await c.post('/api/tackle-plans', {
+      boatId,
+      name: 'Hurricane hole',
+      condition: 'hurricane-hole',
+      windKn: 60,
+      depthM: 6,
+      tideM: 1,
+      components,
+    });
     expect(storm.status).toBe(201);
 
     // The API's figure equals the library's, computed independently here.
     const expected30 = designLoad({ loaM: 9.75, beamM: 3.35, hull: 'sail', windKn: 30 }).loadN;
     expect(everyday.body.data.result.loadN).toBeCloseTo(expected30, 6);
-    const direct60 = tacklePlan({ boat: { loaM: 9.75, beamM: 3.35, hull: 'sail', bowHeightM: 1.2 }, windKn: 60, depthM: 6, tideM: 1, extrapolate: true, components: components as never });
+    const direct60 = tacklePlan({
+      boat: { loaM: 9.75, beamM: 3.35, hull: 'sail', bowHeightM: 1.2 },
+      windKn: 60,
+      depthM: 6,
+      tideM: 1,
+      extrapolate: true,
+      components: components as never,
+    });
     expect(storm.body.data.result.loadN).toBeCloseTo(direct60.loadN, 6);
     expect(storm.body.data.result.loadN).toBeGreaterThan(3.5 * everyday.body.data.result.loadN); // ∝ wind² (common practice)
-    expect(storm.body.data.result.weakestLink.weakest.label).toBe(direct60.weakestLink?.weakest?.label);
+    expect(storm.body.data.result.weakestLink.weakest.label).toBe(
+      direct60.weakestLink?.weakest?.label,
+    );
     expect(storm.body.data.result.cautions.length).toBeGreaterThan(0);
 
     const list = await c.get(`/api/tackle-plans?boatId=${boatId}`);
-    expect(list.body.data.map((p: { name: string }) => p.name).sort()).toEqual(['Everyday', 'Hurricane hole']);
+    expect(list.body.data.map((p: { name: string }) => p.name).sort()).toEqual([
+      'Everyday',
+      'Hurricane hole',
+    ]);
     const one = await c.get(`/api/tackle-plans/${everyday.body.data.plan.id as number}`);
     expect(one.body.data.boat.name).toBe('Plan Sloop');
 
-    const updated = await c.put(`/api/tackle-plans/${everyday.body.data.plan.id as number}`, { windKn: 35 });
+    const updated = await c.put(`/api/tackle-plans/${everyday.body.data.plan.id as number}`, {
+      windKn: 35,
+    });
     expect(updated.status).toBe(200);
     expect(updated.body.data.result.loadN).toBeGreaterThan(everyday.body.data.result.loadN);
   });
@@ -67,14 +97,34 @@ describe('tackle plans', () => {
 
   it('keeps plans private: another member gets 404 and cannot attach a plan to a boat not theirs', async () => {
     const { c, boatId } = await memberWithBoat();
-    const planId = (await c.post('/api/tackle-plans', { boatId, name: 'Mine', condition: 'storm', windKn: 45, depthM: 8, components })).body.data.plan.id as number;
+    const planId = (
+      await c.post('/api/tackle-plans', {
+        boatId,
+        name: 'Mine',
+        condition: 'storm',
+        windKn: 45,
+        depthM: 8,
+        components,
+      })
+    ).body.data.plan.id as number;
     const intruder = await buildUser();
     const other = await client(built.app);
     await other.signIn(intruder.email);
     expect((await other.get(`/api/tackle-plans/${planId}`)).status).toBe(404);
     expect((await other.put(`/api/tackle-plans/${planId}`, { windKn: 10 })).status).toBe(404);
     expect((await other.delete(`/api/tackle-plans/${planId}`)).status).toBe(404);
-    expect((await other.post('/api/tackle-plans', { boatId, name: 'Sneaky', condition: 'custom', windKn: 20, depthM: 4, components })).status).toBe(404);
+    expect(
+      (
+        await other.post('/api/tackle-plans', {
+          boatId,
+          name: 'Sneaky',
+          condition: 'custom',
+          windKn: 20,
+          depthM: 4,
+          components,
+        })
+      ).status,
+    ).toBe(404);
     expect((await TacklePlan.findByPk(planId))?.windKn).toBe(45);
   });
 });
