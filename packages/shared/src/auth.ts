@@ -58,13 +58,18 @@ export const updateAccountSchema = z
 export type UpdateAccountInput = z.infer<typeof updateAccountSchema>;
 
 export const changePasswordSchema = z.object({
-  currentPassword: z.string({ error: 'Current password is required' }).min(1, 'Current password is required'),
+  currentPassword: z
+    .string({ error: 'Current password is required' })
+    .min(1, 'Current password is required'),
   newPassword: passwordSchema,
 });
 export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;
 
 export const setRolesSchema = z.object({
-  roles: z.array(roleSchema).max(ROLES.length).transform((r) => [...new Set(r)]),
+  roles: z
+    .array(roleSchema)
+    .max(ROLES.length)
+    .transform((r) => [...new Set(r)]),
 });
 export type SetRolesInput = z.infer<typeof setRolesSchema>;
 

@@ -30,7 +30,11 @@ export const chainSizeSchema = z
 
 /** Everything a boat profile holds; stored in SI units. */
 export const boatInputSchema = z.object({
-  name: z.string({ error: 'Name is required' }).trim().min(1, 'Name is required').max(80, 'Name is too long'),
+  name: z
+    .string({ error: 'Name is required' })
+    .trim()
+    .min(1, 'Name is required')
+    .max(80, 'Name is too long'),
   hull: z.enum(HULLS, { error: 'Choose sail, power or multihull' }),
   loaM: num('Length overall', 2, 60, 'm'),
   beamM: num('Beam', 0.5, 20, 'm').nullable().optional(),
@@ -41,7 +45,9 @@ export const boatInputSchema = z.object({
   homeHarborId: z.number().int().positive().nullable().optional(),
 });
 export type BoatInput = z.input<typeof boatInputSchema>;
-export const boatPatchSchema = boatInputSchema.partial().refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+export const boatPatchSchema = boatInputSchema
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 
 export interface BoatDto {
   id: number;
@@ -59,7 +65,12 @@ export interface BoatDto {
 }
 
 export const planComponentsSchema = z.object({
-  anchor: z.object({ type: z.enum(ANCHOR_KINDS, { error: 'Choose an anchor type' }), massKg: num('Anchor mass', 0.5, 500, 'kg') }).optional(),
+  anchor: z
+    .object({
+      type: z.enum(ANCHOR_KINDS, { error: 'Choose an anchor type' }),
+      massKg: num('Anchor mass', 0.5, 500, 'kg'),
+    })
+    .optional(),
   chain: chainSizeSchema.and(z.object({ lengthM: num('Chain length', 0, 500, 'm') })).optional(),
   rode: z
     .object({
@@ -69,7 +80,13 @@ export const planComponentsSchema = z.object({
       lengthM: num('Rope length', 0, 500, 'm'),
     })
     .optional(),
-  snubber: z.object({ material: z.enum(['nylon', 'polyester']), diameterMm: num('Snubber diameter', 6, 40, 'mm'), lengthM: num('Snubber length', 0.5, 60, 'm') }).optional(),
+  snubber: z
+    .object({
+      material: z.enum(['nylon', 'polyester']),
+      diameterMm: num('Snubber diameter', 6, 40, 'mm'),
+      lengthM: num('Snubber length', 0.5, 60, 'm'),
+    })
+    .optional(),
   connectors: z
     .array(
       z.object({
@@ -114,4 +131,5 @@ export interface TacklePlanDto {
   updatedAt: string;
 }
 
-export const idParam = (name: string) => z.object({ [name]: z.coerce.number().int().positive(`Unknown ${name}`) });
+export const idParam = (name: string) =>
+  z.object({ [name]: z.coerce.number().int().positive(`Unknown ${name}`) });
