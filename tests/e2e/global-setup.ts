@@ -88,7 +88,7 @@ export async function setup(project: TestProject) {
         STRIPE_HOST: '127.0.0.1',
         STRIPE_PORT: String(E2E_PORTS.payments),
         STRIPE_PROTOCOL: 'http',
-        WEB_DIST: join(ROOT, 'dist/web'),
+        WEB_DIST: webDist,
         LOGIN_RATE_LIMIT: '200',
         OUTBOX_INTERVAL_MS: '250',
       },
