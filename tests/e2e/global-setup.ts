@@ -27,8 +27,11 @@ const children: ChildProcess[] = [];
 
 /** The whole stack as a member would meet it: built client served by the API, fakes, seeded demo club. */
 export async function setup(project: TestProject) {
-  if (!existsSync(join(ROOT, 'dist/web/index.html')))
-    throw new Error('Build the client first: npx vite build');
+  // E2E_WEB_DIST lets a parallel run serve its own build (npx vite build --outDir …).
+  const webDist = process.env.E2E_WEB_DIST ?? join(ROOT, 'dist/web');
+  if (!existsSync(join(webDist, 'index.html'))) {
+    throw new Error(`Build the client first: npx vite build (no ${webDist}/index.html)`);
+  }
   const cfg = profileConfig('test');
   await startServer(cfg, { quiet: true });
   const database = process.env.E2E_DB ?? 'rodewise_test_e2e';
