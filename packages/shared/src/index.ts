@@ -2,3 +2,5 @@ export * from './auth';
 export * from './boats';
 export * from './club';
 export * from './errors';
+export * from './dues';
+export * from './knowledge';

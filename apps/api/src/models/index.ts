@@ -9,6 +9,17 @@ import { OutboxEmail, initOutboxEmail } from './outbox-email.model';
 import { Session, initSession } from './session.model';
 import { User, initUser } from './user.model';
 import { UserRole, initUserRole } from './user-role.model';
+import { Membership, initMembership } from './membership.model';
+import { MembershipPlan, initMembershipPlan } from './membership-plan.model';
+import { Payment, initPayment } from './payment.model';
+import { ProviderEvent, initProviderEvent } from './provider-event.model';
+import { Refund, initRefund } from './refund.model';
+import { Comment, initComment } from './comment.model';
+import { Notification, initNotification } from './notification.model';
+import { Post, initPost } from './post.model';
+import { Report, initReport } from './report.model';
+import { Topic, initTopic } from './topic.model';
+import { Vote, initVote } from './vote.model';
 
 let initialised: Sequelize | null = null;
 
@@ -25,6 +36,17 @@ export function initModels(sequelize: Sequelize) {
   initAuditEvent(sequelize);
   initBoat(sequelize);
   initTacklePlan(sequelize);
+  initMembershipPlan(sequelize);
+  initMembership(sequelize);
+  initPayment(sequelize);
+  initRefund(sequelize);
+  initProviderEvent(sequelize);
+  initTopic(sequelize);
+  initPost(sequelize);
+  initComment(sequelize);
+  initVote(sequelize);
+  initReport(sequelize);
+  initNotification(sequelize);
 
   User.hasMany(UserRole, { as: 'roles', foreignKey: 'userId' });
   UserRole.belongsTo(User, { foreignKey: 'userId' });
@@ -34,6 +56,19 @@ export function initModels(sequelize: Sequelize) {
   Boat.belongsTo(User, { as: 'owner', foreignKey: 'ownerId' });
   Boat.hasMany(TacklePlan, { as: 'plans', foreignKey: 'boatId' });
   TacklePlan.belongsTo(Boat, { foreignKey: 'boatId' });
+  Membership.belongsTo(MembershipPlan, { as: 'plan', foreignKey: 'planId' });
+  Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  User.hasOne(Membership, { as: 'membership', foreignKey: 'userId' });
+  Payment.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  Payment.belongsTo(MembershipPlan, { as: 'plan', foreignKey: 'planId' });
+  Payment.hasMany(Refund, { as: 'refunds', foreignKey: 'paymentId' });
+  Refund.belongsTo(Payment, { as: 'payment', foreignKey: 'paymentId' });
+  Post.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+  Post.belongsTo(Topic, { as: 'topic', foreignKey: 'topicId' });
+  Post.hasMany(Comment, { as: 'comments', foreignKey: 'postId' });
+  Comment.belongsTo(Post, { as: 'post', foreignKey: 'postId' });
+  Comment.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
+  Report.belongsTo(User, { as: 'reporter', foreignKey: 'reporterId' });
   initialised = sequelize;
 }
 
@@ -48,4 +83,15 @@ export {
   Session,
   User,
   UserRole,
+  Membership,
+  MembershipPlan,
+  Payment,
+  ProviderEvent,
+  Refund,
+  Comment,
+  Notification,
+  Post,
+  Report,
+  Topic,
+  Vote,
 };
