@@ -7,6 +7,13 @@ export const SETTINGS = {
   listingRequiresPaidUp: z.boolean().default(true),
   substantialEditRatio: z.number().min(0).max(1).default(0.2),
   membersOnlyPostsAllowed: z.boolean().default(true),
+  duesCalendar: z
+    .object({
+      fiscalYearStartMonth: z.number().int().min(1).max(12),
+      renewalWindowDays: z.number().int().min(0).max(120),
+      lapseAfterDays: z.number().int().min(1).max(730),
+    })
+    .default({ fiscalYearStartMonth: 4, renewalWindowDays: 30, lapseAfterDays: 90 }),
 } as const;
 export type SettingKey = keyof typeof SETTINGS;
 export type SettingValue<K extends SettingKey> = z.infer<(typeof SETTINGS)[K]>;
