@@ -22,6 +22,8 @@ import { boatsRouter } from './modules/boats/boats.router';
 import { clubRouter } from './modules/club/club.router';
 import { healthRouter } from './modules/health/health.router';
 import { tacklePlansRouter } from './modules/tackle-plans/tackle-plans.router';
+import { uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
+import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
 
 export interface AppDeps {
   env: Env;
@@ -38,6 +40,8 @@ export interface BuiltApp {
 /** Builds the Express app: middleware, routers, 404 and the error handler. Does not listen. */
 export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   initModels(sequelize);
+  const uploadDir = env.UPLOAD_DIR ?? DEFAULT_UPLOAD_DIR;
+  configureStorage(localDiskStorage(uploadDir));
   const app = express();
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');
@@ -151,8 +155,10 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   mount(app, '/api/club', clubRouter());
   mount(app, '/api/boats', boatsRouter());
   mount(app, '/api/tackle-plans', tacklePlansRouter());
+  mount(app, '/api/uploads', uploadsRouter());
 
   app.use('/api', notFoundHandler);
+  app.use('/uploads', ...uploadsStatic(uploadDir));
 
   const webDist = env.WEB_DIST;
   if (webDist && existsSync(join(webDist, 'index.html'))) {

@@ -49,6 +49,7 @@ const MATRIX: Record<string, Row> = {
   'GET /api/tackle-plans/:planId': SIGNED_IN,
   'PUT /api/tackle-plans/:planId': SIGNED_IN,
   'DELETE /api/tackle-plans/:planId': SIGNED_IN,
+  'POST /api/uploads/images': SIGNED_IN,
 };
 
 const built = createTestApp({ LOGIN_RATE_LIMIT: '10000' });

@@ -1,0 +1,50 @@
+import express, { Router, type RequestHandler } from 'express';
+import multer from 'multer';
+import { AppError } from '../../errors/app-error';
+import { currentUser, requireAuth } from '../../middleware/require-auth';
+import { MAX_IMAGE_BYTES } from './image';
+import { storeImage } from './uploads.service';
+
+/** multer in memory with the image limits; the bytes are verified by content afterwards. */
+export const imageUpload = (maxFiles: number) =>
+  multer({
+    storage: multer.memoryStorage(),
+    // One file over the limit is let through to multer so it reports LIMIT_UNEXPECTED_FILE with the field name.
+    limits: { fileSize: MAX_IMAGE_BYTES, files: maxFiles + 1, fields: 40, parts: maxFiles + 41 },
+  });
+
+/** `POST /api/uploads/images` (signed in, multipart field `image`) → `{ data: { url, thumbUrl, width, height } }`. */
+export function uploadsRouter() {
+  const r = Router();
+  r.post('/images', requireAuth(), imageUpload(1).single('image'), async (req, res) => {
+    currentUser(req);
+    if (!req.file)
+      throw new AppError('VALIDATION_FAILED', 'Attach an image in the field "image"', {
+        image: 'Attach an image',
+      });
+    const img = await storeImage(req.file.buffer);
+    res.status(201).json({
+      data: { url: img.url, thumbUrl: img.thumbUrl, width: img.width, height: img.height },
+    });
+  });
+  return r;
+}
+
+/** Serves stored files with long cache headers (keys are unique, so a file never changes); unknown keys get 404. */
+export function uploadsStatic(dir: string): RequestHandler[] {
+  const serve = express.static(dir, {
+    immutable: true,
+    maxAge: '365d',
+    index: false,
+    dotfiles: 'deny',
+    redirect: false,
+  });
+  const notFound: RequestHandler = (_req, res) => {
+    res.status(404).type('text/plain').send('Not found');
+  };
+  const nosniff: RequestHandler = (_req, res, next) => {
+    res.set('X-Content-Type-Options', 'nosniff');
+    next();
+  };
+  return [nosniff, serve, notFound];
+}
