@@ -40,7 +40,7 @@ export interface AnchorSuggestionResult {
   loadN: number;
   designLoad: DesignLoadResult;
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
 }
 
 const SOFT_BOTTOMS: readonly BottomType[] = ['sand', 'mud', 'clay'];
@@ -69,11 +69,7 @@ export function anchorSuggestion(input: AnchorSuggestionInput): AnchorSuggestion
   const displacementKg =
     raw.displacementKg === undefined
       ? undefined
-      : requireNumber(raw.displacementKg, 'displacementKg', {
-          min: 0,
-          minExclusive: true,
-          max: 500000,
-        });
+      : requireNumber(raw.displacementKg, 'displacementKg', 0, 500000, 'min');
   const load = designLoad(input);
   const ratio = HOLDING_RATIO[anchorType][bottom];
   const minKg = load.loadN / (ratio * STANDARD_GRAVITY_MPS2);

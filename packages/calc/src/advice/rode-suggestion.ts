@@ -1,5 +1,5 @@
 import { DEFAULT_DESIGN_FACTOR } from '../constants';
-import { STANDARD_CAUTIONS } from '../cautions';
+import { cautionList } from '../cautions';
 import {
   optionalBoolean,
   optionalNumber,
@@ -8,16 +8,17 @@ import {
   requireOneOf,
 } from '../internal/validate';
 import { chainSpec, type ChainSpecResult } from '../ratings/chain-spec';
-import { ropeSpec } from '../ratings/rope-spec';
+import { ropeStrength } from '../ratings/rope-spec';
 import {
+  CHAIN_BREAK_FACTOR,
   CHAIN_GRADE_LABELS,
   CHAIN_GRADES,
-  CHAIN_TRADE_SIZES_IN,
+  CHAIN_ROWS,
   type ChainGrade,
 } from '../tables/chain-cfr';
 import { ROPE_DIAMETERS_IN, ROPE_DIAMETERS_MM } from '../tables/rope-nylon';
 import { inchFractionLabel } from '../units/format';
-import { KG_PER_LB, MM_PER_IN } from '../units/units';
+import { KG_PER_LB, MM_PER_IN, N_PER_LBF } from '../units/units';
 
 /** Input of {@link rodeSuggestion}. */
 export interface RodeSuggestionInput {
@@ -68,12 +69,20 @@ export interface RodeSuggestionResult {
   /** Nylon rode, or null when no standard size up to 1 in is enough. */
   nylon: NylonChoice | null;
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
   warnings: string[];
 }
 
-function carries(spec: ChainSpecResult, loadN: number, requiredBreakN: number): boolean {
-  return spec.wllN >= loadN && spec.minBreakN >= requiredBreakN;
+/** Smallest trade size of `grade` with WLL ≥ load and breaking ≥ required, or null. */
+function smallestSize(grade: ChainGrade, loadN: number, requiredBreakN: number): number | null {
+  const factor = CHAIN_BREAK_FACTOR[grade];
+  for (const row of CHAIN_ROWS) {
+    const wllLb = row.wllLb[grade];
+    if (wllLb === undefined) continue;
+    const wllN = wllLb * N_PER_LBF;
+    if (wllN >= loadN && wllN * factor >= requiredBreakN) return row.tradeSizeIn;
+  }
+  return null;
 }
 
 function smallestChain(
@@ -81,11 +90,19 @@ function smallestChain(
   loadN: number,
   requiredBreakN: number,
 ): ChainChoice | null {
-  for (const tradeSizeIn of CHAIN_TRADE_SIZES_IN[grade]) {
-    const spec = chainSpec({ grade, tradeSizeIn });
-    if (carries(spec, loadN, requiredBreakN)) return { ...spec, grade, tradeSizeIn };
-  }
-  return null;
+  const tradeSizeIn = smallestSize(grade, loadN, requiredBreakN);
+  if (tradeSizeIn === null) return null;
+  const spec = chainSpec({ grade, tradeSizeIn });
+  return {
+    wllN: spec.wllN,
+    minBreakN: spec.minBreakN,
+    kgPerM: spec.kgPerM,
+    extrapolated: spec.extrapolated,
+    basis: spec.basis,
+    cautions: spec.cautions,
+    grade,
+    tradeSizeIn,
+  };
 }
 
 /**
@@ -104,13 +121,16 @@ function pickRope(
   for (let i = 0; i < sizesMm.length; i += 1) {
     const d = sizesMm[i] ?? 0;
     if (d < neededMm * RULE_TOLERANCE) continue;
-    const spec = ropeSpec({ material: 'nylon', construction: 'three-strand', diameterMm: d, wet });
-    if (spec.minBreakN >= requiredBreakN) return i;
+    if (ropeStrength('nylon', 'three-strand', d, wet).minBreakN >= requiredBreakN) return i;
   }
   return -1;
 }
 
 const SIZES_IN_AS_MM = ROPE_DIAMETERS_IN.map((d) => d * MM_PER_IN);
+
+const RODE_CAUTIONS = cautionList(
+  'Match chain to the windlass gypsy and the shackles to the chain (shackle WLL at least the chain’s).',
+);
 
 /**
  * Chain and nylon for a design load. Chain: the smallest trade size of the grade with WLL ≥
@@ -121,18 +141,21 @@ const SIZES_IN_AS_MM = ROPE_DIAMETERS_IN.map((d) => d * MM_PER_IN);
  */
 export function rodeSuggestion(input: RodeSuggestionInput): RodeSuggestionResult {
   const raw = requireObject(input, '');
-  const loadN = requireNumber(raw.loadN, 'loadN', { min: 0, minExclusive: true });
+  const loadN = requireNumber(raw.loadN, 'loadN', 0, Infinity, 'min');
   const grade = requireOneOf(raw.grade ?? 'G43', 'grade', CHAIN_GRADES);
-  const designFactor = optionalNumber(raw.designFactor, 'designFactor', DEFAULT_DESIGN_FACTOR, {
-    min: 1,
-    max: 20,
-  });
+  const designFactor = optionalNumber(
+    raw.designFactor,
+    'designFactor',
+    DEFAULT_DESIGN_FACTOR,
+    1,
+    20,
+  );
   const windlass = optionalBoolean(raw.ropeChainWindlass, 'ropeChainWindlass', false);
   const wet = optionalBoolean(raw.wet, 'wet', true);
   const anchorKg =
     raw.anchorKg === undefined
       ? undefined
-      : requireNumber(raw.anchorKg, 'anchorKg', { min: 0, minExclusive: true, max: 1000 });
+      : requireNumber(raw.anchorKg, 'anchorKg', 0, 1000, 'min');
   const requiredBreakN = loadN * designFactor;
   const warnings: string[] = [];
   const chain = smallestChain(grade, loadN, requiredBreakN);
@@ -143,7 +166,7 @@ export function rodeSuggestion(input: RodeSuggestionInput): RodeSuggestionResult
   }
   const chainByGrade = CHAIN_GRADES.map((g) => ({
     grade: g,
-    tradeSizeIn: smallestChain(g, loadN, requiredBreakN)?.tradeSizeIn ?? null,
+    tradeSizeIn: smallestSize(g, loadN, requiredBreakN),
   }));
   const nylon = nylonChoice(anchorKg, requiredBreakN, windlass, wet);
   if (nylon === null) {
@@ -161,10 +184,7 @@ export function rodeSuggestion(input: RodeSuggestionInput): RodeSuggestionResult
       `Chain: smallest ${CHAIN_GRADE_LABELS[grade]} size with working load limit ≥ the load and breaking strength ≥ ${designFactor} × the load (49 CFR 393.108 table). ` +
       `Nylon three-strand: the larger of the handbook rule 0.2 in + anchor lb ÷ 185 (Gerr, seen) and the smallest size whose ${wet ? 'wet ' : ''}breaking strength is ≥ ${designFactor} × the load` +
       (windlass ? ', then one size up for the rope-chain windlass (Gerr).' : '.'),
-    cautions: [
-      ...STANDARD_CAUTIONS,
-      'Match chain to the windlass gypsy and the shackles to the chain (shackle WLL at least the chain’s).',
-    ],
+    cautions: RODE_CAUTIONS,
     warnings,
   };
 }
@@ -183,12 +203,7 @@ function nylonChoice(
   const sizeIn = ROPE_DIAMETERS_IN[inIndex + step];
   const sizeMm = ROPE_DIAMETERS_MM[mmIndex + step];
   if (inIndex < 0 || mmIndex < 0 || sizeIn === undefined || sizeMm === undefined) return null;
-  const spec = ropeSpec({
-    material: 'nylon',
-    construction: 'three-strand',
-    diameterMm: sizeIn * MM_PER_IN,
-    wet,
-  });
+  const { minBreakN } = ropeStrength('nylon', 'three-strand', sizeIn * MM_PER_IN, wet);
   const ruleOnly =
     ruleDiameterIn === undefined
       ? -1
@@ -199,7 +214,7 @@ function nylonChoice(
     ruleDiameterMm,
     sizeIn,
     sizeMm,
-    minBreakN: spec.minBreakN,
+    minBreakN,
     governedBy: ruleGoverns ? 'handbook-rule' : 'strength',
   };
 }

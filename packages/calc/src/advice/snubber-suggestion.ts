@@ -1,5 +1,5 @@
 import { DEFAULT_DESIGN_FACTOR } from '../constants';
-import { STANDARD_CAUTIONS } from '../cautions';
+import { cautionList } from '../cautions';
 import { interpolateLinear } from '../internal/interpolate';
 import {
   optionalBoolean,
@@ -8,7 +8,7 @@ import {
   requireObject,
   requireOneOf,
 } from '../internal/validate';
-import { ropeSpec } from '../ratings/rope-spec';
+import { ropeStrength } from '../ratings/rope-spec';
 import {
   DOUBLE_BRAID_STRAIN_FACTOR,
   NYLON_THREE_STRAND_STRAIN,
@@ -48,7 +48,7 @@ export interface SnubberSuggestionResult {
   stretchM: number;
   minBreakN: number;
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
   warnings: string[];
 }
 
@@ -56,6 +56,12 @@ const STRAIN_X = NYLON_THREE_STRAND_STRAIN.map((p) => p[0]);
 const STRAIN_Y = NYLON_THREE_STRAND_STRAIN.map((p) => p[1]);
 const MIN_LENGTH_M = SNUBBER_HEAVY_WEATHER_M / 2;
 const MAX_LENGTH_M = SNUBBER_HEAVY_WEATHER_M * 2;
+
+const SNUBBER_CAUTIONS = cautionList(
+  'Leave the chain slack behind the snubber and made fast, so the chain takes over if the snubber parts.',
+  'Protect the snubber from chafe at the fairlead; a stretching line chafes fast.',
+  'Polyester and other low-stretch lines do not make good snubbers.',
+);
 
 /** Strain of nylon at a load fraction of breaking, from the from-memory curve (≤ 1). */
 export function nylonStrain(
@@ -76,27 +82,33 @@ export function nylonStrain(
  */
 export function snubberSuggestion(input: SnubberSuggestionInput): SnubberSuggestionResult {
   const raw = requireObject(input, '');
-  const loadN = requireNumber(raw.loadN, 'loadN', { min: 0, minExclusive: true });
+  const loadN = requireNumber(raw.loadN, 'loadN', 0, Infinity, 'min');
   const construction = requireOneOf(
     raw.construction ?? 'three-strand',
     'construction',
     ROPE_CONSTRUCTIONS,
   );
   const wet = optionalBoolean(raw.wet, 'wet', true);
-  const designFactor = optionalNumber(raw.designFactor, 'designFactor', DEFAULT_DESIGN_FACTOR, {
-    min: 1,
-    max: 20,
-  });
-  const target = optionalNumber(raw.targetStretchM, 'targetStretchM', SNUBBER_TARGET_STRETCH_M, {
-    min: 0.1,
-    max: 5,
-  });
+  const designFactor = optionalNumber(
+    raw.designFactor,
+    'designFactor',
+    DEFAULT_DESIGN_FACTOR,
+    1,
+    20,
+  );
+  const target = optionalNumber(
+    raw.targetStretchM,
+    'targetStretchM',
+    SNUBBER_TARGET_STRETCH_M,
+    0.1,
+    5,
+  );
   const warnings: string[] = [];
   let chosen: { sizeIn: number; minBreakN: number } | undefined;
   for (const sizeIn of ROPE_DIAMETERS_IN) {
-    const spec = ropeSpec({ material: 'nylon', construction, diameterMm: sizeIn * MM_PER_IN, wet });
-    chosen = { sizeIn, minBreakN: spec.minBreakN };
-    if (spec.minBreakN >= loadN * designFactor) break;
+    const { minBreakN } = ropeStrength('nylon', construction, sizeIn * MM_PER_IN, wet);
+    chosen = { sizeIn, minBreakN };
+    if (minBreakN >= loadN * designFactor) break;
   }
   if (chosen === undefined) throw new RangeError('rope diameter list is empty');
   if (chosen.minBreakN < loadN * designFactor) {
@@ -125,12 +137,7 @@ export function snubberSuggestion(input: SnubberSuggestionInput): SnubberSuggest
       `Smallest nylon ${construction} line whose ${wet ? 'wet ' : ''}breaking strength is at least ${designFactor} × the load, so that it still stretches; ` +
       'length = wanted stretch (4–5 ft for a 20 ft heavy-weather snubber, seen) ÷ the strain at that load (nylon stretch curve from memory, approximate), ' +
       'kept between 10 and 40 ft.',
-    cautions: [
-      ...STANDARD_CAUTIONS,
-      'Leave the chain slack behind the snubber and made fast, so the chain takes over if the snubber parts.',
-      'Protect the snubber from chafe at the fairlead; a stretching line chafes fast.',
-      'Polyester and other low-stretch lines do not make good snubbers.',
-    ],
+    cautions: SNUBBER_CAUTIONS,
     warnings,
   };
 }

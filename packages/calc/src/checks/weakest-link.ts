@@ -57,7 +57,7 @@ export interface WeakestLinkResult {
   ok: boolean;
   warnings: string[];
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
 }
 
 /**
@@ -68,11 +68,14 @@ export interface WeakestLinkResult {
  */
 export function weakestLink(input: WeakestLinkInput): WeakestLinkResult {
   const raw = requireObject(input, '');
-  const loadN = requireNumber(raw.loadN, 'loadN', { min: 0, minExclusive: true });
-  const designFactor = optionalNumber(raw.designFactor, 'designFactor', DEFAULT_DESIGN_FACTOR, {
-    min: 1,
-    max: 20,
-  });
+  const loadN = requireNumber(raw.loadN, 'loadN', 0, Infinity, 'min');
+  const designFactor = optionalNumber(
+    raw.designFactor,
+    'designFactor',
+    DEFAULT_DESIGN_FACTOR,
+    1,
+    20,
+  );
   if (!Array.isArray(raw.components) || raw.components.length === 0) {
     throw new CalcInputError('components', 'components must be a non-empty list');
   }
@@ -86,11 +89,15 @@ export function weakestLink(input: WeakestLinkInput): WeakestLinkResult {
     const path = `components[${index}]`;
     const item = requireObject(list[index], path);
     const label = requireLabel(item.label, `${path}.label`);
-    const wllN = requireNumber(item.wllN, `${path}.wllN`, { min: 0, minExclusive: true });
-    const minBreakN = requireNumber(item.minBreakN, `${path}.minBreakN`, {
-      min: wllN,
-      hint: '(its wllN)',
-    });
+    const wllN = requireNumber(item.wllN, `${path}.wllN`, 0, Infinity, 'min');
+    const minBreakN = requireNumber(
+      item.minBreakN,
+      `${path}.minBreakN`,
+      wllN,
+      Infinity,
+      'none',
+      '(its wllN)',
+    );
     const entry = { label, index, margin: wllN / loadN, factor: minBreakN / loadN };
     byWll.push({ label, index, margin: entry.margin });
     byBreak.push({ label, index, factor: entry.factor });
@@ -127,6 +134,6 @@ export function weakestLink(input: WeakestLinkInput): WeakestLinkResult {
     warnings,
     basis:
       'Each part’s working load limit and breaking strength divided by the load; the rode is only as strong as its weakest part (49 CFR 393.108(a)).',
-    cautions: [...STANDARD_CAUTIONS],
+    cautions: STANDARD_CAUTIONS,
   };
 }

@@ -5,7 +5,7 @@ import {
   STANDARD_GRAVITY_MPS2,
   STEEL_DENSITY_KGPM3,
 } from '../constants';
-import { STANDARD_CAUTIONS } from '../cautions';
+import { cautionList } from '../cautions';
 import { optionalNumber, requireNumber, requireObject, requireOneOf } from '../internal/validate';
 
 /** Water the chain hangs in. */
@@ -57,7 +57,7 @@ export interface CatenaryResult {
   /** Rode shape for drawing: [x from the anchor, z above the seabed], metres. */
   profile: Array<[number, number]>;
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
 }
 
 /**
@@ -65,7 +65,7 @@ export interface CatenaryResult {
  * factor being 0.8694 in sea water (EN 1993-1-1 steel density; derived).
  */
 export function submergedWeightNPerM(chainKgPerM: number, water: WaterType = 'sea'): number {
-  const kg = requireNumber(chainKgPerM, 'chainKgPerM', { min: 0, minExclusive: true });
+  const kg = requireNumber(chainKgPerM, 'chainKgPerM', 0, Infinity, 'min');
   const rho = water === 'fresh' ? FRESH_WATER_DENSITY_KGPM3 : SEA_WATER_DENSITY_KGPM3;
   return kg * STANDARD_GRAVITY_MPS2 * (1 - rho / STEEL_DENSITY_KGPM3);
 }
@@ -91,16 +91,35 @@ interface Shape {
 
 const DEG = 180 / Math.PI;
 
-/** Bisection of increasing f on [lo, hi]; 80 halvings are ample for doubles. */
-function bisect(f: (x: number) => number, lo: number, hi: number): number {
+/**
+ * Root of an increasing f on [lo, hi] with f(lo) < 0 ≤ f(hi), by the Illinois variant of
+ * false position (superlinear, never leaves the bracket). f is a height error in metres, so
+ * it stops at |f| ≤ 1e-11 m or a bracket narrower than 1e-13 of its end (at most 100 steps).
+ */
+function solveIncreasing(f: (x: number) => number, lo: number, hi: number): number {
   let a = lo;
   let b = hi;
-  for (let i = 0; i < 80; i += 1) {
-    const mid = (a + b) / 2;
-    if (f(mid) < 0) a = mid;
-    else b = mid;
+  let fa = f(a);
+  let fb = f(b);
+  let side = 0;
+  let c = b;
+  for (let i = 0; i < 100; i += 1) {
+    c = (a * fb - b * fa) / (fb - fa);
+    const fc = f(c);
+    if (Math.abs(fc) <= 1e-11 || b - a <= 1e-13 * Math.max(1, Math.abs(b))) return c;
+    if (fc > 0) {
+      b = c;
+      fb = fc;
+      if (side === -1) fa /= 2;
+      side = -1;
+    } else {
+      a = c;
+      fa = fc;
+      if (side === 1) fb /= 2;
+      side = 1;
+    }
   }
-  return (a + b) / 2;
+  return c;
 }
 
 /** Solve the chain (+ weightless rope) shape for catenary parameter a = H / w. */
@@ -119,7 +138,7 @@ function solveShape(h: number, a: number, chainM: number, ropeM: number): Shape 
     return r - a + (ropeM * s) / r - h;
   };
   if (touching(chainM) >= 0) {
-    const s = bisect(touching, 0, chainM);
+    const s = solveIncreasing(touching, 0, chainM);
     return { suspendedChainM: s, u0: 0, u1: Math.asinh(s / a) };
   }
   // Whole chain hanging: the lower end lifts with slope sinh(u0). Increasing in u0.
@@ -129,7 +148,7 @@ function solveShape(h: number, a: number, chainM: number, ropeM: number): Shape 
   };
   let hi = 1;
   while (lifted(hi) < 0 && hi < 50) hi *= 2;
-  const u0 = bisect(lifted, 0, hi);
+  const u0 = solveIncreasing(lifted, 0, hi);
   return { suspendedChainM: chainM, u0, u1: Math.asinh(Math.sinh(u0) + chainM / a) };
 }
 
@@ -142,15 +161,15 @@ function solveShape(h: number, a: number, chainM: number, ropeM: number): Shape 
  */
 export function catenary(input: CatenaryInput): CatenaryResult {
   const raw = requireObject(input, '');
-  const depthM = requireNumber(raw.depthM, 'depthM', { min: 0 });
-  const bowHeightM = requireNumber(raw.bowHeightM, 'bowHeightM', { min: 0 });
-  const tideM = optionalNumber(raw.tideM, 'tideM', 0, { min: 0 });
+  const depthM = requireNumber(raw.depthM, 'depthM', 0);
+  const bowHeightM = requireNumber(raw.bowHeightM, 'bowHeightM', 0);
+  const tideM = optionalNumber(raw.tideM, 'tideM', 0, 0);
   const water = requireOneOf(raw.water ?? 'sea', 'water', WATER_TYPES);
   const w = submergedWeightNPerM(raw.chainKgPerM as number, water);
-  const load = requireNumber(raw.horizontalLoadN, 'horizontalLoadN', { min: 0 });
-  const chainM = requireNumber(raw.chainLengthM, 'chainLengthM', { min: 0, minExclusive: true });
-  const ropeM = optionalNumber(raw.ropeLengthM, 'ropeLengthM', 0, { min: 0 });
-  const points = optionalNumber(raw.profilePoints, 'profilePoints', 50, { min: 4, max: 400 });
+  const load = requireNumber(raw.horizontalLoadN, 'horizontalLoadN', 0);
+  const chainM = requireNumber(raw.chainLengthM, 'chainLengthM', 0, Infinity, 'min');
+  const ropeM = optionalNumber(raw.ropeLengthM, 'ropeLengthM', 0, 0);
+  const points = optionalNumber(raw.profilePoints, 'profilePoints', 50, 4, 400);
   const h = depthM + bowHeightM + tideM;
   if (h <= 0)
     throw new CalcInputError('depthM', 'depthM + bowHeightM + tideM must be greater than 0');
@@ -236,15 +255,14 @@ function slack(h: number, w: number, chainM: number, ropeM: number): CatenaryRes
   };
 }
 
-function catenaryCautions(lifts: boolean): string[] {
-  const list = [
-    ...STANDARD_CAUTIONS,
-    'This is a static shape: in gusts and waves the chain straightens and the shock reaches the anchor and the boat.',
-  ];
-  if (lifts) {
-    list.push(
-      'Under this load the chain lifts at the anchor and pulls its shank up, which can break it out: let out more rode.',
-    );
-  }
-  return list;
+const STATIC_SHAPE =
+  'This is a static shape: in gusts and waves the chain straightens and the shock reaches the anchor and the boat.';
+const CATENARY_CAUTIONS = cautionList(STATIC_SHAPE);
+const LIFTED_CAUTIONS = cautionList(
+  STATIC_SHAPE,
+  'Under this load the chain lifts at the anchor and pulls its shank up, which can break it out: let out more rode.',
+);
+
+function catenaryCautions(lifts: boolean): readonly string[] {
+  return lifts ? LIFTED_CAUTIONS : CATENARY_CAUTIONS;
 }

@@ -42,9 +42,9 @@ export const SCOPE_LADDER: readonly ScopeRung[] = [
 ];
 
 function height(raw: Record<string, unknown>): number {
-  const depthM = requireNumber(raw.depthM, 'depthM', { min: 0 });
-  const bowHeightM = requireNumber(raw.bowHeightM, 'bowHeightM', { min: 0 });
-  const tideM = optionalNumber(raw.tideM, 'tideM', 0, { min: 0 });
+  const depthM = requireNumber(raw.depthM, 'depthM', 0);
+  const bowHeightM = requireNumber(raw.bowHeightM, 'bowHeightM', 0);
+  const tideM = optionalNumber(raw.tideM, 'tideM', 0, 0);
   const h = depthM + bowHeightM + tideM;
   if (h <= 0)
     throw new CalcInputError('depthM', 'depthM + bowHeightM + tideM must be greater than 0');
@@ -57,7 +57,7 @@ function height(raw: Record<string, unknown>): number {
  */
 export function scope(input: ScopeInput): ScopeResult {
   const raw = requireObject(input, '');
-  const ratio = requireNumber(raw.ratio, 'ratio', { min: 1, max: 50 });
+  const ratio = requireNumber(raw.ratio, 'ratio', 1, 50);
   const h = height(raw);
   return {
     rodeM: ratio * h,
@@ -69,7 +69,7 @@ export function scope(input: ScopeInput): ScopeResult {
 /** Scope ratio of a rode: rode ÷ (depth + bow height + tidal rise), dimensionless. */
 export function scopeRatio(input: ScopeRatioInput): number {
   const raw = requireObject(input, '');
-  const rodeM = requireNumber(raw.rodeM, 'rodeM', { min: 0 });
+  const rodeM = requireNumber(raw.rodeM, 'rodeM', 0);
   return rodeM / height(raw);
 }
 

@@ -23,11 +23,11 @@ export interface SwingRadiusResult {
  */
 export function swingRadius(input: SwingRadiusInput): SwingRadiusResult {
   const raw = requireObject(input, '');
-  const rodeM = requireNumber(raw.rodeM, 'rodeM', { min: 0 });
-  const depthM = requireNumber(raw.depthM, 'depthM', { min: 0 });
-  const bowHeightM = requireNumber(raw.bowHeightM, 'bowHeightM', { min: 0 });
-  const tideM = optionalNumber(raw.tideM, 'tideM', 0, { min: 0 });
-  const loaM = requireNumber(raw.loaM, 'loaM', { min: 0, minExclusive: true });
+  const rodeM = requireNumber(raw.rodeM, 'rodeM', 0);
+  const depthM = requireNumber(raw.depthM, 'depthM', 0);
+  const bowHeightM = requireNumber(raw.bowHeightM, 'bowHeightM', 0);
+  const tideM = optionalNumber(raw.tideM, 'tideM', 0, 0);
+  const loaM = requireNumber(raw.loaM, 'loaM', 0, Infinity, 'min');
   const h = depthM + bowHeightM + tideM;
   if (rodeM < h) {
     throw new CalcInputError(

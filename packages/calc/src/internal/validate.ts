@@ -1,14 +1,7 @@
 import { CalcInputError } from '../errors';
 
-/** Bounds for a numeric field; `min`/`max` are inclusive unless `*Exclusive` is set. */
-export interface NumberBounds {
-  min?: number;
-  max?: number;
-  minExclusive?: boolean;
-  maxExclusive?: boolean;
-  /** Appended to the range message, e.g. "(the ABYC table) unless extrapolate is true". */
-  hint?: string;
-}
+/** Which bound of a range excludes its own value. */
+export type Exclusive = 'none' | 'min' | 'max' | 'both';
 
 /** Throws unless `value` is a plain object; returns it typed as a record. */
 export function requireObject(value: unknown, field: string): Record<string, unknown> {
@@ -18,22 +11,42 @@ export function requireObject(value: unknown, field: string): Record<string, unk
   return value as Record<string, unknown>;
 }
 
-/** Throws unless `value` is a finite number within `bounds`. */
-export function requireNumber(value: unknown, field: string, bounds: NumberBounds = {}): number {
+/**
+ * Throws unless `value` is a finite number in [min, max] (an end is open when `exclusive`
+ * names it). Positional bounds keep this allocation-free on every keystroke. `hint` is
+ * appended to the range message, e.g. "m (10–60 ft, the ABYC table)".
+ */
+export function requireNumber(
+  value: unknown,
+  field: string,
+  min = -Infinity,
+  max = Infinity,
+  exclusive: Exclusive = 'none',
+  hint?: string,
+): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
     throw new CalcInputError(field, `${field} must be a finite number`);
   }
-  const { min, max, minExclusive = false, maxExclusive = false, hint } = bounds;
-  const suffix = hint === undefined ? '' : ` ${hint}`;
-  if (min !== undefined && (minExclusive ? value <= min : value < min)) {
-    const relation = minExclusive ? 'greater than' : 'at least';
-    throw new CalcInputError(field, `${field} must be ${relation} ${min}${suffix} (got ${value})`);
+  const minOpen = exclusive === 'min' || exclusive === 'both';
+  const maxOpen = exclusive === 'max' || exclusive === 'both';
+  if (minOpen ? value <= min : value < min) {
+    rangeError(field, value, minOpen ? 'greater than' : 'at least', min, hint);
   }
-  if (max !== undefined && (maxExclusive ? value >= max : value > max)) {
-    const relation = maxExclusive ? 'less than' : 'at most';
-    throw new CalcInputError(field, `${field} must be ${relation} ${max}${suffix} (got ${value})`);
+  if (maxOpen ? value >= max : value > max) {
+    rangeError(field, value, maxOpen ? 'less than' : 'at most', max, hint);
   }
   return value;
+}
+
+function rangeError(
+  field: string,
+  value: number,
+  relation: string,
+  bound: number,
+  hint?: string,
+): never {
+  const suffix = hint === undefined ? '' : ` ${hint}`;
+  throw new CalcInputError(field, `${field} must be ${relation} ${bound}${suffix} (got ${value})`);
 }
 
 /** Like {@link requireNumber} but returns `fallback` when the value is `undefined`. */
@@ -41,9 +54,12 @@ export function optionalNumber(
   value: unknown,
   field: string,
   fallback: number,
-  bounds: NumberBounds = {},
+  min = -Infinity,
+  max = Infinity,
+  exclusive: Exclusive = 'none',
+  hint?: string,
 ): number {
-  return value === undefined ? fallback : requireNumber(value, field, bounds);
+  return value === undefined ? fallback : requireNumber(value, field, min, max, exclusive, hint);
 }
 
 /** Throws unless `value` is one of `allowed`. */

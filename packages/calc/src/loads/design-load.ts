@@ -12,7 +12,7 @@ import {
 import { firstAtLeast, interpolateLinear } from '../internal/interpolate';
 import { optionalBoolean, requireNumber, requireObject, requireOneOf } from '../internal/validate';
 import { M_PER_FT, N_PER_LBF } from '../units/units';
-import { STANDARD_CAUTIONS } from '../cautions';
+import { cautionList } from '../cautions';
 
 /** How a length between two table rows is treated. */
 export type RowMode = 'interpolate' | 'next-row-up';
@@ -44,7 +44,7 @@ export interface DesignLoadResult {
   /** True for multihulls (no table column) and for any extrapolation. */
   approximate: boolean;
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
 }
 
 const MAX_WIND_KN = 100;
@@ -105,28 +105,32 @@ export function designLoad(input: DesignLoadInput): DesignLoadResult {
   const hull = requireOneOf(raw.hull, 'hull', HULL_TYPES);
   const extrapolate = optionalBoolean(raw.extrapolate, 'extrapolate', false);
   const mode = requireOneOf(raw.rows ?? 'interpolate', 'rows', ['interpolate', 'next-row-up']);
-  const windKn = requireNumber(raw.windKn, 'windKn', { min: 0, max: MAX_WIND_KN });
+  const windKn = requireNumber(raw.windKn, 'windKn', 0, MAX_WIND_KN);
   const tableHint = 'm (10–60 ft, the ABYC table) unless extrapolate is true';
-  const loaM = requireNumber(raw.loaM, 'loaM', {
-    min: extrapolate ? 0 : LOA_MIN_FT * M_PER_FT,
-    max: extrapolate ? 120 * M_PER_FT : LOA_MAX_FT * M_PER_FT,
-    minExclusive: extrapolate,
-    hint: extrapolate ? 'm (at most 120 ft)' : tableHint,
-  });
+  const loaM = requireNumber(
+    raw.loaM,
+    'loaM',
+    extrapolate ? 0 : LOA_MIN_FT * M_PER_FT,
+    extrapolate ? 120 * M_PER_FT : LOA_MAX_FT * M_PER_FT,
+    extrapolate ? 'min' : 'none',
+    extrapolate ? 'm (at most 120 ft)' : tableHint,
+  );
   const loaFt = loaM / M_PER_FT;
   let rowFt = loaFt;
   let governedBy: 'loa' | 'beam' = 'loa';
   if (raw.beamM !== undefined && hull !== 'multihull') {
     const column = hull === 'sail' ? ABYC_BEAM_SAIL_FT : ABYC_BEAM_POWER_FT;
     const maxBeamFt = column[column.length - 1] ?? 0;
-    const beamM = requireNumber(raw.beamM, 'beamM', {
-      min: 0,
-      minExclusive: true,
-      max: extrapolate ? 60 * M_PER_FT : maxBeamFt * M_PER_FT,
-      hint: extrapolate
+    const beamM = requireNumber(
+      raw.beamM,
+      'beamM',
+      0,
+      extrapolate ? 60 * M_PER_FT : maxBeamFt * M_PER_FT,
+      'min',
+      extrapolate
         ? 'm'
         : `m (${maxBeamFt} ft, the ABYC ${hull} beam column) unless extrapolate is true`,
-    });
+    );
     const beamRowFt = loaFromBeamFt(beamM / M_PER_FT, column);
     if (beamRowFt > rowFt) {
       rowFt = beamRowFt;
@@ -146,7 +150,7 @@ export function designLoad(input: DesignLoadInput): DesignLoadResult {
     extrapolated,
     approximate: hull === 'multihull' || extrapolated,
     basis: describe(hull, governedBy, mode, windKn, outsideRows),
-    cautions: [...STANDARD_CAUTIONS, ...designLoadCautions(hull, extrapolated)],
+    cautions: designLoadCautions(hull, extrapolated),
   };
 }
 
@@ -173,15 +177,18 @@ function describe(
   return `Horizontal load from the ABYC H-40 table of design loads (values from memory), ${entry}, ${rows} and ${wind}.`;
 }
 
-function designLoadCautions(hull: HullType, extrapolated: boolean): string[] {
-  const list = [
-    'The load table assumes a boat lying to one anchor with moderate sea; surge, yawing and swell raise loads sharply.',
-  ];
-  if (hull === 'multihull') {
-    list.push(
-      'The table has no multihull column; this load uses our 1.5 × sailboat rule and is approximate.',
-    );
-  }
-  if (extrapolated) list.push('This load lies beyond the table and is an extrapolation.');
-  return list;
+const TABLE_NOTE =
+  'The load table assumes a boat lying to one anchor with moderate sea; surge, yawing and swell raise loads sharply.';
+const MULTIHULL_NOTE =
+  'The table has no multihull column; this load uses our 1.5 × sailboat rule and is approximate.';
+const EXTRAPOLATED_NOTE = 'This load lies beyond the table and is an extrapolation.';
+const PLAIN_CAUTIONS = cautionList(TABLE_NOTE);
+const MULTIHULL_CAUTIONS = cautionList(TABLE_NOTE, MULTIHULL_NOTE);
+const EXTRAPOLATED_CAUTIONS = cautionList(TABLE_NOTE, EXTRAPOLATED_NOTE);
+const MULTIHULL_EXTRAPOLATED_CAUTIONS = cautionList(TABLE_NOTE, MULTIHULL_NOTE, EXTRAPOLATED_NOTE);
+
+function designLoadCautions(hull: HullType, extrapolated: boolean): readonly string[] {
+  if (hull === 'multihull')
+    return extrapolated ? MULTIHULL_EXTRAPOLATED_CAUTIONS : MULTIHULL_CAUTIONS;
+  return extrapolated ? EXTRAPOLATED_CAUTIONS : PLAIN_CAUTIONS;
 }

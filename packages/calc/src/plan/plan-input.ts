@@ -116,18 +116,16 @@ export interface CheckedPlan {
   components: PlanComponents & { connectors: PlanConnector[] };
 }
 
-const positive = { min: 0, minExclusive: true };
-
 function optionalPositive(value: unknown, field: string, max: number): number | undefined {
-  return value === undefined ? undefined : requireNumber(value, field, { ...positive, max });
+  return value === undefined ? undefined : requireNumber(value, field, 0, max, 'min');
 }
 
 function checkBoat(value: unknown): PlanBoat {
   const raw = requireObject(value, 'boat');
   const boat: PlanBoat = {
-    loaM: requireNumber(raw.loaM, 'boat.loaM', { ...positive, max: 120 }),
+    loaM: requireNumber(raw.loaM, 'boat.loaM', 0, 120, 'min'),
     hull: requireOneOf(raw.hull, 'boat.hull', HULL_TYPES),
-    bowHeightM: requireNumber(raw.bowHeightM, 'boat.bowHeightM', { min: 0, max: 10 }),
+    bowHeightM: requireNumber(raw.bowHeightM, 'boat.bowHeightM', 0, 10),
   };
   const beamM = optionalPositive(raw.beamM, 'boat.beamM', 40);
   if (beamM !== undefined) boat.beamM = beamM;
@@ -141,7 +139,7 @@ function checkChain(value: unknown): NonNullable<PlanComponents['chain']> {
   const raw = requireObject(value, f);
   const chain: NonNullable<PlanComponents['chain']> = {
     grade: requireOneOf(raw.grade, `${f}.grade`, CHAIN_GRADES),
-    lengthM: requireNumber(raw.lengthM, `${f}.lengthM`, { ...positive, max: 1000 }),
+    lengthM: requireNumber(raw.lengthM, `${f}.lengthM`, 0, 1000, 'min'),
   };
   const hasIn = raw.tradeSizeIn !== undefined;
   const hasMm = raw.nominalMm !== undefined;
@@ -151,8 +149,9 @@ function checkChain(value: unknown): NonNullable<PlanComponents['chain']> {
       `${f}.tradeSizeIn: give tradeSizeIn or nominalMm, exactly one`,
     );
   }
-  if (hasIn) chain.tradeSizeIn = requireNumber(raw.tradeSizeIn, `${f}.tradeSizeIn`, positive);
-  else chain.nominalMm = requireNumber(raw.nominalMm, `${f}.nominalMm`, positive);
+  if (hasIn)
+    chain.tradeSizeIn = requireNumber(raw.tradeSizeIn, `${f}.tradeSizeIn`, 0, Infinity, 'min');
+  else chain.nominalMm = requireNumber(raw.nominalMm, `${f}.nominalMm`, 0, Infinity, 'min');
   return chain;
 }
 
@@ -165,8 +164,8 @@ function checkRope(value: unknown, f: string, maxLengthM: number) {
       `${f}.construction`,
       ROPE_CONSTRUCTIONS,
     ),
-    diameterMm: requireNumber(raw.diameterMm, `${f}.diameterMm`, positive),
-    lengthM: requireNumber(raw.lengthM, `${f}.lengthM`, { ...positive, max: maxLengthM }),
+    diameterMm: requireNumber(raw.diameterMm, `${f}.diameterMm`, 0, Infinity, 'min'),
+    lengthM: requireNumber(raw.lengthM, `${f}.lengthM`, 0, maxLengthM, 'min'),
   };
 }
 
@@ -208,7 +207,7 @@ export function checkPlanInput(input: unknown): CheckedPlan {
     const a = requireObject(comps.anchor, 'components.anchor');
     components.anchor = {
       type: requireOneOf(a.type, 'components.anchor.type', ANCHOR_TYPES),
-      massKg: requireNumber(a.massKg, 'components.anchor.massKg', { ...positive, max: 1000 }),
+      massKg: requireNumber(a.massKg, 'components.anchor.massKg', 0, 1000, 'min'),
     };
   }
   if (comps.chain !== undefined) components.chain = checkChain(comps.chain);
@@ -217,15 +216,12 @@ export function checkPlanInput(input: unknown): CheckedPlan {
     components.snubber = checkRope(comps.snubber, 'components.snubber', 100);
   return {
     boat,
-    windKn: requireNumber(raw.windKn, 'windKn', { min: 0, minExclusive: true, max: 100 }),
-    depthM: requireNumber(raw.depthM, 'depthM', { min: 0, max: 300 }),
-    tideM: optionalNumber(raw.tideM, 'tideM', 0, { min: 0, max: 20 }),
+    windKn: requireNumber(raw.windKn, 'windKn', 0, 100, 'min'),
+    depthM: requireNumber(raw.depthM, 'depthM', 0, 300),
+    tideM: optionalNumber(raw.tideM, 'tideM', 0, 0, 20),
     bottom: raw.bottom === undefined ? undefined : requireOneOf(raw.bottom, 'bottom', BOTTOM_TYPES),
     water: requireOneOf(raw.water ?? 'sea', 'water', WATER_TYPES),
-    designFactor: optionalNumber(raw.designFactor, 'designFactor', DEFAULT_DESIGN_FACTOR, {
-      min: 1,
-      max: 20,
-    }),
+    designFactor: optionalNumber(raw.designFactor, 'designFactor', DEFAULT_DESIGN_FACTOR, 1, 20),
     wet: optionalBoolean(raw.wet, 'wet', true),
     extrapolate: optionalBoolean(raw.extrapolate, 'extrapolate', false),
     components,

@@ -44,7 +44,16 @@ export function rateChain(plan: CheckedPlan): PlanChainRating | null {
       ? chainSpec({ grade, tradeSizeIn })
       : chainSpecMetric({ grade, nominalMm: nominalMm ?? 0, extrapolate: plan.extrapolate }),
   );
-  return { ...spec, grade, lengthM };
+  return {
+    wllN: spec.wllN,
+    minBreakN: spec.minBreakN,
+    kgPerM: spec.kgPerM,
+    extrapolated: spec.extrapolated,
+    basis: spec.basis,
+    cautions: spec.cautions,
+    grade,
+    lengthM,
+  };
 }
 
 /** Rates the plan's rope rode or snubber. */
@@ -60,7 +69,17 @@ export function rateRope(plan: CheckedPlan, which: 'rode' | 'snubber'): PlanRope
       extrapolate: plan.extrapolate,
     }),
   );
-  return { ...spec, diameterMm: rope.diameterMm, lengthM: rope.lengthM };
+  return {
+    minBreakN: spec.minBreakN,
+    wllN: spec.wllN,
+    tieDownWllN: spec.tieDownWllN,
+    wllBasis: spec.wllBasis,
+    extrapolated: spec.extrapolated,
+    basis: spec.basis,
+    cautions: spec.cautions,
+    diameterMm: rope.diameterMm,
+    lengthM: rope.lengthM,
+  };
 }
 
 /**

@@ -52,7 +52,7 @@ export interface TacklePlanResult {
   rodeSuggestion: RodeSuggestionResult;
   snubberSuggestion: SnubberSuggestionResult;
   warnings: string[];
-  cautions: string[];
+  cautions: readonly string[];
   basis: string;
 }
 
@@ -66,7 +66,7 @@ export function tacklePlan(input: TacklePlanInput): TacklePlanResult {
   const plan = checkPlanInput(input);
   const { boat, windKn, extrapolate } = plan;
   const load = withFieldPrefix('boat', () =>
-    designLoad({ ...boatLoadInput(plan), windKn, extrapolate }),
+    designLoad({ loaM: boat.loaM, beamM: boat.beamM, hull: boat.hull, windKn, extrapolate }),
   );
   const loadN = load.loadN;
   const warnings: string[] = [];
@@ -114,20 +114,11 @@ export function tacklePlan(input: TacklePlanInput): TacklePlanResult {
     rodeSuggestion: rodeAdvice,
     snubberSuggestion: snubberAdvice,
     warnings,
-    cautions: [...STANDARD_CAUTIONS],
+    cautions: STANDARD_CAUTIONS,
     basis:
       'Design load from the ABYC H-40 table; chain from 49 CFR 393.108; shackles from RR-C-271; rope from engineering tables and 49 CFR 393.108; ' +
       'catenary after MIT 2.019; scope and swing from sailing-course practice. Each part carries its own basis.',
   };
-}
-
-function boatLoadInput(plan: CheckedPlan): {
-  loaM: number;
-  beamM?: number;
-  hull: CheckedPlan['boat']['hull'];
-} {
-  const { loaM, beamM, hull } = plan.boat;
-  return beamM === undefined ? { loaM, hull } : { loaM, beamM, hull };
 }
 
 function weakestLinkOf(
@@ -165,14 +156,15 @@ function weakestLinkOf(
 function anchorCheck(plan: CheckedPlan, warnings: string[]): PlanAnchorCheck | null {
   const anchor = plan.components.anchor;
   if (anchor === undefined) return null;
-  const { displacementKg } = plan.boat;
   const suggestion = withFieldPrefix('boat', () =>
     anchorSuggestion({
-      ...boatLoadInput(plan),
-      ...(displacementKg === undefined ? {} : { displacementKg }),
+      loaM: plan.boat.loaM,
+      beamM: plan.boat.beamM,
+      hull: plan.boat.hull,
+      displacementKg: plan.boat.displacementKg,
       windKn: plan.windKn,
       anchorType: anchor.type,
-      ...(plan.bottom === undefined ? {} : { bottom: plan.bottom }),
+      bottom: plan.bottom,
       extrapolate: plan.extrapolate,
     }),
   );

@@ -1,7 +1,7 @@
 import { CalcInputError } from '../errors';
 import { indexOfClose } from '../internal/interpolate';
 import { optionalBoolean, requireNumber, requireObject, requireOneOf } from '../internal/validate';
-import { STANDARD_CAUTIONS } from '../cautions';
+import { cautionList } from '../cautions';
 import {
   CHAIN_BREAK_FACTOR,
   CHAIN_BREAK_FACTOR_MARK,
@@ -42,7 +42,7 @@ export interface ChainSpecResult {
   /** True when a metric size lies outside 7–16 mm. */
   extrapolated: boolean;
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
 }
 
 const ROW_SIZES_IN: readonly number[] = CHAIN_ROWS.map((r) => r.tradeSizeIn);
@@ -57,7 +57,7 @@ const METRIC_MAX_MM = 16;
 export function chainSpec(input: ChainSpecInput): ChainSpecResult {
   const raw = requireObject(input, '');
   const grade = requireOneOf(raw.grade, 'grade', CHAIN_GRADES);
-  const size = requireNumber(raw.tradeSizeIn, 'tradeSizeIn', { min: 0, minExclusive: true });
+  const size = requireNumber(raw.tradeSizeIn, 'tradeSizeIn', 0, Infinity, 'min');
   const row = CHAIN_ROWS[indexOfClose(ROW_SIZES_IN, size)];
   const wllLb = row?.wllLb[grade];
   if (row === undefined || wllLb === undefined) {
@@ -90,13 +90,16 @@ export function chainSpecMetric(input: ChainSpecMetricInput): ChainSpecResult {
   const raw = requireObject(input, '');
   const grade = requireOneOf(raw.grade, 'grade', CHAIN_GRADES);
   const extrapolate = optionalBoolean(raw.extrapolate, 'extrapolate', false);
-  const d = requireNumber(raw.nominalMm, 'nominalMm', {
-    min: extrapolate ? 4 : METRIC_MIN_MM,
-    max: extrapolate ? 26 : METRIC_MAX_MM,
-    hint: extrapolate
+  const d = requireNumber(
+    raw.nominalMm,
+    'nominalMm',
+    extrapolate ? 4 : METRIC_MIN_MM,
+    extrapolate ? 26 : METRIC_MAX_MM,
+    'none',
+    extrapolate
       ? 'mm'
       : 'mm (7–16 mm, the range checked against the CFR table) unless extrapolate is true',
-  });
+  );
   const factor = CHAIN_BREAK_FACTOR[grade];
   const minBreakN = CHAIN_GRADE_NUMBER[grade] * 10 * 2 * ((Math.PI * d * d) / 4);
   const extrapolated = d < METRIC_MIN_MM || d > METRIC_MAX_MM;
@@ -113,10 +116,11 @@ export function chainSpecMetric(input: ChainSpecMetricInput): ChainSpecResult {
   };
 }
 
-function chainCautions(): string[] {
-  return [
-    ...STANDARD_CAUTIONS,
-    'Unmarked chain counts as grade 30 proof coil (49 CFR 393.108); check the grade stamp on the links.',
-    'Check that the chain fits your windlass gypsy: pitch matters as much as size.',
-  ];
+const CHAIN_CAUTIONS = cautionList(
+  'Unmarked chain counts as grade 30 proof coil (49 CFR 393.108); check the grade stamp on the links.',
+  'Check that the chain fits your windlass gypsy: pitch matters as much as size.',
+);
+
+function chainCautions(): readonly string[] {
+  return CHAIN_CAUTIONS;
 }

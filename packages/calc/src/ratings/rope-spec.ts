@@ -6,7 +6,7 @@ import {
   requireObject,
   requireOneOf,
 } from '../internal/validate';
-import { STANDARD_CAUTIONS } from '../cautions';
+import { cautionList } from '../cautions';
 import {
   NYLON_DOUBLE_BRAID_WLL,
   NYLON_THREE_STRAND_MBS,
@@ -48,7 +48,7 @@ export interface RopeSpecResult {
   wllBasis: 'tie-down' | 'design-factor';
   extrapolated: boolean;
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
 }
 
 const MIN_MM = 9.5;
@@ -74,6 +74,27 @@ function byArea(table: { xs: number[]; ks: number[] }, dIn: number): number {
 }
 
 /**
+ * The numbers of {@link ropeSpec} without validation, basis or cautions, for sizing loops:
+ * breaking strength (wet when asked) and tie-down WLL, N. Same formulas as ropeSpec.
+ */
+export function ropeStrength(
+  material: RopeMaterial,
+  construction: RopeConstruction,
+  diameterMm: number,
+  wet: boolean,
+  wetLoss: number = NYLON_WET_LOSS_DEFAULT,
+): { minBreakN: number; tieDownWllN: number } {
+  const dIn = diameterMm / MM_PER_IN;
+  const wll3s = byArea(WLL_3S, dIn);
+  const braidRatio = construction === 'double-braid' ? byArea(WLL_DB, dIn) / wll3s : 1;
+  const nylonDryLbf = byArea(MBS_3S, dIn) * braidRatio;
+  const dryLbf = material === 'nylon' ? nylonDryLbf : nylonDryLbf * POLYESTER_STRENGTH_FRACTION;
+  const wetFactor = wet && material === 'nylon' ? 1 - wetLoss : 1;
+  const tieDownLbf = material === 'nylon' ? wll3s * braidRatio : dryLbf / POLYESTER_TIE_DOWN_FACTOR;
+  return { minBreakN: dryLbf * wetFactor * N_PER_LBF, tieDownWllN: tieDownLbf * N_PER_LBF };
+}
+
+/**
  * Ratings of nylon or polyester rope by diameter. Nylon three-strand breaking strength from
  * general engineering tables (seen), interpolated as strength per d²; double braid = that ×
  * the ratio of the CFR double-braid to three-strand tie-down limits (derived); polyester =
@@ -86,30 +107,28 @@ export function ropeSpec(input: RopeSpecInput): RopeSpecResult {
   const material = requireOneOf(raw.material, 'material', ROPE_MATERIALS);
   const construction = requireOneOf(raw.construction, 'construction', ROPE_CONSTRUCTIONS);
   const extrapolate = optionalBoolean(raw.extrapolate, 'extrapolate', false);
-  const diameterMm = requireNumber(raw.diameterMm, 'diameterMm', {
-    min: extrapolate ? 4 : MIN_MM,
-    max: extrapolate ? 40 : MAX_MM,
-    hint: extrapolate ? 'mm' : 'mm (3/8–1 in, the rope tables) unless extrapolate is true',
-  });
+  const diameterMm = requireNumber(
+    raw.diameterMm,
+    'diameterMm',
+    extrapolate ? 4 : MIN_MM,
+    extrapolate ? 40 : MAX_MM,
+    'none',
+    extrapolate ? 'mm' : 'mm (3/8–1 in, the rope tables) unless extrapolate is true',
+  );
   const wet = optionalBoolean(raw.wet, 'wet', false);
-  const wetLoss = optionalNumber(raw.wetLossFraction, 'wetLossFraction', NYLON_WET_LOSS_DEFAULT, {
-    min: 0,
-    max: 0.6,
-  });
+  const wetLoss = optionalNumber(
+    raw.wetLossFraction,
+    'wetLossFraction',
+    NYLON_WET_LOSS_DEFAULT,
+    0,
+    0.6,
+  );
   const designFactor =
     raw.designFactor === undefined
       ? undefined
-      : requireNumber(raw.designFactor, 'designFactor', { min: 1, max: 20 });
-  const dIn = diameterMm / MM_PER_IN;
+      : requireNumber(raw.designFactor, 'designFactor', 1, 20);
   const braid = construction === 'double-braid';
-  const wll3s = byArea(WLL_3S, dIn);
-  const braidRatio = braid ? byArea(WLL_DB, dIn) / wll3s : 1;
-  const nylonDryLbf = byArea(MBS_3S, dIn) * braidRatio;
-  const dryLbf = material === 'nylon' ? nylonDryLbf : nylonDryLbf * POLYESTER_STRENGTH_FRACTION;
-  const wetFactor = wet && material === 'nylon' ? 1 - wetLoss : 1;
-  const minBreakN = dryLbf * wetFactor * N_PER_LBF;
-  const tieDownLbf = material === 'nylon' ? wll3s * braidRatio : dryLbf / POLYESTER_TIE_DOWN_FACTOR;
-  const tieDownWllN = tieDownLbf * N_PER_LBF;
+  const { minBreakN, tieDownWllN } = ropeStrength(material, construction, diameterMm, wet, wetLoss);
   const extrapolated = diameterMm < MIN_MM || diameterMm > MAX_MM;
   return {
     minBreakN,
@@ -151,16 +170,16 @@ function describe(
   return `${strength}${fibre}${water}.${wll}${beyond}`;
 }
 
-function ropeCautions(material: RopeMaterial, wet: boolean): string[] {
-  const list = [
-    ...STANDARD_CAUTIONS,
-    'Chafe at the bow roller or fairlead can cut a rope rode in hours: protect it and inspect it.',
-    'Knots roughly halve a rope’s strength; a well-made eye splice keeps most of it.',
-  ];
-  if (material === 'nylon' && !wet) {
-    list.push(
-      'Nylon is weaker wet; these figures are dry. Sources differ on how much (15 % to half).',
-    );
-  }
-  return list;
+const CHAFE =
+  'Chafe at the bow roller or fairlead can cut a rope rode in hours: protect it and inspect it.';
+const KNOTS = 'Knots roughly halve a rope’s strength; a well-made eye splice keeps most of it.';
+const ROPE_CAUTIONS = cautionList(CHAFE, KNOTS);
+const DRY_NYLON_CAUTIONS = cautionList(
+  CHAFE,
+  KNOTS,
+  'Nylon is weaker wet; these figures are dry. Sources differ on how much (15 % to half).',
+);
+
+function ropeCautions(material: RopeMaterial, wet: boolean): readonly string[] {
+  return material === 'nylon' && !wet ? DRY_NYLON_CAUTIONS : ROPE_CAUTIONS;
 }

@@ -1,7 +1,7 @@
 import { CalcInputError } from '../errors';
 import { indexOfClose } from '../internal/interpolate';
 import { requireNumber, requireObject } from '../internal/validate';
-import { STANDARD_CAUTIONS } from '../cautions';
+import { cautionList } from '../cautions';
 import { SHACKLE_DESIGN_FACTOR, SHACKLE_ROWS, SHACKLE_SIZES_IN } from '../tables/shackle-rrc';
 import { inchFractionLabel } from '../units/format';
 import { N_PER_SHORT_TON } from '../units/units';
@@ -17,8 +17,13 @@ export interface ShackleSpecResult {
   wllN: number;
   minBreakN: number;
   basis: string;
-  cautions: string[];
+  cautions: readonly string[];
 }
+
+const SHACKLE_CAUTIONS = cautionList(
+  'Use a rated, forged shackle whose WLL is at least the chain’s (Gerr): one size up from proof-coil chain, two from high-test.',
+  'Mouse (seize) the pin so it cannot work loose.',
+);
 
 /**
  * Ratings of a forged screw-pin anchor shackle: WLL from the RR-C-271 table (short tons,
@@ -27,7 +32,7 @@ export interface ShackleSpecResult {
  */
 export function shackleSpec(input: ShackleSpecInput): ShackleSpecResult {
   const raw = requireObject(input, '');
-  const size = requireNumber(raw.nominalIn, 'nominalIn', { min: 0, minExclusive: true });
+  const size = requireNumber(raw.nominalIn, 'nominalIn', 0, Infinity, 'min');
   const row = SHACKLE_ROWS[indexOfClose(SHACKLE_SIZES_IN, size)];
   if (row === undefined) {
     const sizes = SHACKLE_SIZES_IN.map(inchFractionLabel).join(', ');
@@ -43,10 +48,6 @@ export function shackleSpec(input: ShackleSpecInput): ShackleSpecResult {
     basis:
       `${inchFractionLabel(size)} forged screw-pin anchor shackle: WLL ${row.wllShortTons} short tons from the RR-C-271 table ` +
       `(from memory; 1/2–3/4 in corroborated by RR-C-271D, seen); breaking = 5 × WLL (RR-C-271D design factor, seen).`,
-    cautions: [
-      ...STANDARD_CAUTIONS,
-      'Use a rated, forged shackle whose WLL is at least the chain’s (Gerr): one size up from proof-coil chain, two from high-test.',
-      'Mouse (seize) the pin so it cannot work loose.',
-    ],
+    cautions: SHACKLE_CAUTIONS,
   };
 }

@@ -35,7 +35,7 @@ function numberText(value: number, fractionDigits: number): string {
 
 function digits(options: FormatOptions | undefined, fallback: number): number {
   if (options?.fractionDigits === undefined) return fallback;
-  const value = requireNumber(options.fractionDigits, 'fractionDigits', { min: 0, max: 6 });
+  const value = requireNumber(options.fractionDigits, 'fractionDigits', 0, 6);
   if (!Number.isInteger(value)) {
     throw new CalcInputError('fractionDigits', 'fractionDigits must be a whole number');
   }
@@ -86,7 +86,7 @@ export function formatForce(valueN: number, system: UnitSystem, options?: Format
  * 1.125 → "1 1/8 in". For labels of chain, shackle and rope sizes.
  */
 export function inchFractionLabel(valueIn: number): string {
-  const inches = requireNumber(valueIn, 'valueIn', { min: 0 });
+  const inches = requireNumber(valueIn, 'valueIn', 0);
   const sixteenths = Math.round(inches * 16);
   const whole = Math.floor(sixteenths / 16);
   let numerator = sixteenths % 16;
