@@ -15,7 +15,7 @@ export const AIR_DENSITY_KGPM3 = 1.225;
 
 /**
  * Default design factor: minimum breaking strength ÷ load required of a rode component.
- * 4 matches the breaking-to-WLL ratio of most chain grades (NACM, from memory; G30 per
- * Gerr, seen) and is common practice for anchoring gear.
+ * 4 matches the breaking-to-WLL ratio of most chain grades (NACM, from memory; G30 per the
+ * Boat Mechanical Systems Handbook, seen) and is common practice for anchoring gear.
  */
 export const DEFAULT_DESIGN_FACTOR = 4;

@@ -58,7 +58,7 @@ describe('anchorSuggestion', () => {
 });
 
 describe('rodeSuggestion', () => {
-  // Gerr (seen): nylon in = 0.2 + anchor lb ÷ 185: a 36 lb anchor → 0.394 in ≈ 3/8 in;
+  // Boat Mechanical Systems Handbook (seen): nylon in = 0.2 + anchor lb ÷ 185: a 36 lb anchor → 0.394 in ≈ 3/8 in;
   // metric mm = 5.08 + anchor kg ÷ 3.3: 16.4 kg → 10 mm.
   it('applies the handbook nylon rule in both unit systems', () => {
     const r = rodeSuggestion({ loadN: lbfToN(200), anchorKg: lbToKg(36), designFactor: 1 });
@@ -71,7 +71,7 @@ describe('rodeSuggestion', () => {
     expect(metric.nylon?.sizeMm).toBe(10);
   });
 
-  // Gerr (seen): one size up for a rope-chain windlass.
+  // Boat Mechanical Systems Handbook (seen): one size up for a rope-chain windlass.
   it('goes one size up for a rope-chain windlass', () => {
     const r = rodeSuggestion({
       loadN: lbfToN(200),

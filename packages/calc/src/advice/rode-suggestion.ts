@@ -30,7 +30,7 @@ export interface RodeSuggestionInput {
   grade?: ChainGrade;
   /** Breaking strength ÷ load required (default 4). */
   designFactor?: number;
-  /** A rope-chain windlass: one rope size up (Gerr). */
+  /** A rope-chain windlass: one rope size up (Boat Mechanical Systems Handbook). */
   ropeChainWindlass?: boolean;
   /** Size the rope on its wet strength (default true). */
   wet?: boolean;
@@ -136,8 +136,8 @@ const RODE_CAUTIONS = cautionList(
  * Chain and nylon for a design load. Chain: the smallest trade size of the grade with WLL ≥
  * load and breaking ≥ load × design factor (49 CFR 393.108 table). Nylon three-strand: the
  * larger of the handbook rule d(in) = 0.2 + anchor lb ÷ 185, metric d(mm) = 5.08 + anchor kg
- * ÷ 3.3 (Gerr, seen) and the smallest size whose (wet) breaking strength ≥ load × design
- * factor; one size up for a rope-chain windlass (Gerr, seen).
+ * ÷ 3.3 (Boat Mechanical Systems Handbook, seen) and the smallest size whose (wet) breaking strength ≥ load × design
+ * factor; one size up for a rope-chain windlass (Boat Mechanical Systems Handbook, seen).
  */
 export function rodeSuggestion(input: RodeSuggestionInput): RodeSuggestionResult {
   const raw = requireObject(input, '');
@@ -182,8 +182,10 @@ export function rodeSuggestion(input: RodeSuggestionInput): RodeSuggestionResult
     nylon,
     basis:
       `Chain: smallest ${CHAIN_GRADE_LABELS[grade]} size with working load limit ≥ the load and breaking strength ≥ ${designFactor} × the load (49 CFR 393.108 table). ` +
-      `Nylon three-strand: the larger of the handbook rule 0.2 in + anchor lb ÷ 185 (Gerr, seen) and the smallest size whose ${wet ? 'wet ' : ''}breaking strength is ≥ ${designFactor} × the load` +
-      (windlass ? ', then one size up for the rope-chain windlass (Gerr).' : '.'),
+      `Nylon three-strand: the larger of the handbook rule 0.2 in + anchor lb ÷ 185 (Boat Mechanical Systems Handbook, seen) and the smallest size whose ${wet ? 'wet ' : ''}breaking strength is ≥ ${designFactor} × the load` +
+      (windlass
+        ? ', then one size up for the rope-chain windlass (Boat Mechanical Systems Handbook).'
+        : '.'),
     cautions: RODE_CAUTIONS,
     warnings,
   };

@@ -6,7 +6,7 @@ import { lbfToN } from '../units/units';
 import { weakestLink } from './weakest-link';
 
 describe('weakestLink', () => {
-  // 49 CFR 393.108 (seen) chain and RR-C-271 (from memory) shackle ratings; Gerr (seen): the
+  // 49 CFR 393.108 (seen) chain and RR-C-271 (from memory) shackle ratings; Boat Mechanical Systems Handbook (seen): the
   // shackle should be at least as strong as the chain — a 3/8 in shackle on 5/16 in high test is not.
   const chain = { label: 'chain', ...chainSpec({ grade: 'G43', tradeSizeIn: 5 / 16 }) };
   const shackle = { label: 'shackle', ...shackleSpec({ nominalIn: 3 / 8 }) };

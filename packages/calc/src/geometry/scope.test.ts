@@ -30,7 +30,7 @@ describe('scope', () => {
     expect(Math.round(ratio)).toBe(4);
   });
 
-  // Gerr (seen): 3:1 bare minimum, 5:1 most weather, 7:1 storms, 10:1 severe.
+  // Boat Mechanical Systems Handbook (seen): 3:1 bare minimum, 5:1 most weather, 7:1 storms, 10:1 severe.
   it.each([
     [2.9, undefined],
     [3, 3],

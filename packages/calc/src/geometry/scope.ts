@@ -33,7 +33,7 @@ export interface ScopeRung {
   label: string;
 }
 
-/** Scope ladder (Gerr, seen): 3:1 bare minimum in light weather … 10:1 severe. */
+/** Scope ladder (Boat Mechanical Systems Handbook, seen): 3:1 bare minimum in light weather … 10:1 severe. */
 export const SCOPE_LADDER: readonly ScopeRung[] = [
   { ratio: 3, label: 'bare minimum, light weather' },
   { ratio: 5, label: 'most weather' },

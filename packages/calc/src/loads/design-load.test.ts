@@ -48,7 +48,7 @@ describe('designLoad', () => {
     expect(lb(power.loadN)).toBeCloseTo(row.kn30, 6);
   });
 
-  // Gerr, Boat Mechanical Systems Handbook, worked example (seen): 32 ft power boat,
+  // Boat Mechanical Systems Handbook, worked example (seen): 32 ft power boat,
   // 12 ft beam → the 35 ft row → working load 900 lb (4.0 kN).
   it('matches the 32 ft / 12 ft beam worked example at the next row up', () => {
     const result = designLoad({

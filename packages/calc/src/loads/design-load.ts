@@ -95,7 +95,7 @@ function snapRow(rowFt: number, mode: RowMode): number {
 
 /**
  * Horizontal design load on an anchored boat, N, from ABYC H-40 Table 1 (from memory):
- * enter by LOA or by beam, whichever gives the larger load (Gerr, seen); interpolate between
+ * enter by LOA or by beam, whichever gives the larger load (Boat Mechanical Systems Handbook, seen); interpolate between
  * rows (or take the next row up); scale with wind speed squared between and beyond the 15 /
  * 30 / 42 kn columns, flagged beyond 42 kn. Multihulls: sailboat row by LOA × 1.5 (common
  * practice, approximate). Throws {@link CalcInputError} naming the field.
@@ -164,7 +164,7 @@ function describe(
   const entry =
     hull === 'multihull'
       ? 'entered by length in the sailboat rows and multiplied by 1.5 for a multihull (our rule, common practice, approximate)'
-      : `entered by ${governedBy === 'beam' ? 'beam' : 'length'}, whichever gives the larger load (Gerr, seen)`;
+      : `entered by ${governedBy === 'beam' ? 'beam' : 'length'}, whichever gives the larger load (Boat Mechanical Systems Handbook, seen)`;
   const rows = outsideRows
     ? 'extended beyond the table rows'
     : mode === 'interpolate'

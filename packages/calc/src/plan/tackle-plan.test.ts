@@ -63,7 +63,7 @@ describe('tacklePlan', () => {
     expect(heavy.anchor?.meetsSuggested).toBe(true);
   });
 
-  // Gerr (seen): a shackle should be at least as strong as the chain.
+  // Boat Mechanical Systems Handbook (seen): a shackle should be at least as strong as the chain.
   it('warns when a shackle is weaker than the chain', () => {
     const r = tacklePlan(
       buildPlan({

@@ -145,7 +145,7 @@ function weakestLinkOf(
     for (const c of connectors) {
       if (c.kind === 'shackle' && c.wllN < chain.wllN) {
         warnings.push(
-          `${c.label}: its WLL is below the chain’s; a shackle should be at least as strong as the chain (Gerr).`,
+          `${c.label}: its WLL is below the chain’s; a shackle should be at least as strong as the chain (Boat Mechanical Systems Handbook).`,
         );
       }
     }
@@ -199,10 +199,13 @@ function geometryOf(
     return { scopeRatio: ratio, scopeRung: rung, swingRadius: null, catenary: null };
   }
   if (ratio < 3)
-    warnings.push('Scope is below 3:1, the bare minimum even in light weather (Gerr).');
+    warnings.push(
+      'Scope is below 3:1, the bare minimum even in light weather (Boat Mechanical Systems Handbook).',
+    );
   else if (ratio < 5 && plan.windKn >= 30)
-    warnings.push('Scope is below 5:1 for a strong wind (Gerr).');
-  else if (ratio < 7 && plan.windKn >= 42) warnings.push('Scope is below 7:1 for a storm (Gerr).');
+    warnings.push('Scope is below 5:1 for a strong wind (Boat Mechanical Systems Handbook).');
+  else if (ratio < 7 && plan.windKn >= 42)
+    warnings.push('Scope is below 7:1 for a storm (Boat Mechanical Systems Handbook).');
   const swing =
     rodeLengthM >= lowWaterM
       ? swingRadius({

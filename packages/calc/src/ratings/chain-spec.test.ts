@@ -55,7 +55,7 @@ const cases = CFR_CHAIN.flatMap((row) =>
 const present = cases.filter((c) => c.wllLb !== undefined);
 const absent = cases.filter((c) => c.wllLb === undefined);
 
-// Breaking ÷ WLL: G30 4, G43 3 (Gerr, seen); G70, G80, G100 4 (NACM, from memory).
+// Breaking ÷ WLL: G30 4, G43 3 (Boat Mechanical Systems Handbook, seen); G70, G80, G100 4 (NACM, from memory).
 const BREAK_FACTOR: Record<ChainGrade, number> = { G30: 4, G43: 3, G70: 4, G80: 4, G100: 4 };
 
 describe('chainSpec', () => {

@@ -51,7 +51,7 @@ const METRIC_MAX_MM = 16;
 
 /**
  * Ratings of welded steel chain by grade and trade size: WLL from the 49 CFR 393.108 table
- * (seen), minimum breaking load = WLL × grade factor (G30 4, G43 3 per Gerr, seen; G70–G100
+ * (seen), minimum breaking load = WLL × grade factor (G30 4, G43 3 per the Boat Mechanical Systems Handbook, seen; G70–G100
  * 4 per NACM, from memory), mass per metre approximate. Sizes not in the table throw.
  */
 export function chainSpec(input: ChainSpecInput): ChainSpecResult {

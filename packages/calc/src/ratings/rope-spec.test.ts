@@ -69,7 +69,7 @@ describe('ropeSpec', () => {
     expect(lbf(mid.minBreakN)).toBeLessThan(8910);
   });
 
-  // UFC 4-159-03: wet nylon loses about 15 %; Gerr says about half — the caller may choose.
+  // UFC 4-159-03: wet nylon loses about 15 %; the Boat Mechanical Systems Handbook says about half — the caller may choose.
   it('applies the wet loss to nylon only', () => {
     const base = { construction: 'three-strand', diameterMm: inToMm(0.5) } as const;
     const dry = ropeSpec({ ...base, material: 'nylon' });

@@ -30,7 +30,7 @@ export interface RopeSpecInput {
   diameterMm: number;
   /** Wet line: nylon loses strength when wet; polyester about none. */
   wet?: boolean;
-  /** Strength lost by wet nylon, 0–0.6; default 0.15 (UFC 4-159-03; Gerr says about half). */
+  /** Strength lost by wet nylon, 0–0.6; default 0.15 (UFC 4-159-03; the Boat Mechanical Systems Handbook says about half). */
   wetLossFraction?: number;
   /** When given, wllN = minBreakN ÷ designFactor instead of the tie-down rating. */
   designFactor?: number;
@@ -98,7 +98,7 @@ export function ropeStrength(
  * Ratings of nylon or polyester rope by diameter. Nylon three-strand breaking strength from
  * general engineering tables (seen), interpolated as strength per d²; double braid = that ×
  * the ratio of the CFR double-braid to three-strand tie-down limits (derived); polyester =
- * 0.9 × nylon (from memory). Wet nylon loses `wetLossFraction` (default 15 %, UFC; Gerr says
+ * 0.9 × nylon (from memory). Wet nylon loses `wetLossFraction` (default 15 %, UFC; the Boat Mechanical Systems Handbook says
  * about half). wllN is the 49 CFR 393.108 tie-down limit (seen, a cargo rating with a design
  * factor of about 9–12) unless `designFactor` is given.
  */
@@ -156,7 +156,7 @@ function describe(
     material === 'polyester' ? ', taken as 0.9 × nylon for polyester (from memory)' : '';
   const water =
     wet && material === 'nylon'
-      ? `, less ${Math.round(wetLoss * 100)} % for wet nylon (UFC 4-159-03 says about 15 %, Gerr about half)`
+      ? `, less ${Math.round(wetLoss * 100)} % for wet nylon (UFC 4-159-03 says about 15 %, the Boat Mechanical Systems Handbook about half)`
       : '';
   const wll =
     designFactor === undefined

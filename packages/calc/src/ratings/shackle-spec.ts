@@ -21,7 +21,7 @@ export interface ShackleSpecResult {
 }
 
 const SHACKLE_CAUTIONS = cautionList(
-  'Use a rated, forged shackle whose WLL is at least the chain’s (Gerr): one size up from proof-coil chain, two from high-test.',
+  'Use a rated, forged shackle whose WLL is at least the chain’s (Boat Mechanical Systems Handbook): one size up from proof-coil chain, two from high-test.',
   'Mouse (seize) the pin so it cannot work loose.',
 );
 

@@ -11,16 +11,21 @@ export const HULL_TYPE_LABELS: Readonly<Record<HullType, string>> = {
 
 /**
  * ABYC H-40 (rev. 7/03) Table 1, horizontal design loads in lb (from memory, partly
- * corroborated by Gerr's worked example). Columns: LOA ft, beam sail ft, beam power ft,
+ * corroborated by the Boat Mechanical Systems Handbook worked example). Columns: LOA ft, beam sail ft, beam power ft,
  * load at 15 kn, 30 kn and 42 kn.
  */
 export const ABYC_LOA_FT: readonly number[] = [10, 15, 20, 25, 30, 35, 40, 50, 60];
+/** ABYC H-40 Table 1 beam column for sailboats, ft, row by row (from memory). */
 export const ABYC_BEAM_SAIL_FT: readonly number[] = [4, 5, 7, 8, 9, 10, 11, 13, 15];
+/** ABYC H-40 Table 1 beam column for power boats, ft (from memory). */
 export const ABYC_BEAM_POWER_FT: readonly number[] = [5, 6, 8, 9, 11, 13, 14, 16, 18];
+/** ABYC H-40 Table 1 loads at 15 kn (lunch hook), lb (from memory). */
 export const ABYC_LOAD_15KN_LB: readonly number[] = [40, 60, 90, 125, 175, 225, 300, 400, 500];
+/** ABYC H-40 Table 1 loads at 30 kn (working), lb (from memory). */
 export const ABYC_LOAD_30KN_LB: readonly number[] = [
   160, 250, 360, 490, 700, 900, 1200, 1600, 2000,
 ];
+/** ABYC H-40 Table 1 loads at 42 kn (storm), lb (from memory). */
 export const ABYC_LOAD_42KN_LB: readonly number[] = [
   320, 500, 720, 980, 1400, 1800, 2400, 3200, 4000,
 ];

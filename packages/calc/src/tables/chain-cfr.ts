@@ -78,7 +78,7 @@ export const CHAIN_ROWS: readonly ChainRow[] = [
 ];
 
 /**
- * Minimum breaking load ÷ WLL per grade: G30 = 4 and G43 = 3 (Gerr, seen); G70, G80,
+ * Minimum breaking load ÷ WLL per grade: G30 = 4 and G43 = 3 (Boat Mechanical Systems Handbook, seen); G70, G80,
  * G100 = 4 (NACM, from memory).
  */
 export const CHAIN_BREAK_FACTOR: Readonly<Record<ChainGrade, number>> = {

@@ -57,10 +57,6 @@ export const NYLON_DOUBLE_BRAID_WLL: readonly RopePoint[] = [
   { diameterIn: 1, lbf: 3250 },
 ];
 
-/** Smallest and largest diameters the rope tables cover, inches. */
-export const ROPE_TABLE_MIN_IN = 3 / 8;
-export const ROPE_TABLE_MAX_IN = 1;
-
 /**
  * Polyester dry strength as a fraction of nylon's at the same diameter and construction
  * (from memory, approximate; some tables list them equal, so this errs low).
@@ -69,7 +65,7 @@ export const POLYESTER_STRENGTH_FRACTION = 0.9;
 
 /**
  * Strength lost by wet nylon, as a fraction: about 15 % per UFC 4-159-03, about half per
- * Gerr; the sources disagree, so callers may override it. Polyester loses about none (from
+ * the Boat Mechanical Systems Handbook; the sources disagree, so callers may override it. Polyester loses about none (from
  * memory).
  */
 export const NYLON_WET_LOSS_DEFAULT = 0.15;
