@@ -37,7 +37,7 @@ export async function screenshot(page: Page, name: string) {
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
   await page.goto(`${baseUrl()}/sign-in`);
   await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByLabel(/^Password\b/).fill(password);
   await page.getByRole('button', { name: /sign in/i }).click();
   await page.waitForFunction(() => !location.pathname.startsWith('/sign-in'), undefined, {
     timeout: 15000,

@@ -87,6 +87,11 @@ export interface UserDto {
   memberSince: string; // ISO date
 }
 
+/** POST /api/auth/signup answers 201 with the address only: it never says whether the address already had an account. */
+export interface SignupResultDto {
+  email: string;
+}
+
 /** GET /api/auth/me: the signed-in user (or null) and the CSRF token to send as `X-CSRF-Token`. */
 export interface SessionDto {
   user: UserDto | null;

@@ -1,6 +1,9 @@
 // zod/mini keeps the entry chunk small; the full zod loads only with the screens that need forms.
 import * as z from 'zod/mini';
 
+// No JIT: zod would otherwise probe `new Function`, which our Content-Security-Policy (script-src 'self') forbids.
+z.config({ jitless: true });
+
 const envSchema = z.object({
   VITE_API_BASE_URL: z._default(
     z

@@ -37,7 +37,7 @@ export function SignUpForm() {
     return (
       <Alert tone="success" title="Check your inbox">
         <p>
-          We sent a confirmation link to {signup.data.user.email}. Open it to finish joining, then{' '}
+          We sent a confirmation link to {signup.data.email}. Open it to finish joining, then{' '}
           <Link to={paths.signIn.href()}>sign in</Link>.
         </p>
       </Alert>

@@ -1,0 +1,106 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Role } from '@app/shared';
+import { navFor } from '../../apps/web/src/config/nav';
+import { baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser.close();
+});
+
+/** The demo accounts (apps/api/seeders/demo.ts) and their roles. */
+const ROLES: Array<{ who: string; email: string | null; roles: Role[] }> = [
+  { who: 'visitor', email: null, roles: [] },
+  { who: 'member', email: 'maren@larkspit.example', roles: ['member'] },
+  { who: 'moderator', email: 'moderator@larkspit.example', roles: ['member', 'moderator'] },
+  { who: 'treasurer', email: 'treasurer@larkspit.example', roles: ['member', 'treasurer'] },
+  { who: 'admin', email: 'admin@larkspit.example', roles: ['member', 'admin'] },
+];
+
+describe('role-aware navigation in Chromium', () => {
+  it.each(ROLES)('$who sees exactly the navigation for their roles', async ({ who, email, roles }) => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    if (email) await signIn(page, email);
+    await page.goto(`${baseUrl()}/`);
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    const expected = navFor(email ? { roles } : null).map((i) => i.label);
+    await expect.poll(async () => (await nav.locator('li > a, li > button').allInnerTexts()).length, { timeout: 10000 }).toBe(expected.length);
+    const shown = (await nav.locator('li > a, li > button').allInnerTexts()).map((t) => t.trim());
+    // Each item starts with its label (an item may add a count after it).
+    expect(shown.length).toBe(expected.length);
+    expected.forEach((label, i) => expect(shown[i]?.startsWith(label), `${who}: "${shown[i]}" vs "${label}"`).toBe(true));
+    if (!roles.includes('admin')) expect(shown).not.toContain('Admin');
+    await page.close();
+  });
+
+  it('an admin grants and revokes a role on the admin page', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signIn(page, 'admin@larkspit.example');
+    await page.goto(`${baseUrl()}/admin/users`);
+    const box = page.getByRole('checkbox', { name: /^Moderator role for Bram Cleatson$/i });
+    await expect.poll(() => box.count(), { timeout: 10000 }).toBe(1);
+    await box.click();
+    await expect.poll(() => box.isChecked(), { timeout: 10000 }).toBe(true);
+    await expect.poll(() => page.getByRole('button', { name: 'Undo' }).count(), { timeout: 10000 }).toBe(1);
+    await waitForMail('bram@larkspit.example', 'roles changed');
+    const res = await page.request.get(`${baseUrl()}/api/admin/users?q=bram`);
+    const users = ((await res.json()) as { data: Array<{ email: string; roles: string[] }> }).data;
+    expect(users.find((u) => u.email === 'bram@larkspit.example')?.roles).toContain('moderator');
+
+    // Revoking asks first.
+    await box.click();
+    const dialog = page.getByRole('dialog');
+    await expect.poll(() => dialog.isVisible(), { timeout: 10000 }).toBe(true);
+    await dialog.getByRole('button', { name: /revoke|remove/i }).click();
+    await expect.poll(() => box.isChecked(), { timeout: 10000 }).toBe(false);
+    await page.close();
+  });
+});
+
+describe('home page', () => {
+  it('renders for a visitor at 1280 px and at a 390 px phone width without sideways scrolling', async () => {
+    for (const [name, width] of [
+      ['home-1280', 1280],
+      ['home-390', 390],
+    ] as const) {
+      const page = await browser.newPage({ viewport: { width, height: 900 } });
+      await page.goto(`${baseUrl()}/`);
+      await expect.poll(() => page.getByRole('heading', { level: 1 }).count()).toBeGreaterThan(0);
+      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+      expect(overflow).toBeLessThanOrEqual(0);
+      await expect.poll(() => page.getByText('Larkspit Sound Cruising Club').count()).toBeGreaterThan(0);
+      await screenshot(page, name);
+      await page.close();
+    }
+  });
+});
+
+describe('joining the club', () => {
+  it('signs up, confirms the address from the fake inbox, signs in and out', async () => {
+    const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
+    const email = `newcomer-${Date.now()}@larkspit.example`;
+    await page.goto(`${baseUrl()}/join`);
+    await page.getByLabel(/^Your name/).fill('Ada Newcomer');
+    await page.getByLabel(/^E-mail/).fill(email);
+    await page.getByLabel(/^Password/).fill('a-long-enough-secret');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await expect.poll(() => page.getByText('Check your inbox').count(), { timeout: 10000 }).toBeGreaterThan(0);
+
+    const mail = await waitForMail(email, 'Confirm your e-mail');
+    const link = /https?:\/\/\S+verify-email\?token=\S+/.exec(mail.text)?.[0];
+    expect(link).toBeDefined();
+    await page.goto(link ?? '');
+    await expect.poll(() => page.getByText(/confirmed|verified/i).count(), { timeout: 10000 }).toBeGreaterThan(0);
+
+    await signIn(page, email, 'a-long-enough-secret');
+    await page.getByRole('button', { name: 'Menu' }).click();
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.getByRole('button', { name: 'Menu' }).click();
+    await expect.poll(() => page.getByRole('link', { name: 'Sign in' }).count(), { timeout: 10000 }).toBeGreaterThan(0);
+    await page.close();
+  });
+});
