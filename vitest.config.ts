@@ -37,6 +37,16 @@ export default defineConfig({
       },
       {
         test: {
+          name: 'drills',
+          root: 'tests',
+          include: ['drills/**/*.test.ts'],
+          fileParallelism: false,
+          testTimeout: 90000,
+          hookTimeout: 120000,
+        },
+      },
+      {
+        test: {
           name: 'e2e',
           root: 'tests',
           include: ['e2e/**/*.test.ts'],

@@ -70,6 +70,7 @@ try {
     check('typecheck (tsc)', 'node', ['scripts/typecheck.mjs']);
   }
   if (only('unit')) vitest('unit+api', ['calc', 'shared', 'fakes', 'web', 'api']);
+  if (only('drills')) vitest('fault drills', ['drills']);
   if (only('e2e')) {
     ensureDebianPackages(
       '/usr/bin/chromium',
@@ -85,7 +86,7 @@ try {
   tally.failed += 1;
   lines.push(`FAIL set-up: ${err instanceof Error ? err.message : String(err)}`);
 } finally {
-  await stopServer(cfg, { quiet: true }).catch(() => undefined);
+  if (!process.env.KEEP_DB) await stopServer(cfg, { quiet: true }).catch(() => undefined);
 }
 
 console.log('\n── Rodewise test summary ──');

@@ -12,7 +12,7 @@ export interface DbConfig {
   password: string;
   external: boolean;
 }
-export function profileConfig(profile?: string): DbConfig;
+export function profileConfig(profile?: string, overrides?: Partial<DbConfig>): DbConfig;
 export function rootSql(cfg: DbConfig, sql: string): string;
 export function isRunning(cfg: DbConfig): boolean;
 export function startServer(cfg: DbConfig, opts?: { quiet?: boolean }): Promise<DbConfig>;

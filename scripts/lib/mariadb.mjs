@@ -8,11 +8,13 @@ import { ensureDebianPackages } from './apt.mjs';
 export const ROOT = resolve(new URL('../..', import.meta.url).pathname);
 
 /** Instance settings per profile. `dev` serves `npm start`; `test` is a separate server so the two never collide. */
-export function profileConfig(profile = 'dev') {
-  const isTest = profile === 'test';
+export function profileConfig(profile = 'dev', overrides = {}) {
+  const isTest = profile !== 'dev';
   const dataDir = resolve(
     ROOT,
-    process.env.DB_DATA_DIR ?? (isTest ? '.data/mariadb-test' : '.data/mariadb'),
+    overrides.dataDir ??
+      process.env.DB_DATA_DIR ??
+      (isTest ? '.data/mariadb-test' : '.data/mariadb'),
   );
   return {
     profile,
@@ -26,6 +28,8 @@ export function profileConfig(profile = 'dev') {
     user: process.env.DB_USER ?? 'rodewise',
     password: process.env.DB_PASSWORD ?? 'rodewise-local-only',
     external: process.env.DB_EXTERNAL === '1',
+    ...overrides,
+    dataDir,
   };
 }
 
