@@ -95,24 +95,31 @@ export async function drainOutbox(
         html: row.htmlBody ?? undefined,
         messageId: `<outbox-${row.id}@rodewise.local>`,
       });
-      await row.update({
-        status: 'sent',
-        sentAt: new Date(),
-        lockedUntil: null,
-        attempts: row.attempts + 1,
-        lastError: null,
-      });
+      // Static updates by id: the instance still holds the pre-claim status, so instance.update() would skip it.
+      await OutboxEmail.update(
+        {
+          status: 'sent',
+          sentAt: new Date(),
+          lockedUntil: null,
+          attempts: row.attempts + 1,
+          lastError: null,
+        },
+        { where: { id: row.id } },
+      );
       sent += 1;
     } catch (err) {
       const attempts = row.attempts + 1;
       const message = err instanceof Error ? err.message : String(err);
-      await row.update({
-        status: attempts >= 50 ? 'failed' : 'pending',
-        attempts,
-        lockedUntil: null,
-        lastError: message.slice(0, 500),
-        nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
-      });
+      await OutboxEmail.update(
+        {
+          status: attempts >= 50 ? 'failed' : 'pending',
+          attempts,
+          lockedUntil: null,
+          lastError: message.slice(0, 500),
+          nextAttemptAt: new Date(Date.now() + backoffMs(attempts)),
+        },
+        { where: { id: row.id } },
+      );
       logger?.warn({ outboxId: row.id, attempts, err: message }, 'mail not sent; will retry');
       failed += 1;
     }
