@@ -17,6 +17,8 @@ const SIGNED_IN: Row = {
   admin: 'ok',
 };
 const ADMIN: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 403, admin: 'ok' };
+const MODERATOR: Row = { visitor: 401, member: 403, moderator: 'ok', treasurer: 403, admin: 403 };
+const TREASURER: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 'ok', admin: 403 };
 
 /**
  * Every route the app registers, with who may reach it. A route missing from this table fails the test, so a new
@@ -49,7 +51,82 @@ const MATRIX: Record<string, Row> = {
   'GET /api/tackle-plans/:planId': SIGNED_IN,
   'PUT /api/tackle-plans/:planId': SIGNED_IN,
   'DELETE /api/tackle-plans/:planId': SIGNED_IN,
+  'GET /api/topics': PUBLIC,
+  'POST /api/topics': ADMIN,
+  'PATCH /api/topics/:topicId': ADMIN,
+  'DELETE /api/topics/:topicId': ADMIN,
+  'GET /api/posts': PUBLIC,
+  'GET /api/posts/mine': SIGNED_IN,
+  'POST /api/posts': SIGNED_IN,
+  'GET /api/posts/:postId': PUBLIC,
+  'PATCH /api/posts/:postId': SIGNED_IN,
+  'POST /api/posts/:postId/submit': SIGNED_IN,
+  'DELETE /api/posts/:postId': SIGNED_IN,
+  'POST /api/posts/:postId/comments': SIGNED_IN,
+  'PUT /api/posts/:postId/accepted-answer': SIGNED_IN,
+  'PUT /api/posts/:postId/vote': SIGNED_IN,
+  'DELETE /api/posts/:postId/vote': SIGNED_IN,
+  'GET /api/search/posts': PUBLIC,
+  'POST /api/reports': SIGNED_IN,
+  'GET /api/moderation/queue': MODERATOR,
+  'GET /api/moderation/count': MODERATOR,
+  'POST /api/moderation/posts/:postId/decision': MODERATOR,
+  'PATCH /api/moderation/posts/:postId/flags': MODERATOR,
+  'POST /api/moderation/comments/:commentId/decision': MODERATOR,
+  'POST /api/moderation/reports/:reportId/resolve': MODERATOR,
+  'GET /api/moderation/log': MODERATOR,
+  'GET /api/notifications': SIGNED_IN,
+  'POST /api/notifications/read': SIGNED_IN,
   'POST /api/uploads/images': SIGNED_IN,
+  'GET /api/listings': PUBLIC,
+  'GET /api/listings/mine': SIGNED_IN,
+  'GET /api/listings/reports': MODERATOR,
+  'POST /api/listings/reports/:reportId/dismiss': MODERATOR,
+  'POST /api/listings': SIGNED_IN,
+  'GET /api/listings/:listingId': PUBLIC,
+  'PUT /api/listings/:listingId': SIGNED_IN,
+  'POST /api/listings/:listingId/publish': SIGNED_IN,
+  'POST /api/listings/:listingId/relist': SIGNED_IN,
+  'POST /api/listings/:listingId/withdraw': SIGNED_IN,
+  'POST /api/listings/:listingId/sold': SIGNED_IN,
+  'GET /api/listings/:listingId/threads': SIGNED_IN,
+  'POST /api/listings/:listingId/photos': SIGNED_IN,
+  'PUT /api/listings/:listingId/photos/order': SIGNED_IN,
+  'DELETE /api/listings/:listingId/photos/:photoId': SIGNED_IN,
+  'POST /api/listings/:listingId/reports': SIGNED_IN,
+  'POST /api/listings/:listingId/hide': MODERATOR,
+  'POST /api/listings/:listingId/unhide': MODERATOR,
+  'GET /api/threads': SIGNED_IN,
+  'GET /api/threads/unread': SIGNED_IN,
+  'POST /api/threads': SIGNED_IN,
+  'GET /api/threads/:threadId': SIGNED_IN,
+  'POST /api/threads/:threadId/messages': SIGNED_IN,
+  'GET /api/saved-searches': SIGNED_IN,
+  'POST /api/saved-searches': SIGNED_IN,
+  'DELETE /api/saved-searches/:savedSearchId': SIGNED_IN,
+  'POST /api/payments/webhook': PUBLIC,
+  'GET /api/dues/plans': SIGNED_IN,
+  'GET /api/dues/me': SIGNED_IN,
+  'POST /api/dues/checkout': SIGNED_IN,
+  'GET /api/dues/checkout/:sessionId': SIGNED_IN,
+  'GET /api/treasury/plans': TREASURER,
+  'POST /api/treasury/plans': TREASURER,
+  'PATCH /api/treasury/plans/:planId': TREASURER,
+  'GET /api/treasury/roster': TREASURER,
+  'GET /api/treasury/payments': TREASURER,
+  'POST /api/treasury/payments': TREASURER,
+  'POST /api/treasury/payments/:paymentId/refunds': TREASURER,
+  'POST /api/treasury/payments/:paymentId/resolve': TREASURER,
+  'POST /api/treasury/reminders/preview': TREASURER,
+  'POST /api/treasury/reminders': TREASURER,
+  'GET /api/treasury/ledger.csv': TREASURER,
+  'GET /api/treasury/summary': TREASURER,
+};
+
+/** State-changing routes that take no CSRF token, and why. */
+const CSRF_EXEMPT: Record<string, string> = {
+  'POST /api/csp-report': 'browsers send violation reports without our headers; it only logs',
+  'POST /api/payments/webhook': 'called by the payment provider, authenticated by its signature',
 };
 
 const built = createTestApp({ LOGIN_RATE_LIMIT: '10000' });
@@ -102,4 +179,24 @@ describe('authorization matrix', () => {
     else expect(res.status).toBe(expected);
     expect(res.status).toBeLessThan(500);
   });
+});
+
+describe('CSRF protection', () => {
+  const writes = routes.filter((r) => r.method !== 'GET' && r.method !== 'HEAD');
+  it.each(writes)(
+    '$method $path rejects a signed-in request without the token',
+    async ({ method, path }) => {
+      const key = `${method} ${path}`;
+      const c = await client(built.app);
+      expect((await c.signIn(emails.admin ?? '')).status).toBe(200);
+      const url = path.replace(':userId', String(targetId)).replace(/:(\w+)/g, '1');
+      const verb = method.toLowerCase() as 'post' | 'put' | 'patch' | 'delete';
+      const res = await c.agent[verb](url).send({});
+      if (key in CSRF_EXEMPT) expect(res.status).not.toBe(403);
+      else {
+        expect(res.status).toBe(403);
+        expect(res.body.error.code).toBe('CSRF_INVALID');
+      }
+    },
+  );
 });
