@@ -35,6 +35,22 @@ export const SCREEN_ROUTES: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/admin-users')).AdminUsersRoute }),
   },
   {
+    path: paths.calculators.path,
+    lazy: async () => ({ Component: (await import('./routes/calculators')).CalculatorsRoute }),
+  },
+  {
+    path: paths.boats.path,
+    lazy: async () => ({ Component: (await import('./routes/boats')).BoatsRoute }),
+  },
+  {
+    path: paths.boat.path,
+    lazy: async () => ({ Component: (await import('./routes/boat')).BoatRoute }),
+  },
+  {
+    path: paths.plan.path,
+    lazy: async () => ({ Component: (await import('./routes/plan')).PlanRoute }),
+  },
+  {
     path: '*',
     lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
   },

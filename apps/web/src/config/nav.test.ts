@@ -7,21 +7,37 @@ const asUser = (...roles: Role[]) => ({ roles });
 
 describe('navFor', () => {
   it.each([
-    ['a visitor', null, ['Home', 'Sign in', 'Join']],
-    ['a signed-in person with no roles', asUser(), ['Home', 'Account', 'Sign out']],
-    ['a member', asUser('member'), ['Home', 'Account', 'Sign out']],
-    ['a moderator', asUser('moderator'), ['Home', 'Account', 'Sign out']],
-    ['a treasurer', asUser('treasurer'), ['Home', 'Account', 'Sign out']],
-    ['an admin', asUser('admin'), ['Home', 'Admin', 'Account', 'Sign out']],
+    ['a visitor', null, ['Home', 'Calculators', 'Sign in', 'Join']],
+    [
+      'a signed-in person with no roles',
+      asUser(),
+      ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
+    ],
+    ['a member', asUser('member'), ['Home', 'Calculators', 'My boats', 'Account', 'Sign out']],
+    [
+      'a moderator',
+      asUser('moderator'),
+      ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
+    ],
+    [
+      'a treasurer',
+      asUser('treasurer'),
+      ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
+    ],
+    [
+      'an admin',
+      asUser('admin'),
+      ['Home', 'Calculators', 'My boats', 'Admin', 'Account', 'Sign out'],
+    ],
     [
       'a member who is also treasurer and admin',
       asUser('member', 'treasurer', 'admin'),
-      ['Home', 'Admin', 'Account', 'Sign out'],
+      ['Home', 'Calculators', 'My boats', 'Admin', 'Account', 'Sign out'],
     ],
     [
       'a moderator and treasurer',
       asUser('moderator', 'treasurer'),
-      ['Home', 'Account', 'Sign out'],
+      ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
     ],
   ])('shows %s the right items', (_who, user, expected) => {
     expect(labels(navFor(user))).toEqual(expected);

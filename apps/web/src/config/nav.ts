@@ -38,6 +38,21 @@ export type NavItem = NavLinkItem | NavActionItem;
 export const NAV_ITEMS: readonly NavItem[] = [
   { id: 'home', kind: 'link', label: 'Home', to: paths.home.href(), end: true, section: 'primary' },
   {
+    id: 'calculators',
+    kind: 'link',
+    label: 'Calculators',
+    to: paths.calculators.href(),
+    section: 'primary',
+  },
+  {
+    id: 'boats',
+    kind: 'link',
+    label: 'My boats',
+    to: paths.boats.href(),
+    section: 'primary',
+    signedIn: true,
+  },
+  {
     id: 'admin-users',
     kind: 'link',
     label: 'Admin',

@@ -10,6 +10,10 @@ export const paths = {
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   account: { path: '/account', href: () => '/account' },
   adminUsers: { path: '/admin/users', href: () => '/admin/users' },
+  calculators: { path: '/calculators', href: () => '/calculators' },
+  boats: { path: '/boats', href: () => '/boats' },
+  boat: { path: '/boats/:boatId', href: (boatId: number | string) => `/boats/${boatId}` },
+  plan: { path: '/plans/:planId', href: (planId: number | string) => `/plans/${planId}` },
 } as const;
 
 /**

@@ -1,0 +1,150 @@
+import { useState } from 'react';
+import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Alert } from '../../components/ui/alert';
+import { Button } from '../../components/ui/button';
+import { ConfirmDialog } from '../../components/ui/confirm-dialog';
+import { Page } from '../../components/ui/page';
+import { Spinner } from '../../components/ui/spinner';
+import { paths } from '../../config/paths';
+import { errorMessage } from '../../lib/form-errors';
+import { RequireAuth } from '../../features/auth/components/require-auth';
+import { useDeleteBoat } from '../../features/boats/api/delete-boat';
+import { useBoat } from '../../features/boats/api/get-boat';
+import { useUpdateBoat } from '../../features/boats/api/update-boat';
+import { BoatForm } from '../../features/boats/components/boat-form';
+import {
+  BoatRecommendation,
+  type PlanDraft,
+} from '../../features/boats/components/boat-recommendation';
+import { useClub } from '../../features/club/api/get-club';
+import { useCreatePlan } from '../../features/plans/api/create-plan';
+import { usePlans } from '../../features/plans/api/get-plans';
+import { Quantity } from '../../features/units/components/quantity';
+import { UnitToggle } from '../../features/units/components/unit-toggle';
+import { TackleUnits } from './calculators-units';
+
+function PlanList({ boatId }: { boatId: number }) {
+  const plans = usePlans(boatId);
+  if (plans.isPending) return <Spinner label="Loading plans…" />;
+  if (plans.isError) return <Alert tone="error">{errorMessage(plans.error)}</Alert>;
+  if (plans.data.length === 0) return <p className="text-sm">No saved plans yet.</p>;
+  return (
+    <ul className="flex flex-col gap-1">
+      {plans.data.map((plan) => (
+        <li key={plan.id}>
+          <Link to={paths.plan.href(plan.id)}>{plan.name}</Link>{' '}
+          <span className="text-sm text-ink-600">
+            (<Quantity value={plan.windKn} kind="speed" />)
+          </span>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+function BoatScreen({ boatId }: { boatId: number }) {
+  const boat = useBoat(boatId);
+  const club = useClub();
+  const update = useUpdateBoat(boatId);
+  const remove = useDeleteBoat();
+  const createPlan = useCreatePlan();
+  const navigate = useNavigate();
+  const [savingWind, setSavingWind] = useState<number | undefined>(undefined);
+  const [confirmDelete, setConfirmDelete] = useState(false);
+
+  if (boat.isPending) return <Spinner label="Loading the boat…" />;
+  if (boat.isError) {
+    return (
+      <Alert tone="error" title="Couldn't load this boat">
+        <p>{errorMessage(boat.error)}</p>
+      </Alert>
+    );
+  }
+  const handleSavePlan = (draft: PlanDraft) => {
+    setSavingWind(draft.windKn);
+    createPlan
+      .mutateAsync({ boatId, ...draft })
+      .then((saved) => navigate(paths.plan.href(saved.plan.id)))
+      .catch(() => undefined)
+      .finally(() => setSavingWind(undefined));
+  };
+  return (
+    <Page title={boat.data.name} intro={<p>Suggested ground tackle for 30 kn and for 60 kn.</p>}>
+      <UnitToggle />
+      {createPlan.isError && (
+        <Alert tone="error" title="Couldn't save the plan">
+          <p>{errorMessage(createPlan.error)}</p>
+        </Alert>
+      )}
+      <section aria-labelledby="rec-heading" className="flex flex-col gap-3">
+        <h2 id="rec-heading" className="text-xl">
+          Recommendation
+        </h2>
+        <BoatRecommendation
+          boat={boat.data}
+          onSavePlan={handleSavePlan}
+          savingWindKn={savingWind}
+        />
+      </section>
+      <section aria-labelledby="plans-heading" className="flex flex-col gap-2">
+        <h2 id="plans-heading" className="text-xl">
+          Saved plans
+        </h2>
+        <PlanList boatId={boatId} />
+      </section>
+      <details className="rounded-lg border border-sand-300 bg-sand-50 p-4">
+        <summary className="cursor-pointer font-bold">Edit the boat profile</summary>
+        <div className="mt-3 max-w-2xl">
+          <BoatForm
+            key={boat.data.updatedAt}
+            boat={boat.data}
+            harbors={club.data?.harbors ?? []}
+            submitLabel="Save profile"
+            isPending={update.isPending}
+            onSubmit={(input) => update.mutateAsync(input)}
+          />
+        </div>
+        <Button variant="danger" className="mt-4" onClick={() => setConfirmDelete(true)}>
+          Delete this boat
+        </Button>
+      </details>
+      <ConfirmDialog
+        isOpen={confirmDelete}
+        title={`Delete ${boat.data.name}?`}
+        confirmLabel="Delete boat"
+        isDestructive
+        isPending={remove.isPending}
+        onCancel={() => setConfirmDelete(false)}
+        onConfirm={() =>
+          remove.mutate(boatId, { onSuccess: () => void navigate(paths.boats.href()) })
+        }
+      >
+        <p>Its saved plans go with it. This cannot be undone.</p>
+      </ConfirmDialog>
+    </Page>
+  );
+}
+
+function BoatFromParams() {
+  const { boatId } = useParams();
+  const id = Number(boatId);
+  if (!Number.isInteger(id) || id <= 0) {
+    return (
+      <Alert tone="error" title="No such boat">
+        Check the link and try again.
+      </Alert>
+    );
+  }
+  return <BoatScreen boatId={id} />;
+}
+
+/** One boat: its 30 kn and 60 kn recommendation, saved plans and profile. */
+export function BoatRoute() {
+  return (
+    <RequireAuth>
+      <TackleUnits>
+        <BoatFromParams />
+      </TackleUnits>
+    </RequireAuth>
+  );
+}

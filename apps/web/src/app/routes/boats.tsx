@@ -1,0 +1,88 @@
+import { Link, useNavigate } from 'react-router-dom';
+import { Alert } from '../../components/ui/alert';
+import { EmptyState } from '../../components/ui/empty-state';
+import { Page } from '../../components/ui/page';
+import { Spinner } from '../../components/ui/spinner';
+import { paths } from '../../config/paths';
+import { errorMessage } from '../../lib/form-errors';
+import { RequireAuth } from '../../features/auth/components/require-auth';
+import { useCreateBoat } from '../../features/boats/api/create-boat';
+import { useBoats } from '../../features/boats/api/get-boats';
+import { BoatForm } from '../../features/boats/components/boat-form';
+import { useClub } from '../../features/club/api/get-club';
+import { Quantity } from '../../features/units/components/quantity';
+import { UnitToggle } from '../../features/units/components/unit-toggle';
+import { TackleUnits } from './calculators-units';
+
+function BoatsScreen() {
+  const boats = useBoats();
+  const club = useClub();
+  const create = useCreateBoat();
+  const navigate = useNavigate();
+  return (
+    <Page
+      title="My boats"
+      intro={<p>Keep a profile of each boat; Rodewise sizes its ground tackle from it.</p>}
+    >
+      <UnitToggle />
+      <section aria-labelledby="boat-list-heading" className="flex flex-col gap-3">
+        <h2 id="boat-list-heading" className="text-xl">
+          Your boats
+        </h2>
+        {boats.isPending && <Spinner label="Loading your boats…" />}
+        {boats.isError && (
+          <Alert tone="error" title="Couldn't load your boats">
+            <p>{errorMessage(boats.error)}</p>
+          </Alert>
+        )}
+        {boats.data?.length === 0 && (
+          <EmptyState title="No boats yet">
+            Add your boat below to see its ground tackle.
+          </EmptyState>
+        )}
+        {boats.data && boats.data.length > 0 && (
+          <ul className="grid gap-3 sm:grid-cols-2">
+            {boats.data.map((boat) => (
+              <li
+                key={boat.id}
+                className="rounded-lg border border-sand-300 bg-sand-50 p-4 shadow-card"
+              >
+                <Link to={paths.boat.href(boat.id)} className="text-lg font-bold">
+                  {boat.name}
+                </Link>
+                <p className="text-sm text-ink-700">
+                  {boat.hull}, LOA <Quantity value={boat.loaM} kind="length" />
+                </p>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+      <section aria-labelledby="new-boat-heading" className="flex max-w-2xl flex-col gap-3">
+        <h2 id="new-boat-heading" className="text-xl">
+          Add a boat
+        </h2>
+        <BoatForm
+          harbors={club.data?.harbors ?? []}
+          submitLabel="Add boat"
+          isPending={create.isPending}
+          onSubmit={async (input) => {
+            const boat = await create.mutateAsync(input);
+            await navigate(paths.boat.href(boat.id));
+          }}
+        />
+      </section>
+    </Page>
+  );
+}
+
+/** A member's boats and the form to add one. */
+export function BoatsRoute() {
+  return (
+    <RequireAuth>
+      <TackleUnits>
+        <BoatsScreen />
+      </TackleUnits>
+    </RequireAuth>
+  );
+}

@@ -1,0 +1,123 @@
+import type { RatedComponent, TacklePlanResult } from '@app/calc';
+import { Link, useParams } from 'react-router-dom';
+import { Alert } from '../../components/ui/alert';
+import { Button } from '../../components/ui/button';
+import { Page } from '../../components/ui/page';
+import { Spinner } from '../../components/ui/spinner';
+import { paths } from '../../config/paths';
+import { errorMessage } from '../../lib/form-errors';
+import { RequireAuth } from '../../features/auth/components/require-auth';
+import { CatenaryDrawing } from '../../features/calculators/components/catenary-drawing';
+import { WeakestLinkTable } from '../../features/calculators/components/weakest-link-table';
+import { usePlan } from '../../features/plans/api/get-plan';
+import { useUpdatePlan } from '../../features/plans/api/update-plan';
+import { ConnectorEditor } from '../../features/plans/components/connector-editor';
+import { PlanCard } from '../../features/plans/components/plan-card';
+import { PrintStyles } from '../../features/plans/components/print-styles';
+import { UnitToggle } from '../../features/units/components/unit-toggle';
+import { TackleUnits } from './calculators-units';
+
+/** The parts `tacklePlan` checked, in the order it passed them to `weakestLink`. */
+function linkParts(result: TacklePlanResult): RatedComponent[] {
+  const parts: RatedComponent[] = [];
+  if (result.chain) parts.push({ label: 'chain', ...result.chain });
+  if (result.rode) parts.push({ label: 'rope rode', ...result.rode });
+  for (const c of result.connectors) parts.push(c);
+  return parts.map(({ label, wllN, minBreakN }) => ({ label, wllN, minBreakN }));
+}
+
+function PlanScreen({ planId }: { planId: number }) {
+  const query = usePlan(planId);
+  const update = useUpdatePlan(planId);
+  if (query.isPending) return <Spinner label="Loading the plan…" />;
+  if (query.isError) {
+    return (
+      <Alert tone="error" title="Couldn't load this plan">
+        <p>{errorMessage(query.error)}</p>
+      </Alert>
+    );
+  }
+  const { plan, boat, result } = query.data;
+  const link = result.weakestLink;
+  return (
+    <Page
+      title={`${plan.name}`}
+      intro={<p className="print:hidden">Tackle plan for {boat.name}.</p>}
+    >
+      <PrintStyles />
+      <div className="flex flex-wrap items-center justify-between gap-3 print:hidden">
+        <UnitToggle />
+        <div className="flex gap-2">
+          <Link to={paths.boat.href(boat.id)} className="inline-flex min-h-11 items-center">
+            Back to {boat.name}
+          </Link>
+          <Button onClick={() => window.print()}>Print card</Button>
+        </div>
+      </div>
+      <PlanCard data={query.data} />
+      <section aria-labelledby="link-heading" className="flex flex-col gap-3 print:hidden">
+        <h2 id="link-heading" className="text-xl">
+          Weakest-link check of your gear
+        </h2>
+        <p className="text-sm text-ink-700">
+          Add every shackle, swivel and splice between anchor and boat; the margins update from the
+          saved plan.
+        </p>
+        {link ? (
+          <WeakestLinkTable
+            parts={linkParts(result)}
+            result={link}
+            caption={`At the design load of the plan`}
+          />
+        ) : (
+          <p className="text-sm">No rated parts yet: add the chain or a fitting.</p>
+        )}
+        <ConnectorEditor
+          connectors={plan.components.connectors}
+          isPending={update.isPending}
+          error={update.isError ? errorMessage(update.error) : undefined}
+          onSave={(connectors) =>
+            update.mutateAsync({ components: { ...plan.components, connectors } })
+          }
+        />
+      </section>
+      {result.catenary && (
+        <section aria-labelledby="shape-heading" className="flex flex-col gap-3 print:hidden">
+          <h2 id="shape-heading" className="text-xl">
+            The rode under the design load
+          </h2>
+          <CatenaryDrawing
+            result={result.catenary}
+            waterLevelM={plan.depthM + plan.tideM}
+            hasRope={(plan.components.rode?.lengthM ?? 0) > 0}
+          />
+          <p className="text-xs text-ink-600">{result.catenary.basis}</p>
+        </section>
+      )}
+    </Page>
+  );
+}
+
+function PlanFromParams() {
+  const { planId } = useParams();
+  const id = Number(planId);
+  if (!Number.isInteger(id) || id <= 0) {
+    return (
+      <Alert tone="error" title="No such plan">
+        Check the link and try again.
+      </Alert>
+    );
+  }
+  return <PlanScreen planId={id} />;
+}
+
+/** A saved tackle plan: the printable card, the weakest-link check and the rode's shape. */
+export function PlanRoute() {
+  return (
+    <RequireAuth>
+      <TackleUnits>
+        <PlanFromParams />
+      </TackleUnits>
+    </RequireAuth>
+  );
+}

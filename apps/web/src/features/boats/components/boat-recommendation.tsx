@@ -1,0 +1,108 @@
+import { ANCHOR_TYPE_LABELS, ANCHOR_TYPES, STANDARD_CAUTIONS, type AnchorType } from '@app/calc';
+import type { BoatDto, PlanComponents, PlanCondition } from '@app/shared';
+import { useState } from 'react';
+import { Alert } from '../../../components/ui/alert';
+import { QuantityField } from '../../units/components/quantity-field';
+import { SelectField } from '../../units/components/select-field';
+import { recommendedComponents, recommendFor } from '../utils/recommend';
+import { RecommendationColumn } from './recommendation-column';
+
+/** What "Save as plan" hands to the screen, which creates the plan. */
+export interface PlanDraft {
+  name: string;
+  condition: PlanCondition;
+  windKn: number;
+  depthM: number;
+  components: PlanComponents;
+}
+
+export interface BoatRecommendationProps {
+  boat: BoatDto;
+  onSavePlan: (draft: PlanDraft) => void;
+  /** The wind whose plan is being saved, if any. */
+  savingWindKn?: number;
+}
+
+const WINDS = [
+  {
+    windKn: 30,
+    title: 'Everyday: 30 kn',
+    condition: 'everyday',
+    scope: 5,
+    name: 'Everyday, 30 kn',
+  },
+  { windKn: 60, title: 'Storm: 60 kn', condition: 'storm', scope: 7, name: 'Storm, 60 kn' },
+] as const;
+
+/** The suggested ground tackle for the boat at 30 kn and at 60 kn, side by side, with cautions. */
+export function BoatRecommendation({ boat, onSavePlan, savingWindKn }: BoatRecommendationProps) {
+  const [anchorType, setAnchorType] = useState<AnchorType>('plow');
+  const [depthM, setDepthM] = useState<number | undefined>(6);
+  const depthError =
+    depthM === undefined
+      ? 'Enter the depth you usually anchor in'
+      : depthM < 0.5 || depthM > 100
+        ? 'Depth must be 0.5–100 m'
+        : undefined;
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="grid gap-3 sm:grid-cols-2">
+        <SelectField
+          label="Anchor type"
+          options={ANCHOR_TYPES.map((t) => ({ value: t, label: ANCHOR_TYPE_LABELS[t] }))}
+          value={anchorType}
+          onChange={(e) => setAnchorType(ANCHOR_TYPES.find((t) => t === e.target.value) ?? 'plow')}
+        />
+        <QuantityField
+          label="Depth for the plan"
+          kind="length"
+          value={depthM}
+          onValueChange={setDepthM}
+          hint="Sets the chain length: 5:1 everyday, 7:1 in a storm"
+          error={depthError}
+        />
+      </div>
+      <div className="grid gap-4 md:grid-cols-2" data-testid="recommendations">
+        {WINDS.map((w) => {
+          const outcome = recommendFor(boat, w.windKn, anchorType);
+          if (!outcome.ok) {
+            return (
+              <Alert key={w.windKn} tone="error" title={`${w.title}: cannot size this boat`}>
+                <p>{outcome.message}</p>
+              </Alert>
+            );
+          }
+          return (
+            <RecommendationColumn
+              key={w.windKn}
+              title={w.title}
+              rec={outcome.value}
+              isSaving={savingWindKn === w.windKn}
+              onSave={() => {
+                if (depthM === undefined || depthError) return;
+                onSavePlan({
+                  name: w.name,
+                  condition: w.condition,
+                  windKn: w.windKn,
+                  depthM,
+                  components: recommendedComponents(outcome.value, boat, depthM, w.scope),
+                });
+              }}
+            />
+          );
+        })}
+      </div>
+      <Alert tone="warning" title="Before you rely on it">
+        <ul className="list-disc pl-5">
+          {STANDARD_CAUTIONS.map((c) => (
+            <li key={c}>{c}</li>
+          ))}
+          <li>
+            Storm preparation also means chafe gear, a second anchor and a safe harbour: ask local,
+            qualified professionals.
+          </li>
+        </ul>
+      </Alert>
+    </div>
+  );
+}

@@ -1,0 +1,86 @@
+import {
+  ANCHOR_TYPES,
+  BOTTOM_TYPES,
+  STANDARD_CAUTIONS,
+  anchorSuggestion,
+  type AnchorType,
+  type BottomType,
+} from '@app/calc';
+import { useState } from 'react';
+import { Quantity } from '../../units/components/quantity';
+import { SelectField } from '../../units/components/select-field';
+import { ANCHOR_OPTIONS, BOTTOM_OPTIONS, pick } from '../utils/options';
+import { runCalc } from '../utils/run-calc';
+import { DEFAULT_BOAT_WIND, type BoatWind } from '../utils/boat-wind';
+import { BoatWindFields } from './boat-wind-fields';
+import { CalcCard } from './calc-card';
+import { NoResult, ResultList } from './result-list';
+
+/** The anchor mass our holding model gives for a boat, a wind, an anchor type and a seabed. */
+export function AnchorCalculator() {
+  const [boat, setBoat] = useState<BoatWind>(DEFAULT_BOAT_WIND);
+  const [anchorType, setAnchorType] = useState<AnchorType>('plow');
+  const [bottom, setBottom] = useState<BottomType | ''>('');
+  const { loaM, beamM, hull, windKn } = boat;
+  const outcome = runCalc(() =>
+    loaM === undefined || windKn === undefined
+      ? null
+      : anchorSuggestion({
+          loaM,
+          hull,
+          windKn,
+          anchorType,
+          extrapolate: true,
+          ...(beamM === undefined ? {} : { beamM }),
+          ...(bottom === '' ? {} : { bottom }),
+        }),
+  );
+  const r = outcome.ok ? outcome.value : null;
+  return (
+    <CalcCard
+      title="Anchor suggestion"
+      intro="A starting mass for an anchor of a given type, from the design load and a holding ratio."
+      basis={r?.basis}
+      source="Design load from the ABYC H-40 table (from memory); holding ratios are Rodewise's model (from memory, approximate)."
+      assumptions={[
+        'A well-set anchor at a scope of 5:1 or more.',
+        'Suggested = 1.5 × minimum for gusts, veering and an imperfect set (common practice).',
+        "An anchor maker's sizing chart for your boat takes precedence.",
+      ]}
+      cautions={r?.cautions ?? STANDARD_CAUTIONS}
+    >
+      <BoatWindFields value={boat} onChange={setBoat} outcome={outcome} />
+      <div className="grid gap-3 sm:grid-cols-2">
+        <SelectField
+          label="Anchor type"
+          options={ANCHOR_OPTIONS}
+          value={anchorType}
+          onChange={(e) => setAnchorType(pick(e.target.value, ANCHOR_TYPES, 'plow'))}
+        />
+        <SelectField
+          label="Seabed"
+          options={BOTTOM_OPTIONS}
+          value={bottom}
+          onChange={(e) =>
+            setBottom(e.target.value === '' ? '' : pick(e.target.value, BOTTOM_TYPES, 'sand'))
+          }
+        />
+      </div>
+      {r ? (
+        <ResultList
+          label="Anchor results"
+          items={[
+            { label: 'Suggested mass', value: <Quantity value={r.suggestedKg} kind="mass" /> },
+            { label: 'Minimum by the model', value: <Quantity value={r.minKg} kind="mass" /> },
+            { label: 'Design load', value: <Quantity value={r.loadN} kind="force" /> },
+            { label: 'Seabed assumed', value: r.bottomAssumed },
+          ]}
+        />
+      ) : (
+        <NoResult
+          message={outcome.ok ? 'Enter the length overall and the design wind.' : outcome.message}
+        />
+      )}
+    </CalcCard>
+  );
+}
