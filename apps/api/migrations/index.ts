@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as m0001 from './20261201-0001-platform';
 import * as m0002 from './20261201-0002-boats-and-plans';
 import * as m0003 from './20261201-0003-knowledge';
+import * as m0004 from './20261201-0004-exchange';
 import * as m0005 from './20261201-0005-dues';
 
 export interface MigrationModule {
@@ -14,5 +15,6 @@ export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [
   ['20261201-0001-platform', m0001],
   ['20261201-0002-boats-and-plans', m0002],
   ['20261201-0003-knowledge', m0003],
+  ['20261201-0004-exchange', m0004],
   ['20261201-0005-dues', m0005],
 ];

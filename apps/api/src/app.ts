@@ -24,6 +24,11 @@ import { healthRouter } from './modules/health/health.router';
 import { tacklePlansRouter } from './modules/tackle-plans/tackle-plans.router';
 import { uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
 import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
+import { startListingSweeper } from './modules/listings/listing-expiry';
+import { ensureListingIndex } from './modules/listings/listing-index';
+import { listingsRouter } from './modules/listings/listings.router';
+import { savedSearchesRouter } from './modules/saved-searches/saved-searches.router';
+import { threadsRouter } from './modules/threads/threads.router';
 
 export interface AppDeps {
   env: Env;
@@ -156,6 +161,14 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   mount(app, '/api/boats', boatsRouter());
   mount(app, '/api/tackle-plans', tacklePlansRouter());
   mount(app, '/api/uploads', uploadsRouter());
+  const exchange = { publicUrl: env.PUBLIC_URL };
+  mount(app, '/api/listings', listingsRouter(exchange));
+  mount(app, '/api/threads', threadsRouter(exchange));
+  mount(app, '/api/saved-searches', savedSearchesRouter());
+  // The listing search index is built from MariaDB at start (and lazily on first search if that fails).
+  ensureListingIndex().catch((err: unknown) => logger.warn({ err }, 'listing index not built yet'));
+  const stopListingSweeper =
+    env.NODE_ENV === 'test' ? () => undefined : startListingSweeper(exchange, logger);
 
   app.use('/api', notFoundHandler);
   app.use('/uploads', ...uploadsStatic(uploadDir));
@@ -175,7 +188,9 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
 
   return {
     app,
-    close: () =>
-      (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.(),
+    close: () => {
+      stopListingSweeper();
+      (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.();
+    },
   };
 }

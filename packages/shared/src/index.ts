@@ -4,3 +4,4 @@ export * from './club';
 export * from './errors';
 export * from './dues';
 export * from './knowledge';
+export * from './exchange';

@@ -20,6 +20,7 @@ import { Post, initPost } from './post.model';
 import { Report, initReport } from './report.model';
 import { Topic, initTopic } from './topic.model';
 import { Vote, initVote } from './vote.model';
+import { initExchangeModels } from './exchange.models';
 
 let initialised: Sequelize | null = null;
 
@@ -69,6 +70,7 @@ export function initModels(sequelize: Sequelize) {
   Comment.belongsTo(Post, { as: 'post', foreignKey: 'postId' });
   Comment.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
   Report.belongsTo(User, { as: 'reporter', foreignKey: 'reporterId' });
+  initExchangeModels(sequelize);
   initialised = sequelize;
 }
 
@@ -95,3 +97,12 @@ export {
   Topic,
   Vote,
 };
+export {
+  Listing,
+  ListingMessage,
+  ListingPhoto,
+  ListingReport,
+  ListingThread,
+  SavedSearch,
+  SavedSearchHit,
+} from './exchange.models';

@@ -1,0 +1,235 @@
+import MiniSearch, { type SearchResult } from 'minisearch';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import type {
+  Currency,
+  FitDto,
+  ListingCategory,
+  ListingCondition,
+  ListingSearch,
+  SavedSearchCriteria,
+} from '@app/shared';
+import { Listing } from '../../models';
+import { getStorage } from '../uploads/storage';
+import { fitOf, type BoatNeeds } from './fit';
+import { ratingOf, specsText, type ListingRating } from './listing-specs';
+
+/** One searchable (active, visible) listing as the index keeps it, with what the result card shows. */
+export interface IndexedListing {
+  id: number;
+  category: ListingCategory;
+  title: string;
+  description: string;
+  specsText: string;
+  specs: Record<string, unknown>;
+  condition: ListingCondition;
+  priceCents: number;
+  currency: Currency;
+  harborId: number;
+  harborName: string;
+  sizeMm: number | null;
+  thumbUrl: string | null;
+  sellerName: string;
+  publishedAtMs: number;
+  expiresAtMs: number;
+  rating: ListingRating;
+}
+
+interface Row {
+  id: number;
+  category: ListingCategory;
+  title: string;
+  description: string;
+  specs: string | Record<string, unknown>;
+  condition: ListingCondition;
+  price_cents: number;
+  currency: Currency;
+  harbor_id: number;
+  harbor_name: string;
+  size_mm: number | null;
+  thumb_key: string | null;
+  seller_name: string;
+  published_at: Date | string;
+  expires_at: Date | string;
+}
+
+const SELECT_SEARCHABLE = `
+  SELECT l.id, l.category, l.title, l.description, l.specs, l.\`condition\`, l.price_cents, l.currency,
+         l.harbor_id, h.name AS harbor_name, l.size_mm, l.published_at, l.expires_at,
+         u.display_name AS seller_name,
+         (SELECT p.thumb_key FROM listing_photos p WHERE p.listing_id = l.id ORDER BY p.position, p.id LIMIT 1) AS thumb_key
+    FROM listings l
+    JOIN users u ON u.id = l.seller_id
+    JOIN harbors h ON h.id = l.harbor_id
+   WHERE l.status = 'active' AND l.hidden_at IS NULL`;
+
+function toDoc(r: Row): IndexedListing {
+  const specs =
+    typeof r.specs === 'string' ? (JSON.parse(r.specs) as Record<string, unknown>) : r.specs;
+  return {
+    id: r.id,
+    category: r.category,
+    title: r.title,
+    description: r.description,
+    specsText: specsText(r.category, specs),
+    specs,
+    condition: r.condition,
+    priceCents: Number(r.price_cents),
+    currency: r.currency,
+    harborId: r.harbor_id,
+    harborName: r.harbor_name,
+    sizeMm: r.size_mm === null ? null : Number(r.size_mm),
+    thumbUrl: r.thumb_key ? getStorage().url(r.thumb_key) : null,
+    sellerName: r.seller_name,
+    publishedAtMs: new Date(r.published_at).getTime(),
+    expiresAtMs: new Date(r.expires_at).getTime(),
+    rating: ratingOf(r.category, specs),
+  };
+}
+
+const newIndex = () =>
+  new MiniSearch<IndexedListing>({
+    fields: ['title', 'description', 'specsText'],
+    storeFields: [],
+    searchOptions: {
+      boost: { title: 3, specsText: 2 },
+      prefix: (term) => term.length > 2,
+      fuzzy: (term) => (term.length > 3 ? 0.25 : false),
+      combineWith: 'AND',
+    },
+  });
+
+let index = newIndex();
+const docs = new Map<number, IndexedListing>();
+let ready: Promise<void> | null = null;
+
+function sequelizeOf(): Sequelize {
+  const s = Listing.sequelize;
+  if (!s) throw new Error('Models are not initialised');
+  return s;
+}
+
+/** Rebuilds the whole index from MariaDB; returns how many listings it holds. */
+export async function rebuildListingIndex(): Promise<number> {
+  const rows = await sequelizeOf().query<Row>(SELECT_SEARCHABLE, { type: QueryTypes.SELECT });
+  const fresh = newIndex();
+  docs.clear();
+  const all = rows.map(toDoc);
+  for (const d of all) docs.set(d.id, d);
+  await fresh.addAllAsync(all, { chunkSize: 2000 });
+  index = fresh;
+  ready = Promise.resolve();
+  return all.length;
+}
+
+/** Builds the index on first use (at start, or on the first search), once. */
+export function ensureListingIndex(): Promise<void> {
+  ready ??= rebuildListingIndex().then(
+    () => undefined,
+    (err: unknown) => {
+      ready = null;
+      throw err;
+    },
+  );
+  return ready;
+}
+
+/** Re-reads one listing after a write: indexed when active and visible, removed otherwise. */
+export async function refreshListing(id: number): Promise<void> {
+  await ensureListingIndex();
+  const rows = await sequelizeOf().query<Row>(`${SELECT_SEARCHABLE} AND l.id = ?`, {
+    type: QueryTypes.SELECT,
+    replacements: [id],
+  });
+  if (index.has(id)) index.discard(id);
+  docs.delete(id);
+  const row = rows[0];
+  if (row) {
+    const doc = toDoc(row);
+    docs.set(id, doc);
+    index.add(doc);
+  }
+}
+
+type Filters = Pick<
+  ListingSearch,
+  'category' | 'harborId' | 'condition' | 'priceMin' | 'priceMax' | 'sizeMinMm' | 'sizeMaxMm'
+>;
+
+function passes(d: IndexedListing, f: Filters, nowMs: number): boolean {
+  if (d.expiresAtMs <= nowMs) return false;
+  if (f.category && d.category !== f.category) return false;
+  if (f.harborId && d.harborId !== f.harborId) return false;
+  if (f.condition && d.condition !== f.condition) return false;
+  if (f.priceMin !== undefined && d.priceCents < f.priceMin) return false;
+  if (f.priceMax !== undefined && d.priceCents > f.priceMax) return false;
+  if (f.sizeMinMm !== undefined && (d.sizeMm === null || d.sizeMm < f.sizeMinMm - 0.05))
+    return false;
+  if (f.sizeMaxMm !== undefined && (d.sizeMm === null || d.sizeMm > f.sizeMaxMm + 0.05))
+    return false;
+  return true;
+}
+
+export interface SearchHit {
+  doc: IndexedListing;
+  fit?: FitDto;
+}
+
+/**
+ * Full-text search (fuzzy and prefix over title, description and specs) with facet filters, "fits my boat"
+ * flags and sorting, entirely in memory. `needs` adds a fit flag to each hit; `fitsOnly` keeps only "fits".
+ */
+export function searchIndex(
+  query: ListingSearch,
+  needs?: BoatNeeds,
+  nowMs = Date.now(),
+): { hits: SearchHit[]; total: number; tookMs: number } {
+  const started = performance.now();
+  const q = query.q?.trim();
+  let matched: IndexedListing[];
+  if (q) {
+    const results: SearchResult[] = index.search(q, {
+      filter: (r) => {
+        const d = docs.get(r.id as number);
+        return d !== undefined && passes(d, query, nowMs);
+      },
+    });
+    matched = [];
+    for (const r of results) {
+      const d = docs.get(r.id as number);
+      if (d) matched.push(d);
+    }
+  } else {
+    matched = [];
+    for (const d of docs.values()) if (passes(d, query, nowMs)) matched.push(d);
+  }
+  const sort = query.sort ?? (q ? 'relevance' : 'newest');
+  if (sort === 'newest' || (sort === 'relevance' && !q))
+    matched.sort((a, b) => b.publishedAtMs - a.publishedAtMs || b.id - a.id);
+  else if (sort === 'price-asc') matched.sort((a, b) => a.priceCents - b.priceCents || b.id - a.id);
+  else if (sort === 'price-desc')
+    matched.sort((a, b) => b.priceCents - a.priceCents || b.id - a.id);
+
+  let hits: SearchHit[] = matched.map((doc) => ({ doc }));
+  if (needs && query.fitsOnly) {
+    hits = hits
+      .map((h) => ({ doc: h.doc, fit: fitOf(h.doc.rating, needs) }))
+      .filter((h) => h.fit.status === 'fits');
+  }
+  const total = hits.length;
+  const start = (query.page - 1) * query.pageSize;
+  const page = hits.slice(start, start + query.pageSize);
+  if (needs) for (const h of page) h.fit ??= fitOf(h.doc.rating, needs);
+  return { hits: page, total, tookMs: performance.now() - started };
+}
+
+/** True when the indexed listing `id` matches a saved search's criteria. */
+export function matchesCriteria(id: number, c: SavedSearchCriteria, nowMs = Date.now()): boolean {
+  const d = docs.get(id);
+  if (!d || !passes(d, c, nowMs)) return false;
+  const q = c.q?.trim();
+  if (!q) return true;
+  return index.search(q, { filter: (r) => r.id === id }).length > 0;
+}
+
+/** How many listings the index holds (for health and the benchmark). */
+export const indexedCount = () => docs.size;

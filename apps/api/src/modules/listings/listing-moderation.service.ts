@@ -1,0 +1,112 @@
+import { UniqueConstraintError } from 'sequelize';
+import { AppError, notFound } from '../../errors/app-error';
+import { Listing, ListingReport, User } from '../../models';
+import { recordAudit } from '../audit/audit.service';
+import { enqueueEmail } from '../mail/outbox.service';
+import { actionEmail } from '../mail/templates';
+import { refreshListing } from './listing-index';
+import { getVisibleListing, listingUrl, type ExchangeContext } from './listings.service';
+
+/** A member reports a listing they can see (not their own); once per member and listing. */
+export async function reportListing(actor: User, id: number, reason: string) {
+  const listing = await getVisibleListing(actor, id);
+  if (listing.sellerId === actor.id)
+    throw new AppError('CONFLICT', 'You cannot report your own listing');
+  try {
+    return await ListingReport.create({
+      listingId: id,
+      reporterId: actor.id,
+      reason,
+      status: 'open',
+    });
+  } catch (err) {
+    if (err instanceof UniqueConstraintError)
+      throw new AppError('CONFLICT', 'You have already reported this listing');
+    throw err;
+  }
+}
+
+/** Open reports, oldest first, for the moderators' queue. */
+export const openReports = () =>
+  ListingReport.findAll({
+    where: { status: 'open' },
+    include: [
+      { model: Listing, as: 'listing' },
+      { model: User, as: 'reporter' },
+    ],
+    order: [['createdAt', 'ASC']],
+    limit: 200,
+  });
+
+/** A moderator hides a listing: it leaves search, its open reports are resolved, the seller is told, the audit log records why. */
+export async function hideListing(ctx: ExchangeContext, mod: User, id: number, reason: string) {
+  const listing = await Listing.findByPk(id);
+  if (!listing) throw notFound('Listing');
+  const sequelize = Listing.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised');
+  const seller = await User.findByPk(listing.sellerId);
+  await sequelize.transaction(async (transaction) => {
+    await listing.update({ hiddenAt: new Date(), hiddenReason: reason }, { transaction });
+    await ListingReport.update(
+      { status: 'resolved' },
+      { where: { listingId: id, status: 'open' }, transaction },
+    );
+    await recordAudit(
+      {
+        actorId: mod.id,
+        area: 'exchange',
+        action: 'listing.hide',
+        subjectType: 'listing',
+        subjectId: String(id),
+        reason,
+      },
+      transaction,
+    );
+    if (seller)
+      await enqueueEmail(
+        actionEmail({
+          to: seller.email,
+          kind: 'listing-hidden',
+          subject: `Your listing was hidden: ${listing.title}`,
+          greeting: `Hello ${seller.displayName},`,
+          lines: [`A moderator hid “${listing.title}” from the exchange.`, `Reason: ${reason}`],
+          actionLabel: 'See the listing',
+          actionUrl: listingUrl(ctx, id),
+          footer: 'Reply to the club moderators if you think this was a mistake.',
+        }),
+        transaction,
+      );
+  });
+  await refreshListing(id);
+  return listing;
+}
+
+/** A moderator shows a hidden listing again (audited). */
+export async function unhideListing(mod: User, id: number) {
+  const listing = await Listing.findByPk(id);
+  if (!listing) throw notFound('Listing');
+  await listing.update({ hiddenAt: null, hiddenReason: null });
+  await recordAudit({
+    actorId: mod.id,
+    area: 'exchange',
+    action: 'listing.unhide',
+    subjectType: 'listing',
+    subjectId: String(id),
+  });
+  await refreshListing(id);
+  return listing;
+}
+
+/** A moderator dismisses one report without hiding the listing (audited). */
+export async function dismissReport(mod: User, reportId: number) {
+  const report = await ListingReport.findByPk(reportId);
+  if (!report) throw notFound('Report');
+  await report.update({ status: 'resolved' });
+  await recordAudit({
+    actorId: mod.id,
+    area: 'exchange',
+    action: 'listing-report.dismiss',
+    subjectType: 'listing-report',
+    subjectId: String(reportId),
+  });
+}

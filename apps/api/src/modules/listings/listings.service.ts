@@ -1,0 +1,235 @@
+import { Op } from 'sequelize';
+import { LISTING_LIFETIME_DAYS, type SellerDto } from '@app/shared';
+import { AppError, invalid, notFound } from '../../errors/app-error';
+import { Harbor, Listing, ListingPhoto, ListingThread, Membership, User } from '../../models';
+import { getSetting } from '../club/club.service';
+import { isPaidUp } from '../dues/paid-up';
+import { actionEmail } from '../mail/templates';
+import { enqueueEmail } from '../mail/outbox.service';
+import { notifySavedSearches } from '../saved-searches/saved-searches.service';
+import { refreshListing } from './listing-index';
+import { checkSpecs, sizeMmOf, type ParsedListing } from './listing-specs';
+
+export interface ExchangeContext {
+  publicUrl: string;
+}
+
+const DAY_MS = 86_400_000;
+const expiryFrom = (at: Date) => new Date(at.getTime() + LISTING_LIFETIME_DAYS * DAY_MS);
+export const listingUrl = (ctx: ExchangeContext, id: number) =>
+  `${ctx.publicUrl}/exchange/listings/${id}`;
+
+const isModerator = (u: User | null) => !!u && (u.hasRole('moderator') || u.hasRole('admin'));
+
+/** Loads a listing with harbour and photos, or null. */
+export const loadListing = (id: number) =>
+  Listing.findByPk(id, {
+    include: [
+      { model: Harbor, as: 'harbor' },
+      { model: ListingPhoto, as: 'photos' },
+    ],
+  });
+
+/** The actor's own listing; anyone else's is reported as not found. */
+export async function getOwnListing(actor: User, id: number): Promise<Listing> {
+  const listing = await loadListing(id);
+  if (!listing || listing.sellerId !== actor.id) throw notFound('Listing');
+  return listing;
+}
+
+/**
+ * A listing as `viewer` may see it: active or sold and not hidden for everyone; drafts, expired, withdrawn and
+ * hidden ones only for the seller and moderators (404 otherwise).
+ */
+export async function getVisibleListing(viewer: User | null, id: number): Promise<Listing> {
+  const listing = await loadListing(id);
+  if (!listing) throw notFound('Listing');
+  const mine = viewer?.id === listing.sellerId;
+  const isPublic = ['active', 'sold'].includes(listing.status) && listing.hiddenAt === null;
+  if (!isPublic && !mine && !isModerator(viewer)) throw notFound('Listing');
+  return listing;
+}
+
+/** Seller card: display name, member since (membership join date, else sign-up) and the paid-up badge. */
+export async function sellerOf(sellerId: number, at = new Date()): Promise<SellerDto> {
+  const user = await User.findByPk(sellerId);
+  if (!user) throw notFound('Seller');
+  const membership = await Membership.findOne({ where: { userId: sellerId } });
+  return {
+    id: user.id,
+    displayName: user.displayName,
+    memberSince: membership?.joinedOn ?? user.createdAt.toISOString().slice(0, 10),
+    paidUp: await isPaidUp(sellerId, at),
+  };
+}
+
+/** Throws FORBIDDEN when the club requires a paid-up membership to list and the actor is not paid up. */
+export async function assertMayList(actor: User, at = new Date()) {
+  if (!(await getSetting('listingRequiresPaidUp'))) return;
+  if (!(await isPaidUp(actor.id, at)))
+    throw new AppError(
+      'FORBIDDEN',
+      'The club asks for a paid-up membership before gear is listed. Pay your dues, then publish; your draft is kept.',
+    );
+}
+
+async function checkHarbor(id: number) {
+  if (!(await Harbor.findByPk(id))) throw invalid({ harborId: 'Choose one of the club harbours' });
+}
+
+function fieldsOf(input: ParsedListing) {
+  return {
+    category: input.category,
+    title: input.title,
+    description: input.description,
+    specs: input.specs as Record<string, unknown>,
+    condition: input.condition,
+    priceCents: input.priceCents,
+    currency: input.currency,
+    harborId: input.harborId,
+    sizeMm: sizeMmOf(input.category, input.specs),
+  };
+}
+
+async function afterActivated(ctx: ExchangeContext, listing: Listing) {
+  await refreshListing(listing.id);
+  await notifySavedSearches(ctx, listing);
+}
+
+/** Creates a draft, or publishes at once when `publish` (paid-up policy applies). Throws VALIDATION_FAILED per field. */
+export async function createListing(
+  ctx: ExchangeContext,
+  actor: User,
+  input: ParsedListing,
+  opts: { publish: boolean; at?: Date },
+) {
+  const at = opts.at ?? new Date();
+  checkSpecs(input);
+  await checkHarbor(input.harborId);
+  if (opts.publish) await assertMayList(actor, at);
+  const listing = await Listing.create({
+    ...fieldsOf(input),
+    sellerId: actor.id,
+    status: opts.publish ? 'active' : 'draft',
+    publishedAt: opts.publish ? at : null,
+    expiresAt: opts.publish ? expiryFrom(at) : null,
+    soldAt: null,
+    soldThreadId: null,
+    hiddenAt: null,
+    hiddenReason: null,
+  });
+  if (opts.publish) await afterActivated(ctx, listing);
+  return listing;
+}
+
+/** Replaces the seller's own listing's fields (not once sold). */
+export async function updateListing(actor: User, id: number, input: ParsedListing) {
+  const listing = await getOwnListing(actor, id);
+  if (listing.status === 'sold') throw new AppError('CONFLICT', 'A sold listing cannot be edited');
+  checkSpecs(input);
+  await checkHarbor(input.harborId);
+  await listing.update(fieldsOf(input));
+  await refreshListing(id);
+  return listing;
+}
+
+/** Draft → active for 60 days. */
+export async function publishListing(
+  ctx: ExchangeContext,
+  actor: User,
+  id: number,
+  at = new Date(),
+) {
+  const listing = await getOwnListing(actor, id);
+  if (listing.status !== 'draft')
+    throw new AppError('CONFLICT', 'Only a draft can be published; use relist for the others');
+  await assertMayList(actor, at);
+  await listing.update({ status: 'active', publishedAt: at, expiresAt: expiryFrom(at) });
+  await afterActivated(ctx, listing);
+  return listing;
+}
+
+/** Sold, expired or withdrawn → active again for 60 days from `at`. */
+export async function relistListing(
+  ctx: ExchangeContext,
+  actor: User,
+  id: number,
+  at = new Date(),
+) {
+  const listing = await getOwnListing(actor, id);
+  if (!['sold', 'expired', 'withdrawn'].includes(listing.status))
+    throw new AppError('CONFLICT', 'Only a sold, expired or withdrawn listing can be relisted');
+  await assertMayList(actor, at);
+  await listing.update({
+    status: 'active',
+    publishedAt: at,
+    expiresAt: expiryFrom(at),
+    soldAt: null,
+    soldThreadId: null,
+  });
+  await afterActivated(ctx, listing);
+  return listing;
+}
+
+/** Takes a draft or active listing off the exchange. */
+export async function withdrawListing(actor: User, id: number) {
+  const listing = await getOwnListing(actor, id);
+  if (!['draft', 'active'].includes(listing.status))
+    throw new AppError('CONFLICT', 'Only a draft or active listing can be withdrawn');
+  await listing.update({ status: 'withdrawn' });
+  await refreshListing(id);
+  return listing;
+}
+
+/** Active → sold, optionally to the buyer of one of the listing's threads (who is told by e-mail). */
+export async function markSold(
+  ctx: ExchangeContext,
+  actor: User,
+  id: number,
+  threadId: number | undefined,
+  at = new Date(),
+) {
+  const listing = await getOwnListing(actor, id);
+  if (listing.status !== 'active')
+    throw new AppError('CONFLICT', 'Only an active listing can be marked sold');
+  let buyer: User | null = null;
+  if (threadId !== undefined) {
+    const thread = await ListingThread.findByPk(threadId);
+    if (!thread || thread.listingId !== id)
+      throw invalid({ threadId: 'Choose one of this listing’s conversations' });
+    buyer = await User.findByPk(thread.buyerId);
+  }
+  await listing.update({ status: 'sold', soldAt: at, soldThreadId: threadId ?? null });
+  await refreshListing(id);
+  if (buyer)
+    await enqueueEmail(
+      actionEmail({
+        to: buyer.email,
+        kind: 'listing-sold-to-you',
+        subject: `Sold to you: ${listing.title}`,
+        greeting: `Hello ${buyer.displayName},`,
+        lines: [
+          `${actor.displayName} has marked “${listing.title}” as sold to you.`,
+          'Arrange hand-over in your conversation. Inspect used gear before you rely on it.',
+        ],
+        actionLabel: 'Open the listing',
+        actionUrl: listingUrl(ctx, id),
+      }),
+    );
+  return listing;
+}
+
+/** The actor's listings of every status, newest first. */
+export const listMine = (actor: User) =>
+  Listing.findAll({
+    where: { sellerId: actor.id },
+    include: [
+      { model: Harbor, as: 'harbor' },
+      { model: ListingPhoto, as: 'photos' },
+    ],
+    order: [['updatedAt', 'DESC']],
+  });
+
+/** Active listings whose `expiresAt` has passed by `at`. */
+export const dueForExpiry = (at: Date) =>
+  Listing.findAll({ where: { status: 'active', expiresAt: { [Op.lte]: at } }, limit: 500 });

@@ -1,0 +1,188 @@
+import { Op } from 'sequelize';
+import type { MessageDto, ThreadDto, ThreadSummaryDto } from '@app/shared';
+import { AppError, notFound } from '../../errors/app-error';
+import { Listing, ListingMessage, ListingThread, User } from '../../models';
+import { enqueueEmail } from '../mail/outbox.service';
+import { actionEmail } from '../mail/templates';
+
+const PREVIEW = 140;
+
+async function emailOtherParty(
+  publicUrl: string,
+  thread: ListingThread,
+  listing: Listing,
+  sender: User,
+  body: string,
+) {
+  const toId = sender.id === thread.buyerId ? thread.sellerId : thread.buyerId;
+  const to = await User.findByPk(toId);
+  if (!to) return;
+  await enqueueEmail(
+    actionEmail({
+      to: to.email,
+      kind: 'listing-message',
+      subject: `New message about ${listing.title}`,
+      greeting: `Hello ${to.displayName},`,
+      lines: [`${sender.displayName} wrote:`, body.length > 600 ? `${body.slice(0, 600)}…` : body],
+      actionLabel: 'Reply in Rodewise',
+      actionUrl: `${publicUrl}/messages/${thread.id}`,
+      footer:
+        'Meet in the harbour or pay through a method you trust; never send money to someone you have not met.',
+    }),
+  );
+}
+
+/**
+ * A buyer writes to the seller about an active listing: opens the buyer's thread (or reuses it) and adds the
+ * message; the seller is e-mailed. Sellers cannot open threads on their own listings.
+ */
+export async function openThread(publicUrl: string, buyer: User, listingId: number, body: string) {
+  const listing = await Listing.findByPk(listingId);
+  if (!listing || listing.hiddenAt !== null || listing.status !== 'active')
+    throw notFound('Listing');
+  if (listing.sellerId === buyer.id)
+    throw new AppError('CONFLICT', 'This is your own listing: buyers start the conversation');
+  const now = new Date();
+  const [thread] = await ListingThread.findOrCreate({
+    where: { listingId, buyerId: buyer.id },
+    defaults: {
+      listingId,
+      buyerId: buyer.id,
+      sellerId: listing.sellerId,
+      lastMessageAt: now,
+      buyerReadAt: now,
+      sellerReadAt: null,
+    },
+  });
+  await ListingMessage.create({ threadId: thread.id, senderId: buyer.id, body });
+  await thread.update({ lastMessageAt: now, buyerReadAt: now });
+  await emailOtherParty(publicUrl, thread, listing, buyer, body);
+  return thread;
+}
+
+/** One thread the actor takes part in; anyone else's is not found. */
+export async function getOwnThread(actor: User, id: number): Promise<ListingThread> {
+  const thread = await ListingThread.findByPk(id, {
+    include: [
+      { model: Listing, as: 'listing' },
+      { model: User, as: 'buyer' },
+      { model: User, as: 'seller' },
+    ],
+  });
+  if (!thread || (thread.buyerId !== actor.id && thread.sellerId !== actor.id))
+    throw notFound('Conversation');
+  return thread;
+}
+
+/** Adds a reply to a thread the actor takes part in and e-mails the other party. */
+export async function reply(publicUrl: string, actor: User, id: number, body: string) {
+  const thread = await getOwnThread(actor, id);
+  const listing = thread.listing;
+  if (!listing) throw notFound('Listing');
+  const now = new Date();
+  const message = await ListingMessage.create({ threadId: id, senderId: actor.id, body });
+  await thread.update({
+    lastMessageAt: now,
+    ...(actor.id === thread.buyerId ? { buyerReadAt: now } : { sellerReadAt: now }),
+  });
+  await emailOtherParty(publicUrl, thread, listing, actor, body);
+  return message;
+}
+
+async function unreadCounts(actor: User, threads: ListingThread[]) {
+  const out = new Map<number, number>();
+  for (const t of threads) {
+    const readAt = actor.id === t.buyerId ? t.buyerReadAt : t.sellerReadAt;
+    out.set(
+      t.id,
+      await ListingMessage.count({
+        where: {
+          threadId: t.id,
+          senderId: { [Op.ne]: actor.id },
+          ...(readAt ? { createdAt: { [Op.gt]: readAt } } : {}),
+        },
+      }),
+    );
+  }
+  return out;
+}
+
+function summary(actor: User, t: ListingThread, last: ListingMessage | null, unread: number) {
+  const role = actor.id === t.buyerId ? 'buyer' : 'seller';
+  const other = role === 'buyer' ? t.seller : t.buyer;
+  return {
+    id: t.id,
+    listingId: t.listingId,
+    listingTitle: t.listing?.title ?? '',
+    listingStatus: t.listing?.status ?? 'withdrawn',
+    otherParty: { id: other?.id ?? 0, displayName: other?.displayName ?? 'Former member' },
+    role,
+    lastMessage: last ? last.body.slice(0, PREVIEW) : '',
+    lastMessageAt: t.lastMessageAt.toISOString(),
+    unread,
+    soldToThisThread: t.listing?.soldThreadId === t.id,
+  } satisfies ThreadSummaryDto;
+}
+
+/** The actor's inbox: threads as buyer or seller, most recent first, with unread counts. */
+export async function inbox(actor: User): Promise<ThreadSummaryDto[]> {
+  const threads = await ListingThread.findAll({
+    where: { [Op.or]: [{ buyerId: actor.id }, { sellerId: actor.id }] },
+    include: [
+      { model: Listing, as: 'listing' },
+      { model: User, as: 'buyer' },
+      { model: User, as: 'seller' },
+    ],
+    order: [['lastMessageAt', 'DESC']],
+    limit: 200,
+  });
+  const unread = await unreadCounts(actor, threads);
+  const out: ThreadSummaryDto[] = [];
+  for (const t of threads) {
+    const last = await ListingMessage.findOne({
+      where: { threadId: t.id },
+      order: [['id', 'DESC']],
+    });
+    out.push(summary(actor, t, last, unread.get(t.id) ?? 0));
+  }
+  return out;
+}
+
+/** Unread messages across the actor's threads (for the nav badge). */
+export async function unreadTotal(actor: User): Promise<number> {
+  const threads = await ListingThread.findAll({
+    where: { [Op.or]: [{ buyerId: actor.id }, { sellerId: actor.id }] },
+  });
+  let total = 0;
+  for (const n of (await unreadCounts(actor, threads)).values()) total += n;
+  return total;
+}
+
+/** A thread with its messages; marks it read for the actor. */
+export async function readThread(actor: User, id: number): Promise<ThreadDto> {
+  const thread = await getOwnThread(actor, id);
+  const messages = await ListingMessage.findAll({
+    where: { threadId: id },
+    order: [['id', 'ASC']],
+  });
+  const unread = (await unreadCounts(actor, [thread])).get(id) ?? 0;
+  await thread.update(
+    actor.id === thread.buyerId ? { buyerReadAt: new Date() } : { sellerReadAt: new Date() },
+  );
+  return {
+    ...summary(actor, thread, messages[messages.length - 1] ?? null, unread),
+    messages: messages.map((m): MessageDto => ({
+      id: m.id,
+      senderId: m.senderId,
+      mine: m.senderId === actor.id,
+      body: m.body,
+      createdAt: m.createdAt.toISOString(),
+    })),
+  };
+}
+
+/** The threads on one of the seller's listings (to pick a buyer when marking sold). */
+export async function threadsOfListing(actor: User, listingId: number) {
+  const all = await inbox(actor);
+  return all.filter((t) => t.listingId === listingId && t.role === 'seller');
+}
