@@ -18,7 +18,6 @@ export function profileConfig(profile = 'dev', overrides = {}) {
   );
   return {
     profile,
-    dataDir,
     socket: join(dataDir, 'mariadb.sock'),
     pidFile: join(dataDir, 'mariadb.pid'),
     logFile: join(dataDir, 'mariadb.err'),
