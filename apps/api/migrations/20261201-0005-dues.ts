@@ -44,6 +44,7 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     expected_minor: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
     covers_from: { type: DataTypes.DATEONLY, allowNull: true },
     covers_to: { type: DataTypes.DATEONLY, allowNull: true },
+    prior_paid_through: { type: DataTypes.DATEONLY, allowNull: true },
     provider_session_id: { type: DataTypes.STRING(255), allowNull: true, unique: true },
     provider_payment_intent_id: { type: DataTypes.STRING(255), allowNull: true },
     reference: { type: DataTypes.STRING(120), allowNull: true },

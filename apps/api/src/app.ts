@@ -22,6 +22,9 @@ import { boatsRouter } from './modules/boats/boats.router';
 import { clubRouter } from './modules/club/club.router';
 import { healthRouter } from './modules/health/health.router';
 import { tacklePlansRouter } from './modules/tackle-plans/tackle-plans.router';
+import { duesRouter } from './modules/dues/dues.router';
+import { paymentsWebhook } from './modules/payments/webhook.router';
+import { treasuryRouter } from './modules/treasury/treasury.router';
 import { uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
 import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
 import { startListingSweeper } from './modules/listings/listing-expiry';
@@ -129,6 +132,7 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
       res.status(204).end();
     },
   );
+  api.post('/payments/webhook', ...paymentsWebhook({ env, sequelize, logger }));
   mount(app, '/api', api);
 
   app.use('/api', express.json({ limit: '200kb' }));
@@ -160,6 +164,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   mount(app, '/api/club', clubRouter());
   mount(app, '/api/boats', boatsRouter());
   mount(app, '/api/tackle-plans', tacklePlansRouter());
+  mount(app, '/api/dues', duesRouter(env));
+  mount(app, '/api/treasury', treasuryRouter({ env, sequelize }));
   mount(app, '/api/uploads', uploadsRouter());
   const exchange = { publicUrl: env.PUBLIC_URL };
   mount(app, '/api/listings', listingsRouter(exchange));

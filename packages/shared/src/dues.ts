@@ -172,6 +172,8 @@ export interface MyDuesDto {
   status: DuesStatus | null;
   paidUp: boolean;
   quote: DuesQuoteDto | null;
+  /** For a member who has never paid: what joining on each active plan costs today. */
+  offers: DuesQuoteDto[];
   plans: PlanDto[];
   payments: PaymentDto[];
 }
@@ -291,4 +293,26 @@ export interface SummaryDto {
   outstandingMinor: number;
   heldCount: number;
   counts: Record<DuesStatus, number>;
+}
+
+/** Digits after the decimal point for a currency (2 for EUR, 0 for JPY), from the platform's ISO 4217 data. */
+export function currencyDigits(currency: string): number {
+  return (
+    new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions()
+      .maximumFractionDigits ?? 2
+  );
+}
+
+/** Integer minor units as a plain decimal string: 12050 EUR → "120.50", −3000 → "-30.00". */
+export function minorToDecimal(amountMinor: number, currency: string): string {
+  const digits = currencyDigits(currency);
+  return (amountMinor / 10 ** digits).toFixed(digits);
+}
+
+/** Integer minor units for people: 12050 EUR → "€120.50". */
+export function formatMoney(amountMinor: number, currency: string, locale = 'en'): string {
+  const digits = currencyDigits(currency);
+  return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(
+    amountMinor / 10 ** digits,
+  );
 }

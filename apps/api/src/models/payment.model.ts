@@ -24,6 +24,8 @@ export class Payment extends Model<InferAttributes<Payment>, InferCreationAttrib
   declare expectedMinor: number | null;
   declare coversFrom: string | null;
   declare coversTo: string | null;
+  /** The member's paid-through date before this payment was credited (restored by a full refund). */
+  declare priorPaidThrough: CreationOptional<string | null>;
   declare providerSessionId: string | null;
   declare providerPaymentIntentId: string | null;
   declare reference: string | null;
@@ -52,6 +54,7 @@ export function initPayment(sequelize: Sequelize) {
       expectedMinor: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
       coversFrom: { type: DataTypes.DATEONLY, allowNull: true },
       coversTo: { type: DataTypes.DATEONLY, allowNull: true },
+      priorPaidThrough: { type: DataTypes.DATEONLY, allowNull: true },
       providerSessionId: { type: DataTypes.STRING(255), allowNull: true, unique: true },
       providerPaymentIntentId: { type: DataTypes.STRING(255), allowNull: true },
       reference: { type: DataTypes.STRING(120), allowNull: true },

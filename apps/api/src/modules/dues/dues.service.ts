@@ -1,0 +1,233 @@
+import { Op } from 'sequelize';
+import type { z } from 'zod';
+import type {
+  CheckoutDto,
+  CheckoutStatusDto,
+  checkoutInputSchema,
+  DuesQuoteDto,
+  MyDuesDto,
+} from '@app/shared';
+import { formatMoney } from '@app/shared';
+import type { Env } from '../../config/env';
+import { AppError, invalid, notFound } from '../../errors/app-error';
+import { Membership, MembershipPlan, Payment, Refund, User } from '../../models';
+import { getSetting } from '../club/club.service';
+import { stripeClient } from '../payments/stripe-client';
+import {
+  duesStatus,
+  fiscalYearOf,
+  paidUpOn,
+  quoteFor,
+  toIsoDate,
+  type DuesCalendar,
+  type QuoteResult,
+} from './calendar';
+import { toPaymentDto, toPlanDto } from './dues.presenter';
+
+/** The club's dues calendar setting. */
+export const duesCalendar = (): Promise<DuesCalendar> => getSetting('duesCalendar');
+
+const KIND_REASON: Record<QuoteResult['kind'], string> = {
+  join: 'New membership, from joining to the end of the fiscal year',
+  renewal: 'Renewal for the next fiscal year',
+  'catch-up': 'Dues for this fiscal year',
+  rejoin: 'Rejoining for this fiscal year',
+};
+
+/** The quote as the member and treasurer see it, or null when nothing is owed. */
+export function describeQuote(q: QuoteResult | null, plan: MembershipPlan): DuesQuoteDto | null {
+  if (!q) return null;
+  const lines = [
+    { label: `${plan.name} dues, ${q.coversFrom} to ${q.coversTo}`, amountMinor: q.duesMinor },
+    ...(q.lateFeeMinor > 0
+      ? [
+          {
+            label: `Late fee (more than ${plan.graceDays} days past due)`,
+            amountMinor: q.lateFeeMinor,
+          },
+        ]
+      : []),
+  ];
+  return {
+    planId: plan.id,
+    planName: plan.name,
+    currency: plan.currency,
+    amountMinor: q.duesMinor + q.lateFeeMinor,
+    lines,
+    coversFrom: q.coversFrom,
+    coversTo: q.coversTo,
+    reason: KIND_REASON[q.kind],
+  };
+}
+
+const paymentIncludes = [
+  { model: User, as: 'user' },
+  { model: MembershipPlan, as: 'plan' },
+  { model: Refund, as: 'refunds' },
+];
+
+/** Everything the member's dues page shows. */
+export async function getMyDues(actor: User, now = new Date()): Promise<MyDuesDto> {
+  const cal = await duesCalendar();
+  const today = toIsoDate(now);
+  const [membership, plans, payments] = await Promise.all([
+    Membership.findOne({
+      where: { userId: actor.id },
+      include: [{ model: MembershipPlan, as: 'plan' }],
+    }),
+    MembershipPlan.findAll({ where: { active: true }, order: [['amountMinor', 'DESC']] }),
+    Payment.findAll({
+      where: { userId: actor.id, status: { [Op.ne]: 'pending' } },
+      include: paymentIncludes,
+      order: [['createdAt', 'DESC']],
+      limit: 20,
+    }),
+  ]);
+  const plan = membership?.plan;
+  return {
+    fiscalYear: fiscalYearOf(today, cal),
+    membership:
+      membership && plan
+        ? {
+            planId: plan.id,
+            planName: plan.name,
+            joinedOn: membership.joinedOn,
+            paidThrough: membership.paidThrough,
+          }
+        : null,
+    status: membership && plan ? duesStatus(membership, plan.graceDays, today, cal) : null,
+    paidUp: !!membership && !!plan && paidUpOn(membership.paidThrough, plan.graceDays, today),
+    quote: membership && plan ? describeQuote(quoteFor(membership, plan, today, cal), plan) : null,
+    offers: membership?.paidThrough
+      ? []
+      : plans.flatMap((p) => {
+          const offer = describeQuote(
+            quoteFor({ paidThrough: null, joinedOn: membership?.joinedOn ?? today }, p, today, cal),
+            p,
+          );
+          return offer ? [offer] : [];
+        }),
+    plans: plans.map(toPlanDto),
+    payments: payments.map(toPaymentDto),
+  };
+}
+
+type CheckoutInput = z.output<typeof checkoutInputSchema>;
+
+/**
+ * Opens a checkout session for what the member owes. The payment row is written first (pending, with the amount
+ * expected from the plan); the membership is credited only when the verified webhook says the session was paid.
+ */
+export async function startCheckout(
+  actor: User,
+  input: CheckoutInput,
+  env: Env,
+  now = new Date(),
+): Promise<CheckoutDto> {
+  const cal = await duesCalendar();
+  const today = toIsoDate(now);
+  const membership = await Membership.findOne({ where: { userId: actor.id } });
+  let planId = membership?.planId;
+  if (input.planId && (!membership || !membership.paidThrough)) planId = input.planId;
+  if (!planId) throw invalid({ planId: 'Choose a plan to join' });
+  const plan = await MembershipPlan.findByPk(planId);
+  if (!plan || (!plan.active && planId !== membership?.planId))
+    throw invalid({ planId: 'Choose one of the club’s current plans' });
+  const q = quoteFor(membership ?? { paidThrough: null, joinedOn: today }, plan, today, cal);
+  const quote = describeQuote(q, plan);
+  if (!quote || !q)
+    throw new AppError(
+      'CONFLICT',
+      `Your dues are paid through ${membership?.paidThrough ?? ''}; there is nothing to pay yet`,
+    );
+
+  const payment = await Payment.create({
+    userId: actor.id,
+    planId: plan.id,
+    method: 'card',
+    status: 'pending',
+    amountMinor: quote.amountMinor,
+    currency: plan.currency,
+    expectedMinor: quote.amountMinor,
+    coversFrom: quote.coversFrom,
+    coversTo: quote.coversTo,
+    providerSessionId: null,
+    providerPaymentIntentId: null,
+    reference: null,
+    note: null,
+    heldReason: null,
+    recordedById: null,
+    paidAt: null,
+  });
+  const stripe = stripeClient(env);
+  const metadata = {
+    paymentId: String(payment.id),
+    userId: String(actor.id),
+    planId: String(plan.id),
+  };
+  try {
+    const session = await stripe.checkout.sessions.create({
+      mode: 'payment',
+      customer_email: actor.email,
+      client_reference_id: String(payment.id),
+      metadata,
+      payment_intent_data: { metadata, description: `Club dues: ${plan.name}` },
+      expires_at: Math.floor(now.getTime() / 1000) + 60 * 60,
+      line_items: quote.lines.map((l) => ({
+        quantity: 1,
+        price_data: {
+          currency: plan.currency.toLowerCase(),
+          unit_amount: l.amountMinor,
+          product_data: { name: l.label },
+        },
+      })),
+      success_url: `${env.PUBLIC_URL}/dues/paid?session_id={CHECKOUT_SESSION_ID}`,
+      cancel_url: `${env.PUBLIC_URL}/dues?checkout=cancelled`,
+    });
+    await payment.update({ providerSessionId: session.id });
+    if (!session.url) throw new Error('The provider returned no checkout page');
+    return { sessionId: session.id, url: session.url };
+  } catch (err) {
+    await payment.update({
+      status: 'failed',
+      note: `Checkout could not be opened: ${err instanceof Error ? err.message : 'unknown error'}`.slice(
+        0,
+        500,
+      ),
+    });
+    throw new AppError(
+      'UPSTREAM_UNAVAILABLE',
+      'The card payment service did not answer. Nothing was charged; please try again in a few minutes.',
+    );
+  }
+}
+
+const STATUS_MESSAGES: Record<Payment['status'], string> = {
+  pending: 'We are waiting for the payment provider to confirm your payment.',
+  succeeded: 'Thank you: your payment is confirmed.',
+  held: 'Your payment arrived but did not match your plan. The treasurer will sort it out and contact you.',
+  dismissed: 'The treasurer is looking into this payment.',
+  failed: 'This checkout did not go through. Nothing was charged.',
+  expired: 'This checkout expired before it was paid. Nothing was charged.',
+};
+
+/** The member's own checkout, for the confirmation page; someone else's is not found. */
+export async function checkoutStatus(actor: User, sessionId: string): Promise<CheckoutStatusDto> {
+  const payment = await Payment.findOne({ where: { providerSessionId: sessionId } });
+  if (!payment || payment.userId !== actor.id) throw notFound('Checkout');
+  const membership = await Membership.findOne({ where: { userId: actor.id } });
+  const message =
+    payment.status === 'pending' && payment.note
+      ? `${payment.note}. You can go back and try another card.`
+      : STATUS_MESSAGES[payment.status];
+  return {
+    status: payment.status,
+    amountMinor: payment.amountMinor,
+    currency: payment.currency,
+    paidThrough: membership?.paidThrough ?? null,
+    message:
+      payment.status === 'succeeded' && membership?.paidThrough
+        ? `${message} ${formatMoney(payment.amountMinor, payment.currency)} received; paid through ${membership.paidThrough}.`
+        : message,
+  };
+}

@@ -1,0 +1,400 @@
+import { Op, type Sequelize } from 'sequelize';
+import type { z } from 'zod';
+import type {
+  offlinePaymentSchema,
+  paymentListQuerySchema,
+  refundInputSchema,
+  resolveHeldSchema,
+} from '@app/shared';
+import { formatMoney, minorToDecimal } from '@app/shared';
+import type { Env } from '../../config/env';
+import { AppError, invalid, notFound } from '../../errors/app-error';
+import { Membership, MembershipPlan, Payment, Refund, User } from '../../models';
+import { recordAudit } from '../audit/audit.service';
+import {
+  addDays,
+  daysBetween,
+  fiscalYearOf,
+  fiscalYearStarting,
+  quoteFor,
+  toIsoDate,
+} from '../dues/calendar';
+import { duesCalendar } from '../dues/dues.service';
+import {
+  creditMembership,
+  queueReceipt,
+  reverseCoverIfFullyRefunded,
+} from '../dues/ledger-effects';
+import { stripeClient } from '../payments/stripe-client';
+
+type OfflineInput = z.output<typeof offlinePaymentSchema>;
+type RefundInput = z.output<typeof refundInputSchema>;
+type ResolveInput = z.output<typeof resolveHeldSchema>;
+type ListQuery = z.output<typeof paymentListQuerySchema>;
+
+const includes = [
+  { model: User, as: 'user' },
+  { model: MembershipPlan, as: 'plan' },
+  { model: Refund, as: 'refunds' },
+];
+
+/** Ledger entries, newest first (checkouts still open are left out unless asked for by status). */
+export const listPayments = (q: ListQuery) =>
+  Payment.findAll({
+    where: {
+      ...(q.status ? { status: q.status } : { status: { [Op.ne]: 'pending' } }),
+      ...(q.userId ? { userId: q.userId } : {}),
+    },
+    include: includes,
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: 1000,
+  });
+
+/** One entry with its member, plan and refunds. */
+export async function getPayment(id: number) {
+  const p = await Payment.findByPk(id, { include: includes });
+  if (!p) throw notFound('Payment');
+  return p;
+}
+
+/**
+ * Records a cheque, cash or bank-transfer payment and credits the member. The date must lie in the current or
+ * the previous fiscal year and not in the future; the cover is what the member owed on that date (or the next year
+ * when nothing was owed).
+ */
+export async function recordOfflinePayment(
+  actor: User,
+  input: OfflineInput,
+  deps: { sequelize: Sequelize; env: Env },
+  now = new Date(),
+) {
+  const cal = await duesCalendar();
+  const today = toIsoDate(now);
+  const thisYear = fiscalYearOf(today, cal);
+  const earliest = fiscalYearStarting(Number(thisYear.start.slice(0, 4)) - 1, cal).start;
+  const [user, plan] = await Promise.all([
+    User.findByPk(input.userId),
+    MembershipPlan.findByPk(input.planId),
+  ]);
+  const fields: Record<string, string> = {};
+  if (!user) fields.userId = 'No member with that id';
+  if (!plan) fields.planId = 'No plan with that id';
+  if (daysBetween(today, input.receivedOn) > 0) fields.receivedOn = 'The date is in the future';
+  else if (daysBetween(earliest, input.receivedOn) < 0)
+    fields.receivedOn = `The date must fall in the ${thisYear.label} fiscal year or the one before (from ${earliest})`;
+  if (plan && input.currency !== plan.currency)
+    fields.currency = `The ${plan.name} plan is paid in ${plan.currency}`;
+  if (Object.keys(fields).length || !user || !plan) throw invalid(fields);
+
+  return deps.sequelize.transaction(async (t) => {
+    const m = await Membership.findOne({
+      where: { userId: user.id },
+      lock: t.LOCK.UPDATE,
+      transaction: t,
+    });
+    const q = quoteFor(
+      m ?? { paidThrough: null, joinedOn: input.receivedOn },
+      plan,
+      input.receivedOn,
+      cal,
+    );
+    let coversFrom: string;
+    let coversTo: string;
+    if (q) ({ coversFrom, coversTo } = q);
+    else {
+      const next = fiscalYearOf(addDays(m?.paidThrough ?? input.receivedOn, 1), cal);
+      coversFrom = next.start;
+      coversTo = next.end;
+    }
+    const expected = q ? q.duesMinor + q.lateFeeMinor : plan.amountMinor;
+    const payment = await Payment.create(
+      {
+        userId: user.id,
+        planId: plan.id,
+        method: input.method,
+        status: 'succeeded',
+        amountMinor: input.amountMinor,
+        currency: plan.currency,
+        expectedMinor: expected,
+        coversFrom,
+        coversTo,
+        providerSessionId: null,
+        providerPaymentIntentId: null,
+        reference: input.reference,
+        note: input.note || null,
+        heldReason: null,
+        recordedById: actor.id,
+        paidAt: new Date(`${input.receivedOn}T12:00:00Z`),
+      },
+      { transaction: t },
+    );
+    const membership = await creditMembership(payment, t);
+    await queueReceipt(payment, deps.env.PUBLIC_URL, t);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'treasury',
+        action: 'payment.record-offline',
+        subjectType: 'payment',
+        subjectId: String(payment.id),
+        details: {
+          userId: user.id,
+          method: input.method,
+          amountMinor: input.amountMinor,
+          expectedMinor: expected,
+          reference: input.reference,
+          paidThrough: membership.paidThrough,
+        },
+      },
+      t,
+    );
+    return payment;
+  });
+}
+
+/**
+ * Refunds part or all of a payment. Card refunds go through the provider and complete when its webhook says so;
+ * offline refunds (money handed back by the treasurer) complete at once. Never more than what is left to refund.
+ */
+export async function refundPayment(
+  actor: User,
+  paymentId: number,
+  input: RefundInput,
+  deps: { sequelize: Sequelize; env: Env },
+) {
+  const refund = await deps.sequelize.transaction(async (t) => {
+    const payment = await Payment.findByPk(paymentId, { lock: t.LOCK.UPDATE, transaction: t });
+    if (!payment) throw notFound('Payment');
+    if (!['succeeded', 'held', 'dismissed'].includes(payment.status))
+      throw new AppError('CONFLICT', 'Only money that was received can be refunded');
+    if (payment.method === 'card' && !payment.providerPaymentIntentId)
+      throw new AppError('CONFLICT', 'This card payment has no provider reference to refund');
+    const taken = await Refund.sum('amountMinor', {
+      where: { paymentId, status: { [Op.ne]: 'failed' } },
+      transaction: t,
+    });
+    const left = payment.amountMinor - (taken ?? 0);
+    if (input.amountMinor > left)
+      throw invalid({
+        amountMinor: `At most ${formatMoney(left, payment.currency)} is left to refund`,
+      });
+    const offline = payment.method !== 'card';
+    const row = await Refund.create(
+      {
+        paymentId,
+        amountMinor: input.amountMinor,
+        currency: payment.currency,
+        status: offline ? 'succeeded' : 'pending',
+        providerRefundId: null,
+        reason: input.reason,
+        requestedById: actor.id,
+        completedAt: offline ? new Date() : null,
+      },
+      { transaction: t },
+    );
+    const paidThrough = offline ? await reverseCoverIfFullyRefunded(payment, t) : undefined;
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'treasury',
+        action: 'refund.request',
+        subjectType: 'payment',
+        subjectId: String(paymentId),
+        reason: input.reason,
+        details: { refundId: row.id, amountMinor: input.amountMinor, offline, paidThrough },
+      },
+      t,
+    );
+    return { row, intent: payment.providerPaymentIntentId, offline };
+  });
+  if (refund.offline || !refund.intent) return refund.row;
+  try {
+    const r = await stripeClient(deps.env).refunds.create({
+      payment_intent: refund.intent,
+      amount: input.amountMinor,
+      metadata: { refundId: String(refund.row.id), paymentId: String(paymentId) },
+    });
+    // The webhook may already have matched the refund by its metadata; only fill the id when still empty.
+    await Refund.update(
+      { providerRefundId: r.id },
+      { where: { id: refund.row.id, providerRefundId: null } },
+    );
+  } catch (err) {
+    await refund.row.update({ status: 'failed', completedAt: new Date() });
+    await recordAudit({
+      actorId: actor.id,
+      area: 'treasury',
+      action: 'refund.provider-error',
+      subjectType: 'refund',
+      subjectId: String(refund.row.id),
+      details: { message: err instanceof Error ? err.message : 'unknown error' },
+    });
+    throw new AppError(
+      'UPSTREAM_UNAVAILABLE',
+      'The payment provider refused or did not answer the refund; nothing was refunded. Try again later.',
+    );
+  }
+  return (await Refund.findByPk(refund.row.id)) ?? refund.row;
+}
+
+/** Settles a held payment: credit it to the member's dues, or dismiss it (kept on the ledger, usually refunded). */
+export async function resolveHeld(
+  actor: User,
+  paymentId: number,
+  input: ResolveInput,
+  deps: { sequelize: Sequelize; env: Env },
+) {
+  const cal = await duesCalendar();
+  return deps.sequelize.transaction(async (t) => {
+    const payment = await Payment.findByPk(paymentId, { lock: t.LOCK.UPDATE, transaction: t });
+    if (!payment) throw notFound('Payment');
+    if (payment.status !== 'held')
+      throw new AppError('CONFLICT', 'Only a held payment can be resolved');
+    let paidThrough: string | null = null;
+    if (input.decision === 'credit') {
+      if (!payment.planId || !payment.coversFrom || !payment.coversTo) {
+        const m = await Membership.findOne({ where: { userId: payment.userId }, transaction: t });
+        const plan = await MembershipPlan.findByPk(payment.planId ?? m?.planId ?? 0, {
+          transaction: t,
+        });
+        if (!plan)
+          throw new AppError(
+            'CONFLICT',
+            'This member has no plan yet; record the membership with an offline payment instead',
+          );
+        const on = toIsoDate(payment.paidAt ?? new Date());
+        const q = quoteFor(m ?? { paidThrough: null, joinedOn: on }, plan, on, cal);
+        const fy = fiscalYearOf(on, cal);
+        await payment.update(
+          {
+            planId: plan.id,
+            coversFrom: q?.coversFrom ?? fy.start,
+            coversTo: q?.coversTo ?? fy.end,
+          },
+          { transaction: t },
+        );
+      }
+      await payment.update(
+        { status: 'succeeded', note: input.note, recordedById: actor.id },
+        { transaction: t },
+      );
+      paidThrough = (await creditMembership(payment, t)).paidThrough;
+      await queueReceipt(payment, deps.env.PUBLIC_URL, t);
+    } else {
+      await payment.update(
+        { status: 'dismissed', note: input.note, recordedById: actor.id },
+        { transaction: t },
+      );
+    }
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'treasury',
+        action: `payment.resolve-${input.decision}`,
+        subjectType: 'payment',
+        subjectId: String(paymentId),
+        reason: input.note,
+        details: { heldReason: payment.heldReason, paidThrough },
+      },
+      t,
+    );
+    return payment;
+  });
+}
+
+/** RFC 4180 field quoting; a leading = + - @ is defused so spreadsheets do not run it as a formula (OWASP CSV injection). */
+function csvField(v: string | number | null): string {
+  if (v === null) return '';
+  let s = String(v);
+  if (typeof v === 'string' && /^[=+\-@\t\r]/.test(s) && !/^-?\d+(\.\d+)?$/.test(s)) s = `'${s}`;
+  return /[",\r\n]/.test(s) ? `"${s.replaceAll('"', '""')}"` : s;
+}
+
+export const LEDGER_COLUMNS = [
+  'entry',
+  'entry_id',
+  'payment_id',
+  'date',
+  'member_id',
+  'member_name',
+  'member_email',
+  'plan',
+  'method',
+  'status',
+  'amount_minor',
+  'currency',
+  'amount',
+  'covers_from',
+  'covers_to',
+  'reference',
+  'note',
+] as const;
+
+/**
+ * The ledger as CSV: one row per payment that brought money in (succeeded, held, dismissed) and one per refund
+ * (negative amounts). Amounts in minor units and as a decimal in the currency's own digits.
+ */
+export async function ledgerCsv(): Promise<string> {
+  const payments = await Payment.findAll({
+    where: { status: { [Op.in]: ['succeeded', 'held', 'dismissed'] } },
+    include: includes,
+    order: [
+      ['paidAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
+  type Row = { at: number; cells: (string | number | null)[] };
+  const rows: Row[] = [];
+  for (const p of payments) {
+    const member = [p.userId, p.user?.displayName ?? '', p.user?.email ?? '', p.plan?.name ?? ''];
+    rows.push({
+      at: (p.paidAt ?? p.createdAt).getTime(),
+      cells: [
+        'payment',
+        p.id,
+        p.id,
+        (p.paidAt ?? p.createdAt).toISOString(),
+        ...member,
+        p.method,
+        p.status,
+        p.amountMinor,
+        p.currency,
+        minorToDecimal(p.amountMinor, p.currency),
+        p.coversFrom,
+        p.coversTo,
+        p.reference,
+        p.heldReason ?? p.note,
+      ],
+    });
+    for (const r of p.refunds ?? []) {
+      const at = r.completedAt ?? r.createdAt;
+      rows.push({
+        at: at.getTime(),
+        cells: [
+          'refund',
+          r.id,
+          p.id,
+          at.toISOString(),
+          ...member,
+          p.method,
+          r.status,
+          -r.amountMinor,
+          r.currency,
+          minorToDecimal(-r.amountMinor, r.currency),
+          null,
+          null,
+          p.reference,
+          r.reason,
+        ],
+      });
+    }
+  }
+  rows.sort((a, b) => a.at - b.at);
+  return (
+    [LEDGER_COLUMNS.join(','), ...rows.map((r) => r.cells.map(csvField).join(','))].join('\r\n') +
+    '\r\n'
+  );
+}
