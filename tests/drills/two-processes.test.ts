@@ -1,0 +1,81 @@
+import type { ChildProcess } from 'node:child_process';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import {
+  dbEnv,
+  profileConfig,
+  provision,
+  recreateDatabase,
+  startServer,
+} from '../../scripts/lib/mariadb.mjs';
+import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
+
+const cfg = profileConfig('test');
+const PORTS = [4391, 4392] as const;
+const apis: ChildProcess[] = [];
+
+beforeAll(async () => {
+  await startServer(cfg, { quiet: true });
+  provision(cfg, ['rodewise_drill_multi']);
+  recreateDatabase(cfg, 'rodewise_drill_multi');
+  const env = {
+    ...dbEnv(cfg, 'rodewise_drill_multi'),
+    NODE_ENV: 'production',
+    LOG_LEVEL: 'silent',
+    SMTP_PORT: '1',
+  };
+  mustRun(TSX, ['apps/api/src/cli/seed.ts'], { env, stdio: 'ignore' });
+  for (const port of PORTS)
+    apis.push(
+      startService(
+        `api-${port}`,
+        TSX,
+        ['apps/api/src/server.ts'],
+        { ...env, PORT: String(port) },
+        { quiet: true },
+      ),
+    );
+  await Promise.all(PORTS.map((p) => waitForHttp(`http://127.0.0.1:${p}/api/health`)));
+});
+afterAll(async () => {
+  await Promise.all(apis.map((a) => stopService(a)));
+});
+
+const sid = (res: Response) =>
+  res.headers
+    .getSetCookie()
+    .find((c) => c.startsWith('rw.sid='))
+    ?.split(';')[0] ?? '';
+
+describe('two API processes on one MariaDB', () => {
+  it('accepts on process B a session started on process A, and a sign-out on B ends it on A', async () => {
+    const [a, b] = PORTS.map((p) => `http://127.0.0.1:${p}/api`);
+    const first = await fetch(`${a}/auth/me`);
+    let cookie = sid(first);
+    const { csrfToken } = ((await first.json()) as { data: { csrfToken: string } }).data;
+    const login = await fetch(`${a}/auth/login`, {
+      method: 'POST',
+      headers: { cookie, 'content-type': 'application/json', 'x-csrf-token': csrfToken },
+      body: JSON.stringify({ email: 'maren@larkspit.example', password: 'harbour-demo-2026' }),
+    });
+    expect(login.status).toBe(200);
+    cookie = sid(login);
+    const token = ((await login.json()) as { data: { csrfToken: string } }).data.csrfToken;
+
+    const onB = (await (await fetch(`${b}/auth/me`, { headers: { cookie } })).json()) as {
+      data: { user: { email: string } | null };
+    };
+    expect(onB.data.user?.email).toBe('maren@larkspit.example');
+
+    // The CSRF token lives in the shared session too, so B accepts writes from it.
+    const out = await fetch(`${b}/auth/logout`, {
+      method: 'POST',
+      headers: { cookie, 'x-csrf-token': token, 'content-type': 'application/json' },
+      body: '{}',
+    });
+    expect(out.status).toBe(200);
+    const onA = (await (await fetch(`${a}/auth/me`, { headers: { cookie } })).json()) as {
+      data: { user: unknown };
+    };
+    expect(onA.data.user).toBeNull();
+  });
+});
