@@ -1,0 +1,100 @@
+import { chainSpec, shackleSpec, weakestLink } from '@app/calc';
+import { render, screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import { UnitSystemProvider } from '../../units/components/unit-system-provider';
+import { UnitToggle } from '../../units/components/unit-toggle';
+import { ScopeCalculator } from './scope-calculator';
+import { WeakestLinkBuilder } from './weakest-link-builder';
+
+const inMetric = (ui: React.ReactNode) =>
+  render(
+    <UnitSystemProvider memberSystem="metric">
+      <UnitToggle />
+      {ui}
+    </UnitSystemProvider>,
+  );
+
+const chainPath = () =>
+  screen.getByTestId('catenary-drawing').querySelector('[data-part="chain"]')?.getAttribute('d');
+
+describe('ScopeCalculator', () => {
+  it('redraws the chain as the load is typed', async () => {
+    const user = userEvent.setup();
+    inMetric(<ScopeCalculator />);
+    const before = chainPath();
+    expect(before).toMatch(/^M/);
+    const load = screen.getByLabelText('Horizontal load');
+    await user.clear(load);
+    await user.type(load, '9 kN');
+    expect(chainPath()).not.toBe(before);
+    expect(screen.getByRole('img', { name: /drawn to scale/i })).toBeInTheDocument();
+  });
+
+  it("shows the calc library's message next to a bad field instead of crashing", async () => {
+    const user = userEvent.setup();
+    inMetric(<ScopeCalculator />);
+    const depth = screen.getByLabelText('Depth at the anchor');
+    await user.clear(depth);
+    await user.type(depth, '-3 m');
+    expect(depth).toHaveAccessibleDescription(/depthM must be at least 0/);
+    expect(screen.queryByTestId('catenary-drawing')).not.toBeInTheDocument();
+  });
+
+  it('shows an unreadable entry as such', async () => {
+    const user = userEvent.setup();
+    inMetric(<ScopeCalculator />);
+    const depth = screen.getByLabelText('Depth at the anchor');
+    await user.clear(depth);
+    await user.type(depth, 'deep');
+    expect(depth).toHaveAttribute('aria-invalid', 'true');
+    expect(depth).toHaveAccessibleDescription(/enter a number/i);
+  });
+});
+
+describe('WeakestLinkBuilder', () => {
+  it('shows each margin and highlights the part that breaks first', async () => {
+    const user = userEvent.setup();
+    inMetric(<WeakestLinkBuilder />);
+    // Defaults: 3/8 in G43 chain and a 7/16 in shackle at 3.2 kN.
+    const table = screen.getByRole('table', { name: /weakest-link check/i });
+    const chain = chainSpec({ grade: 'G43', tradeSizeIn: 3 / 8 });
+    const shackle = shackleSpec({ nominalIn: 7 / 16 });
+    const expected = weakestLink({
+      loadN: 3200,
+      components: [
+        { label: 'chain', ...chain },
+        { label: 'shackle', ...shackle },
+      ],
+    });
+    const rows = within(table).getAllByRole('row').slice(1);
+    expect(rows).toHaveLength(2);
+    const weakestRow = rows[expected.weakest.index];
+    expect(weakestRow).toHaveAttribute('aria-current', 'true');
+    expect(within(weakestRow as HTMLElement).getByText('Weakest link')).toBeInTheDocument();
+    expect(rows[0]).toHaveTextContent(`${(chain.wllN / 3200).toFixed(2)} ×`);
+    expect(rows[1]).toHaveTextContent(`${(shackle.minBreakN / 3200).toFixed(2)} ×`);
+
+    // A smaller shackle becomes the weakest part.
+    await user.selectOptions(screen.getByLabelText('Part 2 shackle size'), String(3 / 16));
+    const after = within(screen.getByRole('table')).getAllByRole('row').slice(1);
+    expect(after[1]).toHaveAttribute('aria-current', 'true');
+    expect(after[1]).toHaveTextContent('3/16 in shackle');
+  });
+
+  it('adds a part and shows the load in the other system on the toggle', async () => {
+    const user = userEvent.setup();
+    inMetric(<WeakestLinkBuilder />);
+    await user.selectOptions(screen.getByLabelText('Part to add'), 'shackle');
+    await user.click(screen.getByRole('button', { name: 'Add part' }));
+    expect(within(screen.getByRole('table')).getAllByRole('row')).toHaveLength(4);
+    const load = screen.getByLabelText('Load through the rode');
+    expect(load).toHaveValue('3.2 kN');
+    await user.click(screen.getByRole('radio', { name: 'Imperial' }));
+    expect(load).toHaveValue('3.2 kN');
+    await user.clear(load);
+    await user.type(load, '720');
+    // A bare number is read in the chosen (imperial) units: lbf.
+    expect(screen.getByText(/Reads as 720 lbf/)).toBeInTheDocument();
+  });
+});
