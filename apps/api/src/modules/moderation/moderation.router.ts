@@ -1,0 +1,97 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import {
+  commentDecisionSchema,
+  decisionSchema,
+  idParam,
+  postFlagsSchema,
+  reportInputSchema,
+  resolveReportSchema,
+} from '@app/shared';
+import { currentUser, requireAuth, requireRole } from '../../middleware/require-auth';
+import { approvedCommentCounts } from '../posts/post-access';
+import { toCommentDto, toPostSummaryDto } from '../posts/posts.presenter';
+import { toAuditEntryDto, toQueueCommentDto, toReportDto } from './moderation.presenter';
+import * as mod from './moderation.service';
+import { createReport, resolveReport } from './reports.service';
+
+const pageQuery = z.object({ page: z.coerce.number().int().min(1).max(1000).default(1) });
+const id = (name: string, p: unknown) => Number(idParam(name).parse(p)[name]);
+
+/** The moderators' desk: queue, decisions, flags, reports and the log. Moderators only. */
+export function moderationRouter(ctx: mod.ModContext) {
+  const r = Router();
+  r.use(requireRole('moderator'));
+  r.get('/queue', async (_req, res) => {
+    const q = await mod.queue();
+    const counts = await approvedCommentCounts(q.posts.map((p) => p.id));
+    res.json({
+      data: {
+        posts: q.posts.map((p) => toPostSummaryDto(p, counts.get(p.id) ?? 0)),
+        comments: q.comments.map(toQueueCommentDto),
+        reports: await Promise.all(q.reports.map(toReportDto)),
+      },
+    });
+  });
+  r.get('/count', async (_req, res) => {
+    res.json({ data: await mod.counts() });
+  });
+  r.post('/posts/:postId/decision', async (req, res) => {
+    const post = await mod.decidePost(
+      ctx,
+      currentUser(req),
+      id('postId', req.params),
+      decisionSchema.parse(req.body),
+    );
+    res.json({ data: { id: post.id, status: post.status } });
+  });
+  r.patch('/posts/:postId/flags', async (req, res) => {
+    const post = await mod.setFlags(
+      ctx,
+      currentUser(req),
+      id('postId', req.params),
+      postFlagsSchema.parse(req.body),
+    );
+    res.json({
+      data: {
+        id: post.id,
+        status: post.status,
+        pinned: post.pinnedAt !== null,
+        locked: post.lockedAt !== null,
+      },
+    });
+  });
+  r.post('/comments/:commentId/decision', async (req, res) => {
+    const c = await mod.decideComment(
+      ctx,
+      currentUser(req),
+      id('commentId', req.params),
+      commentDecisionSchema.parse(req.body),
+    );
+    res.json({ data: toCommentDto(c, null) });
+  });
+  r.post('/reports/:reportId/resolve', async (req, res) => {
+    const rep = await resolveReport(
+      currentUser(req),
+      id('reportId', req.params),
+      resolveReportSchema.parse(req.body),
+    );
+    res.json({ data: { id: rep.id, status: rep.status } });
+  });
+  r.get('/log', async (req, res) => {
+    const { page } = pageQuery.parse(req.query);
+    const { rows, total } = await mod.auditLog(page);
+    res.json({ data: rows.map(toAuditEntryDto), meta: { page, pageSize: 50, total } });
+  });
+  return r;
+}
+
+/** Members report posts and comments here; reports land in the moderators' queue. */
+export function reportsRouter() {
+  const r = Router();
+  r.post('/', requireAuth(), async (req, res) => {
+    const rep = await createReport(currentUser(req), reportInputSchema.parse(req.body));
+    res.status(201).json({ data: { id: rep.id, status: rep.status } });
+  });
+  return r;
+}

@@ -1,0 +1,224 @@
+import type { z } from 'zod';
+import type { commentDecisionSchema, decisionSchema, postFlagsSchema } from '@app/shared';
+
+import { AppError, notFound } from '../../errors/app-error';
+import { AuditEvent, Comment, Post, Report, User } from '../../models';
+import { recordAudit } from '../audit/audit.service';
+import { notifyReply, postPath } from '../posts/comments.service';
+import { POST_INCLUDE } from '../posts/post-access';
+import { indexPost } from '../search/post-index';
+import { tellAuthor } from './moderation-mail';
+
+type Decision = z.output<typeof decisionSchema>;
+type CommentDecision = z.output<typeof commentDecisionSchema>;
+type Flags = z.output<typeof postFlagsSchema>;
+
+export interface ModContext {
+  publicUrl: string;
+}
+
+const audit = (
+  actor: User,
+  action: string,
+  type: string,
+  id: number,
+  reason: string,
+  details?: unknown,
+) =>
+  recordAudit({
+    actorId: actor.id,
+    area: 'moderation',
+    action,
+    subjectType: type,
+    subjectId: String(id),
+    reason: reason || null,
+    details: details ?? null,
+  });
+
+/** Pending posts and comments, oldest first, and open reports. */
+export async function queue() {
+  const [posts, comments, reports] = await Promise.all([
+    Post.findAll({
+      where: { status: 'pending' },
+      include: POST_INCLUDE,
+      order: [['updatedAt', 'ASC']],
+    }),
+    Comment.findAll({
+      where: { status: 'pending' },
+      include: [
+        { model: User, as: 'author', attributes: ['id', 'displayName'] },
+        { model: Post, as: 'post', attributes: ['id', 'title'] },
+      ],
+      order: [['id', 'ASC']],
+    }),
+    Report.findAll({
+      where: { status: 'open' },
+      include: [{ model: User, as: 'reporter', attributes: ['id', 'displayName'] }],
+      order: [['id', 'ASC']],
+    }),
+  ]);
+  return { posts, comments, reports };
+}
+
+/** How much waits for a moderator (for the navigation badge). */
+export async function counts() {
+  const [pendingPosts, pendingComments, openReports] = await Promise.all([
+    Post.count({ where: { status: 'pending' } }),
+    Comment.count({ where: { status: 'pending' } }),
+    Report.count({ where: { status: 'open' } }),
+  ]);
+  return {
+    pendingPosts,
+    pendingComments,
+    openReports,
+    total: pendingPosts + pendingComments + openReports,
+  };
+}
+
+const POST_OUTCOME = {
+  approve: { status: 'approved', subject: 'Your post is published', action: 'post.approve' },
+  reject: { status: 'rejected', subject: 'Your post was not approved', action: 'post.reject' },
+  'request-changes': {
+    status: 'changes-requested',
+    subject: 'Your post needs changes',
+    action: 'post.request-changes',
+  },
+} as const;
+
+/**
+ * Approves, rejects (with a reason) or sends back a pending post. The author is told by e-mail and in the app;
+ * the text is kept either way so the author can revise it. Logged in the audit log.
+ */
+export async function decidePost(ctx: ModContext, actor: User, postId: number, d: Decision) {
+  const post = await Post.findByPk(postId);
+  if (!post) throw notFound('Post');
+  if (post.status !== 'pending')
+    throw new AppError('CONFLICT', `This post is ${post.status}, not pending`);
+  const o = POST_OUTCOME[d.action];
+  await Post.sequelize?.transaction(async (t) => {
+    await post.update(
+      d.action === 'approve'
+        ? {
+            status: o.status,
+            approvedText: post.bodyText,
+            publishedAt: post.publishedAt ?? new Date(),
+            moderationNote: null,
+          }
+        : { status: o.status, moderationNote: d.reason },
+      { transaction: t },
+    );
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'moderation',
+        action: o.action,
+        subjectType: 'post',
+        subjectId: String(post.id),
+        reason: d.reason || null,
+        details: { title: post.title },
+      },
+      t,
+    );
+    const lines = [`“${post.title}”`];
+    if (d.action === 'approve') lines.push('A moderator approved it and it is now published.');
+    else
+      lines.push(
+        `A moderator says: ${d.reason}`,
+        'Your text is kept: edit it and submit it again.',
+      );
+    await tellAuthor(
+      ctx.publicUrl,
+      { userId: post.authorId, subject: o.subject, lines, path: postPath(post.id) },
+      t,
+    );
+  });
+  await indexPost(post.id);
+  return post;
+}
+
+/** Approves or rejects a pending comment; the author hears either way, and the thread hears of an approval. */
+export async function decideComment(
+  ctx: ModContext,
+  actor: User,
+  commentId: number,
+  d: CommentDecision,
+) {
+  const comment = await Comment.findByPk(commentId, { include: [{ model: Post, as: 'post' }] });
+  if (!comment) throw notFound('Comment');
+  if (comment.status !== 'pending')
+    throw new AppError('CONFLICT', `This comment is ${comment.status}, not pending`);
+  const approve = d.action === 'approve';
+  await comment.update({
+    status: approve ? 'approved' : 'rejected',
+    moderationNote: approve ? null : d.reason,
+  });
+  await audit(
+    actor,
+    approve ? 'comment.approve' : 'comment.reject',
+    'comment',
+    comment.id,
+    d.reason,
+    {
+      postId: comment.postId,
+    },
+  );
+  if (approve) await notifyReply(comment);
+  else
+    await tellAuthor(ctx.publicUrl, {
+      userId: comment.authorId,
+      subject: 'Your comment was not approved',
+      lines: [`A moderator says: ${d.reason}`, `Your comment: ${comment.body.slice(0, 500)}`],
+      path: postPath(comment.postId),
+    });
+  return comment;
+}
+
+/** Pins, locks or hides (with a reason) a published post, or undoes it; each change is logged. */
+export async function setFlags(ctx: ModContext, actor: User, postId: number, f: Flags) {
+  const post = await Post.findByPk(postId);
+  if (!post) throw notFound('Post');
+  if (!['approved', 'hidden'].includes(post.status))
+    throw new AppError(
+      'CONFLICT',
+      'Only published or hidden posts can be pinned, locked or hidden',
+    );
+  const now = new Date();
+  const changes: Partial<Post> = {};
+  const actions: string[] = [];
+  if (f.pinned !== undefined && f.pinned !== (post.pinnedAt !== null)) {
+    changes.pinnedAt = f.pinned ? now : null;
+    actions.push(f.pinned ? 'post.pin' : 'post.unpin');
+  }
+  if (f.locked !== undefined && f.locked !== (post.lockedAt !== null)) {
+    changes.lockedAt = f.locked ? now : null;
+    actions.push(f.locked ? 'post.lock' : 'post.unlock');
+  }
+  if (f.hidden !== undefined && f.hidden !== (post.status === 'hidden')) {
+    changes.status = f.hidden ? 'hidden' : 'approved';
+    if (f.hidden) changes.moderationNote = f.reason;
+    actions.push(f.hidden ? 'post.hide' : 'post.unhide');
+  }
+  await post.update(changes);
+  for (const a of actions) await audit(actor, a, 'post', post.id, f.reason, { title: post.title });
+  if (changes.status === 'hidden')
+    await tellAuthor(ctx.publicUrl, {
+      userId: post.authorId,
+      subject: 'Your post was hidden',
+      lines: [`“${post.title}”`, `A moderator says: ${f.reason}`],
+      path: postPath(post.id),
+    });
+  await indexPost(post.id);
+  return post;
+}
+
+/** Moderation entries of the audit log, newest first, 50 a page. */
+export async function auditLog(page: number) {
+  const { rows, count } = await AuditEvent.findAndCountAll({
+    where: { area: 'moderation' },
+    include: [{ model: User, as: 'actor', attributes: ['id', 'displayName'] }],
+    order: [['id', 'DESC']],
+    limit: 50,
+    offset: (page - 1) * 50,
+  });
+  return { rows, total: count };
+}

@@ -1,0 +1,30 @@
+import type { Transaction } from 'sequelize';
+import { Notification, type User } from '../../models';
+
+/** Stores an in-app notice for one member (inside the caller's transaction when given). */
+export async function notify(
+  userId: number,
+  kind: string,
+  message: string,
+  link: string | null,
+  transaction?: Transaction,
+) {
+  return Notification.create(
+    { userId, kind, message: message.slice(0, 300), link, readAt: null },
+    { transaction },
+  );
+}
+
+/** The member's latest 30 notices and how many are unread. */
+export async function listNotifications(user: User) {
+  const [rows, unread] = await Promise.all([
+    Notification.findAll({ where: { userId: user.id }, order: [['id', 'DESC']], limit: 30 }),
+    Notification.count({ where: { userId: user.id, readAt: null } }),
+  ]);
+  return { rows, unread };
+}
+
+/** Marks every notice of the member read. */
+export async function markAllRead(user: User) {
+  await Notification.update({ readAt: new Date() }, { where: { userId: user.id, readAt: null } });
+}

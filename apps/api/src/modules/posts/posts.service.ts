@@ -1,0 +1,177 @@
+import type { z } from 'zod';
+import { Op } from 'sequelize';
+import type { createPostSchema, postListQuerySchema, postPatchSchema } from '@app/shared';
+import { AppError, invalid, notFound } from '../../errors/app-error';
+import { Boat, Post, Topic, Vote, type User } from '../../models';
+import { recordAudit } from '../audit/audit.service';
+import { getSetting } from '../club/club.service';
+import { indexPost } from '../search/post-index';
+import { renderBody } from './body-render';
+import { editRatio } from './edit-size';
+import { POST_INCLUDE, isModerator, loadOwnPost, publicWhere } from './post-access';
+import { computeSetupCard } from './setup-card';
+
+type CreateInput = z.output<typeof createPostSchema>;
+type PatchInput = z.output<typeof postPatchSchema>;
+type ListQuery = z.output<typeof postListQuerySchema>;
+
+export const PAGE_SIZE = 20;
+
+async function checkRefs(actor: User, input: PatchInput) {
+  if (input.topicId !== undefined && !(await Topic.findByPk(input.topicId)))
+    throw invalid({ topicId: 'Choose one of the topics' });
+  if (input.boatId) {
+    const boat = await Boat.findByPk(input.boatId);
+    if (!boat || boat.ownerId !== actor.id) throw invalid({ boatId: 'Choose one of your boats' });
+  }
+  if (input.visibility === 'members' && !(await getSetting('membersOnlyPostsAllowed')))
+    throw invalid({ visibility: 'This club publishes every post publicly' });
+  if (input.setup) computeSetupCard(input.setup);
+}
+
+async function selfPublishAudit(actor: User, post: Post, action: string) {
+  await recordAudit({
+    actorId: actor.id,
+    area: 'moderation',
+    action,
+    subjectType: 'post',
+    subjectId: String(post.id),
+    details: { title: post.title },
+  });
+}
+
+/**
+ * Creates a post. A draft unless `submit`; submitted posts go to the moderation queue as pending, while a
+ * moderator's own post is published at once and logged. Throws VALIDATION_FAILED on a bad body or reference.
+ */
+export async function createPost(actor: User, input: CreateInput): Promise<Post> {
+  await checkRefs(actor, input);
+  const { html, text } = renderBody(input.body);
+  const publishNow = input.submit && isModerator(actor);
+  const post = await Post.create({
+    authorId: actor.id,
+    topicId: input.topicId,
+    boatId: input.boatId ?? null,
+    kind: input.kind,
+    title: input.title,
+    bodyJson: input.body,
+    bodyHtml: html,
+    bodyText: text,
+    approvedText: publishNow ? text : null,
+    status: publishNow ? 'approved' : input.submit ? 'pending' : 'draft',
+    visibility: input.visibility,
+    setup: input.setup ?? null,
+    moderationNote: null,
+    acceptedCommentId: null,
+    pinnedAt: null,
+    lockedAt: null,
+    publishedAt: publishNow ? new Date() : null,
+  });
+  if (publishNow) await selfPublishAudit(actor, post, 'post.self-publish');
+  await indexPost(post.id);
+  return post;
+}
+
+/**
+ * Saves the author's edit (autosave uses this too). An approved post returns to pending only when the edit
+ * changes more than the club's `substantialEditRatio` of its words; a moderator's edit stays published and is
+ * logged. Someone else's post reads as not found.
+ */
+export async function updatePost(actor: User, postId: number, input: PatchInput): Promise<Post> {
+  const post = await loadOwnPost(actor, postId);
+  await checkRefs(actor, input);
+  const changes: Partial<Post> = {};
+  if (input.kind !== undefined) changes.kind = input.kind;
+  if (input.title !== undefined) changes.title = input.title;
+  if (input.topicId !== undefined) changes.topicId = input.topicId;
+  if (input.visibility !== undefined) changes.visibility = input.visibility;
+  if (input.boatId !== undefined) changes.boatId = input.boatId;
+  if (input.setup !== undefined) changes.setup = input.setup;
+  if (input.body !== undefined) {
+    const { html, text } = renderBody(input.body);
+    Object.assign(changes, { bodyJson: input.body, bodyHtml: html, bodyText: text });
+  }
+  if (post.status === 'approved') {
+    const before = `${post.title}\n${post.approvedText ?? post.bodyText}`;
+    const after = `${changes.title ?? post.title}\n${changes.bodyText ?? post.bodyText}`;
+    const substantial = editRatio(before, after) > (await getSetting('substantialEditRatio'));
+    if (substantial && isModerator(actor)) {
+      changes.approvedText = changes.bodyText ?? post.bodyText;
+      await selfPublishAudit(actor, post, 'post.self-edit');
+    } else if (substantial) changes.status = 'pending';
+  }
+  await post.update(changes);
+  await indexPost(post.id);
+  return post;
+}
+
+/** Sends a draft, rejected or sent-back post to moderation (a moderator's own post publishes at once). */
+export async function submitPost(actor: User, postId: number): Promise<Post> {
+  const post = await loadOwnPost(actor, postId);
+  if (!['draft', 'rejected', 'changes-requested'].includes(post.status))
+    throw new AppError('CONFLICT', `This post is ${post.status}; there is nothing to submit`);
+  if (isModerator(actor)) {
+    await post.update({
+      status: 'approved',
+      approvedText: post.bodyText,
+      publishedAt: post.publishedAt ?? new Date(),
+      moderationNote: null,
+    });
+    await selfPublishAudit(actor, post, 'post.self-publish');
+  } else await post.update({ status: 'pending' });
+  await indexPost(post.id);
+  return post;
+}
+
+/** Deletes one of the actor's posts with its comments and votes. */
+export async function deletePost(actor: User, postId: number) {
+  const post = await loadOwnPost(actor, postId);
+  await post.destroy();
+  await indexPost(postId);
+}
+
+/** Approved posts the viewer may read, pinned first, then newest; filtered by topic slug and kind. */
+export async function listPosts(viewer: User | null, q: ListQuery) {
+  const topic = q.topic ? await Topic.findOne({ where: { slug: q.topic } }) : null;
+  if (q.topic && !topic) throw notFound('Topic');
+  const where = {
+    ...publicWhere(viewer),
+    ...(topic ? { topicId: topic.id } : {}),
+    ...(q.kind ? { kind: q.kind } : {}),
+  };
+  const { rows, count } = await Post.findAndCountAll({
+    where,
+    include: POST_INCLUDE,
+    order: [
+      ['pinnedAt', 'DESC'],
+      ['publishedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    limit: PAGE_SIZE,
+    offset: (q.page - 1) * PAGE_SIZE,
+    distinct: true,
+  });
+  return { rows, total: count };
+}
+
+/** Every post of the actor, any status, newest change first. */
+export const listOwnPosts = (actor: User) =>
+  Post.findAll({
+    where: { authorId: actor.id },
+    include: POST_INCLUDE,
+    order: [['updatedAt', 'DESC']],
+    limit: 200,
+  });
+
+/** Posts by ids in the given order, for search results (ids no longer present drop out). */
+export async function postsByIds(ids: number[]): Promise<Post[]> {
+  if (ids.length === 0) return [];
+  const rows = await Post.findAll({ where: { id: { [Op.in]: ids } }, include: POST_INCLUDE });
+  const byId = new Map(rows.map((p) => [p.id, p]));
+  return ids.flatMap((id) => byId.get(id) ?? []);
+}
+
+/** Whether the viewer has marked the post helpful. */
+export async function hasVoted(viewer: User | null, postId: number) {
+  return viewer ? (await Vote.count({ where: { postId, userId: viewer.id } })) > 0 : false;
+}
