@@ -40,13 +40,20 @@ describe('ground-tackle calculators for a visitor', () => {
       // A value the engineering rejects shows its message by the field, and the page survives.
       const depth = page.getByLabel('Depth at the anchor');
       await depth.fill('-4 m');
-      await expect.poll(() => page.getByText(/depthM must be at least 0/).count()).toBeGreaterThan(0);
+      await expect
+        .poll(() => page.getByText(/depthM must be at least 0/).count())
+        .toBeGreaterThan(0);
       await depth.fill('20 ft');
 
       // The design load calculator answers too.
       await page.getByLabel('Length overall (LOA)').first().fill("34'");
       await expect
-        .poll(() => page.getByRole('definition').filter({ hasText: /kN|lbf/ }).count())
+        .poll(() =>
+          page
+            .getByRole('definition')
+            .filter({ hasText: /kN|lbf/ })
+            .count(),
+        )
         .toBeGreaterThan(0);
       expect(await overflowX(page)).toBeLessThanOrEqual(0);
       await screenshot(page, name);
@@ -72,7 +79,9 @@ describe('a member sizes, checks, saves and prints a plan', () => {
 
     const everyday = page.getByRole('region', { name: 'Everyday: 30 kn' });
     const storm = page.getByRole('region', { name: 'Storm: 60 kn' });
-    await expect.poll(() => everyday.getByText('Design load', { exact: true }).count(), { timeout: 15000 }).toBe(1);
+    await expect
+      .poll(() => everyday.getByText('Design load', { exact: true }).count(), { timeout: 15000 })
+      .toBe(1);
     for (const column of [everyday, storm]) {
       for (const part of ['Anchor', 'Chain', 'Nylon rode', 'Snubber']) {
         expect(await column.getByText(part, { exact: true }).count()).toBe(1);
@@ -114,7 +123,9 @@ describe('a member sizes, checks, saves and prints a plan', () => {
     expect(await page.locator('#root > div > header').isVisible()).toBe(false);
     expect(await page.getByRole('button', { name: 'Print card' }).isVisible()).toBe(false);
     expect(await page.getByRole('article', { name: 'Plan card' }).isVisible()).toBe(true);
-    expect(await page.getByRole('article', { name: 'Plan card' }).getByText(boatName).count()).toBe(1);
+    expect(await page.getByRole('article', { name: 'Plan card' }).getByText(boatName).count()).toBe(
+      1,
+    );
     await screenshot(page, 'plan-card');
     await page.close();
   });

@@ -7,6 +7,7 @@ const PRINT_CSS = `
   @page { size: auto; margin: 12mm; }
   #root > div > header, #root > div > footer, #root > div > a { display: none !important; }
   #root main { padding: 0 !important; }
+  #root main h1 { display: none !important; }
   html, body { background: #fff !important; }
   [data-plan-card] { box-shadow: none !important; border: 1px solid #000 !important; break-inside: avoid; font-size: 10.5pt; }
   [data-plan-card] * { color: #000 !important; }

@@ -23,7 +23,10 @@ export function Quantity({ value, kind, className }: QuantityProps) {
   return (
     <span
       title={other}
-      className={cn('cursor-help underline decoration-sand-500 decoration-dotted', className)}
+      className={cn(
+        'cursor-help underline decoration-sand-500 decoration-dotted print:no-underline',
+        className,
+      )}
     >
       {shown}
       <span className="sr-only"> ({other})</span>

@@ -24,7 +24,7 @@ describe('parseQuantity', () => {
     ["32'", 'length', '32 ft', 'm'],
     ['32’', 'length', '32 ft', 'm'],
     ['32 feet', 'length', '32 ft', 'm'],
-    ["32' 6\"", 'length', '32 ft + 6 in', 'm'],
+    ['32\' 6"', 'length', '32 ft + 6 in', 'm'],
     ["32'6", 'length', '32 ft + 6 in', 'm'],
     ['975 cm', 'length', '975 cm', 'm'],
     ['5 fathoms', 'length', '30 ft', 'm'],
