@@ -22,20 +22,29 @@ const ROLES: Array<{ who: string; email: string | null; roles: Role[] }> = [
 ];
 
 describe('role-aware navigation in Chromium', () => {
-  it.each(ROLES)('$who sees exactly the navigation for their roles', async ({ who, email, roles }) => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    if (email) await signIn(page, email);
-    await page.goto(`${baseUrl()}/`);
-    const nav = page.getByRole('navigation', { name: 'Main' });
-    const expected = navFor(email ? { roles } : null).map((i) => i.label);
-    await expect.poll(async () => (await nav.locator('li > a, li > button').allInnerTexts()).length, { timeout: 10000 }).toBe(expected.length);
-    const shown = (await nav.locator('li > a, li > button').allInnerTexts()).map((t) => t.trim());
-    // Each item starts with its label (an item may add a count after it).
-    expect(shown.length).toBe(expected.length);
-    expected.forEach((label, i) => expect(shown[i]?.startsWith(label), `${who}: "${shown[i]}" vs "${label}"`).toBe(true));
-    if (!roles.includes('admin')) expect(shown).not.toContain('Admin');
-    await page.close();
-  });
+  it.each(ROLES)(
+    '$who sees exactly the navigation for their roles',
+    async ({ who, email, roles }) => {
+      const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+      if (email) await signIn(page, email);
+      await page.goto(`${baseUrl()}/`);
+      const nav = page.getByRole('navigation', { name: 'Main' });
+      const expected = navFor(email ? { roles } : null).map((i) => i.label);
+      await expect
+        .poll(async () => (await nav.locator('li > a, li > button').allInnerTexts()).length, {
+          timeout: 10000,
+        })
+        .toBe(expected.length);
+      const shown = (await nav.locator('li > a, li > button').allInnerTexts()).map((t) => t.trim());
+      // Each item starts with its label (an item may add a count after it).
+      expect(shown.length).toBe(expected.length);
+      expected.forEach((label, i) =>
+        expect(shown[i]?.startsWith(label), `${who}: "${shown[i]}" vs "${label}"`).toBe(true),
+      );
+      if (!roles.includes('admin')) expect(shown).not.toContain('Admin');
+      await page.close();
+    },
+  );
 
   it('an admin grants and revokes a role on the admin page', async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
@@ -45,7 +54,9 @@ describe('role-aware navigation in Chromium', () => {
     await expect.poll(() => box.count(), { timeout: 10000 }).toBe(1);
     await box.click();
     await expect.poll(() => box.isChecked(), { timeout: 10000 }).toBe(true);
-    await expect.poll(() => page.getByRole('button', { name: 'Undo' }).count(), { timeout: 10000 }).toBe(1);
+    await expect
+      .poll(() => page.getByRole('button', { name: 'Undo' }).count(), { timeout: 10000 })
+      .toBe(1);
     await waitForMail('bram@larkspit.example', 'roles changed');
     const res = await page.request.get(`${baseUrl()}/api/admin/users?q=bram`);
     const users = ((await res.json()) as { data: Array<{ email: string; roles: string[] }> }).data;
@@ -70,9 +81,13 @@ describe('home page', () => {
       const page = await browser.newPage({ viewport: { width, height: 900 } });
       await page.goto(`${baseUrl()}/`);
       await expect.poll(() => page.getByRole('heading', { level: 1 }).count()).toBeGreaterThan(0);
-      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+      const overflow = await page.evaluate(
+        () => document.documentElement.scrollWidth - window.innerWidth,
+      );
       expect(overflow).toBeLessThanOrEqual(0);
-      await expect.poll(() => page.getByText('Larkspit Sound Cruising Club').count()).toBeGreaterThan(0);
+      await expect
+        .poll(() => page.getByText('Larkspit Sound Cruising Club').count())
+        .toBeGreaterThan(0);
       await screenshot(page, name);
       await page.close();
     }
@@ -88,19 +103,25 @@ describe('joining the club', () => {
     await page.getByLabel(/^E-mail/).fill(email);
     await page.getByLabel(/^Password/).fill('a-long-enough-secret');
     await page.getByRole('button', { name: 'Create account' }).click();
-    await expect.poll(() => page.getByText('Check your inbox').count(), { timeout: 10000 }).toBeGreaterThan(0);
+    await expect
+      .poll(() => page.getByText('Check your inbox').count(), { timeout: 10000 })
+      .toBeGreaterThan(0);
 
     const mail = await waitForMail(email, 'Confirm your e-mail');
     const link = /https?:\/\/\S+verify-email\?token=\S+/.exec(mail.text)?.[0];
     expect(link).toBeDefined();
     await page.goto(link ?? '');
-    await expect.poll(() => page.getByText(/confirmed|verified/i).count(), { timeout: 10000 }).toBeGreaterThan(0);
+    await expect
+      .poll(() => page.getByText(/confirmed|verified/i).count(), { timeout: 10000 })
+      .toBeGreaterThan(0);
 
     await signIn(page, email, 'a-long-enough-secret');
     await page.getByRole('button', { name: 'Menu' }).click();
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('button', { name: 'Menu' }).click();
-    await expect.poll(() => page.getByRole('link', { name: 'Sign in' }).count(), { timeout: 10000 }).toBeGreaterThan(0);
+    await expect
+      .poll(() => page.getByRole('link', { name: 'Sign in' }).count(), { timeout: 10000 })
+      .toBeGreaterThan(0);
     await page.close();
   });
 });
