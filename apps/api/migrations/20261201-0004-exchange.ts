@@ -54,9 +54,10 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     listing_id: fk('listings', 'CASCADE', false),
     buyer_id: fk('users', 'CASCADE', false),
     seller_id: fk('users', 'CASCADE', false),
-    last_message_at: ts,
-    buyer_read_at: { type: DataTypes.DATE, allowNull: true },
-    seller_read_at: { type: DataTypes.DATE, allowNull: true },
+    // Millisecond precision: unread counts compare message times with read marks.
+    last_message_at: { type: DataTypes.DATE(3), allowNull: false },
+    buyer_read_at: { type: DataTypes.DATE(3), allowNull: true },
+    seller_read_at: { type: DataTypes.DATE(3), allowNull: true },
     created_at: ts,
     updated_at: ts,
   });
@@ -69,7 +70,7 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     thread_id: fk('listing_threads', 'CASCADE', false),
     sender_id: fk('users', 'CASCADE', false),
     body: { type: DataTypes.TEXT, allowNull: false },
-    created_at: ts,
+    created_at: { type: DataTypes.DATE(3), allowNull: false },
     updated_at: ts,
   });
   await qi.addIndex('listing_messages', ['thread_id', 'created_at']);

@@ -28,7 +28,7 @@ export function initListingMessage(sequelize: Sequelize) {
       threadId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
       senderId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
       body: { type: DataTypes.TEXT, allowNull: false },
-      createdAt: DataTypes.DATE,
+      createdAt: DataTypes.DATE(3),
       updatedAt: DataTypes.DATE,
     },
     { sequelize, tableName: 'listing_messages', underscored: true },

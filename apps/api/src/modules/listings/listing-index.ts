@@ -93,7 +93,7 @@ const newIndex = () =>
     searchOptions: {
       boost: { title: 3, specsText: 2 },
       prefix: (term) => term.length > 2,
-      fuzzy: (term) => (term.length > 3 ? 0.25 : false),
+      fuzzy: (term) => (term.length < 5 ? false : 1),
       combineWith: 'AND',
     },
   });
@@ -187,12 +187,14 @@ export function searchIndex(
   const q = query.q?.trim();
   let matched: IndexedListing[];
   if (q) {
-    const results: SearchResult[] = index.search(q, {
-      filter: (r) => {
-        const d = docs.get(r.id as number);
-        return d !== undefined && passes(d, query, nowMs);
-      },
-    });
+    const filter = (r: SearchResult) => {
+      const d = docs.get(r.id as number);
+      return d !== undefined && passes(d, query, nowMs);
+    };
+    let results = index.search(q, { filter });
+    // Nothing with one typo per word: allow two, which also catches swapped letters ("chian").
+    if (results.length === 0)
+      results = index.search(q, { filter, fuzzy: (term) => (term.length < 5 ? false : 2) });
     matched = [];
     for (const r of results) {
       const d = docs.get(r.id as number);

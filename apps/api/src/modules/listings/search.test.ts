@@ -1,0 +1,220 @@
+import { anchorSuggestion } from '@app/calc';
+import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import type { ListingInput } from '@app/shared';
+import { Boat } from '../../models';
+import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
+import { chainListing, exchangeFixture, grantPaidUp } from './exchange-testing';
+import { rebuildListingIndex, searchIndex } from './listing-index';
+import { listingSearchSchema } from '@app/shared';
+
+const built = createTestApp();
+afterAll(() => built.close());
+
+let north = 0;
+let south = 0;
+let c: Client;
+const ids: Record<string, number> = {};
+
+const base = (over: Partial<ListingInput>): ListingInput =>
+  ({ ...chainListing(north), ...over }) as ListingInput;
+
+beforeEach(async () => {
+  await resetDb();
+  const { harbors } = await exchangeFixture();
+  north = harbors[0]?.id ?? 0;
+  south = harbors[1]?.id ?? 0;
+  const user = await buildUser();
+  await grantPaidUp(user);
+  c = await client(built.app);
+  await c.signIn(user.email);
+  const listings: Record<string, ListingInput> = {
+    chain38: base({ priceCents: 18000 }),
+    chain516: base({
+      title: 'Short length of 5/16 high test',
+      priceCents: 9000,
+      harborId: south,
+      condition: 'fair',
+      specs: { grade: 'G43', tradeSizeIn: 0.3125, lengthM: 15, galvanizing: 'patchy' },
+    }),
+    plow60: base({
+      category: 'anchor',
+      title: 'Plow anchor 60 kg',
+      description: 'Sets well in sand.',
+      priceCents: 35000,
+      specs: { anchorType: 'plow', massKg: 60 },
+    }),
+    plow10: base({
+      category: 'anchor',
+      title: 'Small plow anchor 10 kg',
+      description: 'Kedge or dinghy.',
+      priceCents: 8000,
+      specs: { anchorType: 'plow', massKg: 10 },
+    }),
+    rode16: base({
+      category: 'rode',
+      title: 'Nylon three-strand rode 16 mm, 60 m',
+      description: 'Spliced thimble on one end.',
+      priceCents: 15000,
+      specs: { material: 'nylon', construction: 'three-strand', diameterMm: 16, lengthM: 60 },
+    }),
+    rode10: base({
+      category: 'rode',
+      title: 'Thin nylon rode 10 mm',
+      description: 'Light kedge line.',
+      priceCents: 4000,
+      specs: { material: 'nylon', construction: 'three-strand', diameterMm: 10, lengthM: 40 },
+    }),
+  };
+  for (const [key, body] of Object.entries(listings)) {
+    const res = await c.post('/api/listings', { ...body, publish: true });
+    expect(res.status, key).toBe(201);
+    ids[key] = res.body.data.id as number;
+  }
+});
+
+const found = (res: { body: { data: Array<{ id: number }> } }) => res.body.data.map((l) => l.id);
+
+describe('GET /api/listings search', () => {
+  it('finds a misspelt query (fuzzy) and a prefix, over title, description and specs', async () => {
+    expect(found(await c.get('/api/listings?q=chian'))).toEqual(
+      expect.arrayContaining([ids.chain38, ids.chain516]),
+    );
+    expect(found(await c.get('/api/listings?q=thim'))).toEqual([ids.rode16]);
+    expect(found(await c.get('/api/listings?q=high%20test%205%2F16'))).toContain(ids.chain516);
+    expect(found(await c.get('/api/listings?q=grade%2043')).sort()).toEqual(
+      [ids.chain38, ids.chain516].sort(),
+    );
+  });
+
+  it('filters by category, harbour, price range, size range and condition, and sorts', async () => {
+    expect(found(await c.get('/api/listings?category=anchor')).sort()).toEqual(
+      [ids.plow60, ids.plow10].sort(),
+    );
+    expect(found(await c.get(`/api/listings?harborId=${south}`))).toEqual([ids.chain516]);
+    expect(found(await c.get('/api/listings?priceMin=8000&priceMax=15000')).sort()).toEqual(
+      [ids.chain516, ids.plow10, ids.rode16].sort(),
+    );
+    expect(found(await c.get('/api/listings?sizeMinMm=9&sizeMaxMm=12')).sort()).toEqual(
+      [ids.chain38, ids.rode10].sort(),
+    );
+    expect(found(await c.get('/api/listings?condition=fair'))).toEqual([ids.chain516]);
+    const asc = (await c.get('/api/listings?sort=price-asc')).body.data.map(
+      (l: { priceCents: number }) => l.priceCents,
+    );
+    expect(asc).toEqual([...asc].sort((a: number, b: number) => a - b));
+    expect(asc).toHaveLength(6);
+  });
+
+  it('answers bad filters with 400 naming the field', async () => {
+    const bad = await c.get('/api/listings?category=boats&priceMin=-5&sort=cheapest');
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields as object).sort()).toEqual([
+      'category',
+      'priceMin',
+      'sort',
+    ]);
+    expect(
+      (await c.get('/api/listings?priceMin=500&priceMax=100')).body.error.fields.priceMin,
+    ).toMatch(/above/);
+  });
+
+  it('rebuilds the same results from MariaDB', async () => {
+    const query = listingSearchSchema.parse({ q: 'anchr' });
+    const before = searchIndex(query).hits.map((h) => h.doc.id);
+    expect(await rebuildListingIndex()).toBe(6);
+    expect(searchIndex(query).hits.map((h) => h.doc.id)).toEqual(before);
+    expect(before.sort()).toEqual([ids.plow60, ids.plow10].sort());
+  });
+});
+
+describe('fits my boat', () => {
+  async function boatOf(body: object) {
+    return (await c.post('/api/boats', body)).body.data.id as number;
+  }
+  it('flags gear for a 9.1 m sloop at 30 kn: fits, marginal, too light, with reasons', async () => {
+    // Design load from the ABYC H-40 table via @app/calc: about 4.7 kN for this boat at 30 kn.
+    const sloop = await boatOf({
+      name: 'Fixed Sloop',
+      hull: 'sail',
+      loaM: 9.1,
+      beamM: 3.2,
+      bowHeightM: 1.1,
+    });
+    const res = await c.get(`/api/listings?fitsBoat=${sloop}&windKn=30&pageSize=50`);
+    expect(res.status).toBe(200);
+    const fit = Object.fromEntries(
+      (res.body.data as Array<{ id: number; fit: { status: string; reason: string } }>).map((l) => [
+        l.id,
+        l.fit,
+      ]),
+    );
+    expect(res.body.meta.fitBasis.designLoadN).toBeGreaterThan(4000);
+    expect(res.body.meta.fitBasis.designLoadN).toBeLessThan(5500);
+    expect(res.body.meta.fitBasis.designFactor).toBe(4);
+    // 3/8 in G43: WLL 5,400 lb (49 CFR 393.108) ≫ design load.
+    expect(fit[ids.chain38 ?? 0]?.status).toBe('fits');
+    expect(fit[ids.chain38 ?? 0]?.reason).toMatch(/working load limit.*design load/);
+    // 16 mm wet nylon breaks well above 4 × 4.7 kN; 10 mm does not.
+    expect(fit[ids.rode16 ?? 0]?.status).toBe('fits');
+    expect(['marginal', 'too-light']).toContain(fit[ids.rode10 ?? 0]?.status);
+    // Anchors against anchorSuggestion's range for this boat: below the minimum, between, above the suggested mass.
+    const range = anchorSuggestion({
+      loaM: 9.1,
+      beamM: 3.2,
+      hull: 'sail',
+      windKn: 30,
+      anchorType: 'plow',
+      extrapolate: true,
+    });
+    expect(range.minKg).toBeGreaterThan(10);
+    expect(range.suggestedKg).toBeLessThan(60);
+    expect(fit[ids.plow10 ?? 0]?.status).toBe('too-light');
+    expect(fit[ids.plow60 ?? 0]?.status).toBe('fits');
+    const mid = await c.post('/api/listings', {
+      ...base({
+        category: 'anchor',
+        title: 'Mid-size plow',
+        specs: { anchorType: 'plow', massKg: Math.round((range.minKg + range.suggestedKg) / 2) },
+      }),
+      publish: true,
+    });
+    const midFit = await c.get(`/api/listings/${mid.body.data.id}?fitsBoat=${sloop}&windKn=30`);
+    expect(midFit.body.data.fit.status).toBe('marginal');
+    expect(midFit.body.data.fit.reason).toMatch(/minimum.*suggested/);
+
+    const only = found(await c.get(`/api/listings?fitsBoat=${sloop}&fitsOnly=true`));
+    expect(only.sort()).toEqual([ids.chain38, ids.chain516, ids.rode16, ids.plow60].sort());
+  });
+
+  it('calls strong chain marginal when it does not match the boat’s gypsy', async () => {
+    const boat = await boatOf({
+      name: 'Gypsy Boat',
+      hull: 'sail',
+      loaM: 9.1,
+      bowHeightM: 1.1,
+      gypsy: { grade: 'G43', tradeSizeIn: 0.3125 },
+    });
+    const res = await c.get(`/api/listings/${ids.chain38}?fitsBoat=${boat}`);
+    expect(res.body.data.fit.status).toBe('marginal');
+    expect(res.body.data.fit.reason).toMatch(/gypsy/);
+    const other = await c.get(`/api/listings/${ids.chain516}?fitsBoat=${boat}`);
+    expect(other.body.data.fit.status).toBe('fits');
+  });
+
+  it('too light for a heavy 15 m power boat in 50 kn, and another member’s boat is 404', async () => {
+    const big = await boatOf({
+      name: 'Big Trawler',
+      hull: 'power',
+      loaM: 18,
+      beamM: 5.5,
+      bowHeightM: 2,
+    });
+    const res = await c.get(`/api/listings?fitsBoat=${big}&windKn=50&category=chain`);
+    const statuses = (res.body.data as Array<{ fit: { status: string } }>).map((l) => l.fit.status);
+    expect(statuses).toContain('too-light');
+    const stranger = await client(built.app);
+    await stranger.signIn((await buildUser()).email);
+    expect((await stranger.get(`/api/listings?fitsBoat=${big}`)).status).toBe(404);
+    expect(await Boat.count()).toBe(1);
+  });
+});
