@@ -32,9 +32,17 @@ const WINDS = [
     name: 'Everyday, 30 kn',
   },
   { windKn: 60, title: 'Storm: 60 kn', condition: 'storm', scope: 7, name: 'Storm, 60 kn' },
+  // 10:1 is the handbook ladder's rung for severe weather (see packages/calc scopeRung).
+  {
+    windKn: 70,
+    title: 'Hurricane hole: 70 kn',
+    condition: 'hurricane-hole',
+    scope: 10,
+    name: 'Hurricane hole, 70 kn',
+  },
 ] as const;
 
-/** The suggested ground tackle for the boat at 30 kn and at 60 kn, side by side, with cautions. */
+/** The suggested ground tackle for the boat at 30, 60 and 70 kn, side by side, with cautions. */
 export function BoatRecommendation({ boat, onSavePlan, savingWindKn }: BoatRecommendationProps) {
   const [anchorType, setAnchorType] = useState<AnchorType>('plow');
   const [depthM, setDepthM] = useState<number | undefined>(6);
@@ -58,11 +66,11 @@ export function BoatRecommendation({ boat, onSavePlan, savingWindKn }: BoatRecom
           kind="length"
           value={depthM}
           onValueChange={setDepthM}
-          hint="Sets the chain length: 5:1 everyday, 7:1 in a storm"
+          hint="Sets the chain length: 5:1 everyday, 7:1 in a storm, 10:1 in a hurricane hole"
           error={depthError}
         />
       </div>
-      <div className="grid gap-4 md:grid-cols-2" data-testid="recommendations">
+      <div className="grid gap-4 md:grid-cols-2 xl:grid-cols-3" data-testid="recommendations">
         {WINDS.map((w) => {
           const outcome = recommendFor(boat, w.windKn, anchorType);
           if (!outcome.ok) {
