@@ -1,6 +1,7 @@
 import type { Sequelize, Transaction } from 'sequelize';
 import type { Harbor, User } from '../src/models';
 import { seedDues } from './dues';
+import { seedKnowledge } from './knowledge';
 
 /** What the base demo seed hands to each area's seeder. */
 export interface SeedContext {
@@ -19,4 +20,7 @@ export type AreaSeeder = (ctx: SeedContext) => Promise<void>;
  * Each area's demo data, run in order inside the demo transaction after users, harbours and boats exist.
  * Add one line per area (knowledge, exchange, dues …); keep each seeder in its own file.
  */
-export const AREA_SEEDERS: Array<[name: string, seeder: AreaSeeder]> = [['dues', seedDues]];
+export const AREA_SEEDERS: Array<[name: string, seeder: AreaSeeder]> = [
+  ['dues', seedDues],
+  ['knowledge', seedKnowledge],
+];

@@ -94,5 +94,5 @@ export async function resolveReport(actor: User, reportId: number, input: Resolv
     details: { targetType: report.targetType, targetId: report.targetId },
   });
   if (post) await indexPost(post.id);
-  return report;
+  return report.reload();
 }
