@@ -2,6 +2,7 @@ import type { Sequelize, Transaction } from 'sequelize';
 import type { Harbor, User } from '../src/models';
 import { seedDues } from './dues';
 import { seedKnowledge } from './knowledge';
+import { seedExchange } from './exchange';
 
 /** What the base demo seed hands to each area's seeder. */
 export interface SeedContext {
@@ -23,4 +24,5 @@ export type AreaSeeder = (ctx: SeedContext) => Promise<void>;
 export const AREA_SEEDERS: Array<[name: string, seeder: AreaSeeder]> = [
   ['dues', seedDues],
   ['knowledge', seedKnowledge],
+  ['exchange', seedExchange],
 ];
