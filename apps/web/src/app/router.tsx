@@ -51,6 +51,24 @@ export const SCREEN_ROUTES: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/plan')).PlanRoute }),
   },
   {
+    path: paths.dues.path,
+    lazy: async () => ({ Component: (await import('./routes/dues')).DuesRoute }),
+  },
+  {
+    path: paths.duesPaid.path,
+    lazy: async () => ({ Component: (await import('./routes/dues-paid')).DuesPaidRoute }),
+  },
+  {
+    path: paths.treasury.path,
+    lazy: async () => ({ Component: (await import('./routes/treasury')).TreasuryRoute }),
+  },
+  {
+    path: paths.treasuryRoster.path,
+    lazy: async () => ({
+      Component: (await import('./routes/treasury-roster')).TreasuryRosterRoute,
+    }),
+  },
+  {
     path: '*',
     lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
   },

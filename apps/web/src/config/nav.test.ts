@@ -13,7 +13,11 @@ describe('navFor', () => {
       asUser(),
       ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
     ],
-    ['a member', asUser('member'), ['Home', 'Calculators', 'My boats', 'Account', 'Sign out']],
+    [
+      'a member',
+      asUser('member'),
+      ['Home', 'Calculators', 'My boats', 'Dues', 'Account', 'Sign out'],
+    ],
     [
       'a moderator',
       asUser('moderator'),
@@ -22,7 +26,7 @@ describe('navFor', () => {
     [
       'a treasurer',
       asUser('treasurer'),
-      ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
+      ['Home', 'Calculators', 'My boats', 'Treasury', 'Account', 'Sign out'],
     ],
     [
       'an admin',
@@ -32,12 +36,12 @@ describe('navFor', () => {
     [
       'a member who is also treasurer and admin',
       asUser('member', 'treasurer', 'admin'),
-      ['Home', 'Calculators', 'My boats', 'Admin', 'Account', 'Sign out'],
+      ['Home', 'Calculators', 'My boats', 'Dues', 'Treasury', 'Admin', 'Account', 'Sign out'],
     ],
     [
       'a moderator and treasurer',
       asUser('moderator', 'treasurer'),
-      ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
+      ['Home', 'Calculators', 'My boats', 'Treasury', 'Account', 'Sign out'],
     ],
   ])('shows %s the right items', (_who, user, expected) => {
     expect(labels(navFor(user))).toEqual(expected);

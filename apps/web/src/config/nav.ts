@@ -53,6 +53,22 @@ export const NAV_ITEMS: readonly NavItem[] = [
     signedIn: true,
   },
   {
+    id: 'dues',
+    kind: 'link',
+    label: 'Dues',
+    to: paths.dues.href(),
+    section: 'primary',
+    roles: ['member'],
+  },
+  {
+    id: 'treasury',
+    kind: 'link',
+    label: 'Treasury',
+    to: paths.treasury.href(),
+    section: 'primary',
+    roles: ['treasurer'],
+  },
+  {
     id: 'admin-users',
     kind: 'link',
     label: 'Admin',

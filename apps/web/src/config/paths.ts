@@ -14,6 +14,10 @@ export const paths = {
   boats: { path: '/boats', href: () => '/boats' },
   boat: { path: '/boats/:boatId', href: (boatId: number | string) => `/boats/${boatId}` },
   plan: { path: '/plans/:planId', href: (planId: number | string) => `/plans/${planId}` },
+  dues: { path: '/dues', href: () => '/dues' },
+  duesPaid: { path: '/dues/paid', href: () => '/dues/paid' },
+  treasury: { path: '/treasury', href: () => '/treasury' },
+  treasuryRoster: { path: '/treasury/roster', href: () => '/treasury/roster' },
 } as const;
 
 /**

@@ -1,6 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { formatMoney, METHOD_LABELS } from '@app/shared';
-import { Membership, Payment, Refund, User } from '../../models';
+import type { Payment } from '../../models';
+import { Membership, Refund, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { daysBetween } from './calendar';

@@ -63,7 +63,7 @@ beforeAll(async () => {
     STRIPE_SECRET_KEY: KEY,
     STRIPE_WEBHOOK_SECRET: SECRET,
   });
-  handler = built.app as unknown as RequestListener;
+  handler = built.app;
 });
 
 afterAll(async () => {

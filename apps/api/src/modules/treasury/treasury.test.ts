@@ -132,7 +132,7 @@ describe('treasurer desk', () => {
     const res = await c.get('/api/treasury/ledger.csv');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
-    const lines = (res.text as string).trim().split('\r\n');
+    const lines = res.text.trim().split('\r\n');
     expect(lines[0]).toBe(LEDGER_COLUMNS.join(','));
     expect(lines).toHaveLength(4);
     const parse = (line: string) =>

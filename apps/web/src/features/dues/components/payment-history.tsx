@@ -15,7 +15,10 @@ export function PaymentHistory({ payments }: { payments: PaymentDto[] }) {
   return (
     <ul className="flex flex-col gap-2">
       {payments.map((p) => (
-        <li key={p.id} className="flex flex-wrap justify-between gap-2 border-t border-sand-300 py-2">
+        <li
+          key={p.id}
+          className="flex flex-wrap justify-between gap-2 border-t border-sand-300 py-2"
+        >
           <span>
             {p.paidAt?.slice(0, 10) ?? p.createdAt.slice(0, 10)} · {METHOD_LABELS[p.method]}
             {p.coversTo ? ` · covers to ${p.coversTo}` : ''}

@@ -1,0 +1,132 @@
+import { useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { Alert } from '../../components/ui/alert';
+import { Page } from '../../components/ui/page';
+import { Spinner } from '../../components/ui/spinner';
+import { errorMessage } from '../../lib/form-errors';
+import { RequireAuth } from '../../features/auth/components/require-auth';
+import { useMyDues } from '../../features/dues/api/get-my-dues';
+import { useStartCheckout } from '../../features/dues/api/start-checkout';
+import { PaymentHistory } from '../../features/dues/components/payment-history';
+import { QuoteCard } from '../../features/dues/components/quote-card';
+import { DuesStatusBadge } from '../../features/dues/components/status-badge';
+
+function DuesScreen() {
+  const dues = useMyDues();
+  const checkout = useStartCheckout();
+  const [params] = useSearchParams();
+  const [payingPlan, setPayingPlan] = useState<number | null>(null);
+  const pay = (planId?: number) => {
+    setPayingPlan(planId ?? null);
+    checkout.mutate(planId ? { planId } : {}, {
+      onSuccess: ({ url }) => window.location.assign(url),
+    });
+  };
+  const d = dues.data;
+  return (
+    <Page
+      title="Dues"
+      width="narrow"
+      intro={<p>What your membership covers, what is owed and why, and a one-minute way to pay.</p>}
+    >
+      {params.get('checkout') === 'cancelled' && (
+        <Alert tone="info" title="Checkout cancelled">
+          <p>You left the payment page; nothing was charged and your dues are as they were.</p>
+        </Alert>
+      )}
+      {dues.isPending && <Spinner label="Loading your dues…" />}
+      {dues.isError && (
+        <Alert tone="error" title="Couldn't load your dues">
+          <p>{errorMessage(dues.error)}</p>
+        </Alert>
+      )}
+      {checkout.isError && (
+        <Alert tone="error" title="Couldn't open the checkout">
+          <p>{errorMessage(checkout.error)}</p>
+        </Alert>
+      )}
+      {d && (
+        <>
+          <section aria-labelledby="membership-heading" className="flex flex-col gap-2">
+            <h2 id="membership-heading" className="text-xl">
+              Your membership
+            </h2>
+            {d.membership ? (
+              <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
+                <dt className="font-bold">Plan</dt>
+                <dd>{d.membership.planName}</dd>
+                <dt className="font-bold">Status</dt>
+                <dd>
+                  <DuesStatusBadge status={d.status} />
+                </dd>
+                <dt className="font-bold">Paid through</dt>
+                <dd data-testid="paid-through">
+                  {d.membership.paidThrough
+                    ? `Paid through ${d.membership.paidThrough}`
+                    : 'Not paid yet'}
+                </dd>
+                <dt className="font-bold">Fiscal year</dt>
+                <dd>
+                  {d.fiscalYear.label} ({d.fiscalYear.start} to {d.fiscalYear.end})
+                </dd>
+              </dl>
+            ) : (
+              <p>You have no membership plan yet. Choose one below to join for this fiscal year.</p>
+            )}
+          </section>
+          <section aria-labelledby="owed-heading" className="flex flex-col gap-3">
+            <h2 id="owed-heading" className="text-xl">
+              What is owed
+            </h2>
+            {d.quote && (
+              <QuoteCard
+                quote={d.quote}
+                onPay={() => pay()}
+                isPending={checkout.isPending && payingPlan === null}
+              />
+            )}
+            {!d.quote && d.offers.length === 0 && (
+              <Alert tone="success" title="Nothing to pay">
+                <p>
+                  Your dues are up to date. Renewal opens a month before your paid-through date.
+                </p>
+              </Alert>
+            )}
+            {!d.quote && d.offers.length > 0 && (
+              <div className="grid gap-3">
+                {d.offers.map((o) => (
+                  <QuoteCard
+                    key={o.planId}
+                    quote={o}
+                    payLabel={`Join as ${o.planName}`}
+                    onPay={() => pay(o.planId)}
+                    isPending={checkout.isPending && payingPlan === o.planId}
+                  />
+                ))}
+              </div>
+            )}
+            <p className="text-sm text-ink-700">
+              Card payments open the payment provider’s secure page. You can also pay the treasurer
+              by cheque, cash or bank transfer.
+            </p>
+          </section>
+          <section aria-labelledby="history-heading" className="flex flex-col gap-2">
+            <h2 id="history-heading" className="text-xl">
+              Your payments
+            </h2>
+            <PaymentHistory payments={d.payments} />
+          </section>
+        </>
+      )}
+    </Page>
+  );
+}
+
+/** The member's dues page. */
+export function DuesRoute() {
+  return (
+    <RequireAuth>
+      <DuesScreen />
+    </RequireAuth>
+  );
+}

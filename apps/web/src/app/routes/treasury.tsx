@@ -1,0 +1,131 @@
+import { formatMoney } from '@app/shared';
+import { Link } from 'react-router-dom';
+import { Alert } from '../../components/ui/alert';
+import { Page } from '../../components/ui/page';
+import { Spinner } from '../../components/ui/spinner';
+import { paths } from '../../config/paths';
+import { apiUrl } from '../../lib/api-client';
+import { errorMessage } from '../../lib/form-errors';
+import { RequireAuth } from '../../features/auth/components/require-auth';
+import { usePayments } from '../../features/treasury/api/get-payments';
+import { usePlans } from '../../features/treasury/api/get-plans';
+import { useRoster } from '../../features/treasury/api/get-roster';
+import { useSummary } from '../../features/treasury/api/get-summary';
+import { useRecordPayment } from '../../features/treasury/api/record-payment';
+import { OfflinePaymentForm } from '../../features/treasury/components/offline-payment-form';
+import { PaymentsTable } from '../../features/treasury/components/payments-table';
+import { SummaryChart } from '../../features/treasury/components/summary-chart';
+
+function TreasuryScreen() {
+  const summary = useSummary();
+  const payments = usePayments();
+  const roster = useRoster();
+  const plans = usePlans();
+  const record = useRecordPayment();
+  const s = summary.data;
+  const held = payments.data?.filter((p) => p.status === 'held') ?? [];
+  return (
+    <Page
+      title="Treasury"
+      intro={
+        <p>
+          The club’s dues ledger: what came in, what is still owed, and payments waiting for you.
+          Nothing here is ever deleted; corrections are new entries.
+        </p>
+      }
+    >
+      <nav aria-label="Treasury" className="flex flex-wrap gap-4">
+        <Link to={paths.treasuryRoster.href()} className="font-bold">
+          Member roster and reminders
+        </Link>
+        <a href={apiUrl('/treasury/ledger.csv')} download className="font-bold">
+          Download the ledger (CSV)
+        </a>
+      </nav>
+      {summary.isPending && <Spinner label="Loading the summary…" />}
+      {summary.isError && (
+        <Alert tone="error" title="Couldn't load the summary">
+          <p>{errorMessage(summary.error)}</p>
+        </Alert>
+      )}
+      {s && (
+        <section aria-labelledby="summary-heading" className="flex flex-col gap-3">
+          <h2 id="summary-heading" className="text-xl">
+            Fiscal year {s.fiscalYear.label}
+          </h2>
+          <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+            {[
+              ['Collected', formatMoney(s.collectedMinor, s.currency)],
+              ['Expected', formatMoney(s.expectedMinor, s.currency)],
+              ['Outstanding', formatMoney(s.outstandingMinor, s.currency)],
+              ['Held for you', String(s.heldCount)],
+            ].map(([k, v]) => (
+              <div key={k} className="rounded-lg border border-sand-300 bg-sand-50 p-3">
+                <dt className="text-sm">{k}</dt>
+                <dd
+                  className="text-xl font-bold tabular-nums"
+                  data-testid={`summary-${k?.toLowerCase().replace(/ /g, '-') ?? ''}`}
+                >
+                  {v}
+                </dd>
+              </div>
+            ))}
+          </dl>
+          <p className="text-sm">
+            Members: {s.counts.current} current, {s.counts.due} due, {s.counts.overdue} overdue,{' '}
+            {s.counts.lapsed} lapsed.
+          </p>
+          <SummaryChart summary={s} />
+        </section>
+      )}
+      {held.length > 0 && (
+        <section aria-labelledby="held-heading" className="flex flex-col gap-2">
+          <h2 id="held-heading" className="text-xl">
+            Held for the treasurer
+          </h2>
+          <p className="text-sm">
+            These payments arrived but did not match the plan; they are not credited until you
+            decide.
+          </p>
+          <PaymentsTable payments={held} caption="Held payments" />
+        </section>
+      )}
+      <section aria-labelledby="offline-heading" className="flex flex-col gap-2">
+        <h2 id="offline-heading" className="text-xl">
+          Record a cheque, cash or transfer
+        </h2>
+        {record.isSuccess && (
+          <Alert tone="success" title="Payment recorded">
+            <p>The member is credited and a receipt is on its way.</p>
+          </Alert>
+        )}
+        {roster.data && plans.data && (
+          <OfflinePaymentForm
+            members={roster.data}
+            plans={plans.data}
+            isPending={record.isPending}
+            onSubmit={(input) => record.mutateAsync(input)}
+          />
+        )}
+      </section>
+      <section aria-labelledby="ledger-heading" className="flex flex-col gap-2">
+        <h2 id="ledger-heading" className="text-xl">
+          Ledger
+        </h2>
+        {payments.isPending && <Spinner label="Loading the ledger…" />}
+        {payments.data && (
+          <PaymentsTable payments={payments.data} caption="Recent entries, newest first" />
+        )}
+      </section>
+    </Page>
+  );
+}
+
+/** The treasurer's desk: summary with chart, held payments, offline payments, ledger. */
+export function TreasuryRoute() {
+  return (
+    <RequireAuth roles={['treasurer']}>
+      <TreasuryScreen />
+    </RequireAuth>
+  );
+}

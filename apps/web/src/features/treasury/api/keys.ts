@@ -1,0 +1,8 @@
+/** Query keys for the treasurer's desk. */
+export const treasuryKeys = {
+  all: ['treasury'] as const,
+  roster: () => [...treasuryKeys.all, 'roster'] as const,
+  summary: () => [...treasuryKeys.all, 'summary'] as const,
+  plans: () => [...treasuryKeys.all, 'plans'] as const,
+  payments: (status?: string) => [...treasuryKeys.all, 'payments', status ?? 'all'] as const,
+};
