@@ -69,6 +69,32 @@ export const SCREEN_ROUTES: RouteObject[] = [
     }),
   },
   {
+    path: paths.knowledge.path,
+    lazy: async () => ({ Component: (await import('./routes/knowledge')).KnowledgeRoute }),
+  },
+  {
+    path: paths.postNew.path,
+    lazy: async () => ({ Component: (await import('./routes/post-edit')).PostEditRoute }),
+  },
+  {
+    path: paths.post.path,
+    lazy: async () => ({ Component: (await import('./routes/post')).PostRoute }),
+  },
+  {
+    path: paths.postEdit.path,
+    lazy: async () => ({ Component: (await import('./routes/post-edit')).PostEditRoute }),
+  },
+  {
+    path: paths.moderation.path,
+    lazy: async () => ({ Component: (await import('./routes/moderation')).ModerationRoute }),
+  },
+  {
+    path: paths.moderationLog.path,
+    lazy: async () => ({
+      Component: (await import('./routes/moderation-log')).ModerationLogRoute,
+    }),
+  },
+  {
     path: '*',
     lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
   },

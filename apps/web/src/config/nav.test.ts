@@ -7,41 +7,60 @@ const asUser = (...roles: Role[]) => ({ roles });
 
 describe('navFor', () => {
   it.each([
-    ['a visitor', null, ['Home', 'Calculators', 'Sign in', 'Join']],
+    ['a visitor', null, ['Home', 'Knowledge', 'Calculators', 'Sign in', 'Join']],
     [
       'a signed-in person with no roles',
       asUser(),
-      ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
+      ['Home', 'Knowledge', 'Calculators', 'My boats', 'Account', 'Sign out'],
     ],
     [
       'a member',
       asUser('member'),
-      ['Home', 'Calculators', 'My boats', 'Dues', 'Account', 'Sign out'],
+      ['Home', 'Knowledge', 'Calculators', 'My boats', 'Dues', 'Account', 'Sign out'],
     ],
     [
       'a moderator',
       asUser('moderator'),
-      ['Home', 'Calculators', 'My boats', 'Account', 'Sign out'],
+      ['Home', 'Knowledge', 'Calculators', 'My boats', 'Moderation', 'Account', 'Sign out'],
     ],
     [
       'a treasurer',
       asUser('treasurer'),
-      ['Home', 'Calculators', 'My boats', 'Treasury', 'Account', 'Sign out'],
+      ['Home', 'Knowledge', 'Calculators', 'My boats', 'Treasury', 'Account', 'Sign out'],
     ],
     [
       'an admin',
       asUser('admin'),
-      ['Home', 'Calculators', 'My boats', 'Admin', 'Account', 'Sign out'],
+      ['Home', 'Knowledge', 'Calculators', 'My boats', 'Admin', 'Account', 'Sign out'],
     ],
     [
       'a member who is also treasurer and admin',
       asUser('member', 'treasurer', 'admin'),
-      ['Home', 'Calculators', 'My boats', 'Dues', 'Treasury', 'Admin', 'Account', 'Sign out'],
+      [
+        'Home',
+        'Knowledge',
+        'Calculators',
+        'My boats',
+        'Dues',
+        'Treasury',
+        'Admin',
+        'Account',
+        'Sign out',
+      ],
     ],
     [
       'a moderator and treasurer',
       asUser('moderator', 'treasurer'),
-      ['Home', 'Calculators', 'My boats', 'Treasury', 'Account', 'Sign out'],
+      [
+        'Home',
+        'Knowledge',
+        'Calculators',
+        'My boats',
+        'Treasury',
+        'Moderation',
+        'Account',
+        'Sign out',
+      ],
     ],
   ])('shows %s the right items', (_who, user, expected) => {
     expect(labels(navFor(user))).toEqual(expected);

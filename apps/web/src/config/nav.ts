@@ -38,6 +38,13 @@ export type NavItem = NavLinkItem | NavActionItem;
 export const NAV_ITEMS: readonly NavItem[] = [
   { id: 'home', kind: 'link', label: 'Home', to: paths.home.href(), end: true, section: 'primary' },
   {
+    id: 'knowledge',
+    kind: 'link',
+    label: 'Knowledge',
+    to: paths.knowledge.href(),
+    section: 'primary',
+  },
+  {
     id: 'calculators',
     kind: 'link',
     label: 'Calculators',
@@ -67,6 +74,14 @@ export const NAV_ITEMS: readonly NavItem[] = [
     to: paths.treasury.href(),
     section: 'primary',
     roles: ['treasurer'],
+  },
+  {
+    id: 'moderation',
+    kind: 'link',
+    label: 'Moderation',
+    to: paths.moderation.href(),
+    section: 'primary',
+    roles: ['moderator'],
   },
   {
     id: 'admin-users',

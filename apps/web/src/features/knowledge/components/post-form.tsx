@@ -1,0 +1,230 @@
+import {
+  createPostSchema,
+  type CreatePostInput,
+  type PostDetailDto,
+  type TopicDto,
+} from '@app/shared';
+import type { JSONContent } from '@tiptap/react';
+import { useEffect, useId, useRef, useState } from 'react';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/text-field';
+import { ApiError } from '../../../lib/api-client';
+import { errorMessage } from '../../../lib/form-errors';
+import { useSavePost } from '../api/save-post';
+import { RichTextEditor } from './rich-text-editor';
+import { SetupFields } from './setup-fields';
+import { EMPTY_SETUP, fromSetup, toSetupInput, type SetupValues } from './setup-values';
+
+export interface PostFormProps {
+  post: PostDetailDto | null;
+  topics: TopicDto[];
+  boats: Array<{ id: number; name: string }>;
+  onSubmitted: (post: PostDetailDto) => void;
+}
+
+const AUTOSAVE_MS = 2500;
+
+/** Writes or edits a post: title, kind, topic, body, optional setup; drafts save themselves as you type. */
+export function PostForm({ post, topics, boats, onSubmitted }: PostFormProps) {
+  const bodyLabelId = useId();
+  const save = useSavePost();
+  const [postId, setPostId] = useState<number | null>(post?.id ?? null);
+  const [title, setTitle] = useState(post?.title ?? '');
+  const [kind, setKind] = useState<'article' | 'question'>(post?.kind ?? 'article');
+  const [topicId, setTopicId] = useState<number>(post?.topic?.id ?? topics[0]?.id ?? 0);
+  const [visibility, setVisibility] = useState<'public' | 'members'>(post?.visibility ?? 'public');
+  const [boatId, setBoatId] = useState<number | null>(post?.boat?.id ?? null);
+  const [body, setBody] = useState<JSONContent | null>(
+    (post?.body as JSONContent | undefined) ?? null,
+  );
+  const [hasSetup, setHasSetup] = useState(
+    post?.setupCard !== null && post?.setupCard !== undefined,
+  );
+  const [setup, setSetup] = useState<SetupValues>(
+    post?.setupCard ? fromSetup(post.setupCard.setup) : EMPTY_SETUP,
+  );
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [savedAt, setSavedAt] = useState<Date | null>(null);
+  const dirty = useRef(false);
+
+  const input = (): CreatePostInput => ({
+    kind,
+    title,
+    topicId,
+    visibility,
+    body: body ?? { type: 'doc', content: [] },
+    boatId: kind === 'question' ? boatId : null,
+    setup: hasSetup ? toSetupInput(setup) : null,
+  });
+
+  const persist = async (submit: boolean) => {
+    const value = input();
+    const parsed = createPostSchema.safeParse(value);
+    if (!parsed.success) {
+      const f: Record<string, string> = {};
+      for (const i of parsed.error.issues) f[i.path.join('.') || '_'] ??= i.message;
+      if (submit) setErrors(f);
+      return null;
+    }
+    try {
+      const saved = await save.mutateAsync({
+        postId,
+        input: { ...value, submit: submit && postId === null },
+        submit,
+      });
+      setPostId(saved.id);
+      setSavedAt(new Date());
+      setErrors({});
+      dirty.current = false;
+      return saved;
+    } catch (err) {
+      setErrors(
+        err instanceof ApiError ? { ...err.fields, _: err.message } : { _: errorMessage(err) },
+      );
+      return null;
+    }
+  };
+
+  // Autosave: a draft (or an edit) is saved a moment after typing stops.
+  const status = post?.status ?? 'draft';
+  useEffect(() => {
+    if (!dirty.current || status !== 'draft') return;
+    const t = setTimeout(() => void persist(false), AUTOSAVE_MS);
+    return () => clearTimeout(t);
+  });
+  const touch =
+    <T,>(fn: (v: T) => void) =>
+    (v: T) => {
+      dirty.current = true;
+      fn(v);
+    };
+
+  const handleSubmit = async () => {
+    const saved = await persist(true);
+    if (saved) onSubmitted(saved);
+  };
+
+  return (
+    <form
+      className="flex flex-col gap-4"
+      onSubmit={(e) => {
+        e.preventDefault();
+        void handleSubmit();
+      }}
+    >
+      {post?.moderationNote && (
+        <Alert tone="warning" title="A moderator asked for changes">
+          <p>{post.moderationNote}</p>
+        </Alert>
+      )}
+      <fieldset className="flex flex-wrap gap-4">
+        <legend className="sr-only">Kind of post</legend>
+        {(['article', 'question'] as const).map((k) => (
+          <label key={k} className="flex items-center gap-2">
+            <input
+              type="radio"
+              name="kind"
+              checked={kind === k}
+              onChange={() => touch(setKind)(k)}
+            />
+            {k === 'article' ? 'Article (a setup or a lesson)' : 'Question'}
+          </label>
+        ))}
+      </fieldset>
+      <TextField
+        label="Title"
+        value={title}
+        onChange={(e) => touch(setTitle)(e.target.value)}
+        error={errors.title}
+        required
+        maxLength={160}
+      />
+      <div className="grid gap-3 sm:grid-cols-2">
+        <label className="flex flex-col gap-1 text-sm font-bold">
+          Topic
+          <select
+            value={topicId}
+            onChange={(e) => touch(setTopicId)(Number(e.target.value))}
+            className="min-h-11 rounded-md border border-sand-500 bg-sand-50 px-2 font-normal"
+          >
+            {topics.map((t) => (
+              <option key={t.id} value={t.id}>
+                {t.name}
+              </option>
+            ))}
+          </select>
+        </label>
+        <label className="flex flex-col gap-1 text-sm font-bold">
+          Who can read it
+          <select
+            value={visibility}
+            onChange={(e) => touch(setVisibility)(e.target.value as 'public' | 'members')}
+            className="min-h-11 rounded-md border border-sand-500 bg-sand-50 px-2 font-normal"
+          >
+            <option value="public">Everyone</option>
+            <option value="members">Members only</option>
+          </select>
+          {errors.visibility && <span className="text-flare-700">{errors.visibility}</span>}
+        </label>
+        {kind === 'question' && boats.length > 0 && (
+          <label className="flex flex-col gap-1 text-sm font-bold">
+            Attach one of your boats
+            <select
+              value={boatId ?? ''}
+              onChange={(e) => touch(setBoatId)(e.target.value ? Number(e.target.value) : null)}
+              className="min-h-11 rounded-md border border-sand-500 bg-sand-50 px-2 font-normal"
+            >
+              <option value="">No boat</option>
+              {boats.map((b) => (
+                <option key={b.id} value={b.id}>
+                  {b.name}
+                </option>
+              ))}
+            </select>
+          </label>
+        )}
+      </div>
+      <div className="flex flex-col gap-1">
+        <span id={bodyLabelId} className="text-sm font-bold">
+          Post
+        </span>
+        <RichTextEditor labelId={bodyLabelId} initial={body} onChange={touch(setBody)} />
+        {errors.body && (
+          <p role="alert" className="text-sm font-bold text-flare-700">
+            {errors.body}
+          </p>
+        )}
+      </div>
+      <label className="flex items-center gap-2">
+        <input
+          type="checkbox"
+          checked={hasSetup}
+          onChange={(e) => touch(setHasSetup)(e.target.checked)}
+        />
+        Add a tackle setup block (figures are computed for you)
+      </label>
+      {hasSetup && <SetupFields value={setup} onChange={touch(setSetup)} errors={errors} />}
+      {errors._ && (
+        <Alert tone="error">
+          <p>{errors._}</p>
+        </Alert>
+      )}
+      <div className="flex flex-wrap items-center gap-3">
+        <Button type="submit" isPending={save.isPending}>
+          Send to the moderators
+        </Button>
+        <Button variant="secondary" onClick={() => void persist(false)} isPending={save.isPending}>
+          Save draft
+        </Button>
+        <span role="status" className="text-sm text-ink-600">
+          {savedAt ? `Saved at ${savedAt.toLocaleTimeString()}` : ''}
+        </span>
+      </div>
+      <p className="text-xs text-ink-600">
+        A moderator reads every new post before it is published. Moderators’ own posts publish
+        straight away and are logged.
+      </p>
+    </form>
+  );
+}

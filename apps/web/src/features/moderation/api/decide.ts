@@ -1,0 +1,29 @@
+import type { DecisionInput, PostFlagsInput, ResolveReportInput } from '@app/shared';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiFetch } from '../../../lib/api-client';
+
+export type ModerationAction =
+  | { kind: 'post'; id: number; body: DecisionInput }
+  | { kind: 'comment'; id: number; body: { action: 'approve' | 'reject'; reason?: string } }
+  | { kind: 'report'; id: number; body: ResolveReportInput }
+  | { kind: 'flags'; id: number; body: PostFlagsInput };
+
+const URL_OF: Record<ModerationAction['kind'], (id: number) => string> = {
+  post: (id) => `/moderation/posts/${id}/decision`,
+  comment: (id) => `/moderation/comments/${id}/decision`,
+  report: (id) => `/moderation/reports/${id}/resolve`,
+  flags: (id) => `/moderation/posts/${id}/flags`,
+};
+
+/** One moderator action (decision, report resolution or flags); refreshes the queue, count and log. */
+export function useModerate() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (a: ModerationAction) =>
+      apiFetch(URL_OF[a.kind](a.id), {
+        method: a.kind === 'flags' ? 'PATCH' : 'POST',
+        body: a.body,
+      }),
+    onSuccess: () => queryClient.invalidateQueries(),
+  });
+}
