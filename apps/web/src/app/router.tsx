@@ -95,6 +95,34 @@ export const SCREEN_ROUTES: RouteObject[] = [
     }),
   },
   {
+    path: paths.exchange.path,
+    lazy: async () => ({ Component: (await import('./routes/exchange')).ExchangeRoute }),
+  },
+  {
+    path: paths.exchangeMine.path,
+    lazy: async () => ({ Component: (await import('./routes/exchange-mine')).ExchangeMineRoute }),
+  },
+  {
+    path: paths.listingNew.path,
+    lazy: async () => ({ Component: (await import('./routes/listing-new')).ListingNewRoute }),
+  },
+  {
+    path: paths.listing.path,
+    lazy: async () => ({ Component: (await import('./routes/listing')).ListingRoute }),
+  },
+  {
+    path: paths.listingEdit.path,
+    lazy: async () => ({ Component: (await import('./routes/listing-edit')).ListingEditRoute }),
+  },
+  {
+    path: paths.messages.path,
+    lazy: async () => ({ Component: (await import('./routes/inbox')).InboxRoute }),
+  },
+  {
+    path: paths.thread.path,
+    lazy: async () => ({ Component: (await import('./routes/inbox-thread')).InboxThreadRoute }),
+  },
+  {
     path: '*',
     lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
   },

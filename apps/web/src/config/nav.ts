@@ -52,6 +52,21 @@ export const NAV_ITEMS: readonly NavItem[] = [
     section: 'primary',
   },
   {
+    id: 'exchange',
+    kind: 'link',
+    label: 'Exchange',
+    to: paths.exchange.href(),
+    section: 'primary',
+  },
+  {
+    id: 'messages',
+    kind: 'link',
+    label: 'Messages',
+    to: paths.messages.href(),
+    section: 'primary',
+    signedIn: true,
+  },
+  {
     id: 'boats',
     kind: 'link',
     label: 'My boats',

@@ -27,6 +27,23 @@ export const paths = {
   duesPaid: { path: '/dues/paid', href: () => '/dues/paid' },
   treasury: { path: '/treasury', href: () => '/treasury' },
   treasuryRoster: { path: '/treasury/roster', href: () => '/treasury/roster' },
+  exchange: { path: '/exchange', href: () => '/exchange' },
+  exchangeMine: { path: '/exchange/mine', href: () => '/exchange/mine' },
+  listingNew: { path: '/exchange/new', href: () => '/exchange/new' },
+  listing: {
+    path: '/exchange/listings/:listingId',
+    href: (listingId: number | string, fitsBoat?: number) =>
+      `/exchange/listings/${listingId}${fitsBoat ? `?fitsBoat=${fitsBoat}` : ''}`,
+  },
+  listingEdit: {
+    path: '/exchange/listings/:listingId/edit',
+    href: (listingId: number | string) => `/exchange/listings/${listingId}/edit`,
+  },
+  messages: { path: '/messages', href: () => '/messages' },
+  thread: {
+    path: '/messages/:threadId',
+    href: (threadId: number | string) => `/messages/${threadId}`,
+  },
 } as const;
 
 /**

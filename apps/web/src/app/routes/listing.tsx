@@ -1,0 +1,64 @@
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Alert } from '../../components/ui/alert';
+import { Page } from '../../components/ui/page';
+import { Spinner } from '../../components/ui/spinner';
+import { paths } from '../../config/paths';
+import { errorMessage } from '../../lib/form-errors';
+import { useCurrentUser } from '../../features/auth/api/get-session';
+import { useListing } from '../../features/exchange/api/get-listing';
+import { ListingDetail } from '../../features/exchange/components/listing-detail';
+import { OwnerActions } from '../../features/exchange/components/owner-actions';
+import { ReportListingForm } from '../../features/exchange/components/report-listing-form';
+import { MessageForm } from '../../features/messages/components/message-form';
+
+/** One listing: details, the seller's controls or the buyer's message box, and a report link. */
+export function ListingRoute() {
+  const { listingId } = useParams();
+  const [params] = useSearchParams();
+  const id = Number(listingId);
+  const fitsBoat = params.get('fitsBoat') ? Number(params.get('fitsBoat')) : undefined;
+  const listing = useListing(id, fitsBoat);
+  const { user } = useCurrentUser();
+  const navigate = useNavigate();
+  if (listing.isPending) return <Spinner label="Loading the listing…" />;
+  if (listing.isError)
+    return (
+      <Page title="Listing not available">
+        <Alert tone="error">{errorMessage(listing.error)}</Alert>
+        <Link to={paths.exchange.href()}>Back to the exchange</Link>
+      </Page>
+    );
+  const l = listing.data;
+  return (
+    <Page title={l.title}>
+      <Link to={paths.exchange.href()} className="text-sm">
+        ← Back to the exchange
+      </Link>
+      <ListingDetail listing={l} />
+      {l.isMine && <OwnerActions listing={l} editHref={paths.listingEdit.href(l.id)} />}
+      {!l.isMine && l.status === 'active' && user && (
+        <section
+          aria-labelledby="contact-heading"
+          className="flex flex-col gap-2 rounded-lg border border-sand-300 p-4"
+        >
+          <h2 id="contact-heading" className="text-lg">
+            Message {l.seller.displayName}
+          </h2>
+          <MessageForm
+            listingId={l.id}
+            label="Your message"
+            submitLabel="Send message"
+            onSent={(threadId) => void navigate(paths.thread.href(threadId))}
+          />
+        </section>
+      )}
+      {!user && l.status === 'active' && (
+        <p>
+          <Link to={paths.signIn.href(paths.listing.href(l.id))}>Sign in</Link> to message the
+          seller.
+        </p>
+      )}
+      {user && !l.isMine && <ReportListingForm listingId={l.id} />}
+    </Page>
+  );
+}

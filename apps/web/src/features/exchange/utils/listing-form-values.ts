@@ -1,0 +1,104 @@
+import { listingInputSchema, type ListingDto } from '@app/shared';
+import { z } from 'zod';
+
+/** What the form holds: strings as typed; converted to the shared listing schema on submit. */
+export interface ListingFormValues {
+  category: string;
+  title: string;
+  description: string;
+  condition: string;
+  price: string;
+  currency: string;
+  harborId: string;
+  specs: Record<string, string>;
+}
+
+const SPEC_KEYS: Record<string, Array<[key: string, kind: 'num' | 'str' | 'bool']>> = {
+  anchor: [
+    ['anchorType', 'str'],
+    ['massKg', 'num'],
+  ],
+  chain: [
+    ['grade', 'str'],
+    ['tradeSizeIn', 'num'],
+    ['nominalMm', 'num'],
+    ['lengthM', 'num'],
+    ['galvanizing', 'str'],
+  ],
+  rode: [
+    ['material', 'str'],
+    ['construction', 'str'],
+    ['diameterMm', 'num'],
+    ['lengthM', 'num'],
+  ],
+  connector: [
+    ['kind', 'str'],
+    ['nominalIn', 'num'],
+    ['wllN', 'num'],
+  ],
+  snubber: [
+    ['material', 'str'],
+    ['diameterMm', 'num'],
+    ['lengthM', 'num'],
+    ['bridle', 'bool'],
+  ],
+  windlass: [
+    ['part', 'str'],
+    ['grade', 'str'],
+    ['tradeSizeIn', 'num'],
+    ['nominalMm', 'num'],
+  ],
+  mooring: [
+    ['item', 'str'],
+    ['massKg', 'num'],
+  ],
+  other: [],
+};
+
+const toNumber = (v: string | undefined) =>
+  v === undefined || v.trim() === '' ? undefined : Number(v);
+
+/** Converts typed strings to the shared schema's shape (numbers, cents, only this category's specs). */
+export function toListingInput(v: ListingFormValues): Record<string, unknown> {
+  const specs: Record<string, unknown> = {};
+  for (const [key, kind] of SPEC_KEYS[v.category] ?? []) {
+    const raw = v.specs[key];
+    if (raw === undefined || raw === '') continue;
+    specs[key] = kind === 'num' ? Number(raw) : kind === 'bool' ? raw === 'true' : raw;
+  }
+  const price = toNumber(v.price);
+  return {
+    category: v.category,
+    title: v.title,
+    description: v.description,
+    condition: v.condition,
+    priceCents: price === undefined ? undefined : Math.round(price * 100),
+    currency: v.currency,
+    harborId: toNumber(v.harborId),
+    specs,
+  };
+}
+
+/** The shared listing schema behind a converter from typed strings. */
+export const formSchema = z
+  .custom<ListingFormValues>((v) => typeof v === 'object' && v !== null)
+  .transform(toListingInput)
+  .pipe(listingInputSchema);
+
+/** Form values for an existing listing (or blanks). */
+export function listingFormValues(l?: ListingDto): ListingFormValues {
+  const specs: Record<string, string> = {};
+  for (const [k, v] of Object.entries(l?.specs ?? {}))
+    specs[k] =
+      typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean' ? String(v) : '';
+  return {
+    category: l?.category ?? 'chain',
+    title: l?.title ?? '',
+    description: l?.description ?? '',
+    condition: l?.condition ?? 'good',
+    price: l ? String(l.priceCents / 100) : '',
+    currency: l?.currency ?? 'EUR',
+    harborId: l ? String(l.harborId) : '',
+    specs,
+  };
+}
