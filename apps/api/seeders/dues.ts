@@ -194,8 +194,9 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
     'Receipt book 5, no. 3',
   );
 
-  // Joined this year, never paid; one mismatched card payment is held for the treasurer.
-  const bramJoined = dayIn(fy.start, 100);
+  // Joined recently and never paid (overdue); one mismatched card payment is held for the treasurer.
+  // 45 days ago: past the 30-day grace, not yet lapsed, whatever day the demo is seeded.
+  const bramJoined = addDays(today, -45);
   await member('bram@larkspit.example', 'individual', bramJoined, null);
   await pay('bram@larkspit.example', 'individual', fy, bramJoined, 'card', null, {
     amountMinor: 6000,

@@ -47,6 +47,7 @@ export const listPayments = (q: ListQuery) =>
     },
     include: includes,
     order: [
+      ['paidAt', 'DESC'],
       ['createdAt', 'DESC'],
       ['id', 'DESC'],
     ],
