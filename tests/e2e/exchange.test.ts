@@ -1,0 +1,109 @@
+import sharp from 'sharp';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser.close();
+});
+
+// Demo data: Idris is paid up (may list); Maren's boat "Marram" (9.1 m sloop) has a 5/16 in G43 gypsy.
+const SELLER = 'idris@larkspit.example';
+const BUYER = 'maren@larkspit.example';
+const TITLE = 'Grade 43 chain 5/16 inch, 40 m, spare from a refit';
+
+const photo = (colour: string) =>
+  sharp({ create: { width: 800, height: 600, channels: 3, background: colour } })
+    .jpeg()
+    .toBuffer();
+
+async function newPage(width = 1280): Promise<Page> {
+  return browser.newPage({ viewport: { width, height: 1000 } });
+}
+
+describe('gear exchange in Chromium', () => {
+  let listingUrl = '';
+
+  it('a paid-up seller lists chain with two photos and publishes it', async () => {
+    const page = await newPage(390);
+    await signIn(page, SELLER);
+    await page.goto(`${baseUrl()}/exchange/new`);
+    await page.getByLabel('Category').selectOption('chain');
+    await page.getByLabel('Title').fill(TITLE);
+    await page.getByLabel('Description').fill('Galvanised high-test chain, end marked every 10 m.');
+    await page.getByLabel('Chain grade').selectOption('G43');
+    await page.getByLabel('Trade size (in)').fill('0.3125');
+    await page.getByLabel('Length (m)').fill('40');
+    await page.getByLabel('Galvanising').selectOption('good');
+    await page.getByLabel('Price').fill('150');
+    await page.getByLabel('Harbour').selectOption({ label: 'Larkspit Harbour' });
+    await page.getByRole('button', { name: 'Save draft and add photos' }).click();
+    await page.waitForURL(/\/exchange\/listings\/\d+\/edit$/, { timeout: 15000 });
+    listingUrl = page.url().replace(/\/edit$/, '');
+
+    await page.locator('input[type=file][name=photos]').setInputFiles([
+      { name: 'first.jpg', mimeType: 'image/jpeg', buffer: await photo('#2a6f97') },
+      { name: 'second.jpg', mimeType: 'image/jpeg', buffer: await photo('#a44a3f') },
+    ]);
+    await expect
+      .poll(() => page.getByRole('heading', { name: /^Photos/ }).innerText(), { timeout: 20000 })
+      .toBe('Photos (2 of 8)');
+    await page.getByRole('button', { name: 'Publish' }).click();
+    await expect
+      .poll(() => page.getByText(/Shows in search until/).count(), { timeout: 15000 })
+      .toBe(1);
+    await page.close();
+  });
+
+  it('a member finds it with a misspelt query, filters “fits my boat” and writes to the seller', async () => {
+    const page = await newPage();
+    await signIn(page, BUYER);
+    await page.goto(`${baseUrl()}/exchange`);
+    await page.getByLabel('Search gear').fill('galvanised chian');
+    await page.getByLabel('Boat').selectOption({ label: 'Marram' });
+    await page.getByLabel('Only what fits').check();
+    await page.getByRole('button', { name: 'Search', exact: true }).click();
+    const link = page.getByRole('link', { name: TITLE });
+    await link.waitFor({ timeout: 15000 });
+    expect(page.url()).toMatch(/q=galvanised\+chian/);
+    expect(page.url()).toMatch(/fitsOnly=true/);
+    await expect.poll(() => page.getByText('Fits your boat').count()).toBeGreaterThan(0);
+    await expect.poll(() => page.getByText(/Checked against Marram/).count()).toBe(1);
+    await screenshot(page, 'exchange-search');
+
+    await link.click();
+    await page.getByRole('heading', { name: TITLE }).waitFor({ timeout: 15000 });
+    await expect.poll(() => page.getByText('Paid-up member').count()).toBe(1);
+    await expect.poll(() => page.getByText('Fits your boat').count()).toBe(1);
+    await screenshot(page, 'exchange-listing');
+    await page
+      .getByLabel('Your message')
+      .fill('Is this still for sale? I could collect on Saturday.');
+    await page.getByRole('button', { name: 'Send message' }).click();
+    await page.waitForURL(/\/messages\/\d+$/, { timeout: 15000 });
+    await expect.poll(() => page.getByText(/collect on Saturday/).count()).toBe(1);
+    await page.close();
+  });
+
+  it('the seller gets the message by e-mail and marks the chain sold to that buyer', async () => {
+    const mail = await waitForMail(SELLER, 'New message about');
+    expect(mail.text).toContain('collect on Saturday');
+    const page = await newPage(390);
+    await signIn(page, SELLER);
+    await page.goto(listingUrl);
+    await page.getByLabel('Sold to').selectOption({ label: 'Maren Tiller' });
+    await page.getByRole('button', { name: 'Mark sold' }).click();
+    await page.getByRole('button', { name: 'Relist for 60 days' }).waitFor({ timeout: 15000 });
+    const sold = await waitForMail(BUYER, 'Sold to you');
+    expect(sold.subject).toContain(TITLE);
+    await page.goto(`${baseUrl()}/messages`);
+    await expect
+      .poll(() => page.getByText(/Sold to Maren Tiller/).count(), { timeout: 15000 })
+      .toBe(1);
+    await page.close();
+  });
+});
