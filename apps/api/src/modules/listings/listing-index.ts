@@ -92,14 +92,19 @@ const newIndex = () =>
     storeFields: [],
     searchOptions: {
       boost: { title: 3, specsText: 2 },
-      prefix: (term) => term.length > 2,
-      fuzzy: (term) => (term.length < 5 ? false : 1),
+      // Sizes and lengths match exactly; words get prefix and (from 5 letters) one-typo matching.
+      prefix: (term) => term.length > 2 && !/\d/.test(term),
+      fuzzy: (term) => (term.length < 5 || /\d/.test(term) ? false : 1),
       combineWith: 'AND',
     },
   });
 
 let index = newIndex();
 const docs = new Map<number, IndexedListing>();
+/** Results of recent identical searches; emptied on every index write, so it never serves stale hits. */
+const cache = new Map<string, { hits: SearchHit[]; total: number; atMs: number }>();
+const CACHE_MAX = 500;
+const CACHE_TTL_MS = 60_000;
 let ready: Promise<void> | null = null;
 
 function sequelizeOf(): Sequelize {
@@ -117,6 +122,7 @@ export async function rebuildListingIndex(): Promise<number> {
   for (const d of all) docs.set(d.id, d);
   await fresh.addAllAsync(all, { chunkSize: 2000 });
   index = fresh;
+  cache.clear();
   ready = Promise.resolve();
   return all.length;
 }
@@ -140,6 +146,7 @@ export async function refreshListing(id: number): Promise<void> {
     type: QueryTypes.SELECT,
     replacements: [id],
   });
+  cache.clear();
   if (index.has(id)) index.discard(id);
   docs.delete(id);
   const row = rows[0];
@@ -184,6 +191,31 @@ export function searchIndex(
   nowMs = Date.now(),
 ): { hits: SearchHit[]; total: number; tookMs: number } {
   const started = performance.now();
+  const key = needs ? null : JSON.stringify(query);
+  const cached = key ? cache.get(key) : undefined;
+  if (cached && nowMs - cached.atMs < CACHE_TTL_MS)
+    return { hits: cached.hits, total: cached.total, tookMs: performance.now() - started };
+  const result = runSearch(query, needs, nowMs);
+  if (key) {
+    if (cache.size >= CACHE_MAX) cache.delete(cache.keys().next().value ?? '');
+    cache.set(key, { ...result, atMs: nowMs });
+  }
+  return { ...result, tookMs: performance.now() - started };
+}
+
+/** Adjacent-letter swaps of a word ("chian" → "hcian", "cihan", "chain", "china"). */
+function swaps(term: string): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < term.length - 1; i += 1)
+    out.push(term.slice(0, i) + term.charAt(i + 1) + term.charAt(i) + term.slice(i + 2));
+  return out;
+}
+
+function runSearch(
+  query: ListingSearch,
+  needs: BoatNeeds | undefined,
+  nowMs: number,
+): { hits: SearchHit[]; total: number } {
   const q = query.q?.trim();
   let matched: IndexedListing[];
   if (q) {
@@ -192,9 +224,20 @@ export function searchIndex(
       return d !== undefined && passes(d, query, nowMs);
     };
     let results = index.search(q, { filter });
-    // Nothing with one typo per word: allow two, which also catches swapped letters ("chian").
-    if (results.length === 0)
-      results = index.search(q, { filter, fuzzy: (term) => (term.length < 5 ? false : 2) });
+    // Nothing with one typo per word: also try each word with two neighbouring letters swapped ("chian").
+    if (results.length === 0) {
+      const words = q.split(/[\s\p{P}]+/u).filter(Boolean);
+      results = index.search(
+        {
+          combineWith: 'AND',
+          queries: words.map((w) => ({
+            combineWith: 'OR',
+            queries: [w.toLowerCase(), ...(w.length >= 4 ? swaps(w.toLowerCase()) : [])],
+          })),
+        },
+        { filter },
+      );
+    }
     matched = [];
     for (const r of results) {
       const d = docs.get(r.id as number);
@@ -221,7 +264,7 @@ export function searchIndex(
   const start = (query.page - 1) * query.pageSize;
   const page = hits.slice(start, start + query.pageSize);
   if (needs) for (const h of page) h.fit ??= fitOf(h.doc.rating, needs);
-  return { hits: page, total, tookMs: performance.now() - started };
+  return { hits: page, total };
 }
 
 /** True when the indexed listing `id` matches a saved search's criteria. */
@@ -235,3 +278,6 @@ export function matchesCriteria(id: number, c: SavedSearchCriteria, nowMs = Date
 
 /** How many listings the index holds (for health and the benchmark). */
 export const indexedCount = () => docs.size;
+
+/** Empties the result cache (the benchmark times uncached searches with it). */
+export const clearListingSearchCache = () => cache.clear();
