@@ -17,7 +17,6 @@ const SIGNED_IN: Row = {
   admin: 'ok',
 };
 const ADMIN: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 403, admin: 'ok' };
-const TREASURER: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 'ok', admin: 403 };
 const MODERATOR: Row = { visitor: 401, member: 403, moderator: 'ok', treasurer: 403, admin: 403 };
 const TREASURER: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 'ok', admin: 403 };
 
@@ -79,23 +78,6 @@ const MATRIX: Record<string, Row> = {
   'GET /api/notifications': SIGNED_IN,
   'POST /api/notifications/read': SIGNED_IN,
   'POST /api/uploads/images': SIGNED_IN,
-  'POST /api/payments/webhook': PUBLIC,
-  'GET /api/dues/plans': SIGNED_IN,
-  'GET /api/dues/me': SIGNED_IN,
-  'POST /api/dues/checkout': SIGNED_IN,
-  'GET /api/dues/checkout/:sessionId': SIGNED_IN,
-  'GET /api/treasury/plans': TREASURER,
-  'POST /api/treasury/plans': TREASURER,
-  'PATCH /api/treasury/plans/:planId': TREASURER,
-  'GET /api/treasury/roster': TREASURER,
-  'GET /api/treasury/payments': TREASURER,
-  'POST /api/treasury/payments': TREASURER,
-  'POST /api/treasury/payments/:paymentId/refunds': TREASURER,
-  'POST /api/treasury/payments/:paymentId/resolve': TREASURER,
-  'POST /api/treasury/reminders/preview': TREASURER,
-  'POST /api/treasury/reminders': TREASURER,
-  'GET /api/treasury/ledger.csv': TREASURER,
-  'GET /api/treasury/summary': TREASURER,
   'GET /api/listings': PUBLIC,
   'GET /api/listings/mine': SIGNED_IN,
   'GET /api/listings/reports': MODERATOR,
