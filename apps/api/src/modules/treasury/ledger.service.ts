@@ -347,12 +347,13 @@ export async function ledgerCsv(): Promise<string> {
       ['id', 'ASC'],
     ],
   });
-  type Row = { at: number; cells: (string | number | null)[] };
+  type Row = { at: number; recordedAt: number; cells: (string | number | null)[] };
   const rows: Row[] = [];
   for (const p of payments) {
     const member = [p.userId, p.user?.displayName ?? '', p.user?.email ?? '', p.plan?.name ?? ''];
     rows.push({
       at: (p.paidAt ?? p.createdAt).getTime(),
+      recordedAt: p.createdAt.getTime(),
       cells: [
         'payment',
         p.id,
@@ -370,10 +371,13 @@ export async function ledgerCsv(): Promise<string> {
         p.heldReason ?? p.note,
       ],
     });
+    const paymentAt = (p.paidAt ?? p.createdAt).getTime();
     for (const r of p.refunds ?? []) {
       const at = r.completedAt ?? r.createdAt;
       rows.push({
-        at: at.getTime(),
+        // A payment's date is the day the treasurer entered; a refund never sorts before its payment.
+        at: Math.max(at.getTime(), paymentAt),
+        recordedAt: r.createdAt.getTime(),
         cells: [
           'refund',
           r.id,
@@ -393,7 +397,12 @@ export async function ledgerCsv(): Promise<string> {
       });
     }
   }
-  rows.sort((a, b) => a.at - b.at);
+  // By calendar day (UTC), then in the order the entries were recorded: an offline payment carries only the day it
+  // was received, so times within one day say nothing about order.
+  const day = (ms: number) => Math.floor(ms / 86_400_000);
+  // Timestamps have one-second precision; within a second a payment precedes a refund.
+  const kind = (r: Row) => (r.cells[0] === 'refund' ? 1 : 0);
+  rows.sort((a, b) => day(a.at) - day(b.at) || a.recordedAt - b.recordedAt || kind(a) - kind(b));
   return (
     [LEDGER_COLUMNS.join(','), ...rows.map((r) => r.cells.map(csvField).join(','))].join('\r\n') +
     '\r\n'
