@@ -14,7 +14,7 @@ import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../units/components/select-field';
+import { SelectField } from '../../../components/ui/select-field';
 import type { QuantityKind } from '../../units/utils/parse-quantity';
 
 export interface BoatFormProps {

@@ -3,7 +3,7 @@ import type { BoatDto, PlanComponents, PlanCondition } from '@app/shared';
 import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../units/components/select-field';
+import { SelectField } from '../../../components/ui/select-field';
 import { recommendedComponents, recommendFor } from '../utils/recommend';
 import { RecommendationColumn } from './recommendation-column';
 

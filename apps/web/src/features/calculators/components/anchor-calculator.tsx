@@ -8,7 +8,7 @@ import {
 } from '@app/calc';
 import { useState } from 'react';
 import { Quantity } from '../../units/components/quantity';
-import { SelectField } from '../../units/components/select-field';
+import { SelectField } from '../../../components/ui/select-field';
 import { ANCHOR_OPTIONS, BOTTOM_OPTIONS, pick } from '../utils/options';
 import { runCalc } from '../utils/run-calc';
 import { DEFAULT_BOAT_WIND, type BoatWind } from '../utils/boat-wind';

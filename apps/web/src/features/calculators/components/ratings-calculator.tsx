@@ -14,7 +14,7 @@ import {
 import { useState } from 'react';
 import { Quantity } from '../../units/components/quantity';
 import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../units/components/select-field';
+import { SelectField } from '../../../components/ui/select-field';
 import {
   CONSTRUCTION_OPTIONS,
   GRADE_OPTIONS,

@@ -12,7 +12,7 @@ import {
 import { useState } from 'react';
 import { Quantity } from '../../units/components/quantity';
 import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../units/components/select-field';
+import { SelectField } from '../../../components/ui/select-field';
 import { GRADE_OPTIONS, chainSizeOptions, pick } from '../utils/options';
 import { fieldError, runCalc } from '../utils/run-calc';
 import { CalcCard } from './calc-card';

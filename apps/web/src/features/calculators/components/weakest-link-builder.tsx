@@ -2,7 +2,7 @@ import { STANDARD_CAUTIONS, weakestLink } from '@app/calc';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../units/components/select-field';
+import { SelectField } from '../../../components/ui/select-field';
 import { newPart, ratePart, type LinkPart, type LinkPartKind } from '../utils/link-parts';
 import { pick } from '../utils/options';
 import { fieldError, runCalc } from '../utils/run-calc';

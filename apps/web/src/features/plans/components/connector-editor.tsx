@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../units/components/select-field';
+import { SelectField } from '../../../components/ui/select-field';
 
 export type PlanConnectorInput = PlanComponents['connectors'][number];
 
