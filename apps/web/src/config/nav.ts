@@ -20,7 +20,12 @@ export interface NavLinkItem extends NavItemBase {
   to: string;
   /** Mark as current only on an exact path match (for `/`). */
   end?: boolean;
+  /** A live count shown beside the label (and read out with it), e.g. items waiting for a moderator. */
+  badge?: NavBadge;
 }
+
+/** The counts a navigation item can carry. */
+export type NavBadge = 'moderation-waiting';
 
 /** A button that runs an action instead of following a link. */
 export interface NavActionItem extends NavItemBase {
@@ -97,6 +102,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     to: paths.moderation.href(),
     section: 'primary',
     roles: ['moderator'],
+    badge: 'moderation-waiting',
   },
   {
     id: 'admin-users',

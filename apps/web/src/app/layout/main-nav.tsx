@@ -1,10 +1,11 @@
 import { useId, useState } from 'react';
 import { NavLink, useNavigate } from 'react-router-dom';
-import { navFor, type NavItem } from '../../config/nav';
+import { navFor, type NavBadge, type NavItem } from '../../config/nav';
 import { paths } from '../../config/paths';
 import { cn } from '../../lib/cn';
 import { useCurrentUser } from '../../features/auth/api/get-session';
 import { useLogout } from '../../features/auth/api/logout';
+import { useModerationCount } from '../../features/moderation/api/get-queue';
 
 const ITEM_CLASSES =
   'flex min-h-11 items-center rounded-md px-3 font-bold text-sand-100 no-underline hover:bg-ink-800 hover:text-white';
@@ -37,13 +38,20 @@ export function MainNav() {
   // Until the session is known show only what everyone sees, so sign-in links don't flash for members.
   const items =
     user === undefined ? navFor(null).filter((item) => item.signedIn === undefined) : navFor(user);
+  const waiting = useModerationCount(
+    items.some((item) => item.kind === 'link' && item.badge === 'moderation-waiting'),
+  );
+  const badgeCount = (badge: NavBadge | undefined) =>
+    badge === 'moderation-waiting' ? (waiting.data?.total ?? 0) : 0;
 
   const renderItem = (item: NavItem) => {
     if (item.kind === 'link') {
+      const count = badgeCount(item.badge);
       return (
         <NavLink
           to={item.to}
           end={item.end}
+          aria-label={count > 0 ? `${item.label}, ${count} waiting` : undefined}
           onClick={() => setIsOpen(false)}
           className={({ isActive }) =>
             cn(
@@ -54,6 +62,14 @@ export function MainNav() {
           }
         >
           {item.label}
+          {count > 0 && (
+            <span
+              aria-hidden="true"
+              className="ml-2 inline-flex min-w-6 items-center justify-center rounded-pill bg-signal-400 px-1.5 text-xs font-bold text-ink-950"
+            >
+              {count > 99 ? '99+' : count}
+            </span>
+          )}
         </NavLink>
       );
     }

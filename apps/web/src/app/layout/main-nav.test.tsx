@@ -1,0 +1,106 @@
+import '../../testing/setup';
+import type { ModerationCountDto, ModerationQueueDto, PostSummaryDto } from '@app/shared';
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it } from 'vitest';
+import { buildSession, buildUser } from '../../testing/builders';
+import { mockApi } from '../../testing/mock-api';
+import { renderApp } from '../../testing/render';
+
+const club = { name: 'Gullwing Cove Cruising Club', harbors: [] };
+
+const count = (pendingPosts: number, openReports = 0): ModerationCountDto => ({
+  pendingPosts,
+  pendingComments: 0,
+  openReports,
+  total: pendingPosts + openReports,
+});
+
+const pendingPost = (id: number, title: string): PostSummaryDto => ({
+  id,
+  kind: 'article',
+  title,
+  excerpt: 'An invented excerpt.',
+  status: 'pending',
+  visibility: 'public',
+  topic: { id: 1, slug: 'anchoring', name: 'Anchoring' },
+  author: { id: 9, displayName: 'Tamsin Keel' },
+  hasSetup: false,
+  helpfulCount: 0,
+  commentCount: 0,
+  answered: false,
+  pinned: false,
+  locked: false,
+  publishedAt: null,
+  updatedAt: '2026-05-01T10:00:00.000Z',
+});
+
+const mainNav = () => screen.findByRole('navigation', { name: 'Main' });
+
+describe('moderation badge in the main navigation', () => {
+  it('reads out how many items wait for a moderator', async () => {
+    mockApi({
+      'GET /api/club': () => ({ body: { data: club } }),
+      'GET /api/moderation/count': () => ({ body: { data: count(2, 1) } }),
+    });
+    renderApp({ route: '/', session: buildSession(buildUser({ roles: ['member', 'moderator'] })) });
+    const link = await within(await mainNav()).findByRole('link', {
+      name: 'Moderation, 3 waiting',
+    });
+    expect(link).toHaveAttribute('href', '/moderation');
+    expect(link).toHaveTextContent('Moderation3');
+  });
+
+  it('shows the plain label when nothing waits', async () => {
+    mockApi({
+      'GET /api/club': () => ({ body: { data: club } }),
+      'GET /api/moderation/count': () => ({ body: { data: count(0) } }),
+    });
+    const { queryClient } = renderApp({
+      route: '/',
+      session: buildSession(buildUser({ roles: ['member', 'moderator'] })),
+    });
+    await waitFor(() => expect(queryClient.getQueryData(['moderation', 'count'])).toBeDefined());
+    expect(within(await mainNav()).getByRole('link', { name: 'Moderation' })).toBeInTheDocument();
+  });
+
+  it('never asks for the count for a member without the moderator role', async () => {
+    const { requests } = mockApi({
+      'GET /api/club': () => ({ body: { data: club } }),
+    });
+    renderApp({ route: '/', session: buildSession(buildUser({ roles: ['member'] })) });
+    await within(await mainNav()).findByRole('link', { name: 'Dues' });
+    expect(requests.some((r) => r.url.startsWith('/api/moderation'))).toBe(false);
+  });
+
+  it('goes down after the moderator approves a post from the queue', async () => {
+    let queue: ModerationQueueDto = {
+      posts: [pendingPost(1, 'Bridle legs of equal length'), pendingPost(2, 'Chafe on a roller')],
+      comments: [],
+      reports: [],
+    };
+    mockApi({
+      'GET /api/club': () => ({ body: { data: club } }),
+      'GET /api/moderation/count': () => ({ body: { data: count(queue.posts.length) } }),
+      'GET /api/moderation/queue': () => ({ body: { data: queue } }),
+      'GET /api/moderation/listing-reports': () => ({ body: { data: [] } }),
+      'POST /api/moderation/posts/1/decision': () => {
+        queue = { ...queue, posts: queue.posts.filter((p) => p.id !== 1) };
+        return { body: { data: { id: 1, status: 'approved' } } };
+      },
+    });
+    renderApp({
+      route: '/moderation',
+      session: buildSession(buildUser({ roles: ['member', 'moderator'] })),
+    });
+    const nav = await mainNav();
+    await within(nav).findByRole('link', { name: 'Moderation, 2 waiting' });
+    await userEvent
+      .setup()
+      .click(await screen.findByRole('button', { name: 'Approve “Bridle legs of equal length”' }));
+    expect(
+      await within(nav).findByRole('link', { name: 'Moderation, 1 waiting' }),
+    ).toBeInTheDocument();
+    expect(screen.queryByText('Bridle legs of equal length')).not.toBeInTheDocument();
+  });
+});
