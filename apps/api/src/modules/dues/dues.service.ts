@@ -117,6 +117,7 @@ type CheckoutInput = z.output<typeof checkoutInputSchema>;
 /**
  * Opens a checkout session for what the member owes. The payment row is written first (pending, with the amount
  * expected from the plan); the membership is credited only when the verified webhook says the session was paid.
+ * When the provider cannot be reached the row is removed again and UPSTREAM_UNAVAILABLE (503) is thrown.
  */
 export async function startCheckout(
   actor: User,
@@ -187,14 +188,10 @@ export async function startCheckout(
     await payment.update({ providerSessionId: session.id });
     if (!session.url) throw new Error('The provider returned no checkout page');
     return { sessionId: session.id, url: session.url };
-  } catch (err) {
-    await payment.update({
-      status: 'failed',
-      note: `Checkout could not be opened: ${err instanceof Error ? err.message : 'unknown error'}`.slice(
-        0,
-        500,
-      ),
-    });
+  } catch {
+    // The provider never opened a checkout, so nothing is recorded: the pending row goes. Should the provider have
+    // opened one after all and it gets paid, the webhook finds no row and holds the money for the treasurer.
+    await payment.destroy();
     throw new AppError(
       'UPSTREAM_UNAVAILABLE',
       'The card payment service did not answer. Nothing was charged; please try again in a few minutes.',
