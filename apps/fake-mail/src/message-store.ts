@@ -11,12 +11,16 @@ export const messageDtoSchema = z.object({
   subject: z.string(),
   text: z.string(),
   html: z.string().nullable(),
+  /** The sender's Message-ID header (without angle brackets), so a test can tell a resend from a new message. */
+  messageId: z.string().nullable().default(null),
 });
 
 /** One stored e-mail as the JSON API returns it. */
 export type MessageDto = z.infer<typeof messageDtoSchema>;
 
-export type NewMessage = Omit<MessageDto, 'id' | 'receivedAt'>;
+export type NewMessage = Omit<MessageDto, 'id' | 'receivedAt' | 'messageId'> & {
+  messageId?: string | null;
+};
 
 export interface MessageFilter {
   /** Exact recipient address, compared case-insensitively. */
@@ -57,6 +61,7 @@ export class MessageStore {
       id: this.nextId(receivedAt),
       receivedAt: receivedAt.toISOString(),
       ...message,
+      messageId: message.messageId ?? null,
     };
     const file = path.join(this.dir, dto.id + FILE_SUFFIX);
     const tmp = `${file}.${process.pid}.tmp`;

@@ -26,6 +26,7 @@ interface SendInput {
   text?: string;
   html?: string;
   bcc?: string;
+  messageId?: string;
   auth?: { user: string; pass: string };
 }
 
@@ -44,6 +45,7 @@ async function send(input: SendInput): Promise<void> {
     subject: input.subject,
     text: input.text ?? 'plain body',
     html: input.html,
+    messageId: input.messageId,
   });
   transport.close();
 }
@@ -92,6 +94,15 @@ describe('SMTP → GET /api/messages', () => {
     expect(message?.text.trim()).toBe('Code 123');
     expect(Date.parse(message?.receivedAt ?? '')).toBeGreaterThan(Date.now() - 60_000);
     expect(await readdir(dataDir)).toEqual([`${message?.id}.json`]);
+  });
+
+  it('keeps the sender’s Message-ID, so a resent message can be told apart from a new one', async () => {
+    await send({ to: 'a@example.test', subject: 'First', messageId: '<outbox-7@club.test>' });
+    await send({ to: 'a@example.test', subject: 'Second' });
+    const [second, first] = await listMessages();
+    expect(first?.messageId).toBe('outbox-7@club.test');
+    expect(second?.messageId).toMatch(/^[^<>\s]+@[^<>\s]+$/);
+    expect(second?.messageId).not.toBe(first?.messageId);
   });
 
   it('accepts a client that offers credentials and records Bcc recipients', async () => {

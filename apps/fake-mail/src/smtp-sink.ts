@@ -49,6 +49,7 @@ function toNewMessage(parsed: ParsedMail, rcptTo: SMTPServerAddress[]): NewMessa
     subject: parsed.subject ?? '',
     text: parsed.text ?? '',
     html: typeof parsed.html === 'string' ? parsed.html : null,
+    messageId: parsed.messageId?.replace(/^<|>$/g, '') ?? null,
   };
 }
 
