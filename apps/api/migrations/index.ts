@@ -4,6 +4,7 @@ import * as m0002 from './20261201-0002-boats-and-plans';
 import * as m0003 from './20261201-0003-knowledge';
 import * as m0004 from './20261201-0004-exchange';
 import * as m0005 from './20261201-0005-dues';
+import * as m0006 from './20261202-0006-plan-kinds';
 
 export interface MigrationModule {
   up: (p: { context: QueryInterface }) => Promise<void>;
@@ -17,4 +18,5 @@ export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [
   ['20261201-0003-knowledge', m0003],
   ['20261201-0004-exchange', m0004],
   ['20261201-0005-dues', m0005],
+  ['20261202-0006-plan-kinds', m0006],
 ];

@@ -14,6 +14,7 @@ const CAL: DuesCalendar = { fiscalYearStartMonth: 4, renewalWindowDays: 30, laps
 const PLANS = [
   {
     code: 'individual',
+    kind: 'individual' as const,
     name: 'Individual',
     description: 'One adult member, full voting rights.',
     amountMinor: 12000,
@@ -24,6 +25,7 @@ const PLANS = [
   },
   {
     code: 'family',
+    kind: 'family' as const,
     name: 'Family',
     description: 'Two adults and their children under 18 at one address.',
     amountMinor: 18000,
@@ -34,6 +36,7 @@ const PLANS = [
   },
   {
     code: 'junior',
+    kind: 'junior' as const,
     name: 'Junior',
     description: 'Members under 25.',
     amountMinor: 4000,

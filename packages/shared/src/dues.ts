@@ -10,6 +10,25 @@ export const PRORATION_LABELS: Record<Proration, string> = {
   daily: 'By remaining days',
 };
 
+/** What sort of member a plan is for; the treasurer names the plan itself. */
+export const PLAN_KINDS = [
+  'individual',
+  'family',
+  'junior',
+  'senior',
+  'associate',
+  'other',
+] as const;
+export type PlanKind = (typeof PLAN_KINDS)[number];
+export const PLAN_KIND_LABELS: Record<PlanKind, string> = {
+  individual: 'Individual',
+  family: 'Family or household',
+  junior: 'Junior',
+  senior: 'Senior',
+  associate: 'Associate (non-sailing)',
+  other: 'Other',
+};
+
 export const PAYMENT_METHODS = ['card', 'cheque', 'cash', 'transfer'] as const;
 export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
 export const OFFLINE_METHODS = ['cheque', 'cash', 'transfer'] as const;
@@ -66,36 +85,55 @@ export const currencySchema = z
   .regex(/^[A-Za-z]{3}$/, 'Use a three-letter currency code such as EUR')
   .transform((s) => s.toUpperCase());
 
-/** A plan as the treasurer defines it. */
-export const planInputSchema = z.object({
+const graceDaysSchema = z
+  .number({ error: 'Grace period must be a number' })
+  .int('Grace period must be whole days')
+  .min(0, 'Grace period cannot be negative')
+  .max(180, 'Grace period can be at most 180 days');
+
+// The fields without defaults: a partial change must leave unnamed fields alone, and zod applies a default
+// even inside .partial().
+const planFields = z.object({
   code: z
     .string({ error: 'Give a short code' })
     .trim()
     .regex(/^[a-z0-9-]{2,40}$/, 'Use 2–40 lower-case letters, digits or dashes'),
-  name: z.string({ error: 'Name is required' }).trim().min(2, 'Name is required').max(80),
-  description: z.string().trim().max(500, 'Keep the description under 500 characters').default(''),
+  name: z
+    .string({ error: 'Name is required' })
+    .trim()
+    .min(2, 'Name is required')
+    .max(80, 'Keep the name under 80 characters'),
+  kind: z.enum(PLAN_KINDS, { error: 'Choose who the plan is for' }),
+  description: z.string().trim().max(500, 'Keep the description under 500 characters'),
   amountMinor: minor('Amount').min(50, 'Amount must be at least 50 cents'),
   currency: currencySchema,
   proration: z.enum(PRORATIONS, { error: 'Choose a proration rule' }),
-  lateFeeMinor: minor('Late fee').default(0),
-  graceDays: z
-    .number({ error: 'Grace period must be a number' })
-    .int('Grace period must be whole days')
-    .min(0, 'Grace period cannot be negative')
-    .max(180, 'Grace period can be at most 180 days')
-    .default(30),
-  active: z.boolean().default(true),
+  lateFeeMinor: minor('Late fee'),
+  graceDays: graceDaysSchema,
+  active: z.boolean({ error: 'Say whether the plan is open to members' }),
+});
+
+/** A plan as the treasurer defines it. */
+export const planInputSchema = planFields.extend({
+  kind: planFields.shape.kind.default('individual'),
+  description: planFields.shape.description.default(''),
+  lateFeeMinor: planFields.shape.lateFeeMinor.default(0),
+  graceDays: graceDaysSchema.default(30),
+  active: planFields.shape.active.default(true),
 });
 export type PlanInput = z.input<typeof planInputSchema>;
-export const planPatchSchema = planInputSchema
+/** A change to a plan: only the named fields change; the code is fixed. */
+export const planPatchSchema = planFields
   .omit({ code: true })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+export type PlanPatch = z.input<typeof planPatchSchema>;
 
 export interface PlanDto {
   id: number;
   code: string;
   name: string;
+  kind: PlanKind;
   description: string;
   amountMinor: number;
   currency: string;
@@ -110,6 +148,58 @@ export interface FiscalYearDto {
   start: string;
   end: string;
   label: string;
+}
+
+/** The club's dues calendar as the treasurer sets it. Grace periods and late fees belong to each plan. */
+export const duesCalendarSchema = z.object({
+  fiscalYearStartMonth: z
+    .number({ error: 'Choose the month the fiscal year starts' })
+    .int('Choose a month')
+    .min(1, 'Choose a month')
+    .max(12, 'Choose a month'),
+  fiscalYearStartDay: z
+    .number({ error: 'Give the day the fiscal year starts' })
+    .int('The day must be a whole number')
+    .min(1, 'The day must be between 1 and 28')
+    .max(28, 'The day must be between 1 and 28, so every year has it'),
+  renewalWindowDays: z
+    .number({ error: 'Give the renewal window in days' })
+    .int('The renewal window must be whole days')
+    .min(0, 'The renewal window cannot be negative')
+    .max(120, 'The renewal window can be at most 120 days'),
+  lapseAfterDays: z
+    .number({ error: 'Give the days until a membership lapses' })
+    .int('Lapsing must be whole days')
+    .min(1, 'A membership lapses at least one day after it is due')
+    .max(730, 'Lapsing can be at most 730 days after the due date'),
+});
+export type DuesCalendarInput = z.input<typeof duesCalendarSchema>;
+
+/** A proposed fiscal-year start, previewed before it is saved. */
+export const calendarPreviewQuerySchema = z.object({
+  fiscalYearStartMonth: z.coerce.number().pipe(duesCalendarSchema.shape.fiscalYearStartMonth),
+  fiscalYearStartDay: z.coerce.number().pipe(duesCalendarSchema.shape.fiscalYearStartDay),
+});
+
+/** What joining today costs on one plan under a calendar. */
+export interface JoinPreviewDto {
+  planId: number;
+  planName: string;
+  proration: Proration;
+  currency: string;
+  fullMinor: number;
+  joinMinor: number;
+  coversFrom: string;
+  coversTo: string;
+}
+
+/** A calendar with the fiscal years it gives and what a member joining today would pay on each active plan. */
+export interface DuesCalendarDto {
+  calendar: z.output<typeof duesCalendarSchema>;
+  today: string;
+  fiscalYear: FiscalYearDto;
+  nextFiscalYear: FiscalYearDto;
+  joinToday: JoinPreviewDto[];
 }
 
 export interface QuoteLineDto {

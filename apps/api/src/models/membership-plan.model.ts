@@ -6,7 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
-import type { Proration } from '@app/shared';
+import type { PlanKind, Proration } from '@app/shared';
 
 /** A dues plan the treasurer defines: an annual amount in minor units, anchored to the club's fiscal year. */
 export class MembershipPlan extends Model<
@@ -16,6 +16,7 @@ export class MembershipPlan extends Model<
   declare id: CreationOptional<number>;
   declare code: string;
   declare name: string;
+  declare kind: CreationOptional<PlanKind>;
   declare description: CreationOptional<string>;
   declare amountMinor: number;
   declare currency: string;
@@ -34,6 +35,7 @@ export function initMembershipPlan(sequelize: Sequelize) {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
       code: { type: DataTypes.STRING(40), allowNull: false, unique: true },
       name: { type: DataTypes.STRING(80), allowNull: false },
+      kind: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'individual' },
       description: { type: DataTypes.STRING(500), allowNull: false, defaultValue: '' },
       amountMinor: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
       currency: { type: DataTypes.CHAR(3), allowNull: false },

@@ -10,10 +10,16 @@ export const SETTINGS = {
   duesCalendar: z
     .object({
       fiscalYearStartMonth: z.number().int().min(1).max(12),
+      fiscalYearStartDay: z.number().int().min(1).max(28).default(1),
       renewalWindowDays: z.number().int().min(0).max(120),
       lapseAfterDays: z.number().int().min(1).max(730),
     })
-    .default({ fiscalYearStartMonth: 4, renewalWindowDays: 30, lapseAfterDays: 90 }),
+    .default({
+      fiscalYearStartMonth: 4,
+      fiscalYearStartDay: 1,
+      renewalWindowDays: 30,
+      lapseAfterDays: 90,
+    }),
 } as const;
 export type SettingKey = keyof typeof SETTINGS;
 export type SettingValue<K extends SettingKey> = z.infer<(typeof SETTINGS)[K]>;

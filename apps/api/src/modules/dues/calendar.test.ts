@@ -54,6 +54,43 @@ describe('proration', () => {
   });
 });
 
+// A year that starts mid-month (15 July): fiscal months run from the 15th to the 14th. Worked by hand from the rule.
+const MID = { ...CAL, fiscalYearStartMonth: 7, fiscalYearStartDay: 15 };
+const FY_MID = { start: '2026-07-15', end: '2027-07-14', label: '2026–27' };
+
+describe('fiscal year starting mid-month', () => {
+  it.each([
+    ['2026-07-14', MID, { start: '2025-07-15', end: '2026-07-14', label: '2025–26' }],
+    ['2026-07-15', MID, FY_MID],
+    ['2027-07-14', MID, FY_MID],
+    // 28 February start: a leap day falls in the year that started the day before.
+    [
+      '2028-02-29',
+      { ...CAL, fiscalYearStartMonth: 2, fiscalYearStartDay: 28 },
+      { start: '2028-02-28', end: '2029-02-27', label: '2028–29' },
+    ],
+    // 2 January start is not a calendar year, so the label spans two years.
+    [
+      '2026-01-01',
+      { ...CAL, fiscalYearStartMonth: 1, fiscalYearStartDay: 2 },
+      { start: '2025-01-02', end: '2026-01-01', label: '2025–26' },
+    ],
+  ])('%s falls in the expected fiscal year', (date, cal, expected) => {
+    expect(fiscalYearOf(date, cal)).toEqual(expected);
+  });
+
+  it.each([
+    ['monthly', '2026-08-14', 12000], // still the first fiscal month
+    ['monthly', '2026-08-15', 11000],
+    ['monthly', '2027-01-10', 7000], // sixth fiscal month (15 Dec–14 Jan): 7 of 12 left
+    ['monthly', '2027-07-14', 1000], // last day: one month
+    ['quarterly', '2026-10-14', 12000],
+    ['quarterly', '2026-10-15', 9000],
+  ] as const)('%s from %s is %i', (rule, from, expected) => {
+    expect(prorate(12000, rule, from, FY_MID)).toBe(expected);
+  });
+});
+
 describe('dues status', () => {
   const paid = { paidThrough: '2027-03-31', joinedOn: '2020-05-01' };
   const fresh = { paidThrough: null, joinedOn: '2026-09-10' };

@@ -2,8 +2,10 @@ import type { DuesStatus, FiscalYearDto, Proration } from '@app/shared';
 
 /** The club's dues calendar (a club setting the treasurer can change). */
 export interface DuesCalendar {
-  /** 1–12: the month the fiscal year starts on (day 1). */
+  /** 1–12: the month the fiscal year starts in. */
   fiscalYearStartMonth: number;
+  /** 1–28: the day of that month it starts on (1 when unset); never past the 28th, so every year has it. */
+  fiscalYearStartDay?: number;
   /** Days before the paid-through date ends that renewal opens and the member is shown as due. */
   renewalWindowDays: number;
   /** Days after the due date that an unpaid membership counts as lapsed. */
@@ -27,20 +29,23 @@ export const daysBetween = (a: string, b: string): number =>
 
 const pad = (n: number) => String(n).padStart(2, '0');
 
-/** The fiscal year that starts in `startYear`. */
+/** The fiscal year that starts in `startYear`: from the start month/day to the day before it a year later. */
 export function fiscalYearStarting(startYear: number, cal: DuesCalendar): FiscalYearDto {
   const m = cal.fiscalYearStartMonth;
-  const start = `${startYear}-${pad(m)}-01`;
-  const nextStart = m === 1 ? `${startYear + 1}-01-01` : `${startYear + 1}-${pad(m)}-01`;
-  const label = m === 1 ? String(startYear) : `${startYear}–${String(startYear + 1).slice(2)}`;
+  const d = cal.fiscalYearStartDay ?? 1;
+  const start = `${startYear}-${pad(m)}-${pad(d)}`;
+  const nextStart = `${startYear + 1}-${pad(m)}-${pad(d)}`;
+  const label =
+    m === 1 && d === 1 ? String(startYear) : `${startYear}–${String(startYear + 1).slice(2)}`;
   return { start, end: addDays(nextStart, -1), label };
 }
 
 /** The fiscal year holding `date`. */
 export function fiscalYearOf(date: string, cal: DuesCalendar): FiscalYearDto {
   const year = Number(date.slice(0, 4));
-  const month = Number(date.slice(5, 7));
-  return fiscalYearStarting(month >= cal.fiscalYearStartMonth ? year : year - 1, cal);
+  const monthDay = Number(date.slice(5, 7)) * 100 + Number(date.slice(8, 10));
+  const startMonthDay = cal.fiscalYearStartMonth * 100 + (cal.fiscalYearStartDay ?? 1);
+  return fiscalYearStarting(monthDay >= startMonthDay ? year : year - 1, cal);
 }
 
 /** The first day the dues no longer cover: the day after paid-through, or the joining day if never paid. */
@@ -77,7 +82,7 @@ export const MIN_CHARGE_MINOR = 50;
 
 /**
  * The part of an annual amount due for cover from `from` to the end of fiscal year `fy`, by `rule`:
- * none → full; monthly → remaining months incl. the month of `from` / 12; quarterly → remaining quarters incl.
+ * none → full; monthly → remaining fiscal months incl. the one holding `from` / 12; quarterly → remaining quarters incl.
  * the current one / 4; daily → remaining days incl. `from` / days in the year. Rounded half up to a minor unit.
  */
 export function prorate(
@@ -89,8 +94,12 @@ export function prorate(
   if (daysBetween(fy.start, from) <= 0 || rule === 'none') return amountMinor;
   const fyStartYear = Number(fy.start.slice(0, 4));
   const fyStartMonth = Number(fy.start.slice(5, 7));
+  // Fiscal months run from the start day to the day before it next month (1 April–30 April, or 15 April–14 May).
   const monthIndex =
-    (Number(from.slice(0, 4)) - fyStartYear) * 12 + Number(from.slice(5, 7)) - fyStartMonth;
+    (Number(from.slice(0, 4)) - fyStartYear) * 12 +
+    Number(from.slice(5, 7)) -
+    fyStartMonth -
+    (Number(from.slice(8, 10)) < Number(fy.start.slice(8, 10)) ? 1 : 0);
   let share: number;
   if (rule === 'monthly') share = (12 - monthIndex) / 12;
   else if (rule === 'quarterly') share = (4 - Math.floor(monthIndex / 3)) / 4;

@@ -7,6 +7,7 @@ export function toPlanDto(p: MembershipPlan): PlanDto {
     id: p.id,
     code: p.code,
     name: p.name,
+    kind: p.kind,
     description: p.description,
     amountMinor: p.amountMinor,
     currency: p.currency,

@@ -1,7 +1,7 @@
 import type { z } from 'zod';
 import type { planInputSchema, planPatchSchema } from '@app/shared';
-import { AppError, notFound } from '../../errors/app-error';
-import { MembershipPlan, type User } from '../../models';
+import { invalid, notFound } from '../../errors/app-error';
+import { MembershipPlan, Payment, type User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 
 type PlanInput = z.output<typeof planInputSchema>;
@@ -16,12 +16,10 @@ export const listPlans = () =>
     ],
   });
 
-/** Adds a plan; codes are unique. */
+/** Adds a plan. Throws VALIDATION_FAILED (field `code`) when another plan already uses the code. */
 export async function createPlan(actor: User, input: PlanInput) {
   if (await MembershipPlan.findOne({ where: { code: input.code } }))
-    throw new AppError('VALIDATION_FAILED', 'Some fields need attention', {
-      code: 'Another plan already uses this code',
-    });
+    throw invalid({ code: 'Another plan already uses this code' });
   const plan = await MembershipPlan.create(input);
   await recordAudit({
     actorId: actor.id,
@@ -34,19 +32,44 @@ export async function createPlan(actor: User, input: PlanInput) {
   return plan;
 }
 
-/** Changes a plan. Amounts apply to checkouts opened from now on; past payments keep what they were. */
+/** plan.retire / plan.reactivate when only the active flag changes, plan.update otherwise. */
+function actionFor(changes: Record<string, { before: unknown; after: unknown }>) {
+  const keys = Object.keys(changes);
+  if (keys.length === 1 && keys[0] === 'active')
+    return changes.active?.after ? 'plan.reactivate' : 'plan.retire';
+  return 'plan.update';
+}
+
+/**
+ * Changes a plan. Amounts, fees and rules apply to checkouts opened from now on: payments already made (and
+ * checkouts already open) keep the amounts they were made for. The currency is fixed once money has come in
+ * on the plan (VALIDATION_FAILED on `currency`); retire the plan and create another instead.
+ * Audited with the fields that changed, before and after. Throws NOT_FOUND for an unknown plan.
+ */
 export async function updatePlan(actor: User, planId: number, patch: PlanPatch) {
   const plan = await MembershipPlan.findByPk(planId);
   if (!plan) throw notFound('Plan');
-  const before = plan.toJSON();
+  if (patch.currency && patch.currency !== plan.currency) {
+    const payments = await Payment.count({ where: { planId } });
+    if (payments > 0)
+      throw invalid({
+        currency: `${payments} payment${payments === 1 ? ' was' : 's were'} made in ${plan.currency} on this plan; retire it and create a new plan for another currency`,
+      });
+  }
+  const changes: Record<string, { before: unknown; after: unknown }> = {};
+  for (const [key, after] of Object.entries(patch) as [keyof PlanPatch, unknown][]) {
+    const before: unknown = plan.get(key);
+    if (after !== undefined && after !== before) changes[key] = { before, after };
+  }
+  if (Object.keys(changes).length === 0) return plan;
   await plan.update(patch);
   await recordAudit({
     actorId: actor.id,
     area: 'treasury',
-    action: 'plan.update',
+    action: actionFor(changes),
     subjectType: 'membership_plan',
     subjectId: String(plan.id),
-    details: { before, after: patch },
+    details: { changes },
   });
   return plan;
 }

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
 import {
+  calendarPreviewQuerySchema,
+  duesCalendarSchema,
   idParam,
   offlinePaymentSchema,
   paymentListQuerySchema,
@@ -15,6 +17,7 @@ import type { Env } from '../../config/env';
 import { currentUser, requireRole } from '../../middleware/require-auth';
 import { recordAudit } from '../audit/audit.service';
 import { toPaymentDto, toPlanDto, toRefundDto } from '../dues/dues.presenter';
+import { calendarView, updateCalendar } from './calendar.service';
 import * as ledger from './ledger.service';
 import * as plans from './plans.service';
 import { previewReminders, sendReminders } from './reminders.service';
@@ -42,6 +45,16 @@ export function treasuryRouter(deps: { env: Env; sequelize: Sequelize }) {
       planPatchSchema.parse(req.body),
     );
     res.json({ data: toPlanDto(plan) });
+  });
+  r.get('/calendar', async (_req, res) => {
+    res.json({ data: await calendarView() });
+  });
+  r.get('/calendar/preview', async (req, res) => {
+    res.json({ data: await calendarView(calendarPreviewQuerySchema.parse(req.query)) });
+  });
+  r.put('/calendar', async (req, res) => {
+    const input = duesCalendarSchema.parse(req.body);
+    res.json({ data: await updateCalendar(currentUser(req), input) });
   });
   r.get('/roster', async (_req, res) => {
     res.json({ data: await roster() });
