@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
+import compression from 'compression';
 import connectSessionSequelize from 'connect-session-sequelize';
 import { csrfSync } from 'csrf-sync';
 import express, { type Express, type RequestHandler } from 'express';
@@ -58,6 +59,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   const app = express();
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');
+  // gzip for the client bundle, HTML and larger JSON answers (below 1 KB nothing is compressed).
+  app.use(compression());
 
   app.use(
     helmet({
