@@ -6,6 +6,7 @@
 //   BENCH_API_SECONDS=20 (per run) · BENCH_API_CONNECTIONS=50,200 · BENCH_API_DB=rodewise_bench_api
 //   BENCH_WEB_DIST=<dir> (built client; built there when missing) · BENCH_API_KEEP_DB=1 (reuse the seeded db)
 //   BENCH_API_ROUTES=1 (also load each route of the mix alone, 5 s at 50 connections, to find a slow one)
+//   BENCH_LIGHTHOUSE=0 (skip the Lighthouse audits that run against the same server after the load)
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, openSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -233,6 +234,22 @@ try {
     console.log('\neach route of the mix alone (50 connections, 5 s):');
     console.log(header);
     for (const r of perRoute) console.log(line(r));
+  }
+  if (process.env.BENCH_LIGHTHOUSE !== '0') {
+    const { reportLighthouse, runLighthouse } = await import('./bench-lighthouse.mjs');
+    const pages = [
+      { name: 'home', path: '/' },
+      { name: 'search', path: '/exchange?q=chain' },
+      { name: 'listing', path: `/exchange/listings/${listingIds[0]}` },
+      { name: 'post', path: `/knowledge/${postIds[0]}` },
+      { name: 'calculators', path: '/calculators' },
+    ];
+    const rows = await runLighthouse(BASE, pages);
+    const lhTargets = reportLighthouse(rows);
+    writeFileSync(
+      join(OUT_DIR, 'lighthouse.json'),
+      JSON.stringify({ at: new Date().toISOString(), rows, targets: lhTargets }, null, 2),
+    );
   }
   writeFileSync(
     join(OUT_DIR, 'api.json'),

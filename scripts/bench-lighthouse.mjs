@@ -36,13 +36,18 @@ export async function runLighthouse(base, pages) {
     for (const page of pages) {
       const url = `${base}${page.path}`;
       try {
-        const result = await lighthouse(url, {
-          port: chrome.port,
-          output: 'json',
-          logLevel: 'error',
-          onlyCategories: ['performance', 'accessibility'],
-        });
-        const lhr = result?.lhr;
+        // One retry: on a loaded machine the trace now and then misses the navigation start (NO_NAVSTART).
+        let lhr;
+        for (let attempt = 0; attempt < 2; attempt += 1) {
+          const result = await lighthouse(url, {
+            port: chrome.port,
+            output: 'json',
+            logLevel: 'error',
+            onlyCategories: ['performance', 'accessibility'],
+          });
+          lhr = result?.lhr;
+          if (lhr && !lhr.runtimeError) break;
+        }
         if (!lhr) throw new Error('no report');
         if (lhr.runtimeError) throw new Error(lhr.runtimeError.message);
         const score = (c) => Math.round((lhr.categories[c]?.score ?? 0) * 100);
