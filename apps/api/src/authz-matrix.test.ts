@@ -53,6 +53,7 @@ const MATRIX: Record<string, Row> = {
   'DELETE /api/tackle-plans/:planId': SIGNED_IN,
   'GET /api/topics': PUBLIC,
   'POST /api/topics': ADMIN,
+  'PUT /api/topics/order': ADMIN,
   'PATCH /api/topics/:topicId': ADMIN,
   'DELETE /api/topics/:topicId': ADMIN,
   'GET /api/posts': PUBLIC,

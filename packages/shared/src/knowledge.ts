@@ -268,9 +268,27 @@ export const topicInputSchema = z.object({
   position: z.number().int().min(0).max(1000).default(100),
 });
 export type TopicInput = z.input<typeof topicInputSchema>;
-export const topicPatchSchema = topicInputSchema
+// No defaults here: a rename must not reset the description or the position.
+export const topicPatchSchema = z
+  .object({
+    name: topicInputSchema.shape.name,
+    description: z.string().trim().max(300, 'Keep the description under 300 characters'),
+    position: z.number().int().min(0).max(1000),
+    /** true retires the topic (no new posts under it), false brings it back. */
+    retired: z.boolean(),
+  })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+export type TopicPatchInput = z.input<typeof topicPatchSchema>;
+/** The whole list in its new order: every topic id exactly once. */
+export const topicOrderSchema = z.object({
+  topicIds: z
+    .array(z.number().int().positive())
+    .min(1, 'List the topics in their new order')
+    .max(200)
+    .refine((ids) => new Set(ids).size === ids.length, 'Each topic once'),
+});
+export type TopicOrderInput = z.input<typeof topicOrderSchema>;
 
 export interface TopicDto {
   id: number;
@@ -278,6 +296,8 @@ export interface TopicDto {
   name: string;
   description: string;
   position: number;
+  /** Retired topics keep their posts but are not offered for new ones. */
+  retired: boolean;
   postCount: number;
 }
 

@@ -14,6 +14,8 @@ export class Topic extends Model<InferAttributes<Topic>, InferCreationAttributes
   declare name: string;
   declare description: CreationOptional<string>;
   declare position: CreationOptional<number>;
+  /** Set when an admin retires the topic: its posts keep it, new posts cannot choose it. */
+  declare retiredAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -26,6 +28,7 @@ export function initTopic(sequelize: Sequelize) {
       name: { type: DataTypes.STRING(60), allowNull: false },
       description: { type: DataTypes.STRING(300), allowNull: false, defaultValue: '' },
       position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 100 },
+      retiredAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

@@ -17,9 +17,14 @@ type ListQuery = z.output<typeof postListQuerySchema>;
 
 export const PAGE_SIZE = 20;
 
-async function checkRefs(actor: User, input: PatchInput) {
-  if (input.topicId !== undefined && !(await Topic.findByPk(input.topicId)))
-    throw invalid({ topicId: 'Choose one of the topics' });
+/** `currentTopicId`: the post's topic before this edit, which it may keep even when retired. */
+async function checkRefs(actor: User, input: PatchInput, currentTopicId?: number | null) {
+  if (input.topicId !== undefined && input.topicId !== currentTopicId) {
+    const topic = await Topic.findByPk(input.topicId);
+    if (!topic) throw invalid({ topicId: 'Choose one of the topics' });
+    if (topic.retiredAt !== null)
+      throw invalid({ topicId: 'This topic is retired: choose another one' });
+  }
   if (input.boatId) {
     const boat = await Boat.findByPk(input.boatId);
     if (!boat || boat.ownerId !== actor.id) throw invalid({ boatId: 'Choose one of your boats' });
@@ -79,7 +84,7 @@ export async function createPost(actor: User, input: CreateInput): Promise<Post>
  */
 export async function updatePost(actor: User, postId: number, input: PatchInput): Promise<Post> {
   const post = await loadOwnPost(actor, postId);
-  await checkRefs(actor, input);
+  await checkRefs(actor, input, post.topicId);
   const changes: Partial<Post> = {};
   if (input.kind !== undefined) changes.kind = input.kind;
   if (input.title !== undefined) changes.title = input.title;

@@ -1,5 +1,11 @@
 import { Router } from 'express';
-import { idParam, topicInputSchema, topicPatchSchema, type TopicDto } from '@app/shared';
+import {
+  idParam,
+  topicInputSchema,
+  topicOrderSchema,
+  topicPatchSchema,
+  type TopicDto,
+} from '@app/shared';
 import { currentUser, requireRole } from '../../middleware/require-auth';
 import type { Topic } from '../../models';
 import * as topics from './topics.service';
@@ -11,10 +17,11 @@ const toTopicDto = (t: Topic, postCount = 0): TopicDto => ({
   name: t.name,
   description: t.description,
   position: t.position,
+  retired: t.retiredAt !== null,
   postCount,
 });
 
-/** Topics of the trade: everyone reads the list; admins edit it. */
+/** Topics of the trade: everyone reads the list (retired ones flagged); admins add, rename, reorder and retire. */
 export function topicsRouter() {
   const r = Router();
   r.get('/', async (_req, res) => {
@@ -23,6 +30,10 @@ export function topicsRouter() {
   r.post('/', requireRole('admin'), async (req, res) => {
     const t = await topics.createTopic(currentUser(req), topicInputSchema.parse(req.body));
     res.status(201).json({ data: toTopicDto(t) });
+  });
+  r.put('/order', requireRole('admin'), async (req, res) => {
+    const list = await topics.reorderTopics(currentUser(req), topicOrderSchema.parse(req.body));
+    res.json({ data: list.map((x) => toTopicDto(x.topic, x.postCount)) });
   });
   r.patch('/:topicId', requireRole('admin'), async (req, res) => {
     const { topicId } = params.parse(req.params);
