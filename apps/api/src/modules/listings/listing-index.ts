@@ -1,4 +1,3 @@
-import MiniSearch, { type SearchResult } from 'minisearch';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type {
   Currency,
@@ -11,6 +10,7 @@ import type {
 import { Listing } from '../../models';
 import { getStorage } from '../uploads/storage';
 import { fitOf, type BoatNeeds } from './fit';
+import { ListingSearchEngine, termsOf } from './listing-search-engine';
 import { ratingOf, specsText, type ListingRating } from './listing-specs';
 
 /** One searchable (active, visible) listing as the index keeps it, with what the result card shows. */
@@ -87,24 +87,22 @@ function toDoc(r: Row): IndexedListing {
 }
 
 const newIndex = () =>
-  new MiniSearch<IndexedListing>({
-    fields: ['title', 'description', 'specsText'],
-    storeFields: [],
-    searchOptions: {
-      boost: { title: 3, specsText: 2 },
-      // Sizes and lengths match exactly; words get prefix and (from 5 letters) one-typo matching.
-      prefix: (term) => term.length > 2 && !/\d/.test(term),
-      fuzzy: (term) => (term.length < 5 || /\d/.test(term) ? false : 1),
-      combineWith: 'AND',
-    },
+  new ListingSearchEngine<IndexedListing>({
+    fields: { title: 3, description: 1, specsText: 2 },
+    text: (d, field) =>
+      field === 'title' ? d.title : field === 'specsText' ? d.specsText : d.description,
+    // Sizes and lengths match exactly; words get prefix and (from 5 letters) one-typo matching.
+    prefix: (term) => term.length > 2 && !/\d/.test(term),
+    fuzzy: (term) => (term.length < 5 || /\d/.test(term) ? 0 : 1),
   });
 
 let index = newIndex();
-const docs = new Map<number, IndexedListing>();
 /** Results of recent identical searches; emptied on every index write, so it never serves stale hits. */
 const cache = new Map<string, { hits: SearchHit[]; total: number; atMs: number }>();
 const CACHE_MAX = 500;
-const CACHE_TTL_MS = 60_000;
+export const CACHE_TTL_MS = 60_000;
+/** Bumped on every index write; anything derived from search results keys on it. */
+let version = 0;
 let ready: Promise<void> | null = null;
 
 function sequelizeOf(): Sequelize {
@@ -117,12 +115,11 @@ function sequelizeOf(): Sequelize {
 export async function rebuildListingIndex(): Promise<number> {
   const rows = await sequelizeOf().query<Row>(SELECT_SEARCHABLE, { type: QueryTypes.SELECT });
   const fresh = newIndex();
-  docs.clear();
   const all = rows.map(toDoc);
-  for (const d of all) docs.set(d.id, d);
-  await fresh.addAllAsync(all, { chunkSize: 2000 });
+  for (const d of all) fresh.upsert(d);
   index = fresh;
   cache.clear();
+  version += 1;
   ready = Promise.resolve();
   return all.length;
 }
@@ -147,14 +144,10 @@ export async function refreshListing(id: number): Promise<void> {
     replacements: [id],
   });
   cache.clear();
-  if (index.has(id)) index.discard(id);
-  docs.delete(id);
+  version += 1;
   const row = rows[0];
-  if (row) {
-    const doc = toDoc(row);
-    docs.set(id, doc);
-    index.add(doc);
-  }
+  if (row) index.upsert(toDoc(row));
+  else index.remove(id);
 }
 
 type Filters = Pick<
@@ -211,73 +204,100 @@ function swaps(term: string): string[] {
   return out;
 }
 
+/** The query's word groups: each word alone, or (`withSwaps`) with its swapped-letter spellings. */
+function groupsOf(q: string, withSwaps: boolean): string[][] {
+  return termsOf(q).map((w) => (withSwaps && w.length >= 4 ? [w, ...swaps(w)] : [w]));
+}
+
+type Order = (a: IndexedListing, b: IndexedListing) => number;
+const ORDERS: Record<'newest' | 'price-asc' | 'price-desc', Order> = {
+  newest: (a, b) => b.publishedAtMs - a.publishedAtMs || b.id - a.id,
+  'price-asc': (a, b) => a.priceCents - b.priceCents || b.id - a.id,
+  'price-desc': (a, b) => b.priceCents - a.priceCents || b.id - a.id,
+};
+
+/** The first `k` of `items` under `before` (negative: a comes first), without sorting the rest. */
+function topK<T>(items: T[], k: number, before: (a: T, b: T) => number): T[] {
+  if (k >= items.length / 4) return [...items].sort(before).slice(0, k);
+  const best: T[] = [];
+  for (const x of items) {
+    const worst = best[best.length - 1];
+    if (best.length === k && worst !== undefined && before(x, worst) >= 0) continue;
+    let lo = 0;
+    let hi = best.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (before(best[mid] as T, x) <= 0) lo = mid + 1;
+      else hi = mid;
+    }
+    best.splice(lo, 0, x);
+    if (best.length > k) best.pop();
+  }
+  return best;
+}
+
+interface Scored {
+  doc: IndexedListing;
+  score: number;
+  fit?: FitDto;
+}
+
 function runSearch(
   query: ListingSearch,
   needs: BoatNeeds | undefined,
   nowMs: number,
 ): { hits: SearchHit[]; total: number } {
   const q = query.q?.trim();
-  let matched: IndexedListing[];
+  const fitsOnly = needs && query.fitsOnly ? needs : undefined;
+  const fits = new Map<number, FitDto>();
+  const keep = (d: IndexedListing) => {
+    if (!passes(d, query, nowMs)) return false;
+    if (!fitsOnly) return true;
+    const fit = fitOf(d.rating, fitsOnly);
+    fits.set(d.id, fit);
+    return fit.status === 'fits';
+  };
+  let matched: Scored[];
   if (q) {
-    const filter = (r: SearchResult) => {
-      const d = docs.get(r.id as number);
-      return d !== undefined && passes(d, query, nowMs);
-    };
-    let results = index.search(q, { filter });
+    matched = index.search(groupsOf(q, false), keep);
     // Nothing with one typo per word: also try each word with two neighbouring letters swapped ("chian").
-    if (results.length === 0) {
-      const words = q.split(/[\s\p{P}]+/u).filter(Boolean);
-      results = index.search(
-        {
-          combineWith: 'AND',
-          queries: words.map((w) => ({
-            combineWith: 'OR',
-            queries: [w.toLowerCase(), ...(w.length >= 4 ? swaps(w.toLowerCase()) : [])],
-          })),
-        },
-        { filter },
-      );
-    }
-    matched = [];
-    for (const r of results) {
-      const d = docs.get(r.id as number);
-      if (d) matched.push(d);
-    }
+    if (matched.length === 0) matched = index.search(groupsOf(q, true), keep);
   } else {
     matched = [];
-    for (const d of docs.values()) if (passes(d, query, nowMs)) matched.push(d);
+    for (const doc of index.all()) if (keep(doc)) matched.push({ doc, score: 0 });
   }
   const sort = query.sort ?? (q ? 'relevance' : 'newest');
-  if (sort === 'newest' || (sort === 'relevance' && !q))
-    matched.sort((a, b) => b.publishedAtMs - a.publishedAtMs || b.id - a.id);
-  else if (sort === 'price-asc') matched.sort((a, b) => a.priceCents - b.priceCents || b.id - a.id);
-  else if (sort === 'price-desc')
-    matched.sort((a, b) => b.priceCents - a.priceCents || b.id - a.id);
-
-  let hits: SearchHit[] = matched.map((doc) => ({ doc }));
-  if (needs && query.fitsOnly) {
-    hits = hits
-      .map((h) => ({ doc: h.doc, fit: fitOf(h.doc.rating, needs) }))
-      .filter((h) => h.fit.status === 'fits');
-  }
-  const total = hits.length;
+  const order: (a: Scored, b: Scored) => number =
+    sort === 'relevance' && q
+      ? (a, b) => b.score - a.score || ORDERS.newest(a.doc, b.doc)
+      : (a, b) => ORDERS[sort === 'relevance' ? 'newest' : sort](a.doc, b.doc);
   const start = (query.page - 1) * query.pageSize;
-  const page = hits.slice(start, start + query.pageSize);
-  if (needs) for (const h of page) h.fit ??= fitOf(h.doc.rating, needs);
-  return { hits: page, total };
+  const page = topK(matched, start + query.pageSize, order).slice(start);
+  const hits: SearchHit[] = page.map(({ doc }) => {
+    const fit = needs ? (fits.get(doc.id) ?? fitOf(doc.rating, needs)) : undefined;
+    return fit ? { doc, fit } : { doc };
+  });
+  return { hits, total: matched.length };
 }
 
 /** True when the indexed listing `id` matches a saved search's criteria. */
 export function matchesCriteria(id: number, c: SavedSearchCriteria, nowMs = Date.now()): boolean {
-  const d = docs.get(id);
+  const d = index.get(id);
   if (!d || !passes(d, c, nowMs)) return false;
   const q = c.q?.trim();
   if (!q) return true;
-  return index.search(q, { filter: (r) => r.id === id }).length > 0;
+  const only = (x: IndexedListing) => x.id === id;
+  return (
+    index.search(groupsOf(q, false), only).length > 0 ||
+    index.search(groupsOf(q, true), only).length > 0
+  );
 }
 
+/** Changes whenever the index does (a listing written, the index rebuilt). */
+export const listingIndexVersion = () => version;
+
 /** How many listings the index holds (for health and the benchmark). */
-export const indexedCount = () => docs.size;
+export const indexedCount = () => index.size;
 
 /** Empties the result cache (the benchmark times uncached searches with it). */
 export const clearListingSearchCache = () => cache.clear();

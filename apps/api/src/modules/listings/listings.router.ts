@@ -16,11 +16,12 @@ import type { User } from '../../models';
 import { getOwnBoat } from '../boats/boats.service';
 import { imageUpload } from '../uploads/uploads.router';
 import { DEFAULT_FIT_WIND_KN, boatNeeds, fitOf } from './fit';
-import { ensureListingIndex, searchIndex } from './listing-index';
+import { ensureListingIndex } from './listing-index';
 import * as moderation from './listing-moderation.service';
 import * as photos from './listing-photos.service';
 import { ratingOf } from './listing-specs';
-import { toListingDto, toListingPhotoDto, toListingSummaryDto } from './listings.presenter';
+import { toListingDto, toListingPhotoDto } from './listings.presenter';
+import { searchResponse } from './search-response';
 import * as listings from './listings.service';
 import { threadsOfListing } from '../threads/threads.service';
 
@@ -68,17 +69,9 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
         : undefined;
     if (query.fitsBoat && !viewer) currentUser(req);
     await ensureListingIndex();
-    const result = searchIndex(query, needs);
-    res.json({
-      data: result.hits.map(toListingSummaryDto),
-      meta: {
-        page: query.page,
-        pageSize: query.pageSize,
-        total: result.total,
-        tookMs: result.tookMs,
-        ...(needs ? { fitBasis: needs.basis } : {}),
-      },
-    });
+    const { body, etag } = searchResponse(query, needs);
+    // Express answers 304 itself when If-None-Match carries this ETag.
+    res.set('ETag', etag).type('json').send(body);
   });
   r.get('/mine', requireAuth(), async (req, res) => {
     const actor = currentUser(req);

@@ -118,6 +118,22 @@ describe('GET /api/listings search', () => {
     ).toMatch(/above/);
   });
 
+  it('answers a repeated search with 304 for its ETag until a listing changes', async () => {
+    const first = await c.get('/api/listings?q=chain');
+    const etag = first.headers.etag as string;
+    expect(etag).toMatch(/^W\/"/);
+    const again = await c.agent.get('/api/listings?q=chain').set('If-None-Match', etag);
+    expect(again.status).toBe(304);
+    const added = await c.post('/api/listings', {
+      ...base({ title: 'Spare chain' }),
+      publish: true,
+    });
+    const after = await c.agent.get('/api/listings?q=chain').set('If-None-Match', etag);
+    expect(after.status).toBe(200);
+    expect(found(after)).toContain(added.body.data.id);
+    expect(after.body.meta.total).toBe(first.body.meta.total + 1);
+  });
+
   it('rebuilds the same results from MariaDB', async () => {
     const query = listingSearchSchema.parse({ q: 'anchr' });
     const before = searchIndex(query).hits.map((h) => h.doc.id);
