@@ -11,6 +11,7 @@ import type { Sequelize } from 'sequelize';
 import type { Env } from './config/env';
 import { AppError } from './errors/app-error';
 import { mount } from './lib/routes';
+import { throttleSessionTouch } from './lib/session-touch';
 import type { Logger } from './logger';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { initModels } from './models';
@@ -105,6 +106,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
       userId: s.passport?.user ?? null,
     }),
   });
+  // Expiry refreshes cost an UPDATE each; once per session per 10 minutes is plenty for a 14-day lifetime.
+  throttleSessionTouch(store, 10 * 60_000);
 
   const authDeps: AuthDeps = { sequelize, publicUrl: env.PUBLIC_URL, bcryptCost: env.BCRYPT_COST };
   const passport = createPassport(authDeps);

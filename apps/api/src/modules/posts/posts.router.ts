@@ -11,6 +11,7 @@ import { currentUser, requireAuth } from '../../middleware/require-auth';
 import { acceptAnswer, addComment, unvote, vote } from './comments.service';
 import { approvedCommentCounts, loadOwnPost, loadVisiblePost } from './post-access';
 import { toPostDetailDto } from './post-detail';
+import { anonymousPostDetail, clearAnonymousPostCacheOnWrites } from './post-read-cache';
 import { toCommentDto, toPostSummaryDto } from './posts.presenter';
 import * as posts from './posts.service';
 
@@ -20,6 +21,7 @@ const postId = (p: unknown) => Number(params.parse(p).postId);
 /** Posts: list, read, write (drafts autosave through PATCH), submit, comments, helpful votes, answers. */
 export function postsRouter() {
   const r = Router();
+  clearAnonymousPostCacheOnWrites();
   r.get('/', async (req, res) => {
     const q = postListQuerySchema.parse(req.query);
     const { rows, total } = await posts.listPosts(req.user ?? null, q);
@@ -41,8 +43,11 @@ export function postsRouter() {
   });
   r.get('/:postId', async (req, res) => {
     const viewer = req.user ?? null;
+    const id = postId(req.params);
     res.json({
-      data: await toPostDetailDto(await loadVisiblePost(viewer, postId(req.params)), viewer),
+      data: viewer
+        ? await toPostDetailDto(await loadVisiblePost(viewer, id), viewer)
+        : await anonymousPostDetail(id),
     });
   });
   r.patch('/:postId', requireAuth(), async (req, res) => {
