@@ -35,6 +35,10 @@ export const SCREEN_ROUTES: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/admin-users')).AdminUsersRoute }),
   },
   {
+    path: paths.adminTopics.path,
+    lazy: async () => ({ Component: (await import('./routes/admin-topics')).AdminTopicsRoute }),
+  },
+  {
     path: paths.calculators.path,
     lazy: async () => ({ Component: (await import('./routes/calculators')).CalculatorsRoute }),
   },

@@ -10,6 +10,7 @@ export const paths = {
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   account: { path: '/account', href: () => '/account' },
   adminUsers: { path: '/admin/users', href: () => '/admin/users' },
+  adminTopics: { path: '/admin/topics', href: () => '/admin/topics' },
   knowledge: { path: '/knowledge', href: () => '/knowledge' },
   postNew: { path: '/knowledge/new', href: () => '/knowledge/new' },
   post: { path: '/knowledge/:postId', href: (postId: number | string) => `/knowledge/${postId}` },

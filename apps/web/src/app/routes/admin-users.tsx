@@ -5,6 +5,7 @@ import { UserRolesPanel } from '../../features/admin/components/user-roles-panel
 import { useCurrentUser } from '../../features/auth/api/get-session';
 import { updateSessionUser } from '../../features/auth/api/session-cache';
 import { RequireAuth } from '../../features/auth/components/require-auth';
+import { AdminSections } from '../layout/admin-sections';
 
 function AdminUsersScreen() {
   const { user } = useCurrentUser();
@@ -24,6 +25,7 @@ function AdminUsersScreen() {
         </p>
       }
     >
+      <AdminSections />
       <UserRolesPanel currentUserId={user.id} onRolesChanged={handleRolesChanged} />
     </Page>
   );

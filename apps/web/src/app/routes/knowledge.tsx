@@ -82,17 +82,19 @@ export function KnowledgeRoute() {
         >
           All topics
         </button>
-        {topics.data?.map((t) => (
-          <button
-            key={t.id}
-            type="button"
-            onClick={() => setParam('topic', t.slug)}
-            aria-pressed={topic === t.slug}
-            className="rounded-pill border border-sand-500 px-3 py-1 text-sm aria-pressed:bg-ink-800 aria-pressed:text-sand-50"
-          >
-            {t.name} ({t.postCount})
-          </button>
-        ))}
+        {topics.data
+          ?.filter((t) => !t.retired || t.postCount > 0 || topic === t.slug)
+          .map((t) => (
+            <button
+              key={t.id}
+              type="button"
+              onClick={() => setParam('topic', t.slug)}
+              aria-pressed={topic === t.slug}
+              className="rounded-pill border border-sand-500 px-3 py-1 text-sm aria-pressed:bg-ink-800 aria-pressed:text-sand-50"
+            >
+              {t.name} ({t.postCount})
+            </button>
+          ))}
       </nav>
       {q ? (
         <section aria-labelledby="results-title" className="flex flex-col gap-3">

@@ -26,8 +26,10 @@ export interface PostFormProps {
 const AUTOSAVE_MS = 2500;
 
 /** Writes or edits a post: title, kind, topic, body, optional setup; drafts save themselves as you type. */
-export function PostForm({ post, topics, boats, onSubmitted }: PostFormProps) {
+export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFormProps) {
   const bodyLabelId = useId();
+  // A retired topic is offered only to the post already filed under it.
+  const topics = allTopics.filter((t) => !t.retired || t.id === post?.topic?.id);
   const save = useSavePost();
   const [postId, setPostId] = useState<number | null>(post?.id ?? null);
   const [title, setTitle] = useState(post?.title ?? '');
