@@ -73,6 +73,12 @@ export const SCREEN_ROUTES: RouteObject[] = [
     }),
   },
   {
+    path: paths.treasuryPlans.path,
+    lazy: async () => ({
+      Component: (await import('./routes/treasury-plans')).TreasuryPlansRoute,
+    }),
+  },
+  {
     path: paths.knowledge.path,
     lazy: async () => ({ Component: (await import('./routes/knowledge')).KnowledgeRoute }),
   },

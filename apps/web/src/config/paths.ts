@@ -28,6 +28,7 @@ export const paths = {
   duesPaid: { path: '/dues/paid', href: () => '/dues/paid' },
   treasury: { path: '/treasury', href: () => '/treasury' },
   treasuryRoster: { path: '/treasury/roster', href: () => '/treasury/roster' },
+  treasuryPlans: { path: '/treasury/plans', href: () => '/treasury/plans' },
   exchange: { path: '/exchange', href: () => '/exchange' },
   exchangeMine: { path: '/exchange/mine', href: () => '/exchange/mine' },
   listingNew: { path: '/exchange/new', href: () => '/exchange/new' },

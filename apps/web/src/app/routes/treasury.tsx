@@ -38,6 +38,9 @@ function TreasuryScreen() {
         <Link to={paths.treasuryRoster.href()} className="font-bold">
           Member roster and reminders
         </Link>
+        <Link to={paths.treasuryPlans.href()} className="font-bold">
+          Plans and fiscal calendar
+        </Link>
         <a href={apiUrl('/treasury/ledger.csv')} download className="font-bold">
           Download the ledger (CSV)
         </a>

@@ -5,4 +5,7 @@ export const treasuryKeys = {
   summary: () => [...treasuryKeys.all, 'summary'] as const,
   plans: () => [...treasuryKeys.all, 'plans'] as const,
   payments: (status?: string) => [...treasuryKeys.all, 'payments', status ?? 'all'] as const,
+  calendar: () => [...treasuryKeys.all, 'calendar'] as const,
+  calendarPreview: (month: number, day: number) =>
+    [...treasuryKeys.calendar(), 'preview', month, day] as const,
 };
