@@ -9,6 +9,7 @@ import { createSequelize } from '../db';
 import { createLogger } from '../logger';
 import { initModels, User, UserRole } from '../models';
 import { createTransport, drainOutbox } from '../modules/mail/outbox.service';
+import { clearAnonymousPostCache } from '../modules/posts/post-read-cache';
 
 let shared: { sequelize: Sequelize; env: Env } | undefined;
 
@@ -55,6 +56,8 @@ export async function resetDb() {
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 0');
   for (const t of tables) await sequelize.query(`TRUNCATE TABLE \`${t}\``);
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 1');
+  // TRUNCATE runs no model hooks, so in-process read caches are emptied here (ids start again at 1).
+  clearAnonymousPostCache();
 }
 
 export const TEST_PASSWORD = 'correct-horse-battery';
