@@ -78,4 +78,67 @@ describe('two API processes on one MariaDB', () => {
     };
     expect(onA.data.user).toBeNull();
   });
+
+  it('finds on process B, within 5 s, a listing published through process A', async () => {
+    const [a, b] = PORTS.map((p) => `http://127.0.0.1:${p}/api`);
+    const first = await fetch(`${a}/auth/me`);
+    const anon = sid(first);
+    const { csrfToken } = ((await first.json()) as { data: { csrfToken: string } }).data;
+    const login = await fetch(`${a}/auth/login`, {
+      method: 'POST',
+      headers: { cookie: anon, 'content-type': 'application/json', 'x-csrf-token': csrfToken },
+      body: JSON.stringify({ email: 'idris@larkspit.example', password: 'harbour-demo-2026' }),
+    });
+    expect(login.status).toBe(200);
+    const cookie = sid(login);
+    const token = ((await login.json()) as { data: { csrfToken: string } }).data.csrfToken;
+    const club = (await (await fetch(`${a}/club`)).json()) as {
+      data: { harbors: { id: number }[] };
+    };
+    const word = `drillmarker${Date.now().toString(36)}`;
+    const created = await fetch(`${a}/listings`, {
+      method: 'POST',
+      headers: { cookie, 'content-type': 'application/json', 'x-csrf-token': token },
+      body: JSON.stringify({
+        category: 'chain',
+        title: `Grade 43 chain ${word}`,
+        description: 'Invented drill listing.',
+        condition: 'good',
+        priceCents: 12000,
+        currency: 'EUR',
+        harborId: club.data.harbors[0]?.id,
+        specs: { grade: 'G43', tradeSizeIn: 0.375, lengthM: 20, galvanizing: 'good' },
+        publish: true,
+      }),
+    });
+    expect(created.status).toBe(201);
+    const id = ((await created.json()) as { data: { id: number } }).data.id;
+
+    const started = Date.now();
+    let foundOnB = false;
+    while (!foundOnB && Date.now() - started < 5000) {
+      const res = (await (await fetch(`${b}/listings?q=${word}`)).json()) as {
+        data: { id: number }[];
+      };
+      foundOnB = res.data.some((l) => l.id === id);
+      if (!foundOnB) await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(foundOnB).toBe(true);
+
+    // Withdrawn on A: gone from B's search as well.
+    const withdrawn = await fetch(`${a}/listings/${id}/withdraw`, {
+      method: 'POST',
+      headers: { cookie, 'content-type': 'application/json', 'x-csrf-token': token },
+      body: '{}',
+    });
+    expect(withdrawn.status).toBe(200);
+    let goneOnB = false;
+    const again = Date.now();
+    while (!goneOnB && Date.now() - again < 5000) {
+      const res = (await (await fetch(`${b}/listings?q=${word}`)).json()) as { data: unknown[] };
+      goneOnB = res.data.length === 0;
+      if (!goneOnB) await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(goneOnB).toBe(true);
+  });
 });

@@ -6,6 +6,7 @@ import * as m0004 from './20261201-0004-exchange';
 import * as m0005 from './20261201-0005-dues';
 import * as m0006 from './20261202-0006-plan-kinds';
 import * as m0007 from './20261202-0007-topics-retired';
+import * as m0008 from './20261202-0008-listings-updated-ms';
 
 export interface MigrationModule {
   up: (p: { context: QueryInterface }) => Promise<void>;
@@ -21,4 +22,5 @@ export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [
   ['20261201-0005-dues', m0005],
   ['20261202-0006-plan-kinds', m0006],
   ['20261202-0007-topics-retired', m0007],
+  ['20261202-0008-listings-updated-ms', m0008],
 ];

@@ -36,6 +36,7 @@ import { uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
 import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
 import { startListingSweeper } from './modules/listings/listing-expiry';
 import { ensureListingIndex } from './modules/listings/listing-index';
+import { startListingIndexSync } from './modules/listings/listing-index-sync';
 import { listingsRouter } from './modules/listings/listings.router';
 import { savedSearchesRouter } from './modules/saved-searches/saved-searches.router';
 import { threadsRouter } from './modules/threads/threads.router';
@@ -192,6 +193,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   ensureListingIndex().catch((err: unknown) => logger.warn({ err }, 'listing index not built yet'));
   const stopListingSweeper =
     env.NODE_ENV === 'test' ? () => undefined : startListingSweeper(exchange, logger);
+  // Listings written by other API processes on the same database reach this index within a poll or two.
+  const stopListingSync = env.NODE_ENV === 'test' ? () => undefined : startListingIndexSync(logger);
 
   app.use('/api', notFoundHandler);
   app.use('/uploads', ...uploadsStatic(uploadDir));
@@ -213,6 +216,7 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
     app,
     close: () => {
       stopListingSweeper();
+      stopListingSync();
       (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.();
     },
   };

@@ -63,7 +63,7 @@ export function initListing(sequelize: Sequelize) {
       hiddenAt: { type: DataTypes.DATE, allowNull: true },
       hiddenReason: { type: DataTypes.STRING(1000), allowNull: true },
       createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE(3),
     },
     { sequelize, tableName: 'listings', underscored: true },
   );

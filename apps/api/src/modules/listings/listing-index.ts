@@ -50,11 +50,12 @@ interface Row {
   seller_name: string;
   published_at: Date | string;
   expires_at: Date | string;
+  updated_at: Date | string;
 }
 
 const SELECT_SEARCHABLE = `
   SELECT l.id, l.category, l.title, l.description, l.specs, l.\`condition\`, l.price_cents, l.currency,
-         l.harbor_id, h.name AS harbor_name, l.size_mm, l.published_at, l.expires_at,
+         l.harbor_id, h.name AS harbor_name, l.size_mm, l.published_at, l.expires_at, l.updated_at,
          u.display_name AS seller_name,
          (SELECT p.thumb_key FROM listing_photos p WHERE p.listing_id = l.id ORDER BY p.position, p.id LIMIT 1) AS thumb_key
     FROM listings l
@@ -104,6 +105,14 @@ export const CACHE_TTL_MS = 60_000;
 /** Bumped on every index write; anything derived from search results keys on it. */
 let version = 0;
 let ready: Promise<void> | null = null;
+/**
+ * Catch-up from other API processes: the newest `listings.updated_at` (DATETIME(3)) this index has read, and
+ * which change of each recent row it has applied. Polls re-read from OVERLAP_MS before the watermark, so a
+ * transaction that committed late with an earlier timestamp is still seen; the map skips rows already applied.
+ */
+let watermarkMs = 0;
+const applied = new Map<number, number>();
+const OVERLAP_MS = 5_000;
 
 function sequelizeOf(): Sequelize {
   const s = Listing.sequelize;
@@ -113,6 +122,10 @@ function sequelizeOf(): Sequelize {
 
 /** Rebuilds the whole index from MariaDB; returns how many listings it holds. */
 export async function rebuildListingIndex(): Promise<number> {
+  const [newest] = await sequelizeOf().query<{ at: Date | string | null }>(
+    'SELECT MAX(updated_at) AS at FROM listings',
+    { type: QueryTypes.SELECT },
+  );
   const rows = await sequelizeOf().query<Row>(SELECT_SEARCHABLE, { type: QueryTypes.SELECT });
   const fresh = newIndex();
   const all = rows.map(toDoc);
@@ -120,6 +133,8 @@ export async function rebuildListingIndex(): Promise<number> {
   index = fresh;
   cache.clear();
   version += 1;
+  watermarkMs = newest?.at ? new Date(newest.at).getTime() : 0;
+  applied.clear();
   ready = Promise.resolve();
   return all.length;
 }
@@ -146,8 +161,41 @@ export async function refreshListing(id: number): Promise<void> {
   cache.clear();
   version += 1;
   const row = rows[0];
-  if (row) index.upsert(toDoc(row));
-  else index.remove(id);
+  if (row) {
+    index.upsert(toDoc(row));
+    applied.set(id, new Date(row.updated_at).getTime());
+  } else index.remove(id);
+}
+
+/**
+ * Re-reads every listing changed since the watermark (by this or another process sharing the database): indexed
+ * when active and visible, removed otherwise. Returns how many rows it re-read.
+ */
+export async function catchUpListingIndex(): Promise<number> {
+  await ensureListingIndex();
+  const rows = await sequelizeOf().query<{ id: number; updated_at: Date | string }>(
+    'SELECT id, updated_at FROM listings WHERE updated_at >= ? ORDER BY updated_at LIMIT 1000',
+    { type: QueryTypes.SELECT, replacements: [new Date(watermarkMs - OVERLAP_MS)] },
+  );
+  let reread = 0;
+  for (const r of rows) {
+    const atMs = new Date(r.updated_at).getTime();
+    if (atMs > watermarkMs) watermarkMs = atMs;
+    if (applied.get(r.id) === atMs) continue;
+    await refreshListing(r.id);
+    applied.set(r.id, atMs);
+    reread += 1;
+  }
+  for (const [id, atMs] of applied) if (atMs < watermarkMs - OVERLAP_MS) applied.delete(id);
+  return reread;
+}
+
+/** Records a change kept outside the listing row (its photos), so other processes re-read the listing too. */
+export async function listingChanged(id: number): Promise<void> {
+  await sequelizeOf().query('UPDATE listings SET updated_at = ? WHERE id = ?', {
+    replacements: [new Date(), id],
+  });
+  await refreshListing(id);
 }
 
 type Filters = Pick<

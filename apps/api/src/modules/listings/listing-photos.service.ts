@@ -3,7 +3,7 @@ import { AppError, invalid } from '../../errors/app-error';
 import { ListingPhoto, type User } from '../../models';
 import { processImage, type ProcessedImage } from '../uploads/image';
 import { getStorage, newKey, thumbKey } from '../uploads/storage';
-import { refreshListing } from './listing-index';
+import { listingChanged } from './listing-index';
 import { getOwnListing } from './listings.service';
 
 const FIELD = 'photos';
@@ -63,7 +63,7 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
       }
       return out;
     });
-    await refreshListing(listingId);
+    await listingChanged(listingId);
     return rows;
   } catch (err) {
     await Promise.all(written.map((k) => storage.delete(k).catch(() => undefined)));
@@ -80,7 +80,7 @@ export async function deletePhoto(actor: User, listingId: number, photoId: numbe
   const storage = getStorage();
   await storage.delete(photo.storageKey);
   await storage.delete(photo.thumbKey);
-  await refreshListing(listingId);
+  await listingChanged(listingId);
 }
 
 /** Sets the photo order; `photoIds` must list every photo of the listing exactly once. */
@@ -92,5 +92,5 @@ export async function reorderPhotos(actor: User, listingId: number, photoIds: nu
   if (have.length !== want.length || have.some((id, i) => id !== want[i]))
     throw invalid({ photoIds: 'List every photo of this listing exactly once' });
   for (const p of photos) await p.update({ position: photoIds.indexOf(p.id) });
-  await refreshListing(listingId);
+  await listingChanged(listingId);
 }
