@@ -17,7 +17,8 @@ const envSchema = z.object({
     .number()
     .positive()
     .default(24 * 14),
-  COOKIE_SECURE: bool.default(false),
+  /** Secure cookies, HSTS and upgrade-insecure-requests; defaults on in production behind an https PUBLIC_URL. */
+  COOKIE_SECURE: bool.optional(),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().default(4325),
@@ -29,6 +30,8 @@ const envSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   WEB_DIST: z.string().optional(),
   UPLOAD_DIR: z.string().optional(),
+  /** When set, every CSP violation report is also appended here as one JSON line (the e2e run reads it). */
+  CSP_REPORT_FILE: z.string().optional(),
   STRIPE_SECRET_KEY: z.string().default('sk_test_rodewise_local_fake'),
   STRIPE_WEBHOOK_SECRET: z.string().default('whsec_rodewise_local_fake'),
   STRIPE_HOST: z.string().optional(),
@@ -36,7 +39,10 @@ const envSchema = z.object({
   STRIPE_PROTOCOL: z.enum(['http', 'https']).optional(),
 });
 
-export type Env = z.infer<typeof envSchema> & { BCRYPT_COST: number };
+export type Env = Omit<z.infer<typeof envSchema>, 'BCRYPT_COST' | 'COOKIE_SECURE'> & {
+  BCRYPT_COST: number;
+  COOKIE_SECURE: boolean;
+};
 
 /** Parses process.env once; a bad variable stops boot with a list of what is wrong. */
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
@@ -50,5 +56,8 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   const cost = e.BCRYPT_COST ?? (e.NODE_ENV === 'test' ? 4 : 12);
   if (e.NODE_ENV === 'production' && cost < 12)
     throw new Error('BCRYPT_COST must be at least 12 in production');
-  return { ...e, BCRYPT_COST: cost };
+  // A production site served over https gets Secure cookies unless told otherwise; local http runs stay usable.
+  const cookieSecure =
+    e.COOKIE_SECURE ?? (e.NODE_ENV === 'production' && e.PUBLIC_URL.startsWith('https://'));
+  return { ...e, BCRYPT_COST: cost, COOKIE_SECURE: cookieSecure };
 }
