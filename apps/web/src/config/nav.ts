@@ -25,7 +25,7 @@ export interface NavLinkItem extends NavItemBase {
 }
 
 /** The counts a navigation item can carry. */
-export type NavBadge = 'moderation-waiting';
+export type NavBadge = 'moderation-waiting' | 'messages-unread';
 
 /** A button that runs an action instead of following a link. */
 export interface NavActionItem extends NavItemBase {
@@ -70,6 +70,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     to: paths.messages.href(),
     section: 'primary',
     signedIn: true,
+    badge: 'messages-unread',
   },
   {
     id: 'boats',

@@ -1,5 +1,11 @@
 import '../../testing/setup';
-import type { ModerationCountDto, ModerationQueueDto, PostSummaryDto } from '@app/shared';
+import type {
+  ModerationCountDto,
+  ModerationQueueDto,
+  PostSummaryDto,
+  ThreadDto,
+} from '@app/shared';
+import { focusManager } from '@tanstack/react-query';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
@@ -102,5 +108,80 @@ describe('moderation badge in the main navigation', () => {
       await within(nav).findByRole('link', { name: 'Moderation, 1 waiting' }),
     ).toBeInTheDocument();
     expect(screen.queryByText('Bridle legs of equal length')).not.toBeInTheDocument();
+  });
+});
+
+const thread = (unread: number): ThreadDto => ({
+  id: 4,
+  listingId: 12,
+  listingTitle: 'Grade 43 chain, 30 m',
+  listingStatus: 'active',
+  otherParty: { id: 8, displayName: 'Tamsin Keel' },
+  role: 'seller',
+  lastMessage: 'Is it still for sale?',
+  lastMessageAt: '2026-05-01T10:00:00.000Z',
+  unread,
+  soldToThisThread: false,
+  messages: [
+    {
+      id: 1,
+      senderId: 8,
+      mine: false,
+      body: 'Is it still for sale?',
+      createdAt: '2026-05-01T10:00:00.000Z',
+    },
+  ],
+});
+
+describe('messages badge in the main navigation', () => {
+  it('reads out the unread count, and drops it once the thread is read', async () => {
+    let unread = 2;
+    const { requests } = mockApi({
+      'GET /api/club': () => ({ body: { data: club } }),
+      'GET /api/threads/unread': () => ({ body: { data: { unread } } }),
+      'GET /api/threads': () => ({ body: { data: [thread(unread)] } }),
+      'GET /api/threads/4': () => {
+        unread = 0; // the server marks the thread read when it is opened
+        return { body: { data: thread(0) } };
+      },
+    });
+    renderApp({ route: '/', session: buildSession(buildUser({ roles: ['member'] })) });
+    const nav = await mainNav();
+    const link = await within(nav).findByRole('link', { name: 'Messages, 2 unread' });
+    expect(link).toHaveTextContent('Messages2');
+    await userEvent.setup().click(link);
+    await userEvent.setup().click(await screen.findByRole('link', { name: /Grade 43 chain/ }));
+    expect(await within(nav).findByRole('link', { name: 'Messages' })).toBeInTheDocument();
+    expect(requests.filter((r) => r.url === '/api/threads/unread').length).toBeGreaterThan(1);
+  });
+
+  it('asks again when the member comes back to the tab', async () => {
+    let unread = 0;
+    mockApi({
+      'GET /api/club': () => ({ body: { data: club } }),
+      'GET /api/threads/unread': () => ({ body: { data: { unread } } }),
+    });
+    const { queryClient } = renderApp({
+      route: '/',
+      session: buildSession(buildUser({ roles: ['member'] })),
+    });
+    await waitFor(() => expect(queryClient.getQueryData(['threads', 'unread'])).toBeDefined());
+    unread = 1;
+    // Fetched 20 s ago (past the 10 s freshness): coming back to the tab refetches.
+    const query = queryClient.getQueryCache().find({ queryKey: ['threads', 'unread'] });
+    query?.setState({ dataUpdatedAt: Date.now() - 20_000 });
+    focusManager.setFocused(false);
+    focusManager.setFocused(true);
+    expect(
+      await within(await mainNav()).findByRole('link', { name: 'Messages, 1 unread' }),
+    ).toBeInTheDocument();
+    focusManager.setFocused(undefined);
+  });
+
+  it('never asks a visitor for unread messages', async () => {
+    const { requests } = mockApi({ 'GET /api/club': () => ({ body: { data: club } }) });
+    renderApp({ route: '/', session: buildSession(null) });
+    await within(await mainNav()).findByRole('link', { name: 'Sign in' });
+    expect(requests.some((r) => r.url.startsWith('/api/threads'))).toBe(false);
   });
 });

@@ -5,6 +5,7 @@ import { paths } from '../../config/paths';
 import { cn } from '../../lib/cn';
 import { useCurrentUser } from '../../features/auth/api/get-session';
 import { useLogout } from '../../features/auth/api/logout';
+import { useUnread } from '../../features/messages/api/get-unread';
 import { useModerationCount } from '../../features/moderation/api/get-queue';
 
 const ITEM_CLASSES =
@@ -41,8 +42,17 @@ export function MainNav() {
   const waiting = useModerationCount(
     items.some((item) => item.kind === 'link' && item.badge === 'moderation-waiting'),
   );
+  const unread = useUnread(
+    items.some((item) => item.kind === 'link' && item.badge === 'messages-unread'),
+  );
   const badgeCount = (badge: NavBadge | undefined) =>
-    badge === 'moderation-waiting' ? (waiting.data?.total ?? 0) : 0;
+    badge === 'moderation-waiting'
+      ? (waiting.data?.total ?? 0)
+      : badge === 'messages-unread'
+        ? (unread.data?.unread ?? 0)
+        : 0;
+  const badgeWord = (badge: NavBadge | undefined) =>
+    badge === 'messages-unread' ? 'unread' : 'waiting';
 
   const renderItem = (item: NavItem) => {
     if (item.kind === 'link') {
@@ -51,7 +61,7 @@ export function MainNav() {
         <NavLink
           to={item.to}
           end={item.end}
-          aria-label={count > 0 ? `${item.label}, ${count} waiting` : undefined}
+          aria-label={count > 0 ? `${item.label}, ${count} ${badgeWord(item.badge)}` : undefined}
           onClick={() => setIsOpen(false)}
           className={({ isActive }) =>
             cn(

@@ -1,5 +1,6 @@
 import type { ThreadDto } from '@app/shared';
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { useEffect } from 'react';
+import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { threadKeys } from './keys';
 
@@ -14,5 +15,15 @@ export const threadQuery = (id: number) =>
     refetchInterval: 15_000,
   });
 
-/** One conversation with its messages, refreshed every 15 s while open. */
-export const useThread = (id: number) => useQuery(threadQuery(id));
+/** One conversation with its messages, refreshed every 15 s while open; each read refreshes the unread counts. */
+export function useThread(id: number) {
+  const queryClient = useQueryClient();
+  const thread = useQuery(threadQuery(id));
+  const readAt = thread.dataUpdatedAt;
+  useEffect(() => {
+    if (!readAt) return;
+    void queryClient.invalidateQueries({ queryKey: threadKeys.unread() });
+    void queryClient.invalidateQueries({ queryKey: threadKeys.list() });
+  }, [readAt, queryClient]);
+  return thread;
+}

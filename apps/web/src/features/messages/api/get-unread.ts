@@ -10,7 +10,10 @@ export const unreadQuery = () =>
   queryOptions({
     queryKey: threadKeys.unread(),
     queryFn: ({ signal }) => getUnread(signal),
-    refetchInterval: 60_000,
+    // The nav badge: every 30 s, and again when the member comes back to the tab.
+    refetchInterval: 30_000,
+    staleTime: 10_000,
+    refetchOnWindowFocus: true,
   });
 
 /** Unread messages across the member's conversations. */
