@@ -51,6 +51,7 @@ export default defineConfig({
           root: 'tests',
           include: ['e2e/**/*.test.ts'],
           globalSetup: ['e2e/global-setup.ts'],
+          setupFiles: ['e2e/setup.ts'],
           fileParallelism: false,
           testTimeout: 60000,
           hookTimeout: 120000,

@@ -17,6 +17,8 @@ declare module 'vitest' {
     baseUrl: string;
     mailUrl: string;
     paymentsUrl: string;
+    /** JSON lines: every CSP report the API received during this run (browser.ts asserts it stays empty). */
+    cspReportFile: string;
   }
 }
 
@@ -48,6 +50,8 @@ export async function setup(project: TestProject) {
 
   for (const d of [`${database}-mail`, `${database}-payments`])
     rmSync(join(ROOT, '.data', d), { recursive: true, force: true });
+  const cspReportFile = join(ROOT, '.data', `${database}-csp-reports.jsonl`);
+  rmSync(cspReportFile, { force: true });
   children.push(
     startService(
       'mail',
@@ -94,6 +98,7 @@ export async function setup(project: TestProject) {
         WEB_DIST: webDist,
         LOGIN_RATE_LIMIT: '200',
         OUTBOX_INTERVAL_MS: '250',
+        CSP_REPORT_FILE: cspReportFile,
       },
       { quiet: true },
     ),
@@ -104,6 +109,7 @@ export async function setup(project: TestProject) {
   project.provide('baseUrl', baseUrl);
   project.provide('mailUrl', `http://127.0.0.1:${E2E_PORTS.mailHttp}`);
   project.provide('paymentsUrl', `http://127.0.0.1:${E2E_PORTS.payments}`);
+  project.provide('cspReportFile', cspReportFile);
 }
 
 export async function teardown() {

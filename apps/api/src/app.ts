@@ -1,4 +1,5 @@
 import { existsSync } from 'node:fs';
+import { appendFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import compression from 'compression';
 import connectSessionSequelize from 'connect-session-sequelize';
@@ -141,6 +142,13 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
     }),
     (req, res) => {
       logger.warn({ csp: req.body as unknown }, 'csp violation');
+      const file = env.CSP_REPORT_FILE;
+      if (file) {
+        appendFile(
+          file,
+          `${JSON.stringify({ at: new Date().toISOString(), report: req.body as unknown })}\n`,
+        ).catch((err: unknown) => logger.error({ err }, 'csp report not written'));
+      }
       res.status(204).end();
     },
   );
