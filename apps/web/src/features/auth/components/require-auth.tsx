@@ -2,6 +2,7 @@ import type { Role } from '@app/shared';
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import { Alert } from '../../../components/ui/alert';
+import { Page } from '../../../components/ui/page';
 import { Spinner } from '../../../components/ui/spinner';
 import { paths } from '../../../config/paths';
 import { errorMessage } from '../../../lib/form-errors';
@@ -35,11 +36,13 @@ export function RequireAuth({ roles, children }: RequireAuthProps) {
   }
   if (roles && !roles.some((role) => user.roles.includes(role))) {
     return (
-      <Alert tone="warning" title="Not available with your roles">
-        <p>
-          This page needs the {roles.join(' or ')} role. Ask a club admin if you should have it.
-        </p>
-      </Alert>
+      <Page title="Not available with your roles" width="narrow">
+        <Alert tone="warning">
+          <p>
+            This page needs the {roles.join(' or ')} role. Ask a club admin if you should have it.
+          </p>
+        </Alert>
+      </Page>
     );
   }
   return children;

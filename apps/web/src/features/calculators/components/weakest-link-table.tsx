@@ -1,4 +1,5 @@
 import { DEFAULT_DESIGN_FACTOR, type RatedComponent, type WeakestLinkResult } from '@app/calc';
+import { ScrollRegion } from '../../../components/ui/scroll-region';
 import { cn } from '../../../lib/cn';
 import { Quantity } from '../../units/components/quantity';
 
@@ -25,7 +26,7 @@ export function WeakestLinkTable({
   const marginOf = new Map(result.byWll.map((m) => [m.index, m.margin]));
   const factorOf = new Map(result.byBreak.map((b) => [b.index, b.factor]));
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label={caption}>
       <table className="w-full min-w-[34rem] border-collapse text-sm">
         <caption className="mb-2 text-left font-bold">{caption}</caption>
         <thead>
@@ -103,6 +104,6 @@ export function WeakestLinkTable({
         Weakest link: <strong>{result.weakest.label}</strong> (breaks at{' '}
         {times(result.weakest.factor)} the load).
       </p>
-    </div>
+    </ScrollRegion>
   );
 }

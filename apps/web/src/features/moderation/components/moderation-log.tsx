@@ -1,4 +1,5 @@
 import type { AuditEntryDto } from '@app/shared';
+import { ScrollRegion } from '../../../components/ui/scroll-region';
 
 const WORDS: Record<string, string> = {
   'post.approve': 'approved a post',
@@ -33,7 +34,7 @@ const titleOf = (details: unknown) =>
 export function ModerationLog({ entries }: { entries: AuditEntryDto[] }) {
   if (entries.length === 0) return <p>No moderator actions yet.</p>;
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Moderator actions">
       <table className="w-full border-collapse text-left text-sm">
         <thead>
           <tr className="border-b-2 border-ink-800">
@@ -68,6 +69,6 @@ export function ModerationLog({ entries }: { entries: AuditEntryDto[] }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -13,6 +13,7 @@ import { SelectField } from '../../../components/ui/select-field';
 import { TextField } from '../../../components/ui/text-field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCalendarPreview } from '../api/dues-calendar';
+import { ScrollRegion } from '../../../components/ui/scroll-region';
 
 const MONTHS = Array.from({ length: 12 }, (_, i) => ({
   value: String(i + 1),
@@ -51,7 +52,7 @@ export function CalendarPreview({
       {view.joinToday.length === 0 ? (
         <p>No plan is open to members, so nobody can join today.</p>
       ) : (
-        <div className="overflow-x-auto">
+        <ScrollRegion label="What a member joining today would pay">
           <table className="w-full min-w-[28rem] text-sm">
             <caption className="text-left font-bold">
               A member joining today ({view.today}) would pay
@@ -94,7 +95,7 @@ export function CalendarPreview({
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       )}
     </section>
   );

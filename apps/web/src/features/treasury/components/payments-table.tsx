@@ -1,10 +1,11 @@
 import { formatMoney, METHOD_LABELS, type PaymentDto } from '@app/shared';
 import { PaymentRowActions } from './payment-row-actions';
+import { ScrollRegion } from '../../../components/ui/scroll-region';
 
 /** Ledger entries with their refunds and actions. */
 export function PaymentsTable({ payments, caption }: { payments: PaymentDto[]; caption: string }) {
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label={caption}>
       <table className="w-full min-w-[40rem] text-sm">
         <caption className="text-left font-bold">{caption}</caption>
         <thead>
@@ -57,6 +58,6 @@ export function PaymentsTable({ payments, caption }: { payments: PaymentDto[]; c
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }
