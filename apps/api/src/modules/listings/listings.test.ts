@@ -1,6 +1,6 @@
 import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
 import sharp from 'sharp';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Listing, ListingPhoto } from '../../models';
@@ -123,6 +123,34 @@ describe('listing life-cycle', () => {
         'specs.anchorType',
         /anchor type/,
       ],
+      [
+        {
+          ...chainListing(harborId),
+          category: 'anchor',
+          specs: { anchorType: 'plow', massKg: -2 },
+        },
+        'specs.massKg',
+        /at least/,
+      ],
+      [
+        {
+          ...chainListing(harborId),
+          category: 'rode',
+          specs: { material: 'nylon', construction: 'three-strand', diameterMm: 400, lengthM: 50 },
+        },
+        'specs.diameterMm',
+        /at most/,
+      ],
+      [
+        {
+          ...chainListing(harborId),
+          category: 'connector',
+          specs: { kind: 'shackle', nominalIn: 0.375, wllN: -500 },
+        },
+        'specs.wllN',
+        /at least/,
+      ],
+      [{ ...chainListing(harborId), currency: 'XXX' }, 'currency', /./],
     ];
     for (const [body, field, message] of cases) {
       const res = await c.post('/api/listings', body);
@@ -130,6 +158,34 @@ describe('listing life-cycle', () => {
       expect(res.body.error.fields[field], field).toMatch(message);
     }
     expect(await Listing.count()).toBe(0);
+
+    // A bad edit changes nothing either.
+    const id = (await c.post('/api/listings', chainListing(harborId))).body.data.id as number;
+    const edit = await c.put(`/api/listings/${id}`, {
+      ...chainListing(harborId, { title: 'Changed title' }),
+      priceCents: -1,
+    });
+    expect(edit.status).toBe(400);
+    expect(edit.body.error.fields.priceCents).toMatch(/negative/);
+    const kept = await Listing.findByPk(id);
+    expect(kept?.title).toBe(chainListing(harborId).title);
+    expect(kept?.priceCents).toBe(chainListing(harborId).priceCents);
+  });
+
+  it('stores a photo sent with a path-traversal name under its own generated key, inside the upload folder', async () => {
+    const { c } = await seller();
+    const id = (await c.post('/api/listings', chainListing(harborId))).body.data.id as number;
+    const before = storedFiles();
+    const res = await postPhotos(c, id, [[await testJpeg(), '../../../../etc/passwd.jpg']]);
+    expect(res.status).toBe(201);
+    const photo = await ListingPhoto.findOne({ where: { listingId: id } });
+    for (const key of [photo?.storageKey, photo?.thumbKey]) {
+      expect(key).toMatch(/^listings\//);
+      expect(key).not.toMatch(/\.\.|passwd/);
+      expect(resolve(dir, key ?? '').startsWith(`${resolve(dir)}/`)).toBe(true);
+    }
+    expect(String(res.body.data[0].url)).not.toMatch(/passwd|\.\./);
+    expect(storedFiles() - before).toBe(2);
   });
 
   it('hides other members’ drafts and refuses their changes with 404', async () => {
