@@ -36,7 +36,12 @@ const URL_ATTRS = new Set([
 ]);
 const SCRIPT_URL = /^(javascript|vbscript|livescript|data:text\/html|data:image\/svg)/;
 
-const squash = (v: string) => v.replace(/[\s\0-\x1f]/g, '').toLowerCase();
+/** Drops whitespace and C0 control characters, which browsers skip inside a URL scheme. */
+const squash = (v: string) =>
+  [...v]
+    .filter((ch) => ch.charCodeAt(0) > 0x20)
+    .join('')
+    .toLowerCase();
 
 /** Every element node of an HTML document or fragment, parsed by parse5 as a browser would (WHATWG algorithm). */
 function* elements(node: Node): Generator<Node> {
@@ -52,7 +57,7 @@ function* elements(node: Node): Generator<Node> {
  */
 export function executableMarkup(html: string): string[] {
   const out: string[] = [];
-  for (const el of elements(parse(html) as unknown as Node)) {
+  for (const el of elements(parse(html))) {
     const tag = el.tagName ?? '';
     if (ACTIVE_TAGS.has(tag)) out.push(`<${tag}>`);
     for (const { name, value } of el.attrs ?? []) {
@@ -76,6 +81,6 @@ export function visibleText(html: string): string {
     if (node.nodeName === '#text') text += node.value ?? '';
     for (const child of node.childNodes ?? []) walk(child);
   };
-  walk(parse(html) as unknown as Node);
+  walk(parse(html));
   return text;
 }
