@@ -4,7 +4,7 @@
 // JSON route (the ceiling) at 50 and 200 connections. Figures are printed with PASS/MISS beside each target;
 // a miss never fails the process. Results go to .data/bench/api.json for docs/benchmarks.md.
 //   BENCH_API_SECONDS=20 (per run) · BENCH_API_CONNECTIONS=50,200 · BENCH_API_DB=rodewise_bench_api
-//   BENCH_WEB_DIST=<dir> (built client; built there when missing) · BENCH_API_KEEP_DB=1 (reuse the seeded db)
+//   BENCH_WEB_DIST=<dir> (built client; default .data/bench/web, built there when missing) · BENCH_API_KEEP_DB=1 (reuse the seeded db)
 //   BENCH_API_ROUTES=1 (also load each route of the mix alone, 5 s at 50 connections, to find a slow one)
 //   BENCH_LIGHTHOUSE=0 (skip the Lighthouse audits that run against the same server after the load)
 import { spawn } from 'node:child_process';
@@ -26,8 +26,9 @@ const PORT = Number(process.env.BENCH_API_PORT ?? 4810);
 const DB = process.env.BENCH_API_DB ?? 'rodewise_bench_api';
 const SECONDS = Number(process.env.BENCH_API_SECONDS ?? 20);
 const LEVELS = (process.env.BENCH_API_CONNECTIONS ?? '50,200').split(',').map(Number);
-const WEB_DIST = process.env.BENCH_WEB_DIST ?? join(ROOT, 'dist', 'web');
 const OUT_DIR = join(ROOT, '.data', 'bench');
+// Its own build (npm run bench empties .data/bench first), so a stale dist/web is never what gets measured.
+const WEB_DIST = process.env.BENCH_WEB_DIST ?? join(OUT_DIR, 'web');
 const BASE = `http://127.0.0.1:${PORT}`;
 mkdirSync(OUT_DIR, { recursive: true });
 

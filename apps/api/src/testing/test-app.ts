@@ -9,6 +9,7 @@ import { createSequelize } from '../db';
 import { createLogger } from '../logger';
 import { initModels, User, UserRole } from '../models';
 import { createTransport, drainOutbox } from '../modules/mail/outbox.service';
+import { clearClubCache } from '../modules/club/club-cache';
 import { clearAnonymousPostCache } from '../modules/posts/post-read-cache';
 
 let shared: { sequelize: Sequelize; env: Env } | undefined;
@@ -58,6 +59,7 @@ export async function resetDb() {
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 1');
   // TRUNCATE runs no model hooks, so in-process read caches are emptied here (ids start again at 1).
   clearAnonymousPostCache();
+  clearClubCache();
 }
 
 export const TEST_PASSWORD = 'correct-horse-battery';

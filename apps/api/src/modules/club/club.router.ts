@@ -1,16 +1,11 @@
 import { Router } from 'express';
-import type { ClubDto } from '@app/shared';
-import { getSetting, listHarbors } from './club.service';
+import { cachedClub, clearClubCacheOnWrites } from './club-cache';
 
 export function clubRouter() {
   const r = Router();
+  clearClubCacheOnWrites();
   r.get('/', async (_req, res) => {
-    const [name, harbors] = await Promise.all([getSetting('clubName'), listHarbors()]);
-    const data: ClubDto = {
-      name,
-      harbors: harbors.map((h) => ({ id: h.id, name: h.name, slug: h.slug })),
-    };
-    res.json({ data });
+    res.json({ data: await cachedClub() });
   });
   return r;
 }
