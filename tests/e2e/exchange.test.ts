@@ -1,7 +1,7 @@
 import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
+import { audit, baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -11,9 +11,12 @@ afterAll(async () => {
   await browser.close();
 });
 
-// Demo data: Idris is paid up (may list); Maren's boat "Marram" (9.1 m sloop) has a 5/16 in G43 gypsy.
+// Demo data: Idris is paid up (may list); Maren's boat "Marram" (9.1 m sloop) has a 5/16 in G43 gypsy, but
+// her dues are behind, so under the demo club's paid-up policy she may browse and not write; Oona is paid up.
 const SELLER = 'idris@larkspit.example';
-const BUYER = 'maren@larkspit.example';
+const BROWSER = 'maren@larkspit.example';
+const BUYER = 'moderator@larkspit.example';
+const BUYER_NAME = 'Oona Brightwater';
 const TITLE = 'Grade 43 chain 5/16 inch, 40 m, spare from a refit';
 
 const photo = (colour: string) =>
@@ -33,6 +36,7 @@ describe('gear exchange in Chromium', () => {
     await signIn(page, SELLER);
     await page.goto(`${baseUrl()}/exchange/new`);
     await page.getByLabel('Category').selectOption('chain');
+    await audit(page, 'new chain listing form');
     await page.getByLabel('Title').fill(TITLE);
     await page.getByLabel('Description').fill('Galvanised high-test chain, end marked every 10 m.');
     await page.getByLabel('Chain grade').selectOption('G43');
@@ -52,6 +56,7 @@ describe('gear exchange in Chromium', () => {
     await expect
       .poll(() => page.getByRole('heading', { name: /^Photos/ }).innerText(), { timeout: 20000 })
       .toBe('Photos (2 of 8)');
+    await audit(page, 'listing editor with photos');
     await page.getByRole('button', { name: 'Publish' }).click();
     await expect
       .poll(() => page.getByText(/Shows in search until/).count(), { timeout: 15000 })
@@ -59,9 +64,9 @@ describe('gear exchange in Chromium', () => {
     await page.close();
   });
 
-  it('a member finds it with a misspelt query, filters “fits my boat” and writes to the seller', async () => {
+  it('a member finds it with a misspelt query and filters “fits my boat”; unpaid, she is asked to pay before writing', async () => {
     const page = await newPage();
-    await signIn(page, BUYER);
+    await signIn(page, BROWSER);
     await page.goto(`${baseUrl()}/exchange`);
     await page.getByLabel('Search gear').fill('galvanised chian');
     await page.getByLabel('Boat').selectOption({ label: 'Marram' });
@@ -74,18 +79,45 @@ describe('gear exchange in Chromium', () => {
     await expect.poll(() => page.getByText('Fits your boat').count()).toBeGreaterThan(0);
     await expect.poll(() => page.getByText(/Checked against Marram/).count()).toBe(1);
     await screenshot(page, 'exchange-search');
+    await audit(page, 'exchange search with fits-my-boat');
 
     await link.click();
     await page.getByRole('heading', { name: TITLE }).waitFor({ timeout: 15000 });
     await expect.poll(() => page.getByText('Paid-up member').count()).toBe(1);
     await expect.poll(() => page.getByText('Fits your boat').count()).toBe(1);
     await screenshot(page, 'exchange-listing');
+    await audit(page, 'listing page');
+    await page.getByLabel('Your message').fill('Is this still for sale?');
+    await page.getByRole('button', { name: 'Send message' }).click();
+    await expect
+      .poll(
+        () =>
+          page
+            .getByRole('alert')
+            .filter({ hasText: /paid-up membership/ })
+            .count(),
+        {
+          timeout: 15000,
+        },
+      )
+      .toBe(1);
+    expect(page.url()).not.toMatch(/\/messages\//);
+    await screenshot(page, 'exchange-paid-up-needed');
+    await page.close();
+  });
+
+  it('a paid-up member writes to the seller from the listing page', async () => {
+    const page = await newPage();
+    await signIn(page, BUYER);
+    await page.goto(listingUrl);
+    await page.getByRole('heading', { name: TITLE }).waitFor({ timeout: 15000 });
     await page
       .getByLabel('Your message')
       .fill('Is this still for sale? I could collect on Saturday.');
     await page.getByRole('button', { name: 'Send message' }).click();
     await page.waitForURL(/\/messages\/\d+$/, { timeout: 15000 });
     await expect.poll(() => page.getByText(/collect on Saturday/).count()).toBe(1);
+    await audit(page, 'message thread');
     await page.close();
   });
 
@@ -95,15 +127,16 @@ describe('gear exchange in Chromium', () => {
     const page = await newPage(390);
     await signIn(page, SELLER);
     await page.goto(listingUrl);
-    await page.getByLabel('Sold to').selectOption({ label: 'Maren Tiller' });
+    await page.getByLabel('Sold to').selectOption({ label: BUYER_NAME });
     await page.getByRole('button', { name: 'Mark sold' }).click();
     await page.getByRole('button', { name: 'Relist for 60 days' }).waitFor({ timeout: 15000 });
     const sold = await waitForMail(BUYER, 'Sold to you');
     expect(sold.subject).toContain(TITLE);
     await page.goto(`${baseUrl()}/messages`);
     await expect
-      .poll(() => page.getByText(/Sold to Maren Tiller/).count(), { timeout: 15000 })
+      .poll(() => page.getByText(`Sold to ${BUYER_NAME}`).count(), { timeout: 15000 })
       .toBe(1);
+    await audit(page, 'inbox');
     await page.close();
   });
 });

@@ -101,7 +101,7 @@ beforeAll(async () => {
   harborId = (await exchangeFixture()).harbors[0]?.id ?? 0;
   const topicId = (await seedTopics())[0]?.id ?? 0;
   const owner = await signedIn(true);
-  const buyer = await signedIn(false);
+  const buyer = await signedIn(true); // the club's policy: only paid-up members message sellers
   const o = owner.c;
   ownerClient = o;
 

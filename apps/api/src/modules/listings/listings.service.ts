@@ -63,15 +63,27 @@ export async function sellerOf(sellerId: number, at = new Date()): Promise<Selle
   };
 }
 
-/** Throws FORBIDDEN when the club requires a paid-up membership to list and the actor is not paid up. */
-export async function assertMayList(actor: User, at = new Date()) {
+const PAID_UP_NEEDED = {
+  list: 'The club asks for a paid-up membership before gear is listed. Pay your dues, then publish; your draft is kept.',
+  message:
+    'The club asks for a paid-up membership before members message sellers. Pay your dues on the Dues page, then send your message again.',
+} as const;
+
+/**
+ * Throws FORBIDDEN when the club's trading policy (`listingRequiresPaidUp`, an admin setting) is on and the actor
+ * is not paid up: it covers publishing a listing and opening a conversation with a seller.
+ */
+export async function assertMayTrade(
+  actor: User,
+  action: keyof typeof PAID_UP_NEEDED,
+  at = new Date(),
+) {
   if (!(await getSetting('listingRequiresPaidUp'))) return;
-  if (!(await isPaidUp(actor.id, at)))
-    throw new AppError(
-      'FORBIDDEN',
-      'The club asks for a paid-up membership before gear is listed. Pay your dues, then publish; your draft is kept.',
-    );
+  if (!(await isPaidUp(actor.id, at))) throw new AppError('FORBIDDEN', PAID_UP_NEEDED[action]);
 }
+
+/** Throws FORBIDDEN when the club requires a paid-up membership to list and the actor is not paid up. */
+export const assertMayList = (actor: User, at = new Date()) => assertMayTrade(actor, 'list', at);
 
 async function checkHarbor(id: number) {
   if (!(await Harbor.findByPk(id))) throw invalid({ harborId: 'Choose one of the club harbours' });

@@ -4,6 +4,7 @@ import { AppError, notFound } from '../../errors/app-error';
 import { Listing, ListingMessage, ListingThread, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
+import { assertMayTrade } from '../listings/listings.service';
 
 const PREVIEW = 140;
 
@@ -34,7 +35,8 @@ async function emailOtherParty(
 
 /**
  * A buyer writes to the seller about an active listing: opens the buyer's thread (or reuses it) and adds the
- * message; the seller is e-mailed. Sellers cannot open threads on their own listings.
+ * message; the seller is e-mailed. Sellers cannot open threads on their own listings, and under the club's
+ * paid-up policy only a paid-up buyer can write (FORBIDDEN).
  */
 export async function openThread(publicUrl: string, buyer: User, listingId: number, body: string) {
   const listing = await Listing.findByPk(listingId);
@@ -42,6 +44,7 @@ export async function openThread(publicUrl: string, buyer: User, listingId: numb
     throw notFound('Listing');
   if (listing.sellerId === buyer.id)
     throw new AppError('CONFLICT', 'This is your own listing: buyers start the conversation');
+  await assertMayTrade(buyer, 'message');
   const now = new Date();
   const [thread] = await ListingThread.findOrCreate({
     where: { listingId, buyerId: buyer.id },

@@ -1,5 +1,6 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
-import { ListingMessage } from '../../models';
+import { ListingMessage, ListingThread } from '../../models';
+import { setSetting } from '../club/club.service';
 import {
   buildUser,
   client,
@@ -29,7 +30,7 @@ async function signedIn(paid = false) {
 describe('buyer–seller messages', () => {
   it('opens a thread, both inboxes show it, each message e-mails the other side, seller sells to the thread', async () => {
     const seller = await signedIn(true);
-    const buyer = await signedIn();
+    const buyer = await signedIn(true);
     const listingId = (
       await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
     ).body.data.id as number;
@@ -78,8 +79,8 @@ describe('buyer–seller messages', () => {
 
   it('keeps threads private (404), refuses the seller’s own listing and empty messages', async () => {
     const seller = await signedIn(true);
-    const buyer = await signedIn();
-    const nosy = await signedIn();
+    const buyer = await signedIn(true);
+    const nosy = await signedIn(true);
     const listingId = (
       await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
     ).body.data.id as number;
@@ -99,5 +100,33 @@ describe('buyer–seller messages', () => {
       .id as number;
     expect(otherThread).not.toBe(threadId);
     expect(await ListingMessage.count()).toBe(2);
+  });
+
+  it('lets only paid-up buyers write to a seller while the club policy is on, and anyone when it is off', async () => {
+    const seller = await signedIn(true);
+    const behind = await signedIn();
+    const listingId = (
+      await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
+    ).body.data.id as number;
+
+    const refused = await behind.c.post('/api/threads', { listingId, body: 'Still for sale?' });
+    expect(refused.status).toBe(403);
+    expect(refused.body.error.code).toBe('FORBIDDEN');
+    expect(refused.body.error.message).toMatch(/paid-up membership/);
+    expect(refused.body.error.message).toMatch(/Pay your dues/);
+    expect(await ListingThread.count()).toBe(0);
+    expect(await ListingMessage.count()).toBe(0);
+    await flushOutbox();
+    expect(await inbox(seller.user.email, 'New message about')).toHaveLength(0);
+
+    await grantPaidUp(behind.user);
+    expect((await behind.c.post('/api/threads', { listingId, body: 'Paid now.' })).status).toBe(
+      201,
+    );
+
+    await setSetting('listingRequiresPaidUp', false);
+    const unpaid = await signedIn();
+    expect((await unpaid.c.post('/api/threads', { listingId, body: 'Hello' })).status).toBe(201);
+    expect(await ListingThread.count()).toBe(2);
   });
 });
