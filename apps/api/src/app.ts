@@ -215,7 +215,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
     );
     app.use(express.static(webDist, { index: false, maxAge: '1h' }));
     app.get('/{*splat}', (_req, res) => {
-      res.set('Cache-Control', 'no-cache').sendFile(join(webDist, 'index.html'));
+      // `root` keeps send's dotfile rule to the part below webDist, so a build under e.g. .data/ is served.
+      res.set('Cache-Control', 'no-cache').sendFile('index.html', { root: webDist });
     });
   }
   app.use(errorHandler(logger));

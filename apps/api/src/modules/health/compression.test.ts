@@ -9,15 +9,16 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../../testing/test-app';
 
 // The built client is served gzipped to browsers that accept it (Lighthouse "text compression").
-const dist = mkdtempSync(join(tmpdir(), 'rodewise-dist-'));
-mkdirSync(join(dist, 'assets'));
+// Under a dot folder on purpose: the client must be served from a build in e.g. .data/.
+const dist = join(mkdtempSync(join(tmpdir(), 'rodewise-dist-')), '.build');
+mkdirSync(join(dist, 'assets'), { recursive: true });
 const script = `export const lines = [${Array.from({ length: 400 }, (_, i) => `'row ${i}'`).join(',')}];\n`;
 writeFileSync(join(dist, 'assets', 'app-test.js'), script);
 writeFileSync(join(dist, 'index.html'), '<!doctype html><title>t</title><div id="root"></div>');
 const { app, close } = createTestApp({ WEB_DIST: dist });
 afterAll(() => {
   close();
-  rmSync(dist, { recursive: true, force: true });
+  rmSync(join(dist, '..'), { recursive: true, force: true });
 });
 
 describe('response compression', () => {
@@ -50,6 +51,12 @@ describe('response compression', () => {
     } finally {
       server.close();
     }
+  });
+
+  it('serves index.html for client routes from a build under a dot folder', async () => {
+    const res = await request(app).get('/exchange/listings/1');
+    expect(res.status).toBe(200);
+    expect(res.text).toContain('<div id="root"></div>');
   });
 
   it('sends it as is when the client does not ask for compression', async () => {
