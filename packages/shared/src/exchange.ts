@@ -225,6 +225,12 @@ export const markSoldSchema = z.object({
 });
 export const reportListingSchema = z.object({ reason: text('Reason', 3, 1000) });
 export const hideListingSchema = z.object({ reason: text('Reason', 3, 1000) });
+/** A moderator dismisses a listing report; the note (optional) goes to the audit log. */
+export const dismissListingReportSchema = z.object({
+  note: z.string().trim().max(1000, 'Keep the note under 1000 characters').default(''),
+});
+export type DismissListingReportInput = z.input<typeof dismissListingReportSchema>;
+export type HideListingInput = z.input<typeof hideListingSchema>;
 export const photoOrderSchema = z.object({
   photoIds: z
     .array(z.number().int().positive())

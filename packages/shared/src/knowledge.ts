@@ -414,6 +414,8 @@ export interface ModerationCountDto {
   pendingPosts: number;
   pendingComments: number;
   openReports: number;
+  /** Open reports on exchange listings. */
+  openListingReports: number;
   total: number;
 }
 export interface AuditEntryDto {

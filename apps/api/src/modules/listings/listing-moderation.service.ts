@@ -59,6 +59,7 @@ export async function hideListing(ctx: ExchangeContext, mod: User, id: number, r
         subjectType: 'listing',
         subjectId: String(id),
         reason,
+        details: { title: listing.title },
       },
       transaction,
     );
@@ -92,15 +93,22 @@ export async function unhideListing(mod: User, id: number) {
     action: 'listing.unhide',
     subjectType: 'listing',
     subjectId: String(id),
+    details: { title: listing.title },
   });
   await refreshListing(id);
   return listing;
 }
 
-/** A moderator dismisses one report without hiding the listing (audited). */
-export async function dismissReport(mod: User, reportId: number) {
-  const report = await ListingReport.findByPk(reportId);
+/**
+ * A moderator dismisses one open report without hiding the listing; `note` (may be empty) is the audit
+ * row's reason. NOT_FOUND for an unknown report, CONFLICT for one already resolved.
+ */
+export async function dismissReport(mod: User, reportId: number, note = '') {
+  const report = await ListingReport.findByPk(reportId, {
+    include: [{ model: Listing, as: 'listing' }],
+  });
   if (!report) throw notFound('Report');
+  if (report.status !== 'open') throw new AppError('CONFLICT', 'This report is already resolved');
   await report.update({ status: 'resolved' });
   await recordAudit({
     actorId: mod.id,
@@ -108,5 +116,7 @@ export async function dismissReport(mod: User, reportId: number) {
     action: 'listing-report.dismiss',
     subjectType: 'listing-report',
     subjectId: String(reportId),
+    reason: note || null,
+    details: { listingId: report.listingId, title: report.listing?.title ?? '' },
   });
 }

@@ -2,6 +2,7 @@ import { Router, type Request } from 'express';
 import { z } from 'zod';
 import {
   MAX_LISTING_PHOTOS,
+  dismissListingReportSchema,
   hideListingSchema,
   idParam,
   listingInputSchema,
@@ -95,7 +96,8 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
   });
   r.post('/reports/:reportId/dismiss', requireRole('moderator'), async (req, res) => {
     const { reportId } = reportParams.parse(req.params);
-    await moderation.dismissReport(currentUser(req), Number(reportId));
+    const { note } = dismissListingReportSchema.parse(req.body ?? {});
+    await moderation.dismissReport(currentUser(req), Number(reportId), note);
     res.status(204).end();
   });
   r.post('/', requireAuth(), async (req, res) => {

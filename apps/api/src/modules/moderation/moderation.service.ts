@@ -1,8 +1,9 @@
+import { Op } from 'sequelize';
 import type { z } from 'zod';
 import type { commentDecisionSchema, decisionSchema, postFlagsSchema } from '@app/shared';
 
 import { AppError, notFound } from '../../errors/app-error';
-import { AuditEvent, Comment, Post, Report, User } from '../../models';
+import { AuditEvent, Comment, ListingReport, Post, Report, User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { notifyReply, postPath } from '../posts/comments.service';
 import { POST_INCLUDE } from '../posts/post-access';
@@ -60,18 +61,23 @@ export async function queue() {
   return { posts, comments, reports };
 }
 
-/** How much waits for a moderator (for the navigation badge). */
+/** What moderators do on the exchange (written by the listings module) also belongs in their log. */
+const LISTING_MODERATION_ACTIONS = ['listing.hide', 'listing.unhide', 'listing-report.dismiss'];
+
+/** How much waits for a moderator (for the navigation badge), listing reports included. */
 export async function counts() {
-  const [pendingPosts, pendingComments, openReports] = await Promise.all([
+  const [pendingPosts, pendingComments, openReports, openListingReports] = await Promise.all([
     Post.count({ where: { status: 'pending' } }),
     Comment.count({ where: { status: 'pending' } }),
     Report.count({ where: { status: 'open' } }),
+    ListingReport.count({ where: { status: 'open' } }),
   ]);
   return {
     pendingPosts,
     pendingComments,
     openReports,
-    total: pendingPosts + pendingComments + openReports,
+    openListingReports,
+    total: pendingPosts + pendingComments + openReports + openListingReports,
   };
 }
 
@@ -214,7 +220,9 @@ export async function setFlags(ctx: ModContext, actor: User, postId: number, f: 
 /** Moderation entries of the audit log, newest first, 50 a page. */
 export async function auditLog(page: number) {
   const { rows, count } = await AuditEvent.findAndCountAll({
-    where: { area: 'moderation' },
+    where: {
+      [Op.or]: [{ area: 'moderation' }, { action: { [Op.in]: LISTING_MODERATION_ACTIONS } }],
+    },
     include: [{ model: User, as: 'actor', attributes: ['id', 'displayName'] }],
     order: [['id', 'DESC']],
     limit: 50,

@@ -19,6 +19,7 @@ const count = (pendingPosts: number, openReports = 0): ModerationCountDto => ({
   pendingPosts,
   pendingComments: 0,
   openReports,
+  openListingReports: 0,
   total: pendingPosts + openReports,
 });
 
