@@ -29,7 +29,6 @@ const NO_BODY = new Set([
   'POST /api/notifications/read',
   'POST /api/uploads/images', // multipart; upload-tricks.test.ts
   'POST /api/listings/:listingId/photos', // multipart; upload-tricks.test.ts
-  'POST /api/listings/reports/:reportId/dismiss',
   'POST /api/listings/:listingId/publish',
   'POST /api/listings/:listingId/relist',
   'POST /api/listings/:listingId/withdraw',
@@ -49,6 +48,7 @@ const OPTIONAL_KEYS: Record<string, string[]> = {
   'PATCH /api/posts/:postId': ['kind', 'title', 'topicId'],
   'PATCH /api/moderation/posts/:postId/flags': ['pinned', 'locked', 'hidden'],
   'POST /api/listings/:listingId/sold': ['threadId'],
+  'POST /api/listings/reports/:reportId/dismiss': ['note'],
 };
 
 const RUNS_PER_ROUTE = 40;
