@@ -1,3 +1,4 @@
+import { randomBytes } from 'node:crypto';
 import { Membership, MembershipPlan, Payment, Refund } from '../src/models';
 import {
   addDays,
@@ -47,6 +48,14 @@ const PLANS = [
   },
 ];
 
+const ID_ALPHABET = 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789';
+/** A random id shaped like the provider's (and our fake's): `cs_test_` + 58 characters, `pi_` + 24. */
+function providerId(prefix: 'cs_test' | 'pi', length: number) {
+  let suffix = '';
+  for (const byte of randomBytes(length)) suffix += ID_ALPHABET[byte % ID_ALPHABET.length] ?? 'x';
+  return `${prefix}_${suffix}`;
+}
+
 /** Seeds plans, memberships and payments relative to `now`: a season in progress. */
 export async function seedDues({ transaction, users, now }: SeedContext) {
   const t = transaction;
@@ -86,8 +95,10 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
         expectedMinor: plan.amountMinor,
         coversFrom: year.start,
         coversTo: year.end,
-        providerSessionId: null,
-        providerPaymentIntentId: null,
+        // Card entries carry ids in the provider's format. They were never charged through the provider the
+        // demo talks to, so a refund of one is answered "no record" and the treasurer is told why.
+        providerSessionId: method === 'card' ? providerId('cs_test', 58) : null,
+        providerPaymentIntentId: method === 'card' ? providerId('pi', 24) : null,
         reference,
         note: null,
         heldReason: extra.heldReason ?? null,

@@ -235,6 +235,8 @@ export interface PaymentDto {
   reference: string | null;
   note: string | null;
   heldReason: string | null;
+  /** Set when a card payment cannot be refunded through the provider, saying why. */
+  cardRefundBlocked: string | null;
   paidAt: string | null;
   createdAt: string;
   refunds: RefundDto[];

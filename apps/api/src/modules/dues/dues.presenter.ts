@@ -1,6 +1,10 @@
 import type { PaymentDto, PlanDto, RefundDto } from '@app/shared';
 import type { MembershipPlan, Payment, Refund } from '../../models';
 
+/** Why a card payment without a payment-intent id cannot be refunded (the refund answer and the ledger say it). */
+export const NO_PROVIDER_REFERENCE =
+  'This card payment has no reference at the payment provider, so it cannot be refunded by card. Hand the money back another way and note it on the entry.';
+
 /** What a plan shows outside the server. */
 export function toPlanDto(p: MembershipPlan): PlanDto {
   return {
@@ -53,6 +57,8 @@ export function toPaymentDto(p: Payment): PaymentDto {
     reference: p.reference,
     note: p.note,
     heldReason: p.heldReason,
+    cardRefundBlocked:
+      p.method === 'card' && !p.providerPaymentIntentId ? NO_PROVIDER_REFERENCE : null,
     paidAt: p.paidAt?.toISOString() ?? null,
     createdAt: p.createdAt.toISOString(),
     refunds: refunds.map(toRefundDto),

@@ -1,4 +1,5 @@
 import { Op, type Sequelize } from 'sequelize';
+import Stripe from 'stripe';
 import type { z } from 'zod';
 import type {
   offlinePaymentSchema,
@@ -19,6 +20,7 @@ import {
   quoteFor,
   toIsoDate,
 } from '../dues/calendar';
+import { NO_PROVIDER_REFERENCE } from '../dues/dues.presenter';
 import { duesCalendar } from '../dues/dues.service';
 import {
   creditMembership,
@@ -172,7 +174,7 @@ export async function refundPayment(
     if (!['succeeded', 'held', 'dismissed'].includes(payment.status))
       throw new AppError('CONFLICT', 'Only money that was received can be refunded');
     if (payment.method === 'card' && !payment.providerPaymentIntentId)
-      throw new AppError('CONFLICT', 'This card payment has no provider reference to refund');
+      throw new AppError('CONFLICT', NO_PROVIDER_REFERENCE);
     const taken = await Refund.sum('amountMinor', {
       where: { paymentId, status: { [Op.ne]: 'failed' } },
       transaction: t,
@@ -225,14 +227,29 @@ export async function refundPayment(
     );
   } catch (err) {
     await refund.row.update({ status: 'failed', completedAt: new Date() });
+    const refused = err instanceof Stripe.errors.StripeInvalidRequestError;
     await recordAudit({
       actorId: actor.id,
       area: 'treasury',
       action: 'refund.provider-error',
       subjectType: 'refund',
       subjectId: String(refund.row.id),
-      details: { message: err instanceof Error ? err.message : 'unknown error' },
+      details: {
+        message: err instanceof Error ? err.message : 'unknown error',
+        code: refused ? (err.code ?? null) : null,
+      },
     });
+    // The provider answered and said no: retrying will not help, so say why instead of "try later".
+    if (refused && err.code === 'resource_missing')
+      throw new AppError(
+        'CONFLICT',
+        `The payment provider has no record of this card payment (${refund.intent}), so it cannot be refunded by card. Nothing was refunded. Entries carried over from before card payments went through this provider account cannot be refunded here: hand the money back another way and note it on the entry.`,
+      );
+    if (refused)
+      throw new AppError(
+        'CONFLICT',
+        `The payment provider refused the refund: ${err.message} Nothing was refunded.`,
+      );
     throw new AppError(
       'UPSTREAM_UNAVAILABLE',
       'The payment provider refused or did not answer the refund; nothing was refunded. Try again later.',

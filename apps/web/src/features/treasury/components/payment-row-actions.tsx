@@ -1,75 +1,97 @@
 import { formatMoney, type PaymentDto } from '@app/shared';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
+import { usePromptDialog } from '../../../components/ui/prompt-dialog';
 import { errorMessage } from '../../../lib/form-errors';
 import { useRefundPayment } from '../api/refund-payment';
 import { useResolveHeld } from '../api/resolve-held';
+import { refundableMinor } from '../utils/refundable';
+import { RefundDialog } from './refund-dialog';
 
-/** Refund and (for held payments) credit / dismiss, each asking for a reason for the ledger. */
+const REFUNDABLE = ['succeeded', 'held', 'dismissed'];
+
+/** Refund (in full or in part) and, for held payments, credit / dismiss, each asking for a reason for the ledger. */
 export function PaymentRowActions({ payment }: { payment: PaymentDto }) {
   const refund = useRefundPayment();
   const resolve = useResolveHeld();
+  const { ask, dialog } = usePromptDialog();
+  const [isRefunding, setIsRefunding] = useState(false);
   const [message, setMessage] = useState('');
-  const left = payment.amountMinor - payment.refundedMinor;
-  const canRefund = ['succeeded', 'held', 'dismissed'].includes(payment.status) && left > 0;
-  const ask = (q: string) => window.prompt(q)?.trim() ?? '';
+  const left = refundableMinor(payment);
+  const canRefund = REFUNDABLE.includes(payment.status) && left > 0;
+
+  const decide = async (decision: 'credit' | 'dismiss') => {
+    const note = await ask(
+      decision === 'credit'
+        ? {
+            title: `Credit ${formatMoney(payment.amountMinor, payment.currency)} to ${payment.memberName}?`,
+            label: 'Why credit this payment',
+            hint: 'Kept in the ledger and the audit log.',
+            confirmLabel: 'Credit',
+            maxLength: 500,
+          }
+        : {
+            title: `Dismiss ${formatMoney(payment.amountMinor, payment.currency)} from ${payment.memberName}?`,
+            label: 'Why not credit it',
+            hint: 'The entry stays in the ledger; refund it if the money should go back.',
+            confirmLabel: 'Dismiss',
+            maxLength: 500,
+            isDestructive: true,
+          },
+    );
+    if (!note) return;
+    resolve.mutate(
+      { paymentId: payment.id, decision, note },
+      {
+        onError: (e) => setMessage(errorMessage(e)),
+        onSuccess: () => setMessage(decision === 'credit' ? 'Credited.' : 'Dismissed.'),
+      },
+    );
+  };
+
   return (
     <div className="flex flex-wrap items-center gap-2">
       {payment.status === 'held' && (
         <>
-          <Button
-            size="sm"
-            onClick={() => {
-              const note = ask('Why credit this payment? (kept in the ledger)');
-              if (note)
-                resolve.mutate(
-                  { paymentId: payment.id, decision: 'credit', note },
-                  { onError: (e) => setMessage(errorMessage(e)) },
-                );
-            }}
-          >
+          <Button size="sm" onClick={() => void decide('credit')}>
             Credit
           </Button>
-          <Button
-            size="sm"
-            variant="secondary"
-            onClick={() => {
-              const note = ask('Why not credit it? (kept in the ledger)');
-              if (note)
-                resolve.mutate(
-                  { paymentId: payment.id, decision: 'dismiss', note },
-                  { onError: (e) => setMessage(errorMessage(e)) },
-                );
-            }}
-          >
+          <Button size="sm" variant="secondary" onClick={() => void decide('dismiss')}>
             Dismiss
           </Button>
         </>
       )}
-      {canRefund && (
+      {canRefund && payment.cardRefundBlocked && (
+        <p className="max-w-xs text-xs text-ink-700">{payment.cardRefundBlocked}</p>
+      )}
+      {canRefund && !payment.cardRefundBlocked && (
         <Button
           size="sm"
           variant="ghost"
+          aria-label={`Refund ${payment.memberName}, ${formatMoney(payment.amountMinor, payment.currency)}`}
           onClick={() => {
-            const reason = ask(`Refund ${formatMoney(left, payment.currency)}: reason?`);
-            if (reason)
-              refund.mutate(
-                { paymentId: payment.id, amountMinor: left, reason },
-                {
-                  onError: (e) => setMessage(errorMessage(e)),
-                  onSuccess: (r) =>
-                    setMessage(
-                      r.status === 'pending'
-                        ? 'Refund requested; waiting for the provider.'
-                        : 'Refunded.',
-                    ),
-                },
-              );
+            setMessage('');
+            setIsRefunding(true);
           }}
         >
           Refund
         </Button>
       )}
+      {isRefunding && (
+        <RefundDialog
+          payment={payment}
+          onClose={() => setIsRefunding(false)}
+          onSubmit={async (input) => {
+            const r = await refund.mutateAsync({ paymentId: payment.id, ...input });
+            setMessage(
+              r.status === 'pending'
+                ? `Refund of ${formatMoney(r.amountMinor, r.currency)} requested; waiting for the provider.`
+                : `Refunded ${formatMoney(r.amountMinor, r.currency)}.`,
+            );
+          }}
+        />
+      )}
+      {dialog}
       {message && (
         <span role="status" className="text-sm">
           {message}

@@ -1,0 +1,121 @@
+import { mkdtemp, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { startFakePayments, type FakePayments } from '@app/fake-payments';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD, seedDemo } from '../../../seeders/demo';
+import { AuditEvent, Membership, Payment, Refund, User } from '../../models';
+import { client, createTestApp, resetDb } from '../../testing/test-app';
+
+const KEY = 'sk_test_seeded_refunds_key';
+let fake: FakePayments;
+let dataDir = '';
+let built: ReturnType<typeof createTestApp>;
+
+beforeAll(async () => {
+  dataDir = await mkdtemp(join(tmpdir(), 'seeded-refunds-'));
+  fake = await startFakePayments({
+    port: 0,
+    dataDir,
+    webhookUrl: 'http://127.0.0.1:9/api/payments/webhook',
+    webhookSecret: 'whsec_seeded_refunds',
+    apiKey: KEY,
+    retryDelaysMs: [60_000],
+    log: () => undefined,
+  });
+  built = createTestApp({
+    STRIPE_HOST: '127.0.0.1',
+    STRIPE_PORT: String(fake.port),
+    STRIPE_PROTOCOL: 'http',
+    STRIPE_SECRET_KEY: KEY,
+  });
+  await resetDb();
+  expect(await seedDemo(built.sequelize, 4)).toBe(true);
+});
+
+afterAll(async () => {
+  built.close();
+  await fake.close();
+  await rm(dataDir, { recursive: true, force: true });
+});
+
+async function treasurer() {
+  const c = await client(built.app);
+  expect((await c.signIn('treasurer@larkspit.example', DEMO_PASSWORD)).status).toBe(200);
+  return c;
+}
+
+describe('seeded card payments', () => {
+  it('carry unique provider ids in the provider format', async () => {
+    const cards = await Payment.findAll({ where: { method: 'card' } });
+    expect(cards.length).toBeGreaterThanOrEqual(3);
+    for (const p of cards) {
+      expect(p.providerSessionId).toMatch(/^cs_test_[A-Za-z0-9]{58}$/);
+      expect(p.providerPaymentIntentId).toMatch(/^pi_[A-Za-z0-9]{24}$/);
+    }
+    expect(new Set(cards.map((p) => p.providerPaymentIntentId)).size).toBe(cards.length);
+  });
+
+  it('are refused by the provider with a reason the treasurer can act on, and nothing changes', async () => {
+    const c = await treasurer();
+    const payment = await Payment.findOne({ where: { method: 'card', status: 'succeeded' } });
+    if (!payment) throw new Error('the demo seed has a succeeded card payment');
+    const before = await Membership.findOne({ where: { userId: payment.userId } });
+    const ledger = await c.get(`/api/treasury/payments?userId=${payment.userId}`);
+    const row = (ledger.body.data as { id: number; cardRefundBlocked: string | null }[]).find(
+      (p) => p.id === payment.id,
+    );
+    expect(row?.cardRefundBlocked).toBeNull();
+
+    const res = await c.post(`/api/treasury/payments/${payment.id}/refunds`, {
+      amountMinor: 1000,
+      reason: 'Testing a seeded refund',
+    });
+    expect(res.status).toBe(409);
+    expect(res.body.error.message).toMatch(/has no record of this card payment \(pi_/);
+    expect(res.body.error.message).toMatch(/Nothing was refunded/);
+    expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts/);
+    const refunds = await Refund.findAll({ where: { paymentId: payment.id } });
+    expect(refunds.map((r) => r.status)).toEqual(['failed']);
+    const after = await Membership.findOne({ where: { userId: payment.userId } });
+    expect(after?.paidThrough).toBe(before?.paidThrough);
+    const audit = await AuditEvent.findOne({ where: { action: 'refund.provider-error' } });
+    expect(audit?.details).toMatchObject({ code: 'resource_missing' });
+  });
+
+  it('without any provider id are marked on the ledger and refused before calling the provider', async () => {
+    const c = await treasurer();
+    const member = await User.findOne({ where: { email: 'maren@larkspit.example' } });
+    if (!member) throw new Error('the demo seed has this member');
+    const bare = await Payment.create({
+      userId: member.id,
+      planId: null,
+      method: 'card',
+      status: 'succeeded',
+      amountMinor: 500,
+      currency: 'EUR',
+      expectedMinor: 500,
+      coversFrom: null,
+      coversTo: null,
+      providerSessionId: null,
+      providerPaymentIntentId: null,
+      reference: null,
+      note: null,
+      heldReason: null,
+      recordedById: null,
+      paidAt: new Date(),
+    });
+    const ledger = await c.get(`/api/treasury/payments?userId=${member.id}`);
+    const row = (ledger.body.data as { id: number; cardRefundBlocked: string | null }[]).find(
+      (p) => p.id === bare.id,
+    );
+    expect(row?.cardRefundBlocked).toMatch(/no reference at the payment provider/);
+    const res = await c.post(`/api/treasury/payments/${bare.id}/refunds`, {
+      amountMinor: 500,
+      reason: 'No provider id',
+    });
+    expect(res.status).toBe(409);
+    expect(res.body.error.message).toBe(row?.cardRefundBlocked);
+    expect(await Refund.count({ where: { paymentId: bare.id } })).toBe(0);
+  });
+});

@@ -1,0 +1,147 @@
+import '../../../testing/setup';
+import type { PaymentDto } from '@app/shared';
+import { screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it, vi } from 'vitest';
+import { buildSession, buildUser } from '../../../testing/builders';
+import { errorReply, mockApi } from '../../../testing/mock-api';
+import { renderWithProviders } from '../../../testing/render';
+import { PaymentRowActions } from './payment-row-actions';
+
+const session = buildSession(buildUser({ roles: ['member', 'treasurer'] }));
+
+function buildPayment(overrides: Partial<PaymentDto> = {}): PaymentDto {
+  return {
+    id: 7,
+    userId: 3,
+    memberName: 'Invented Member',
+    planName: 'Family',
+    method: 'cheque',
+    status: 'succeeded',
+    amountMinor: 18000,
+    currency: 'EUR',
+    expectedMinor: 18000,
+    refundedMinor: 0,
+    coversFrom: '2026-04-01',
+    coversTo: '2027-03-31',
+    reference: 'CHQ 1',
+    note: null,
+    heldReason: null,
+    cardRefundBlocked: null,
+    paidAt: '2026-04-03T10:00:00.000Z',
+    createdAt: '2026-04-03T10:00:00.000Z',
+    refunds: [],
+    ...overrides,
+  };
+}
+
+const refundReply = (amountMinor: number, status = 'succeeded') => ({
+  status: 201,
+  body: {
+    data: {
+      id: 1,
+      paymentId: 7,
+      amountMinor,
+      currency: 'EUR',
+      status,
+      reason: 'x',
+      createdAt: '2026-05-01T00:00:00.000Z',
+      completedAt: null,
+    },
+  },
+});
+
+describe('PaymentRowActions', () => {
+  it('refunds part of a payment after checking the amount against what is left', async () => {
+    const { requests } = mockApi({
+      'POST /api/treasury/payments/7/refunds': () => refundReply(3000),
+    });
+    // 50.00 of 180.00 already refunded (pending counts too), so 130.00 is left.
+    const payment = buildPayment({
+      refunds: [
+        {
+          id: 9,
+          paymentId: 7,
+          amountMinor: 5000,
+          currency: 'EUR',
+          status: 'pending',
+          reason: 'Earlier',
+          createdAt: '2026-04-10T00:00:00.000Z',
+          completedAt: null,
+        },
+      ],
+    });
+    renderWithProviders(<PaymentRowActions payment={payment} />, { session });
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: /^Refund Invented Member/ }));
+    const dialog = screen.getByRole('dialog', { name: 'Refund Invented Member' });
+    const amount = within(dialog).getByLabelText(/^Amount to refund/);
+    expect(amount).toHaveValue('130.00');
+    await user.clear(amount);
+    await user.type(amount, '130.01');
+    await user.type(within(dialog).getByLabelText(/^Reason/), 'Moved away mid-season');
+    await user.click(within(dialog).getByRole('button', { name: 'Refund' }));
+    expect(amount).toHaveAccessibleDescription(
+      expect.stringContaining('At most €130.00 is left to refund'),
+    );
+    expect(requests).toHaveLength(0);
+
+    await user.clear(amount);
+    await user.type(amount, '30');
+    await user.click(within(dialog).getByRole('button', { name: 'Refund' }));
+    await waitFor(() => expect(screen.getByRole('status')).toHaveTextContent('Refunded €30.00.'));
+    expect(requests[0]?.body).toEqual({ amountMinor: 3000, reason: 'Moved away mid-season' });
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+  });
+
+  it('keeps the dialog open with the provider’s reason when the refund is refused', async () => {
+    mockApi({
+      'POST /api/treasury/payments/7/refunds': () =>
+        errorReply(409, 'CONFLICT', 'The payment provider has no record of this card payment'),
+    });
+    renderWithProviders(<PaymentRowActions payment={buildPayment({ method: 'card' })} />, {
+      session,
+    });
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: /^Refund Invented Member/ }));
+    const dialog = screen.getByRole('dialog');
+    await user.type(within(dialog).getByLabelText(/^Reason/), 'Duplicate payment');
+    await user.click(within(dialog).getByRole('button', { name: 'Refund' }));
+    expect(await within(dialog).findByRole('alert')).toHaveTextContent(/no record of this card/);
+    expect(within(dialog).getByLabelText(/^Reason/)).toHaveValue('Duplicate payment');
+  });
+
+  it('says why a card payment without a provider reference cannot be refunded', () => {
+    mockApi({});
+    renderWithProviders(
+      <PaymentRowActions
+        payment={buildPayment({
+          method: 'card',
+          cardRefundBlocked: 'No reference at the provider',
+        })}
+      />,
+      { session },
+    );
+    expect(screen.getByText('No reference at the provider')).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /Refund/ })).not.toBeInTheDocument();
+  });
+
+  it('credits a held payment with the reason typed in the dialog, and sends nothing on cancel', async () => {
+    const resolve = vi.fn(() => ({ body: { data: buildPayment() } }));
+    const { requests } = mockApi({ 'POST /api/treasury/payments/7/resolve': resolve });
+    renderWithProviders(<PaymentRowActions payment={buildPayment({ status: 'held' })} />, {
+      session,
+    });
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: 'Dismiss' }));
+    await user.click(within(screen.getByRole('dialog')).getByRole('button', { name: 'Cancel' }));
+    expect(requests).toHaveLength(0);
+
+    await user.click(screen.getByRole('button', { name: 'Credit' }));
+    const dialog = screen.getByRole('dialog', { name: /Credit €180.00 to Invented Member/ });
+    await user.type(within(dialog).getByLabelText('Why credit this payment'), 'Paid the old rate');
+    await user.click(within(dialog).getByRole('button', { name: 'Credit' }));
+    await waitFor(() => expect(screen.getByRole('status')).toHaveTextContent('Credited.'));
+    expect(requests[0]?.body).toEqual({ decision: 'credit', note: 'Paid the old rate' });
+  });
+});

@@ -1,0 +1,133 @@
+import { formatMoney, refundInputSchema, type PaymentDto, type RefundInput } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useEffect, useId, useRef } from 'react';
+import { useForm } from 'react-hook-form';
+import { z } from 'zod';
+import { Button } from '../../../components/ui/button';
+import { FormError } from '../../../components/ui/form-error';
+import { TextField } from '../../../components/ui/text-field';
+import { ApiError } from '../../../lib/api-client';
+import { errorMessage } from '../../../lib/form-errors';
+import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
+import { refundableMinor } from '../utils/refundable';
+
+function schemaFor(payment: PaymentDto, left: number) {
+  return z
+    .object({ amount: z.string(), reason: refundInputSchema.shape.reason })
+    .superRefine((v, ctx) => {
+      const minor = parseMoney(v.amount, payment.currency);
+      let message: string | null = null;
+      if (minor === null) message = moneyMessage('Amount', payment.currency);
+      else if (minor <= 0) message = 'The amount must be more than zero';
+      else if (minor > left)
+        message = `At most ${formatMoney(left, payment.currency)} is left to refund`;
+      if (message) ctx.addIssue({ code: 'custom', path: ['amount'], message });
+    });
+}
+type FormValues = { amount: string; reason: string };
+
+export interface RefundDialogProps {
+  payment: PaymentDto;
+  onSubmit: (input: RefundInput) => Promise<unknown>;
+  onClose: () => void;
+}
+
+/**
+ * Asks how much to refund (all that is left by default, or part of it) and why, on the native <dialog>: focus
+ * goes to the amount, Escape cancels, focus returns where it was. The dialog stays open with the server's
+ * message when the refund is refused.
+ */
+export function RefundDialog({ payment, onSubmit, onClose }: RefundDialogProps) {
+  const dialogRef = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+  const left = refundableMinor(payment);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    setFocus,
+    formState: { errors, isSubmitting },
+  } = useForm<FormValues>({
+    resolver: zodResolver(schemaFor(payment, left)),
+    defaultValues: { amount: minorToInput(left, payment.currency), reason: '' },
+  });
+
+  useEffect(() => {
+    const dialog = dialogRef.current;
+    if (!dialog) return;
+    const returnFocusTo =
+      document.activeElement instanceof HTMLElement ? document.activeElement : null;
+    // jsdom lacks showModal; the open attribute still shows the dialog there.
+    if (typeof dialog.showModal === 'function') dialog.showModal();
+    else dialog.setAttribute('open', '');
+    setFocus('amount', { shouldSelect: true });
+    return () => {
+      if (typeof dialog.close === 'function' && dialog.open) dialog.close();
+      else dialog.removeAttribute('open');
+      returnFocusTo?.focus();
+    };
+  }, [setFocus]);
+
+  const submit = handleSubmit(async ({ amount, reason }) => {
+    try {
+      await onSubmit({ amountMinor: parseMoney(amount, payment.currency) ?? 0, reason });
+      onClose();
+    } catch (error) {
+      const fields = error instanceof ApiError ? error.fields : {};
+      if (fields.amountMinor) setError('amount', { type: 'server', message: fields.amountMinor });
+      if (fields.reason) setError('reason', { type: 'server', message: fields.reason });
+      if (!fields.amountMinor && !fields.reason)
+        setError('root.server', { type: 'server', message: errorMessage(error) });
+    }
+  });
+
+  return (
+    <dialog
+      ref={dialogRef}
+      aria-labelledby={titleId}
+      onCancel={(event) => {
+        event.preventDefault();
+        onClose();
+      }}
+      className="m-auto w-[min(30rem,calc(100vw-2rem))] rounded-lg border border-sand-300 bg-sand-50 p-0 text-ink-900 shadow-card backdrop:bg-ink-950/50"
+    >
+      <form noValidate onSubmit={(e) => void submit(e)} className="flex flex-col gap-4 p-5">
+        <h2 id={titleId} className="text-xl">
+          Refund {payment.memberName}
+        </h2>
+        <p className="text-sm">
+          Paid {formatMoney(payment.amountMinor, payment.currency)}
+          {payment.method === 'card' ? ' by card' : ''}; {formatMoney(left, payment.currency)} can
+          still be refunded.{' '}
+          {payment.method === 'card'
+            ? 'The card is refunded through the payment provider; the entry updates when the provider confirms.'
+            : 'Record this once you have handed the money back; it counts at once.'}
+        </p>
+        <FormError message={errors.root?.server?.message} />
+        <TextField
+          label={`Amount to refund (${payment.currency})`}
+          inputMode="decimal"
+          required
+          hint="All that is left, or less for a part refund."
+          error={errors.amount?.message}
+          {...register('amount')}
+        />
+        <TextField
+          label="Reason"
+          required
+          hint="Kept in the ledger and the audit log."
+          error={errors.reason?.message}
+          {...register('reason')}
+        />
+        <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
+          <Button variant="secondary" onClick={onClose} disabled={isSubmitting}>
+            Cancel
+          </Button>
+          <Button type="submit" variant="danger" isPending={isSubmitting} pendingLabel="Refunding…">
+            Refund
+          </Button>
+        </div>
+      </form>
+    </dialog>
+  );
+}
