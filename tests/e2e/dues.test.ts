@@ -1,6 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
+import { audit, baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -81,6 +81,84 @@ describe('dues in Chromium', () => {
     await page.getByRole('button', { name: 'Preview reminders' }).click();
     await expect.poll(() => page.getByText(/Will receive/).count(), { timeout: 10000 }).toBe(1);
     await screenshot(page, 'treasury-roster');
+    await page.close();
+  });
+  it('the treasurer adds a plan that a member who has not paid yet can join, and previews the calendar', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
+    await signIn(page, TREASURER);
+    await page.goto(`${baseUrl()}/treasury`);
+    await page.getByRole('link', { name: 'Plans and fiscal calendar' }).click();
+    await page.waitForURL(/\/treasury\/plans/);
+    const plans = page.getByRole('list', { name: 'Plans' });
+    await expect.poll(() => plans.getByRole('listitem').count(), { timeout: 15000 }).toBe(3);
+
+    await page.getByRole('button', { name: 'Add a plan' }).click();
+    const form = page.getByRole('form', { name: 'New plan' });
+    await form.getByLabel(/^Plan name/).fill('Harbour crew');
+    await form.getByLabel(/^Code/).fill('harbour-crew');
+    await form.getByLabel('Who it is for').selectOption('associate');
+    await form.getByLabel(/^Annual amount/).fill('-60');
+    await form.getByLabel('By remaining days').check();
+    await form.getByRole('button', { name: 'Create plan' }).click();
+    await expect.poll(() => form.getByText(/no minus sign/).count(), { timeout: 5000 }).toBe(1);
+    await form.getByLabel(/^Annual amount/).fill('60.00');
+    await form.getByRole('button', { name: 'Create plan' }).click();
+    await expect
+      .poll(() => page.getByRole('status').filter({ hasText: 'Plan created' }).count(), {
+        timeout: 10000,
+      })
+      .toBe(1);
+    const card = plans.getByRole('listitem', { name: /Harbour crew/ });
+    await expect.poll(() => card.innerText()).toMatch(/€60\.00[\s\S]*By remaining days/);
+
+    // A proposed start on 15 July is previewed, not saved.
+    const calendar = page.getByRole('form', { name: 'Dues calendar' });
+    await calendar.getByLabel('Fiscal year starts in').selectOption('7');
+    await calendar.getByLabel(/^on day/).fill('15');
+    await expect
+      .poll(() => page.getByTestId('fy-start').innerText(), { timeout: 10000 })
+      .toMatch(/^\d{4}-07-15$/);
+    await expect(page.getByRole('heading', { name: /not saved yet/ }).count()).resolves.toBe(1);
+    expect(await page.getByRole('row', { name: /Harbour crew/ }).count()).toBe(1);
+    await screenshot(page, 'treasury-plans');
+    await audit(page, 'treasury plans');
+    await page.setViewportSize({ width: 390, height: 900 });
+    const overflow = await page.evaluate(
+      () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
+    );
+    expect(overflow).toBeLessThanOrEqual(0);
+    await screenshot(page, 'treasury-plans-phone');
+    await audit(page, 'treasury plans on a phone');
+
+    const member = await browser.newPage({ viewport: { width: 390, height: 900 } });
+    await signIn(member, 'bram@larkspit.example'); // joined 45 days ago, never paid
+    await member.goto(`${baseUrl()}/dues`);
+    const offer = member.getByRole('region', { name: 'Harbour crew dues' });
+    await expect.poll(() => offer.count(), { timeout: 15000 }).toBe(1);
+    await expect
+      .poll(() => offer.getByRole('button', { name: /Join as Harbour crew · €/ }).count())
+      .toBe(1);
+    await member.close();
+    await page.close();
+  });
+
+  it('a seeded card payment the provider has no record of is not refunded, and the dialog says why', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
+    await signIn(page, TREASURER);
+    await page.goto(`${baseUrl()}/treasury`);
+    const refund = page.getByRole('button', { name: /^Refund Idris.*€180\.00$/ });
+    await expect.poll(() => refund.count(), { timeout: 15000 }).toBe(1);
+    await refund.click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel(/^Amount to refund/).fill('20');
+    await dialog.getByLabel(/^Reason/).fill('Part refund for a missed month');
+    await dialog.getByRole('button', { name: 'Refund' }).click();
+    await expect
+      .poll(() => dialog.getByRole('alert').innerText(), { timeout: 10000 })
+      .toMatch(/no record of this card payment/);
+    await screenshot(page, 'treasury-refund-refused');
+    await page.keyboard.press('Escape');
+    await expect.poll(() => page.getByRole('dialog').count()).toBe(0);
     await page.close();
   });
 });

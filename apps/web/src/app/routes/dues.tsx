@@ -23,6 +23,8 @@ function DuesScreen() {
     });
   };
   const d = dues.data;
+  // A member who has never paid may still pick another plan; the checkout takes the chosen one.
+  const otherOffers = d?.offers.filter((o) => o.planId !== d.quote?.planId) ?? [];
   return (
     <Page
       title="Dues"
@@ -84,6 +86,20 @@ function DuesScreen() {
                 onPay={() => pay()}
                 isPending={checkout.isPending && payingPlan === null}
               />
+            )}
+            {d.quote && d.membership && !d.membership.paidThrough && otherOffers.length > 0 && (
+              <div className="flex flex-col gap-3">
+                <p className="font-bold">Not paid yet, so you can still join on another plan:</p>
+                {otherOffers.map((o) => (
+                  <QuoteCard
+                    key={o.planId}
+                    quote={o}
+                    payLabel={`Join as ${o.planName}`}
+                    onPay={() => pay(o.planId)}
+                    isPending={checkout.isPending && payingPlan === o.planId}
+                  />
+                ))}
+              </div>
             )}
             {!d.quote && d.offers.length === 0 && (
               <Alert tone="success" title="Nothing to pay">
