@@ -4,7 +4,9 @@ import { Page } from '../../components/ui/page';
 import { Spinner } from '../../components/ui/spinner';
 import { paths } from '../../config/paths';
 import { RequireAuth } from '../../features/auth/components/require-auth';
+import { useListingReports } from '../../features/moderation/api/get-listing-reports';
 import { useModerationQueue } from '../../features/moderation/api/get-queue';
+import { ListingReports } from '../../features/moderation/components/listing-reports';
 import { ModerationQueue } from '../../features/moderation/components/moderation-queue';
 import { errorMessage } from '../../lib/form-errors';
 
@@ -17,10 +19,26 @@ function QueueScreen() {
         <p>{errorMessage(queue.error)}</p>
       </Alert>
     );
-  return <ModerationQueue queue={queue.data} postHref={paths.post.href} />;
+  return (
+    <ModerationQueue queue={queue.data} postHref={paths.post.href}>
+      <ListingReportsSection />
+    </ModerationQueue>
+  );
 }
 
-/** Moderators approve, reject or send back posts and comments, and resolve reports. */
+function ListingReportsSection() {
+  const reports = useListingReports();
+  if (reports.isPending) return <Spinner label="Loading listing reports…" />;
+  if (reports.isError)
+    return (
+      <Alert tone="error">
+        <p>{errorMessage(reports.error)}</p>
+      </Alert>
+    );
+  return <ListingReports reports={reports.data} listingHref={(id) => paths.listing.href(id)} />;
+}
+
+/** Moderators approve, reject or send back posts and comments, and resolve reports on posts and listings. */
 export function ModerationRoute() {
   return (
     <RequireAuth roles={['moderator']}>

@@ -2,6 +2,7 @@ import type { CommentDto, PostDetailDto } from '@app/shared';
 import { useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
+import { usePromptDialog } from '../../../components/ui/prompt-dialog';
 import { errorMessage } from '../../../lib/form-errors';
 import { useAcceptAnswer, useAddComment, useReport } from '../api/post-actions';
 
@@ -70,15 +71,36 @@ function ReportButton({
   targetId: number;
 }) {
   const report = useReport();
+  const { ask, dialog } = usePromptDialog();
   if (report.isSuccess) return <span className="text-xs text-ink-600">Reported</span>;
-  const handleClick = () => {
-    const reason = window.prompt('What is wrong with it? A moderator will read this.');
-    if (reason && reason.trim().length >= 3) report.mutate({ targetType, targetId, reason });
+  const handleClick = async () => {
+    const reason = await ask({
+      title: `Report this ${targetType}?`,
+      label: 'What is wrong with it?',
+      hint: 'A moderator reads this.',
+      minLength: 3,
+      maxLength: 1000,
+      confirmLabel: 'Send report',
+    });
+    if (reason !== null) report.mutate({ targetType, targetId, reason });
   };
   return (
-    <Button variant="ghost" size="sm" onClick={handleClick} isPending={report.isPending}>
-      Report
-    </Button>
+    <>
+      <Button
+        variant="ghost"
+        size="sm"
+        onClick={() => void handleClick()}
+        isPending={report.isPending}
+      >
+        Report
+      </Button>
+      {report.isError && (
+        <span role="alert" className="text-xs font-bold text-flare-700">
+          {errorMessage(report.error)}
+        </span>
+      )}
+      {dialog}
+    </>
   );
 }
 

@@ -2,8 +2,10 @@ import Image from '@tiptap/extension-image';
 import { EditorContent, useEditor, type Editor, type JSONContent } from '@tiptap/react';
 import StarterKit from '@tiptap/starter-kit';
 import { useRef, useState, type ReactNode } from 'react';
+import { usePromptDialog } from '../../../components/ui/prompt-dialog';
 import { cn } from '../../../lib/cn';
 import { uploadImage } from '../api/save-post';
+import { linkProblem } from './link-address';
 import { POST_BODY_CLASSES } from './post-body-classes';
 
 /** The editor's extensions; the server allows exactly these nodes and marks. */
@@ -44,14 +46,21 @@ function Tool({
   );
 }
 
-function Toolbar({ editor, onImage }: { editor: Editor; onImage: () => void }) {
+function Toolbar({
+  editor,
+  onImage,
+  askLink,
+}: {
+  editor: Editor;
+  onImage: () => void;
+  askLink: (previous: string | undefined) => Promise<string | null>;
+}) {
   const chain = () => editor.chain().focus();
-  const handleLink = () => {
-    const previous = editor.getAttributes('link').href as string | undefined;
-    const href = window.prompt('Link address (https://…)', previous ?? 'https://');
+  const handleLink = async () => {
+    const href = await askLink(editor.getAttributes('link').href as string | undefined);
     if (href === null) return;
-    if (href.trim() === '') chain().unsetLink().run();
-    else chain().extendMarkRange('link').setLink({ href: href.trim() }).run();
+    if (href === '') chain().extendMarkRange('link').unsetLink().run();
+    else chain().extendMarkRange('link').setLink({ href }).run();
   };
   return (
     <div
@@ -115,7 +124,7 @@ function Toolbar({ editor, onImage }: { editor: Editor; onImage: () => void }) {
       >
         {'</>'}
       </Tool>
-      <Tool label="Link" active={editor.isActive('link')} onClick={handleLink}>
+      <Tool label="Link" active={editor.isActive('link')} onClick={() => void handleLink()}>
         Link
       </Tool>
       <Tool label="Insert image" onClick={onImage}>
@@ -135,6 +144,19 @@ export interface RichTextEditorProps {
 export function RichTextEditor({ initial, onChange, labelId }: RichTextEditorProps) {
   const fileRef = useRef<HTMLInputElement>(null);
   const [imageError, setImageError] = useState<string | null>(null);
+  const { ask, dialog } = usePromptDialog();
+  const askLink = (previous: string | undefined) =>
+    ask({
+      title: previous ? 'Change the link' : 'Add a link',
+      label: 'Link address',
+      hint: 'https://… or mailto:… Leave it empty to remove the link.',
+      initial: previous ?? 'https://',
+      minLength: 0,
+      maxLength: 2000,
+      singleLine: true,
+      confirmLabel: 'Save link',
+      validate: linkProblem,
+    });
   const editor = useEditor({
     extensions: EXTENSIONS,
     content: initial ?? '',
@@ -166,7 +188,7 @@ export function RichTextEditor({ initial, onChange, labelId }: RichTextEditorPro
   if (!editor) return null;
   return (
     <div className="rounded-md border border-sand-500 bg-white">
-      <Toolbar editor={editor} onImage={() => fileRef.current?.click()} />
+      <Toolbar editor={editor} onImage={() => fileRef.current?.click()} askLink={askLink} />
       <EditorContent editor={editor} />
       <input
         ref={fileRef}
@@ -181,6 +203,7 @@ export function RichTextEditor({ initial, onChange, labelId }: RichTextEditorPro
           {imageError}
         </p>
       )}
+      {dialog}
     </div>
   );
 }

@@ -1,4 +1,10 @@
-import type { DecisionInput, PostFlagsInput, ResolveReportInput } from '@app/shared';
+import type {
+  DecisionInput,
+  DismissListingReportInput,
+  HideListingInput,
+  PostFlagsInput,
+  ResolveReportInput,
+} from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 
@@ -6,16 +12,20 @@ export type ModerationAction =
   | { kind: 'post'; id: number; body: DecisionInput }
   | { kind: 'comment'; id: number; body: { action: 'approve' | 'reject'; reason?: string } }
   | { kind: 'report'; id: number; body: ResolveReportInput }
-  | { kind: 'flags'; id: number; body: PostFlagsInput };
+  | { kind: 'flags'; id: number; body: PostFlagsInput }
+  | { kind: 'listing-hide'; id: number; body: HideListingInput }
+  | { kind: 'listing-report-dismiss'; id: number; body: DismissListingReportInput };
 
 const URL_OF: Record<ModerationAction['kind'], (id: number) => string> = {
   post: (id) => `/moderation/posts/${id}/decision`,
   comment: (id) => `/moderation/comments/${id}/decision`,
   report: (id) => `/moderation/reports/${id}/resolve`,
   flags: (id) => `/moderation/posts/${id}/flags`,
+  'listing-hide': (id) => `/listings/${id}/hide`,
+  'listing-report-dismiss': (id) => `/listings/reports/${id}/dismiss`,
 };
 
-/** One moderator action (decision, report resolution or flags); refreshes the queue, count and log. */
+/** One moderator action (decision, report resolution, flags, listing hide or dismiss); refreshes the queue, count and log. */
 export function useModerate() {
   const queryClient = useQueryClient();
   return useMutation({

@@ -1,38 +1,66 @@
 import type { ModerationQueueDto } from '@app/shared';
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/form-errors';
 import { useModerate } from '../api/decide';
-import { askReason } from './reason-dialog';
+import { useReasonDialog } from './reason-dialog';
 
 export interface ModerationQueueProps {
   queue: ModerationQueueDto;
   postHref: (postId: number) => string;
+  /** Rendered after the post and comment reports (the exchange's listing reports). */
+  children?: ReactNode;
 }
 
 /** The moderators' queue: pending posts, pending comments and open reports, each with its decisions. */
-export function ModerationQueue({ queue, postHref }: ModerationQueueProps) {
+export function ModerationQueue({ queue, postHref, children }: ModerationQueueProps) {
   const moderate = useModerate();
-  const decidePost = (id: number, action: 'approve' | 'reject' | 'request-changes') => {
+  const { askReason, askNote, dialog } = useReasonDialog();
+  const decidePost = async (
+    p: { id: number; title: string },
+    action: 'approve' | 'reject' | 'request-changes',
+  ) => {
     const reason =
       action === 'approve'
         ? ''
-        : askReason(
+        : await askReason(
             action === 'reject'
-              ? 'Why is it not approved? The author reads this.'
-              : 'What should the author change?',
+              ? {
+                  title: `Reject “${p.title}”?`,
+                  hint: 'Why is it not approved? The author reads this and keeps their text.',
+                  confirmLabel: 'Reject post',
+                  isDestructive: true,
+                }
+              : {
+                  title: `Ask for changes to “${p.title}”?`,
+                  hint: 'What should the author change? They read this.',
+                  confirmLabel: 'Send back',
+                },
           );
-    if (reason !== null) moderate.mutate({ kind: 'post', id, body: { action, reason } });
+    if (reason !== null) moderate.mutate({ kind: 'post', id: p.id, body: { action, reason } });
   };
-  const decideComment = (id: number, action: 'approve' | 'reject') => {
+  const decideComment = async (id: number, action: 'approve' | 'reject') => {
     const reason =
-      action === 'approve' ? '' : askReason('Why is it not approved? The author reads this.');
+      action === 'approve'
+        ? ''
+        : await askReason({
+            title: 'Reject this comment?',
+            hint: 'Why is it not approved? The author reads this.',
+            confirmLabel: 'Reject comment',
+            isDestructive: true,
+          });
     if (reason !== null) moderate.mutate({ kind: 'comment', id, body: { action, reason } });
   };
-  const resolve = (id: number, outcome: 'dismiss' | 'hide-target') => {
-    const note = window.prompt('A note for the log (optional)') ?? '';
-    moderate.mutate({ kind: 'report', id, body: { outcome, note } });
+  const resolve = async (id: number, outcome: 'dismiss' | 'hide-target', what: string) => {
+    const note = await askNote({
+      title: outcome === 'dismiss' ? 'Dismiss this report?' : `Hide the reported ${what}?`,
+      hint: 'Only moderators read the note, in the log.',
+      confirmLabel: outcome === 'dismiss' ? 'Dismiss report' : `Hide ${what}`,
+      isDestructive: outcome === 'hide-target',
+    });
+    if (note !== null) moderate.mutate({ kind: 'report', id, body: { outcome, note } });
   };
   return (
     <div className="flex flex-col gap-6">
@@ -62,7 +90,7 @@ export function ModerationQueue({ queue, postHref }: ModerationQueueProps) {
               <div className="flex flex-wrap gap-2">
                 <Button
                   size="sm"
-                  onClick={() => decidePost(p.id, 'approve')}
+                  onClick={() => void decidePost(p, 'approve')}
                   aria-label={`Approve “${p.title}”`}
                 >
                   Approve
@@ -70,11 +98,11 @@ export function ModerationQueue({ queue, postHref }: ModerationQueueProps) {
                 <Button
                   size="sm"
                   variant="secondary"
-                  onClick={() => decidePost(p.id, 'request-changes')}
+                  onClick={() => void decidePost(p, 'request-changes')}
                 >
                   Request changes
                 </Button>
-                <Button size="sm" variant="danger" onClick={() => decidePost(p.id, 'reject')}>
+                <Button size="sm" variant="danger" onClick={() => void decidePost(p, 'reject')}>
                   Reject
                 </Button>
               </div>
@@ -101,10 +129,14 @@ export function ModerationQueue({ queue, postHref }: ModerationQueueProps) {
               </p>
               <p className="whitespace-pre-line">{c.body}</p>
               <div className="flex gap-2">
-                <Button size="sm" onClick={() => decideComment(c.id, 'approve')}>
+                <Button size="sm" onClick={() => void decideComment(c.id, 'approve')}>
                   Approve
                 </Button>
-                <Button size="sm" variant="danger" onClick={() => decideComment(c.id, 'reject')}>
+                <Button
+                  size="sm"
+                  variant="danger"
+                  onClick={() => void decideComment(c.id, 'reject')}
+                >
                   Reject
                 </Button>
               </div>
@@ -142,10 +174,18 @@ export function ModerationQueue({ queue, postHref }: ModerationQueueProps) {
                 <strong>Reason:</strong> {r.reason}
               </p>
               <div className="flex gap-2">
-                <Button size="sm" variant="danger" onClick={() => resolve(r.id, 'hide-target')}>
+                <Button
+                  size="sm"
+                  variant="danger"
+                  onClick={() => void resolve(r.id, 'hide-target', r.targetType)}
+                >
                   Hide the {r.targetType}
                 </Button>
-                <Button size="sm" variant="secondary" onClick={() => resolve(r.id, 'dismiss')}>
+                <Button
+                  size="sm"
+                  variant="secondary"
+                  onClick={() => void resolve(r.id, 'dismiss', r.targetType)}
+                >
                   Dismiss
                 </Button>
               </div>
@@ -153,6 +193,8 @@ export function ModerationQueue({ queue, postHref }: ModerationQueueProps) {
           ))}
         </ul>
       </section>
+      {children}
+      {dialog}
     </div>
   );
 }
