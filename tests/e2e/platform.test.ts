@@ -2,7 +2,7 @@ import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '@app/shared';
 import { navFor } from '../../apps/web/src/config/nav';
-import { baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
+import { audit, baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -42,6 +42,7 @@ describe('role-aware navigation in Chromium', () => {
         expect(shown[i]?.startsWith(label), `${who}: "${shown[i]}" vs "${label}"`).toBe(true),
       );
       if (!roles.includes('admin')) expect(shown).not.toContain('Admin');
+      await audit(page, `home as ${who}`);
       await page.close();
     },
   );
@@ -52,6 +53,7 @@ describe('role-aware navigation in Chromium', () => {
     await page.goto(`${baseUrl()}/admin/users`);
     const box = page.getByRole('checkbox', { name: /^Moderator role for Bram Cleatson$/i });
     await expect.poll(() => box.count(), { timeout: 10000 }).toBe(1);
+    await audit(page, 'admin users');
     await box.click();
     await expect.poll(() => box.isChecked(), { timeout: 10000 }).toBe(true);
     await expect
@@ -66,6 +68,7 @@ describe('role-aware navigation in Chromium', () => {
     await box.click();
     const dialog = page.getByRole('dialog');
     await expect.poll(() => dialog.isVisible(), { timeout: 10000 }).toBe(true);
+    await audit(page, 'revoke confirmation dialog');
     await dialog.getByRole('button', { name: /revoke|remove/i }).click();
     await expect.poll(() => box.isChecked(), { timeout: 10000 }).toBe(false);
     await page.close();
@@ -89,6 +92,7 @@ describe('home page', () => {
         .poll(() => page.getByText('Larkspit Sound Cruising Club').count())
         .toBeGreaterThan(0);
       await screenshot(page, name);
+      await audit(page, name);
       await page.close();
     }
   });
@@ -99,6 +103,8 @@ describe('joining the club', () => {
     const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
     const email = `newcomer-${Date.now()}@larkspit.example`;
     await page.goto(`${baseUrl()}/join`);
+    await page.getByLabel(/^Your name/).waitFor();
+    await audit(page, 'join form');
     await page.getByLabel(/^Your name/).fill('Ada Newcomer');
     await page.getByLabel(/^E-mail/).fill(email);
     await page.getByLabel(/^Password/).fill('a-long-enough-secret');
@@ -106,6 +112,7 @@ describe('joining the club', () => {
     await expect
       .poll(() => page.getByText('Check your inbox').count(), { timeout: 10000 })
       .toBeGreaterThan(0);
+    await audit(page, 'join: check your inbox');
 
     const mail = await waitForMail(email, 'Confirm your e-mail');
     const link = /https?:\/\/\S+verify-email\?token=\S+/.exec(mail.text)?.[0];
@@ -114,9 +121,11 @@ describe('joining the club', () => {
     await expect
       .poll(() => page.getByText(/confirmed|verified/i).count(), { timeout: 10000 })
       .toBeGreaterThan(0);
+    await audit(page, 'e-mail confirmed');
 
     await signIn(page, email, 'a-long-enough-secret');
     await page.getByRole('button', { name: 'Menu' }).click();
+    await audit(page, 'phone menu open');
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('button', { name: 'Menu' }).click();
     await expect

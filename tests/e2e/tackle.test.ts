@@ -1,6 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn } from './browser';
+import { audit, baseUrl, launch, screenshot, signIn } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -31,6 +31,7 @@ describe('ground-tackle calculators for a visitor', () => {
         .toBe(1);
       const before = await chainPath(page);
       expect(before).toMatch(/^M/);
+      await audit(page, name);
       const load = page.getByLabel('Horizontal load');
       await load.fill('9 kN');
       await expect.poll(() => chainPath(page), { timeout: 5000 }).not.toBe(before);
@@ -43,6 +44,7 @@ describe('ground-tackle calculators for a visitor', () => {
       await expect
         .poll(() => page.getByText(/depthM must be at least 0/).count())
         .toBeGreaterThan(0);
+      await audit(page, `${name} with a field error`);
       await depth.fill('20 ft');
 
       // The design load calculator answers too.
@@ -67,6 +69,8 @@ describe('a member sizes, checks, saves and prints a plan', () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
     await signIn(page, 'maren@larkspit.example');
     await page.goto(`${baseUrl()}/boats`);
+    await page.getByLabel(/^Boat name/).waitFor();
+    await audit(page, 'my boats');
     const boatName = `Tern Wake ${Date.now()}`;
     await page.getByLabel(/^Boat name/).fill(boatName);
     await page.getByLabel('Hull').selectOption('sail');
@@ -90,6 +94,7 @@ describe('a member sizes, checks, saves and prints a plan', () => {
     }
     expect(await page.getByText(/qualified rigger or marine surveyor/).count()).toBeGreaterThan(0);
     await screenshot(page, 'boat-recommendation');
+    await audit(page, 'boat recommendation');
 
     await storm.getByRole('button', { name: 'Save as plan' }).click();
     await page.waitForURL(/\/plans\/\d+$/, { timeout: 15000 });
@@ -108,6 +113,7 @@ describe('a member sizes, checks, saves and prints a plan', () => {
       .toBe(1);
     expect(await table.locator('tr[aria-current="true"]').count()).toBe(1);
     expect(await table.getByText('Weakest link', { exact: true }).count()).toBe(1);
+    await audit(page, 'plan with a fitting');
     expect(await page.getByTestId('catenary-drawing').count()).toBe(1);
 
     // Print: the button calls window.print, and print media shows only the card.
