@@ -12,9 +12,11 @@ afterAll(async () => {
 });
 
 // Demo data: Idris is paid up (may list); Maren's boat "Marram" (9.1 m sloop) has a 5/16 in G43 gypsy, but
-// her dues are behind, so under the demo club's paid-up policy she may browse and not write; Oona is paid up.
+// she may browse whatever her dues (the dues e2e may have paid them by now); Bram has never paid, so under the
+// demo club's paid-up policy he may browse and not write; Oona is paid up.
 const SELLER = 'idris@larkspit.example';
 const BROWSER = 'maren@larkspit.example';
+const UNPAID = 'bram@larkspit.example';
 const BUYER = 'moderator@larkspit.example';
 const BUYER_NAME = 'Oona Brightwater';
 const TITLE = 'Grade 43 chain 5/16 inch, 40 m, spare from a refit';
@@ -64,7 +66,7 @@ describe('gear exchange in Chromium', () => {
     await page.close();
   });
 
-  it('a member finds it with a misspelt query and filters “fits my boat”; unpaid, she is asked to pay before writing', async () => {
+  it('a member finds it with a misspelt query and filters “fits my boat”; a member who has never paid is asked to pay before writing', async () => {
     const page = await newPage();
     await signIn(page, BROWSER);
     await page.goto(`${baseUrl()}/exchange`);
@@ -87,12 +89,19 @@ describe('gear exchange in Chromium', () => {
     await expect.poll(() => page.getByText('Fits your boat').count()).toBe(1);
     await screenshot(page, 'exchange-listing');
     await audit(page, 'listing page');
-    await page.getByLabel('Your message').fill('Is this still for sale?');
-    await page.getByRole('button', { name: 'Send message' }).click();
+    await page.close();
+
+    // Bram has never paid (the dues e2e only looks at his page), so the gate holds whatever order the files run in.
+    const unpaid = await newPage();
+    await signIn(unpaid, UNPAID);
+    await unpaid.goto(listingUrl);
+    await unpaid.getByRole('heading', { name: TITLE }).waitFor({ timeout: 15000 });
+    await unpaid.getByLabel('Your message').fill('Is this still for sale?');
+    await unpaid.getByRole('button', { name: 'Send message' }).click();
     await expect
       .poll(
         () =>
-          page
+          unpaid
             .getByRole('alert')
             .filter({ hasText: /paid-up membership/ })
             .count(),
@@ -101,9 +110,9 @@ describe('gear exchange in Chromium', () => {
         },
       )
       .toBe(1);
-    expect(page.url()).not.toMatch(/\/messages\//);
-    await screenshot(page, 'exchange-paid-up-needed');
-    await page.close();
+    expect(unpaid.url()).not.toMatch(/\/messages\//);
+    await screenshot(unpaid, 'exchange-paid-up-needed');
+    await unpaid.close();
   });
 
   it('a paid-up member writes to the seller from the listing page', async () => {
