@@ -1,7 +1,7 @@
 import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
+import { audit, baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -63,8 +63,14 @@ describe('shared knowledge in Chromium', () => {
     await page.keyboard.press('Enter');
     await page.keyboard.type('More in the notes');
     for (let i = 0; i < 'notes'.length; i++) await page.keyboard.press('Shift+ArrowLeft');
-    page.once('dialog', (d) => void d.accept(LINK));
     await tool('Link').click();
+    const linkDialog = page.getByRole('dialog', { name: 'Add a link' });
+    await linkDialog.getByLabel('Link address').fill('javascript:alert(1)');
+    await linkDialog.getByRole('button', { name: 'Save link' }).click();
+    await linkDialog.getByText(/web address/).waitFor();
+    await linkDialog.getByLabel('Link address').fill(LINK);
+    await linkDialog.getByRole('button', { name: 'Save link' }).click();
+    await linkDialog.waitFor({ state: 'hidden' });
     await expect.poll(() => body.locator(`a[href="${LINK}"]`).count()).toBe(1);
     await page.keyboard.press('End');
     await page.keyboard.press('Enter');
@@ -84,6 +90,7 @@ describe('shared knowledge in Chromium', () => {
     await page.getByLabel('Snubber length (m)').fill('6');
     await page.getByLabel('Anchor shackle size (in)').fill('0.375');
 
+    await audit(page, 'post editor with setup block');
     await page.getByRole('button', { name: 'Send to the moderators' }).click();
     await page.waitForURL(/\/knowledge\/\d+$/, { timeout: 15000 });
     postUrl = page.url();
@@ -106,6 +113,8 @@ describe('shared knowledge in Chromium', () => {
     const before = Number((await item.getAttribute('aria-label'))?.match(/\d+/)?.[0]);
     expect(before).toBeGreaterThan(0);
     await item.click();
+    await page.getByRole('button', { name: `Approve “${TITLE}”` }).waitFor({ timeout: 15000 });
+    await audit(page, 'moderation queue');
     await page.getByRole('button', { name: `Approve “${TITLE}”` }).click();
     await expect
       .poll(() => page.getByRole('button', { name: `Approve “${TITLE}”` }).count(), {
@@ -148,12 +157,96 @@ describe('shared knowledge in Chromium', () => {
     await expect.poll(() => card.getByText('Weakest link', { exact: true }).count()).toBe(1);
     await expect.poll(() => card.getByText('Design load', { exact: true }).count()).toBe(1);
     await expect.poll(() => card.getByText(/manufacturer|maker/i).count()).toBeGreaterThan(0);
+    await audit(page, 'published post with setup card');
     await screenshot(page, 'knowledge-post-1280');
     await page.setViewportSize({ width: 390, height: 900 });
     await expect
       .poll(() => page.evaluate(() => document.documentElement.scrollWidth))
       .toBeLessThanOrEqual(390);
     await screenshot(page, 'knowledge-post-390');
+    await page.close();
+  });
+
+  let reportedTitle = '';
+
+  it('a member reports a listing from the exchange', async () => {
+    const page = await newPage(390);
+    await signIn(page, AUTHOR);
+    await page.goto(`${baseUrl()}/exchange`);
+    const links = page.locator('main a[href^="/exchange/listings/"]');
+    await links.first().waitFor({ timeout: 15000 });
+    const hrefs = await links.evaluateAll((els) => els.map((a) => a.getAttribute('href') ?? ''));
+    for (const href of [...new Set(hrefs)].slice(0, 8)) {
+      await page.goto(`${baseUrl()}${href}`);
+      await page.getByRole('heading', { level: 1 }).waitFor({ timeout: 15000 });
+      if ((await page.getByText('Report this listing').count()) === 0) continue;
+      reportedTitle = (await page.getByRole('heading', { level: 1 }).innerText()).trim();
+      await page.getByText('Report this listing').click();
+      await page.getByLabel('What is wrong?').fill('The photos show a different anchor type');
+      await page.getByRole('button', { name: 'Send report' }).click();
+      await page.getByText(/the moderators will look at it/).waitFor({ timeout: 15000 });
+      break;
+    }
+    expect(reportedTitle).not.toBe('');
+    await page.close();
+  });
+
+  it('a moderator hides the reported listing from the queue, and the log says why', async () => {
+    const page = await newPage(390);
+    await signIn(page, MODERATOR);
+    await page.goto(`${baseUrl()}/moderation`);
+    const section = page.getByRole('region', { name: /^Listings reported/ });
+    await section.getByText('The photos show a different anchor type').waitFor({ timeout: 15000 });
+    await expect.poll(() => section.getByText(/Maren Tiller reported a listing/).count()).toBe(1);
+    await section.getByRole('button', { name: `Hide listing “${reportedTitle}”` }).click();
+    const dialog = page.getByRole('dialog', { name: `Hide “${reportedTitle}”?` });
+    await dialog.getByLabel('Reason').fill('Misdescribed: the photos are of another anchor');
+    await audit(page, 'hide listing dialog');
+    await dialog.getByRole('button', { name: 'Hide listing' }).click();
+    await expect
+      .poll(
+        () => section.getByRole('button', { name: `Hide listing “${reportedTitle}”` }).count(),
+        {
+          timeout: 15000,
+        },
+      )
+      .toBe(0);
+    await page.goto(`${baseUrl()}/moderation/log`);
+    await page
+      .getByText('Misdescribed: the photos are of another anchor')
+      .waitFor({ timeout: 15000 });
+    await page.close();
+  });
+
+  it('an admin adds a topic on the topics screen and it is offered in the editor', async () => {
+    const page = await newPage(390);
+    await signIn(page, 'admin@larkspit.example');
+    await page.goto(`${baseUrl()}/admin/users`);
+    await page
+      .getByRole('navigation', { name: 'Admin sections' })
+      .getByRole('link', { name: 'Topics' })
+      .click();
+    const add = page.getByRole('region', { name: 'Add a topic' });
+    await add.getByLabel(/Topic name/).fill('Kedging and warping');
+    await add.getByRole('button', { name: 'Add topic' }).click();
+    await page.getByText('Added “Kedging and warping”.').waitFor({ timeout: 15000 });
+    await audit(page, 'admin topics');
+    await page.getByRole('button', { name: 'Move “Kedging and warping” up' }).click();
+    await expect
+      .poll(() => page.getByRole('button', { name: 'Move “Kedging and warping” up' }).isEnabled(), {
+        timeout: 15000,
+      })
+      .toBe(true);
+    await page.goto(`${baseUrl()}/knowledge/new`);
+    await expect
+      .poll(
+        () =>
+          page.getByLabel('Topic').locator('option', { hasText: 'Kedging and warping' }).count(),
+        {
+          timeout: 15000,
+        },
+      )
+      .toBe(1);
     await page.close();
   });
 });

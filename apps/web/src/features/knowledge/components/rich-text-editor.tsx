@@ -2,6 +2,7 @@ import Image from '@tiptap/extension-image';
 import { EditorContent, useEditor, type Editor, type JSONContent } from '@tiptap/react';
 import StarterKit from '@tiptap/starter-kit';
 import { useRef, useState, type ReactNode } from 'react';
+import { createPortal } from 'react-dom';
 import { usePromptDialog } from '../../../components/ui/prompt-dialog';
 import { cn } from '../../../lib/cn';
 import { uploadImage } from '../api/save-post';
@@ -203,7 +204,8 @@ export function RichTextEditor({ initial, onChange, labelId }: RichTextEditorPro
           {imageError}
         </p>
       )}
-      {dialog}
+      {/* The editor sits inside the post form; a nested <form> would submit the post, so portal out. */}
+      {createPortal(dialog, document.body)}
     </div>
   );
 }
