@@ -65,6 +65,9 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
 
   const handleSubmit = (event: FormEvent) => {
     event.preventDefault();
+    // React bubbles events through portals along the component tree: without this, a dialog opened from
+    // inside another form (the post editor) would also submit that form.
+    event.stopPropagation();
     const answer = value.trim();
     if (answer.length < minLength) {
       setError(
