@@ -27,7 +27,11 @@ export function ListingDetail({ listing }: { listing: ListingDto }) {
             height={photo.height}
           />
         ) : (
-          <div className="aspect-[4/3] w-full rounded-lg bg-sand-200" aria-label="No photos" />
+          <div
+            className="aspect-[4/3] w-full rounded-lg bg-sand-200"
+            role="img"
+            aria-label="No photos"
+          />
         )}
         {listing.photos.length > 1 && (
           <div className="flex flex-wrap gap-2">
