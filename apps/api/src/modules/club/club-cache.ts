@@ -1,4 +1,5 @@
 import { LRUCache } from 'lru-cache';
+import { clearOnWrites } from '../../lib/clear-on-writes';
 import type { ClubDto } from '@app/shared';
 import { ClubSetting, Harbor } from '../../models';
 import { getSetting, listHarbors } from './club.service';
@@ -26,26 +27,7 @@ export async function cachedClub(): Promise<ClubDto> {
 
 export const clearClubCache = () => cache.clear();
 
-const HOOKS = [
-  'afterCreate',
-  'afterUpdate',
-  'afterSave',
-  'afterDestroy',
-  'afterUpsert',
-  'afterBulkCreate',
-  'afterBulkUpdate',
-  'afterBulkDestroy',
-] as const;
-interface HookTarget {
-  removeHook(hook: string, name: string): unknown;
-  addHook(hook: string, name: string, fn: () => void): unknown;
-}
-
-/** Clears the cache on any write to club settings or harbours (named hooks: building the app again replaces them). */
+/** Clears the cache on any write to club settings or harbours. */
 export function clearClubCacheOnWrites() {
-  for (const model of [ClubSetting, Harbor] as unknown as HookTarget[])
-    for (const hook of HOOKS) {
-      model.removeHook(hook, 'club-cache');
-      model.addHook(hook, 'club-cache', clearClubCache);
-    }
+  clearOnWrites([ClubSetting, Harbor], 'club-cache', clearClubCache);
 }

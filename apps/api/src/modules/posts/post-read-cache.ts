@@ -1,4 +1,5 @@
 import { LRUCache } from 'lru-cache';
+import { clearOnWrites } from '../../lib/clear-on-writes';
 import type { PostDetailDto } from '@app/shared';
 import { Boat, Comment, Post, Topic, User, Vote } from '../../models';
 import { loadVisiblePost } from './post-access';
@@ -24,28 +25,11 @@ export async function anonymousPostDetail(postId: number): Promise<PostDetailDto
 
 export const clearAnonymousPostCache = () => cache.clear();
 
-const HOOKS = [
-  'afterCreate',
-  'afterUpdate',
-  'afterSave',
-  'afterDestroy',
-  'afterUpsert',
-  'afterBulkCreate',
-  'afterBulkUpdate',
-  'afterBulkDestroy',
-] as const;
-/** The two hook methods every model has; the union of model classes is too wide for TypeScript to call them. */
-interface HookTarget {
-  removeHook(hook: string, name: string): unknown;
-  addHook(hook: string, name: string, fn: () => void): unknown;
-}
-
 /** Clears the cache on any write to what a post page shows (posts, comments, votes, topics, authors, boats). */
 export function clearAnonymousPostCacheOnWrites() {
-  for (const model of [Post, Comment, Vote, Topic, User, Boat] as unknown as HookTarget[])
-    for (const hook of HOOKS) {
-      // Named, so building the app again (tests do) replaces the hook instead of stacking copies.
-      model.removeHook(hook, 'anonymous-post-cache');
-      model.addHook(hook, 'anonymous-post-cache', clearAnonymousPostCache);
-    }
+  clearOnWrites(
+    [Post, Comment, Vote, Topic, User, Boat],
+    'anonymous-post-cache',
+    clearAnonymousPostCache,
+  );
 }
