@@ -22,7 +22,13 @@ async function loadClub(): Promise<ClubDto> {
 
 /** The club as GET /api/club answers it. */
 export async function cachedClub(): Promise<ClubDto> {
-  return (await cache.fetch('club')) ?? loadClub();
+  try {
+    return (await cache.fetch('club')) ?? (await loadClub());
+  } catch {
+    // A write cleared the cache during the load, which aborts it (so no copy from before the write is kept);
+    // a database error simply happens again here and reaches the error handler.
+    return loadClub();
+  }
 }
 
 export const clearClubCache = () => cache.clear();

@@ -2,7 +2,7 @@ import { afterAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { Comment, Post } from '../../models';
 import { resetPostIndex } from '../search/post-index';
 import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
-import { clearAnonymousPostCache } from './post-read-cache';
+import { anonymousPostDetail, clearAnonymousPostCache } from './post-read-cache';
 import { docOf, seedTopics } from './testing/knowledge-fixtures';
 
 const built = createTestApp();
@@ -38,6 +38,13 @@ async function approvedPost() {
 }
 
 describe('GET /api/posts/:postId for visitors (read cache)', () => {
+  it('answers a read whose cache load a write cleared, with the page as it is now', async () => {
+    const { id } = await approvedPost();
+    const reading = anonymousPostDetail(id); // the load is under way
+    clearAnonymousPostCache(); // a write lands meanwhile and aborts it
+    await expect(reading).resolves.toMatchObject({ id, title: 'Chain marks that last' });
+  });
+
   it('builds the page once for repeated visitor reads', async () => {
     const { id } = await approvedPost();
     const visitor = await client(built.app);

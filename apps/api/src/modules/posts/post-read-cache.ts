@@ -1,6 +1,7 @@
 import { LRUCache } from 'lru-cache';
 import { clearOnWrites } from '../../lib/clear-on-writes';
 import type { PostDetailDto } from '@app/shared';
+import { AppError } from '../../errors/app-error';
 import { Boat, Comment, Post, Topic, User, Vote } from '../../models';
 import { loadVisiblePost } from './post-access';
 import { toPostDetailDto } from './post-detail';
@@ -18,9 +19,15 @@ const cache = new LRUCache<number, PostDetailDto>({
 
 /** The post page as a visitor sees it (throws NOT_FOUND like loadVisiblePost). */
 export async function anonymousPostDetail(postId: number): Promise<PostDetailDto> {
-  const dto = await cache.fetch(postId);
-  if (!dto) return toPostDetailDto(await loadVisiblePost(null, postId), null);
-  return dto;
+  const build = async () => toPostDetailDto(await loadVisiblePost(null, postId), null);
+  try {
+    return (await cache.fetch(postId)) ?? (await build());
+  } catch (err) {
+    if (err instanceof AppError) throw err;
+    // A write cleared the cache while this copy was being built, which aborts the load (so a copy read before
+    // the write is never kept): read it again, fresh, without caching.
+    return build();
+  }
 }
 
 export const clearAnonymousPostCache = () => cache.clear();
