@@ -10,6 +10,7 @@ import { createLogger } from '../logger';
 import { initModels, User, UserRole } from '../models';
 import { createTransport, drainOutbox } from '../modules/mail/outbox.service';
 import { clearClubCache } from '../modules/club/club-cache';
+import { clearAnonymousListingCache } from '../modules/listings/listing-read-cache';
 import { clearAnonymousPostCache } from '../modules/posts/post-read-cache';
 
 let shared: { sequelize: Sequelize; env: Env } | undefined;
@@ -59,6 +60,7 @@ export async function resetDb() {
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 1');
   // TRUNCATE runs no model hooks, so in-process read caches are emptied here (ids start again at 1).
   clearAnonymousPostCache();
+  clearAnonymousListingCache();
   clearClubCache();
 }
 

@@ -18,6 +18,7 @@ import { getOwnBoat } from '../boats/boats.service';
 import { imageUpload } from '../uploads/uploads.router';
 import { DEFAULT_FIT_WIND_KN, boatNeeds, fitOf } from './fit';
 import { ensureListingIndex } from './listing-index';
+import { anonymousListingDetail, clearAnonymousListingCacheOnWrites } from './listing-read-cache';
 import * as moderation from './listing-moderation.service';
 import * as photos from './listing-photos.service';
 import { ratingOf } from './listing-specs';
@@ -44,9 +45,10 @@ const idOf = (req: Request) => Number(listingParams.parse(req.params).listingId)
 /** `/api/listings`: the gear exchange (search, listing life-cycle, photos, reports, moderation). */
 export function listingsRouter(ctx: listings.ExchangeContext) {
   const r = Router();
+  clearAnonymousListingCacheOnWrites();
   const show = async (req: Request, id: number) => {
     const viewer = viewerOf(req);
-    const listing = await listings.getVisibleListing(viewer, id);
+    const { listing, seller } = await listings.getVisibleListingPage(viewer, id);
     const { fitsBoat, windKn } = fitQuery.parse(req.query);
     const fit =
       fitsBoat && viewer
@@ -55,7 +57,7 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
             boatNeeds(await getOwnBoat(viewer, fitsBoat), windKn ?? DEFAULT_FIT_WIND_KN),
           )
         : undefined;
-    return toListingDto(listing, await listings.sellerOf(listing.sellerId), {
+    return toListingDto(listing, seller, {
       isMine: viewer?.id === listing.sellerId,
       fit,
     });
@@ -107,7 +109,16 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
     res.status(201).json({ data: await show(req, listing.id) });
   });
   r.get('/:listingId', async (req, res) => {
-    res.json({ data: await show(req, idOf(req)) });
+    const id = idOf(req);
+    if (req.user) {
+      res.json({ data: await show(req, id) });
+      return;
+    }
+    // Visitors share one copy per listing. fitsBoat needs a signed-in owner, so it never applies to them, but the
+    // query is still checked (400 for a bad windKn) as for everyone else.
+    const data = await anonymousListingDetail(id);
+    fitQuery.parse(req.query);
+    res.json({ data });
   });
   r.put('/:listingId', requireAuth(), async (req, res) => {
     const id = idOf(req);

@@ -1,8 +1,17 @@
 import { Op } from 'sequelize';
 import { LISTING_LIFETIME_DAYS, type SellerDto } from '@app/shared';
 import { AppError, invalid, notFound } from '../../errors/app-error';
-import { Harbor, Listing, ListingPhoto, ListingThread, Membership, User } from '../../models';
+import {
+  Harbor,
+  Listing,
+  ListingPhoto,
+  ListingThread,
+  Membership,
+  MembershipPlan,
+  User,
+} from '../../models';
 import { getSetting } from '../club/club.service';
+import { paidUpOn, toIsoDate } from '../dues/calendar';
 import { isPaidUp } from '../dues/paid-up';
 import { actionEmail } from '../mail/templates';
 import { enqueueEmail } from '../mail/outbox.service';
@@ -30,6 +39,57 @@ export const loadListing = (id: number) =>
     ],
   });
 
+/** The seller with their membership and its plan: everything the seller card needs, in the same joined query. */
+const sellerInclude = {
+  model: User,
+  as: 'seller',
+  include: [
+    { model: Membership, as: 'membership', include: [{ model: MembershipPlan, as: 'plan' }] },
+  ],
+};
+
+/** Seller card from a user loaded with `membership.plan` (see sellerInclude). */
+function sellerDtoOf(user: User, at: Date): SellerDto {
+  // Loaded through the User.hasOne(Membership, { as: 'membership' }) association.
+  const membership = (user as User & { membership?: Membership | null }).membership ?? null;
+  return {
+    id: user.id,
+    displayName: user.displayName,
+    memberSince: membership?.joinedOn ?? user.createdAt.toISOString().slice(0, 10),
+    paidUp: membership
+      ? paidUpOn(membership.paidThrough, membership.plan?.graceDays ?? 0, toIsoDate(at))
+      : false,
+  };
+}
+
+/**
+ * A listing page as `viewer` may see it (visibility as getVisibleListing) with its seller card, read in one
+ * joined query: listing, harbour, photos, seller, the seller's membership and its plan.
+ */
+export async function getVisibleListingPage(
+  viewer: User | null,
+  id: number,
+  at = new Date(),
+): Promise<{ listing: Listing; seller: SellerDto }> {
+  const listing = await Listing.findByPk(id, {
+    include: [
+      { model: Harbor, as: 'harbor' },
+      { model: ListingPhoto, as: 'photos' },
+      sellerInclude,
+    ],
+  });
+  if (!listing) throw notFound('Listing');
+  assertVisible(viewer, listing);
+  if (!listing.seller) throw notFound('Seller');
+  return { listing, seller: sellerDtoOf(listing.seller, at) };
+}
+
+function assertVisible(viewer: User | null, listing: Listing) {
+  const mine = viewer?.id === listing.sellerId;
+  const isPublic = ['active', 'sold'].includes(listing.status) && listing.hiddenAt === null;
+  if (!isPublic && !mine && !isModerator(viewer)) throw notFound('Listing');
+}
+
 /** The actor's own listing; anyone else's is reported as not found. */
 export async function getOwnListing(actor: User, id: number): Promise<Listing> {
   const listing = await loadListing(id);
@@ -44,23 +104,15 @@ export async function getOwnListing(actor: User, id: number): Promise<Listing> {
 export async function getVisibleListing(viewer: User | null, id: number): Promise<Listing> {
   const listing = await loadListing(id);
   if (!listing) throw notFound('Listing');
-  const mine = viewer?.id === listing.sellerId;
-  const isPublic = ['active', 'sold'].includes(listing.status) && listing.hiddenAt === null;
-  if (!isPublic && !mine && !isModerator(viewer)) throw notFound('Listing');
+  assertVisible(viewer, listing);
   return listing;
 }
 
 /** Seller card: display name, member since (membership join date, else sign-up) and the paid-up badge. */
 export async function sellerOf(sellerId: number, at = new Date()): Promise<SellerDto> {
-  const user = await User.findByPk(sellerId);
+  const user = await User.findByPk(sellerId, { include: sellerInclude.include });
   if (!user) throw notFound('Seller');
-  const membership = await Membership.findOne({ where: { userId: sellerId } });
-  return {
-    id: user.id,
-    displayName: user.displayName,
-    memberSince: membership?.joinedOn ?? user.createdAt.toISOString().slice(0, 10),
-    paidUp: await isPaidUp(sellerId, at),
-  };
+  return sellerDtoOf(user, at);
 }
 
 const PAID_UP_NEEDED = {

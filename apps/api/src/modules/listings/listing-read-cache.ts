@@ -1,0 +1,64 @@
+import { LRUCache } from 'lru-cache';
+import type { Transaction } from 'sequelize';
+import type { ListingDto } from '@app/shared';
+import { AppError } from '../../errors/app-error';
+import { clearOnWrites } from '../../lib/clear-on-writes';
+import { Harbor, Listing, ListingPhoto, Membership, MembershipPlan, User } from '../../models';
+import { toListingDto } from './listings.presenter';
+import { getVisibleListingPage } from './listings.service';
+
+/** How long a visitor's copy of a listing page may be reused. Writes in this process clear it at once. */
+export const ANONYMOUS_LISTING_TTL_MS = 5000;
+
+/** The page as a visitor sees it, read now (throws NOT_FOUND for a listing a visitor may not see). */
+async function buildVisitorCopy(listingId: number): Promise<ListingDto> {
+  const { listing, seller } = await getVisibleListingPage(null, listingId);
+  return toListingDto(listing, seller, { isMine: false });
+}
+
+// Visitors (no session user) all see the same listing page, so it is built once per few seconds rather than on
+// every read; concurrent misses for one listing share a single load. Errors (not found) are never cached, so
+// only listings everyone may see (active or sold, not hidden) are ever held here.
+const cache = new LRUCache<number, ListingDto>({
+  max: 5000,
+  ttl: ANONYMOUS_LISTING_TTL_MS,
+  fetchMethod: (listingId) => buildVisitorCopy(listingId),
+});
+
+/** The listing page as a visitor sees it (throws NOT_FOUND like getVisibleListing). */
+export async function anonymousListingDetail(listingId: number): Promise<ListingDto> {
+  try {
+    return (await cache.fetch(listingId)) ?? (await buildVisitorCopy(listingId));
+  } catch (err) {
+    if (err instanceof AppError) throw err;
+    // A write cleared the cache while this copy was being built, which aborts the load (so a copy read before
+    // the write is never kept): read it again, fresh, without caching. A database error simply happens again
+    // here and reaches the error handler.
+    return buildVisitorCopy(listingId);
+  }
+}
+
+export const clearAnonymousListingCache = () => cache.clear();
+
+/**
+ * The write hook: clears now and, when the write is part of a transaction, once more after it commits. A hook
+ * runs before the commit, so a visitor read in between still sees the old row (a listing just hidden, expired
+ * or withdrawn) and would keep it for the TTL. Sequelize passes the write's options as the hook's last argument.
+ */
+function clearNowAndAfterCommit(...hookArgs: unknown[]) {
+  clearAnonymousListingCache();
+  const options = hookArgs.at(-1) as { transaction?: Transaction | null } | undefined;
+  options?.transaction?.afterCommit(() => clearAnonymousListingCache());
+}
+
+/**
+ * Clears the cache on any write to what a listing page shows: listings, photos, harbours, sellers, and what
+ * decides the paid-up badge (memberships and their plans' grace days).
+ */
+export function clearAnonymousListingCacheOnWrites() {
+  clearOnWrites(
+    [Listing, ListingPhoto, Harbor, User, Membership, MembershipPlan],
+    'anonymous-listing-cache',
+    clearNowAndAfterCommit,
+  );
+}
