@@ -1,5 +1,4 @@
 import { LRUCache } from 'lru-cache';
-import type { Transaction } from 'sequelize';
 import type { ListingDto } from '@app/shared';
 import { AppError } from '../../errors/app-error';
 import { clearOnWrites } from '../../lib/clear-on-writes';
@@ -41,17 +40,6 @@ export async function anonymousListingDetail(listingId: number): Promise<Listing
 export const clearAnonymousListingCache = () => cache.clear();
 
 /**
- * The write hook: clears now and, when the write is part of a transaction, once more after it commits. A hook
- * runs before the commit, so a visitor read in between still sees the old row (a listing just hidden, expired
- * or withdrawn) and would keep it for the TTL. Sequelize passes the write's options as the hook's last argument.
- */
-function clearNowAndAfterCommit(...hookArgs: unknown[]) {
-  clearAnonymousListingCache();
-  const options = hookArgs.at(-1) as { transaction?: Transaction | null } | undefined;
-  options?.transaction?.afterCommit(() => clearAnonymousListingCache());
-}
-
-/**
  * Clears the cache on any write to what a listing page shows: listings, photos, harbours, sellers, and what
  * decides the paid-up badge (memberships and their plans' grace days).
  */
@@ -59,6 +47,6 @@ export function clearAnonymousListingCacheOnWrites() {
   clearOnWrites(
     [Listing, ListingPhoto, Harbor, User, Membership, MembershipPlan],
     'anonymous-listing-cache',
-    clearNowAndAfterCommit,
+    clearAnonymousListingCache,
   );
 }

@@ -45,6 +45,27 @@ describe('GET /api/posts/:postId for visitors (read cache)', () => {
     await expect(reading).resolves.toMatchObject({ id, title: 'Chain marks that last' });
   });
 
+  it('does not keep a copy read while a write was still uncommitted (the hook clears again after the commit)', async () => {
+    const { id } = await approvedPost();
+    const visitor = await client(built.app);
+    const t = await built.sequelize.transaction();
+    try {
+      await Post.update(
+        { title: 'Renamed inside a transaction' },
+        { where: { id }, transaction: t },
+      );
+      // The hooks have run, but until the commit every other connection still reads the old title.
+      expect((await visitor.get(`/api/posts/${id}`)).body.data.title).toBe('Chain marks that last');
+      await t.commit();
+    } catch (err) {
+      await t.rollback();
+      throw err;
+    }
+    expect((await visitor.get(`/api/posts/${id}`)).body.data.title).toBe(
+      'Renamed inside a transaction',
+    );
+  });
+
   it('builds the page once for repeated visitor reads', async () => {
     const { id } = await approvedPost();
     const visitor = await client(built.app);
