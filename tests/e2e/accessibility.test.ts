@@ -79,6 +79,8 @@ beforeAll(async () => {
     verifyEmail: `${paths.verifyEmail.href()}?token=not-a-real-token`,
     resetPassword: paths.resetPassword.href(),
     account: paths.account.href(),
+    notifications: paths.notifications.href(),
+    stopDigest: paths.stopDigest.href('1.not-a-real-stop-token'),
     adminUsers: paths.adminUsers.href(),
     adminTopics: paths.adminTopics.href(),
     knowledge: paths.knowledge.href(),

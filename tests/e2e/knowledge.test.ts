@@ -29,7 +29,10 @@ async function newPage(width = 1280): Promise<Page> {
 /** Signs out through the navigation's own button. */
 async function signOut(page: Page) {
   await page.getByRole('button', { name: 'Sign out' }).click();
-  await page.getByRole('link', { name: 'Sign in' }).waitFor({ timeout: 15000 });
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: 'Sign in' })
+    .waitFor({ timeout: 15000 });
 }
 
 describe('shared knowledge in Chromium', () => {

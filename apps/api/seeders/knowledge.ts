@@ -1,6 +1,16 @@
 import type { PostSetup, PostStatus } from '@app/shared';
 import { STARTING_TOPICS } from '../migrations/20261201-0003-knowledge';
-import { AuditEvent, Boat, Comment, Post, Report, Topic, Vote } from '../src/models';
+import {
+  AuditEvent,
+  Boat,
+  Comment,
+  Notification,
+  Post,
+  Report,
+  Topic,
+  User,
+  Vote,
+} from '../src/models';
 import { renderBody } from '../src/modules/posts/body-render';
 import type { SeedContext } from './index';
 
@@ -410,4 +420,34 @@ export async function seedKnowledge(ctx: SeedContext) {
       await Vote.create({ postId: post.id, userId: userId(v) }, { transaction });
     await post.update({ helpfulCount: voters.length }, { transaction });
   }
+  // In-app notices for what happened above (the services write these as it happens); Maren gets the daily
+  // digest, so the first digest run after start mails her the two she has not read.
+  const title = (key: string) => posts.get(key)?.title ?? '';
+  const link = (key: string) => `/knowledge/${posts.get(key)?.id ?? 0}`;
+  for (const [who, kind, message, key, daysAgo, read] of [
+    [
+      'maren',
+      'accepted',
+      `Your answer on “${title('q-anchor')}” was accepted`,
+      'q-anchor',
+      3,
+      true,
+    ],
+    ['maren', 'reply', `New reply to your comment on “${title('q-anchor')}”`, 'q-anchor', 2, false],
+    ['maren', 'reply', `New comment on “${title('snubber')}”`, 'snubber', 1, false],
+    ['bram', 'reply', `New answer on “${title('q-anchor')}”`, 'q-anchor', 4, true],
+    ['bram', 'reply', `New comment on “${title('gale')}”`, 'gale', 1, false],
+  ] as const)
+    await Notification.create(
+      {
+        userId: userId(who),
+        kind,
+        message,
+        link: link(key),
+        readAt: read ? at(daysAgo - 1) : null,
+        createdAt: at(daysAgo),
+      },
+      { transaction },
+    );
+  await User.update({ digestOptIn: true }, { where: { id: userId('maren') }, transaction });
 }

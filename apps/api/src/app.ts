@@ -38,6 +38,7 @@ import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './module
 import { startListingSweeper } from './modules/listings/listing-expiry';
 import { ensureListingIndex } from './modules/listings/listing-index';
 import { startListingIndexSync } from './modules/listings/listing-index-sync';
+import { startDigestJob } from './modules/posts/notification-digest';
 import { listingsRouter } from './modules/listings/listings.router';
 import { savedSearchesRouter } from './modules/saved-searches/saved-searches.router';
 import { threadsRouter } from './modules/threads/threads.router';
@@ -179,7 +180,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   const newCsrfToken = (req: express.Request) => generateToken(req, true);
   mount(app, '/api/health', healthRouter(sequelize));
   mount(app, '/api/auth', authRouter({ ...authDeps, env, passport, newCsrfToken }));
-  mount(app, '/api/account', accountRouter(authDeps));
+  const digest = { publicUrl: env.PUBLIC_URL, secret: env.SESSION_SECRET };
+  mount(app, '/api/account', accountRouter(authDeps, digest));
   mount(app, '/api/admin', adminRouter(sequelize));
   mount(app, '/api/club', clubRouter());
   mount(app, '/api/boats', boatsRouter());
@@ -203,6 +205,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
     env.NODE_ENV === 'test' ? () => undefined : startListingSweeper(exchange, logger);
   // Listings written by other API processes on the same database reach this index within a poll or two.
   const stopListingSync = env.NODE_ENV === 'test' ? () => undefined : startListingIndexSync(logger);
+  // Daily e-mail of unread notices for members who opted in (tests call sendNotificationDigests directly).
+  const stopDigests = env.NODE_ENV === 'test' ? () => undefined : startDigestJob(digest, logger);
 
   app.use('/api', notFoundHandler);
   app.use('/uploads', ...uploadsStatic(uploadDir));
@@ -226,6 +230,7 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
     close: () => {
       stopListingSweeper();
       stopListingSync();
+      stopDigests();
       (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.();
     },
   };

@@ -38,6 +38,8 @@ const MATRIX: Record<string, Row> = {
   'POST /api/auth/password-reset/confirm': PUBLIC,
   'PATCH /api/account': SIGNED_IN,
   'POST /api/account/password': SIGNED_IN,
+  // The stop link in a digest e-mail: its signed token names the member, so no sign-in is needed.
+  'POST /api/account/digest/stop': PUBLIC,
   'GET /api/admin/users': ADMIN,
   'PUT /api/admin/users/:userId/roles': ADMIN,
   'GET /api/club': PUBLIC,
@@ -77,7 +79,9 @@ const MATRIX: Record<string, Row> = {
   'POST /api/moderation/reports/:reportId/resolve': MODERATOR,
   'GET /api/moderation/log': MODERATOR,
   'GET /api/notifications': SIGNED_IN,
+  'GET /api/notifications/unread': SIGNED_IN,
   'POST /api/notifications/read': SIGNED_IN,
+  'POST /api/notifications/:notificationId/read': SIGNED_IN,
   'POST /api/uploads/images': SIGNED_IN,
   'GET /api/listings': PUBLIC,
   'GET /api/listings/mine': SIGNED_IN,

@@ -53,9 +53,20 @@ export const updateAccountSchema = z
   .object({
     displayName: signupSchema.shape.displayName.optional(),
     unitSystem: z.enum(UNIT_SYSTEMS).optional(),
+    /** Opt in to (true) or out of (false) the daily e-mail of unread notices. */
+    notificationDigest: z.boolean({ error: 'Choose on or off' }).optional(),
   })
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 export type UpdateAccountInput = z.infer<typeof updateAccountSchema>;
+
+/** POST /api/account/digest/stop: the signed token from a digest e-mail's stop link (no sign-in needed). */
+export const stopDigestSchema = z.object({
+  token: z
+    .string({ error: 'The link is missing its token' })
+    .min(10, 'This link is not complete: copy the whole link from the e-mail')
+    .max(200, 'This link is not valid'),
+});
+export type StopDigestInput = z.infer<typeof stopDigestSchema>;
 
 export const changePasswordSchema = z.object({
   currentPassword: z
@@ -85,6 +96,8 @@ export interface UserDto {
   emailVerified: boolean;
   unitSystem: UnitSystem;
   memberSince: string; // ISO date
+  /** Whether the member gets the daily e-mail of unread notices. */
+  notificationDigest: boolean;
 }
 
 /** POST /api/auth/signup answers 201 with the address only: it never says whether the address already had an account. */

@@ -17,6 +17,11 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string;
   declare emailVerifiedAt: Date | null;
   declare unitSystem: CreationOptional<UnitSystem>;
+  /** Opted in to the daily e-mail of unread notices. */
+  declare digestOptIn: CreationOptional<boolean>;
+  /** The last notice id the digest job has considered for this member (mailed or already read). */
+  declare digestThroughId: CreationOptional<number | null>;
+  declare digestSentAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare roles?: NonAttribute<UserRole[]>;
@@ -38,6 +43,9 @@ export function initUser(sequelize: Sequelize) {
       passwordHash: { type: DataTypes.STRING(100), allowNull: false },
       emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
       unitSystem: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'imperial' },
+      digestOptIn: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+      digestThroughId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, defaultValue: null },
+      digestSentAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

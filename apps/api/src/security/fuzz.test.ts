@@ -27,6 +27,7 @@ const NO_BODY = new Set([
   'PUT /api/posts/:postId/vote',
   'DELETE /api/posts/:postId/vote',
   'POST /api/notifications/read',
+  'POST /api/notifications/:notificationId/read',
   'POST /api/uploads/images', // multipart; upload-tricks.test.ts
   'POST /api/listings/:listingId/photos', // multipart; upload-tricks.test.ts
   'POST /api/listings/:listingId/publish',
@@ -39,7 +40,7 @@ const NO_BODY = new Set([
 
 /** Real keys of routes whose fields are all optional (an empty object is valid there, so it names none). */
 const OPTIONAL_KEYS: Record<string, string[]> = {
-  'PATCH /api/account': ['displayName', 'unitSystem'],
+  'PATCH /api/account': ['displayName', 'unitSystem', 'notificationDigest'],
   'PATCH /api/boats/:boatId': ['name', 'hull', 'loaM'],
   'PUT /api/tackle-plans/:planId': ['name', 'windKn', 'depthM'],
   'POST /api/dues/checkout': ['planId'],

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Payment } from '../models';
+import { Notification, Payment } from '../models';
 import {
   chainListing,
   exchangeFixture,
@@ -78,6 +78,7 @@ interface Ids {
   photoId: number;
   threadId: number;
   savedSearchId: number;
+  notificationId: number;
   sessionId: string;
   paymentId: number;
 }
@@ -131,6 +132,15 @@ beforeAll(async () => {
   const savedSearchId = (
     await o.post('/api/saved-searches', { name: 'Chain', criteria: { category: 'chain' } })
   ).body.data.id as number;
+  const notificationId = (
+    await Notification.create({
+      userId: owner.user.id,
+      kind: 'reply',
+      message: 'New comment on “Draft about snubbers”',
+      link: '/knowledge/1',
+      readAt: null,
+    })
+  ).id;
   const sessionId = 'cs_test_idor_owner_0001';
   const payment = await Payment.create({
     userId: owner.user.id,
@@ -159,6 +169,7 @@ beforeAll(async () => {
     photoId,
     threadId: thread.body.data.id as number,
     savedSearchId,
+    notificationId,
     sessionId,
     paymentId: payment.id,
   };
@@ -201,6 +212,7 @@ const attacks = (): Attack[] => {
     ],
     ['read checkout / receipt', () => c.get(`/api/dues/checkout/${ids.sessionId}`)],
     ['delete saved search', () => c.delete(`/api/saved-searches/${ids.savedSearchId}`)],
+    ['mark notice read', () => c.post(`/api/notifications/${ids.notificationId}/read`)],
     ['edit listing', () => c.put(l, chainListing(harborId, { title: 'Now very cheap chain' }))],
     ['withdraw listing', () => c.post(`${l}/withdraw`)],
     ['mark listing sold', () => c.post(`${l}/sold`, {})],

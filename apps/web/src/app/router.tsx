@@ -31,6 +31,16 @@ export const SCREEN_ROUTES: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/account')).AccountRoute }),
   },
   {
+    path: paths.notifications.path,
+    lazy: async () => ({
+      Component: (await import('./routes/notifications')).NotificationsRoute,
+    }),
+  },
+  {
+    path: paths.stopDigest.path,
+    lazy: async () => ({ Component: (await import('./routes/stop-digest')).StopDigestRoute }),
+  },
+  {
     path: paths.adminUsers.path,
     lazy: async () => ({ Component: (await import('./routes/admin-users')).AdminUsersRoute }),
   },

@@ -25,7 +25,7 @@ export interface NavLinkItem extends NavItemBase {
 }
 
 /** The counts a navigation item can carry. */
-export type NavBadge = 'moderation-waiting' | 'messages-unread';
+export type NavBadge = 'moderation-waiting' | 'messages-unread' | 'notices-unread';
 
 /** A button that runs an action instead of following a link. */
 export interface NavActionItem extends NavItemBase {
@@ -128,6 +128,15 @@ export const NAV_ITEMS: readonly NavItem[] = [
     to: paths.signUp.href(),
     section: 'account',
     signedIn: false,
+  },
+  {
+    id: 'notices',
+    kind: 'link',
+    label: 'Notices',
+    to: paths.notifications.href(),
+    section: 'account',
+    signedIn: true,
+    badge: 'notices-unread',
   },
   {
     id: 'account',

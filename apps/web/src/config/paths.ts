@@ -9,6 +9,11 @@ export const paths = {
   verifyEmail: { path: '/verify-email', href: () => '/verify-email' },
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   account: { path: '/account', href: () => '/account' },
+  notifications: { path: '/notifications', href: () => '/notifications' },
+  stopDigest: {
+    path: '/notifications/stop-digest',
+    href: (token: string) => `/notifications/stop-digest?token=${encodeURIComponent(token)}`,
+  },
   adminUsers: { path: '/admin/users', href: () => '/admin/users' },
   adminTopics: { path: '/admin/topics', href: () => '/admin/topics' },
   knowledge: { path: '/knowledge', href: () => '/knowledge' },

@@ -13,6 +13,7 @@ export function buildUser(overrides: Partial<UserDto> = {}): UserDto {
     emailVerified: true,
     unitSystem: 'metric',
     memberSince: '2024-04-01T00:00:00.000Z',
+    notificationDigest: false,
     ...overrides,
   };
 }

@@ -1,16 +1,26 @@
 import { Router } from 'express';
-import { changePasswordSchema, updateAccountSchema } from '@app/shared';
+import { changePasswordSchema, stopDigestSchema, updateAccountSchema } from '@app/shared';
 import { currentUser, requireAuth } from '../../middleware/require-auth';
 import { changePassword, type AuthDeps } from '../auth/auth.service';
 import { toUserDto } from '../auth/user.presenter';
+import { stopDigestByToken, type DigestContext } from '../posts/notification-digest';
 
-export function accountRouter(deps: AuthDeps) {
+export function accountRouter(deps: AuthDeps, digest: DigestContext) {
   const r = Router();
+  // The stop link in a digest e-mail works without signing in: the token is signed for one member.
+  r.post('/digest/stop', async (req, res) => {
+    const { token } = stopDigestSchema.parse(req.body);
+    await stopDigestByToken(digest, token);
+    res.json({ data: { stopped: true } });
+  });
   r.use(requireAuth());
   r.patch('/', async (req, res) => {
-    const input = updateAccountSchema.parse(req.body);
+    const { notificationDigest, ...input } = updateAccountSchema.parse(req.body);
     const user = currentUser(req);
-    await user.update(input);
+    await user.update({
+      ...input,
+      ...(notificationDigest === undefined ? {} : { digestOptIn: notificationDigest }),
+    });
     res.json({ data: { user: toUserDto(user) } });
   });
   r.post('/password', async (req, res) => {

@@ -11,5 +11,6 @@ export function toUserDto(user: User): UserDto {
     emailVerified: user.emailVerifiedAt !== null,
     unitSystem: user.unitSystem,
     memberSince: user.createdAt.toISOString(),
+    notificationDigest: user.digestOptIn ?? false,
   };
 }

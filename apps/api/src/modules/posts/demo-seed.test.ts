@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seedDemo } from '../../../seeders/demo';
-import { Comment, Post, Report, Topic } from '../../models';
+import { Comment, Notification, OutboxEmail, Post, Report, Topic, User } from '../../models';
+import { sendNotificationDigests } from './notification-digest';
 import { client, createTestApp, resetDb } from '../../testing/test-app';
 import { resetPostIndex } from '../search/post-index';
 
@@ -40,5 +41,19 @@ describe('knowledge demo data', () => {
     }
     const hits = (await visitor.get('/api/search/posts?q=regalvanize')).body.data;
     expect(hits[0]?.post.title).toBe('When to regalvanise chain');
+  });
+
+  it('gives the demo member notices and a digest of the unread ones', async () => {
+    const maren = await User.findOne({ where: { email: 'maren@larkspit.example' } });
+    expect(maren?.digestOptIn).toBe(true);
+    const notices = await Notification.findAll({ where: { userId: maren?.id ?? 0 } });
+    expect(notices.filter((n) => n.readAt === null)).toHaveLength(2);
+    const ctx = { publicUrl: built.env.PUBLIC_URL, secret: built.env.SESSION_SECRET };
+    expect((await sendNotificationDigests(ctx)).sent).toBe(1);
+    const mail = await OutboxEmail.findOne({ where: { kind: 'notification-digest' } });
+    expect(mail?.toAddress).toBe('maren@larkspit.example');
+    expect(mail?.subject).toBe('Rodewise: 2 unread notices');
+    for (const n of notices.filter((x) => x.readAt === null))
+      expect(mail?.textBody).toContain(n.message);
   });
 });

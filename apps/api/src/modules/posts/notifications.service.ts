@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { notFound } from '../../errors/app-error';
 import { Notification, type User } from '../../models';
 
 /** Stores an in-app notice for one member (inside the caller's transaction when given). */
@@ -27,4 +28,16 @@ export async function listNotifications(user: User) {
 /** Marks every notice of the member read. */
 export async function markAllRead(user: User) {
   await Notification.update({ readAt: new Date() }, { where: { userId: user.id, readAt: null } });
+}
+
+/** How many notices the member has not read (the navigation badge). */
+export const countUnread = (user: User) =>
+  Notification.count({ where: { userId: user.id, readAt: null } });
+
+/** Marks one notice of the member read; anyone else's notice is not found. */
+export async function markOneRead(user: User, id: number) {
+  const notice = await Notification.findOne({ where: { id, userId: user.id } });
+  if (!notice) throw notFound('Notice');
+  if (!notice.readAt) await notice.update({ readAt: new Date() });
+  return notice;
 }

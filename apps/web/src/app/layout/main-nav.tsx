@@ -7,6 +7,7 @@ import { useCurrentUser } from '../../features/auth/api/get-session';
 import { useLogout } from '../../features/auth/api/logout';
 import { useUnread } from '../../features/messages/api/get-unread';
 import { useModerationCount } from '../../features/moderation/api/get-queue';
+import { useUnreadNotices } from '../../features/notifications/api/get-notices';
 
 const ITEM_CLASSES =
   'flex min-h-11 items-center rounded-md px-3 font-bold text-sand-100 no-underline hover:bg-ink-800 hover:text-white';
@@ -45,14 +46,19 @@ export function MainNav() {
   const unread = useUnread(
     items.some((item) => item.kind === 'link' && item.badge === 'messages-unread'),
   );
+  const notices = useUnreadNotices(
+    items.some((item) => item.kind === 'link' && item.badge === 'notices-unread'),
+  );
   const badgeCount = (badge: NavBadge | undefined) =>
     badge === 'moderation-waiting'
       ? (waiting.data?.total ?? 0)
       : badge === 'messages-unread'
         ? (unread.data?.unread ?? 0)
-        : 0;
+        : badge === 'notices-unread'
+          ? (notices.data?.unread ?? 0)
+          : 0;
   const badgeWord = (badge: NavBadge | undefined) =>
-    badge === 'messages-unread' ? 'unread' : 'waiting';
+    badge === 'moderation-waiting' ? 'waiting' : 'unread';
 
   const renderItem = (item: NavItem) => {
     if (item.kind === 'link') {

@@ -4,6 +4,7 @@ import { useCurrentUser } from '../../features/auth/api/get-session';
 import { AccountProfileForm } from '../../features/auth/components/account-profile-form';
 import { ChangePasswordForm } from '../../features/auth/components/change-password-form';
 import { RequireAuth } from '../../features/auth/components/require-auth';
+import { DigestSetting } from '../../features/auth/components/digest-setting';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'long' });
 
@@ -24,6 +25,12 @@ function AccountScreen({ user }: { user: UserDto }) {
           Profile
         </h2>
         <AccountProfileForm key={user.id} user={user} />
+      </section>
+      <section aria-labelledby="digest-heading" className="flex flex-col gap-3">
+        <h2 id="digest-heading" className="text-xl">
+          E-mail digest
+        </h2>
+        <DigestSetting user={user} />
       </section>
       <section aria-labelledby="password-heading" className="flex flex-col gap-3">
         <h2 id="password-heading" className="text-xl">

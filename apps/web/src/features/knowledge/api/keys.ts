@@ -9,5 +9,4 @@ export const knowledgeKeys = {
   search: (q: string, topic?: string) => [...knowledgeKeys.all, 'search', { q, topic }] as const,
   detail: (postId: number) => [...knowledgeKeys.all, 'detail', postId] as const,
   boats: () => [...knowledgeKeys.all, 'my-boats'] as const,
-  notifications: () => [...knowledgeKeys.all, 'notifications'] as const,
 };
