@@ -55,9 +55,12 @@ function BoatScreen({ boatId }: { boatId: number }) {
   if (boat.isPending) return <Spinner label="Loading the boat…" />;
   if (boat.isError) {
     return (
-      <Alert tone="error" title="Couldn't load this boat">
-        <p>{errorMessage(boat.error)}</p>
-      </Alert>
+      <Page title="Boat not available">
+        <Alert tone="error" title="Couldn't load this boat">
+          <p>{errorMessage(boat.error)}</p>
+        </Alert>
+        <Link to={paths.boats.href()}>Back to your boats</Link>
+      </Page>
     );
   }
   const handleSavePlan = (draft: PlanDraft) => {
@@ -130,9 +133,12 @@ function BoatFromParams() {
   const id = Number(boatId);
   if (!Number.isInteger(id) || id <= 0) {
     return (
-      <Alert tone="error" title="No such boat">
-        Check the link and try again.
-      </Alert>
+      <Page title="Boat not available">
+        <Alert tone="error" title="No such boat">
+          Check the link and try again.
+        </Alert>
+        <Link to={paths.boats.href()}>Back to your boats</Link>
+      </Page>
     );
   }
   return <BoatScreen boatId={id} />;

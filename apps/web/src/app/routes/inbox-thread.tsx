@@ -12,7 +12,13 @@ import { ThreadView } from '../../features/messages/components/thread-view';
 function ThreadScreen({ id }: { id: number }) {
   const thread = useThread(id);
   if (thread.isPending) return <Spinner label="Loading the conversation…" />;
-  if (thread.isError) return <Alert tone="error">{errorMessage(thread.error)}</Alert>;
+  if (thread.isError)
+    return (
+      <Page title="Conversation not available">
+        <Alert tone="error">{errorMessage(thread.error)}</Alert>
+        <Link to={paths.messages.href()}>Back to your messages</Link>
+      </Page>
+    );
   const t = thread.data;
   return (
     <Page

@@ -32,9 +32,12 @@ function PlanScreen({ planId }: { planId: number }) {
   if (query.isPending) return <Spinner label="Loading the plan…" />;
   if (query.isError) {
     return (
-      <Alert tone="error" title="Couldn't load this plan">
-        <p>{errorMessage(query.error)}</p>
-      </Alert>
+      <Page title="Plan not available">
+        <Alert tone="error" title="Couldn't load this plan">
+          <p>{errorMessage(query.error)}</p>
+        </Alert>
+        <Link to={paths.boats.href()}>Back to your boats</Link>
+      </Page>
     );
   }
   const { plan, boat, result } = query.data;
@@ -103,9 +106,12 @@ function PlanFromParams() {
   const id = Number(planId);
   if (!Number.isInteger(id) || id <= 0) {
     return (
-      <Alert tone="error" title="No such plan">
-        Check the link and try again.
-      </Alert>
+      <Page title="Plan not available">
+        <Alert tone="error" title="No such plan">
+          Check the link and try again.
+        </Alert>
+        <Link to={paths.boats.href()}>Back to your boats</Link>
+      </Page>
     );
   }
   return <PlanScreen planId={id} />;
