@@ -9,7 +9,11 @@ export function AppLayout() {
     <div className="flex min-h-dvh flex-col">
       <SkipLink />
       <SiteHeader />
-      <main id="main" tabIndex={-1} className="flex-1 px-4 py-8 focus:outline-none sm:py-10">
+      <main
+        id="main"
+        tabIndex={-1}
+        className="min-h-dvh flex-1 px-4 py-8 focus:outline-none sm:py-10"
+      >
         <Outlet />
       </main>
       <SiteFooter />
