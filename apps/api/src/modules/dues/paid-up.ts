@@ -10,6 +10,11 @@ export async function isPaidUp(userId: number, at: Date = new Date()): Promise<b
     where: { userId },
     include: [{ model: MembershipPlan, as: 'plan' }],
   });
+  return membershipPaidUp(membership, at);
+}
+
+/** The same rule for a membership already loaded with its `plan` (e.g. inside a joined query). */
+export function membershipPaidUp(membership: Membership | null, at: Date = new Date()): boolean {
   if (!membership) return false;
   return paidUpOn(membership.paidThrough, membership.plan?.graceDays ?? 0, toIsoDate(at));
 }

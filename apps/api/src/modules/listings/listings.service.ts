@@ -11,8 +11,7 @@ import {
   User,
 } from '../../models';
 import { getSetting } from '../club/club.service';
-import { paidUpOn, toIsoDate } from '../dues/calendar';
-import { isPaidUp } from '../dues/paid-up';
+import { isPaidUp, membershipPaidUp } from '../dues/paid-up';
 import { actionEmail } from '../mail/templates';
 import { enqueueEmail } from '../mail/outbox.service';
 import { notifySavedSearches } from '../saved-searches/saved-searches.service';
@@ -30,14 +29,13 @@ export const listingUrl = (ctx: ExchangeContext, id: number) =>
 
 const isModerator = (u: User | null) => !!u && (u.hasRole('moderator') || u.hasRole('admin'));
 
+const LISTING_INCLUDE = [
+  { model: Harbor, as: 'harbor' },
+  { model: ListingPhoto, as: 'photos' },
+];
+
 /** Loads a listing with harbour and photos, or null. */
-export const loadListing = (id: number) =>
-  Listing.findByPk(id, {
-    include: [
-      { model: Harbor, as: 'harbor' },
-      { model: ListingPhoto, as: 'photos' },
-    ],
-  });
+export const loadListing = (id: number) => Listing.findByPk(id, { include: LISTING_INCLUDE });
 
 /** The seller with their membership and its plan: everything the seller card needs, in the same joined query. */
 const sellerInclude = {
@@ -56,9 +54,7 @@ function sellerDtoOf(user: User, at: Date): SellerDto {
     id: user.id,
     displayName: user.displayName,
     memberSince: membership?.joinedOn ?? user.createdAt.toISOString().slice(0, 10),
-    paidUp: membership
-      ? paidUpOn(membership.paidThrough, membership.plan?.graceDays ?? 0, toIsoDate(at))
-      : false,
+    paidUp: membershipPaidUp(membership, at),
   };
 }
 
@@ -71,13 +67,7 @@ export async function getVisibleListingPage(
   id: number,
   at = new Date(),
 ): Promise<{ listing: Listing; seller: SellerDto }> {
-  const listing = await Listing.findByPk(id, {
-    include: [
-      { model: Harbor, as: 'harbor' },
-      { model: ListingPhoto, as: 'photos' },
-      sellerInclude,
-    ],
-  });
+  const listing = await Listing.findByPk(id, { include: [...LISTING_INCLUDE, sellerInclude] });
   if (!listing) throw notFound('Listing');
   assertVisible(viewer, listing);
   if (!listing.seller) throw notFound('Seller');

@@ -16,11 +16,15 @@ export async function notify(
   );
 }
 
+/** How many notices the member has not read (the navigation badge). */
+export const countUnread = (user: User) =>
+  Notification.count({ where: { userId: user.id, readAt: null } });
+
 /** The member's latest 30 notices and how many are unread. */
 export async function listNotifications(user: User) {
   const [rows, unread] = await Promise.all([
     Notification.findAll({ where: { userId: user.id }, order: [['id', 'DESC']], limit: 30 }),
-    Notification.count({ where: { userId: user.id, readAt: null } }),
+    countUnread(user),
   ]);
   return { rows, unread };
 }
@@ -29,10 +33,6 @@ export async function listNotifications(user: User) {
 export async function markAllRead(user: User) {
   await Notification.update({ readAt: new Date() }, { where: { userId: user.id, readAt: null } });
 }
-
-/** How many notices the member has not read (the navigation badge). */
-export const countUnread = (user: User) =>
-  Notification.count({ where: { userId: user.id, readAt: null } });
 
 /** Marks one notice of the member read; anyone else's notice is not found. */
 export async function markOneRead(user: User, id: number) {

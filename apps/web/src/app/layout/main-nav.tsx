@@ -40,23 +40,17 @@ export function MainNav() {
   // Until the session is known show only what everyone sees, so sign-in links don't flash for members.
   const items =
     user === undefined ? navFor(null).filter((item) => item.signedIn === undefined) : navFor(user);
-  const waiting = useModerationCount(
-    items.some((item) => item.kind === 'link' && item.badge === 'moderation-waiting'),
-  );
-  const unread = useUnread(
-    items.some((item) => item.kind === 'link' && item.badge === 'messages-unread'),
-  );
-  const notices = useUnreadNotices(
-    items.some((item) => item.kind === 'link' && item.badge === 'notices-unread'),
-  );
-  const badgeCount = (badge: NavBadge | undefined) =>
-    badge === 'moderation-waiting'
-      ? (waiting.data?.total ?? 0)
-      : badge === 'messages-unread'
-        ? (unread.data?.unread ?? 0)
-        : badge === 'notices-unread'
-          ? (notices.data?.unread ?? 0)
-          : 0;
+  const shows = (badge: NavBadge) =>
+    items.some((item) => item.kind === 'link' && item.badge === badge);
+  const waiting = useModerationCount(shows('moderation-waiting'));
+  const unread = useUnread(shows('messages-unread'));
+  const notices = useUnreadNotices(shows('notices-unread'));
+  const counts: Record<NavBadge, number> = {
+    'moderation-waiting': waiting.data?.total ?? 0,
+    'messages-unread': unread.data?.unread ?? 0,
+    'notices-unread': notices.data?.unread ?? 0,
+  };
+  const badgeCount = (badge: NavBadge | undefined) => (badge ? counts[badge] : 0);
   const badgeWord = (badge: NavBadge | undefined) =>
     badge === 'moderation-waiting' ? 'waiting' : 'unread';
 

@@ -4,6 +4,7 @@ import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { ConfirmDialog } from '../../components/ui/confirm-dialog';
 import { Page } from '../../components/ui/page';
+import { UnavailablePage } from '../../components/ui/unavailable-page';
 import { Spinner } from '../../components/ui/spinner';
 import { paths } from '../../config/paths';
 import { errorMessage } from '../../lib/form-errors';
@@ -55,12 +56,13 @@ function BoatScreen({ boatId }: { boatId: number }) {
   if (boat.isPending) return <Spinner label="Loading the boat…" />;
   if (boat.isError) {
     return (
-      <Page title="Boat not available">
-        <Alert tone="error" title="Couldn't load this boat">
-          <p>{errorMessage(boat.error)}</p>
-        </Alert>
-        <Link to={paths.boats.href()}>Back to your boats</Link>
-      </Page>
+      <UnavailablePage
+        title="Boat not available"
+        reason="Couldn't load this boat"
+        back={{ to: paths.boats.href(), label: 'Back to your boats' }}
+      >
+        <p>{errorMessage(boat.error)}</p>
+      </UnavailablePage>
     );
   }
   const handleSavePlan = (draft: PlanDraft) => {
@@ -133,12 +135,13 @@ function BoatFromParams() {
   const id = Number(boatId);
   if (!Number.isInteger(id) || id <= 0) {
     return (
-      <Page title="Boat not available">
-        <Alert tone="error" title="No such boat">
-          Check the link and try again.
-        </Alert>
-        <Link to={paths.boats.href()}>Back to your boats</Link>
-      </Page>
+      <UnavailablePage
+        title="Boat not available"
+        reason="No such boat"
+        back={{ to: paths.boats.href(), label: 'Back to your boats' }}
+      >
+        Check the link and try again.
+      </UnavailablePage>
     );
   }
   return <BoatScreen boatId={id} />;

@@ -1,6 +1,7 @@
 import { Link, useParams } from 'react-router-dom';
 import { Alert } from '../../components/ui/alert';
 import { Page } from '../../components/ui/page';
+import { UnavailablePage } from '../../components/ui/unavailable-page';
 import { Spinner } from '../../components/ui/spinner';
 import { paths } from '../../config/paths';
 import { errorMessage } from '../../lib/form-errors';
@@ -14,10 +15,12 @@ function ThreadScreen({ id }: { id: number }) {
   if (thread.isPending) return <Spinner label="Loading the conversation…" />;
   if (thread.isError)
     return (
-      <Page title="Conversation not available">
-        <Alert tone="error">{errorMessage(thread.error)}</Alert>
-        <Link to={paths.messages.href()}>Back to your messages</Link>
-      </Page>
+      <UnavailablePage
+        title="Conversation not available"
+        back={{ to: paths.messages.href(), label: 'Back to your messages' }}
+      >
+        {errorMessage(thread.error)}
+      </UnavailablePage>
     );
   const t = thread.data;
   return (

@@ -1,6 +1,6 @@
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
 import { Page } from '../../components/ui/page';
+import { UnavailablePage } from '../../components/ui/unavailable-page';
 import { Spinner } from '../../components/ui/spinner';
 import { paths } from '../../config/paths';
 import { errorMessage } from '../../lib/form-errors';
@@ -23,10 +23,12 @@ export function ListingRoute() {
   if (listing.isPending) return <Spinner label="Loading the listing…" />;
   if (listing.isError)
     return (
-      <Page title="Listing not available">
-        <Alert tone="error">{errorMessage(listing.error)}</Alert>
-        <Link to={paths.exchange.href()}>Back to the exchange</Link>
-      </Page>
+      <UnavailablePage
+        title="Listing not available"
+        back={{ to: paths.exchange.href(), label: 'Back to the exchange' }}
+      >
+        {errorMessage(listing.error)}
+      </UnavailablePage>
     );
   const l = listing.data;
   return (

@@ -28,11 +28,14 @@ function NoticesScreen() {
         <p>
           Replies to your posts and comments, accepted answers and moderators’ decisions
           {unread ? ` · ${unread} unread` : ''}.{' '}
-          {user?.notificationDigest
-            ? 'You also get a daily e-mail of what is unread.'
-            : 'Want them by e-mail too? Turn on the daily digest on your '}
-          {!user?.notificationDigest && <Link to={paths.account.href()}>account page</Link>}
-          {!user?.notificationDigest && '.'}
+          {user?.notificationDigest ? (
+            'You also get a daily e-mail of what is unread.'
+          ) : (
+            <>
+              Want them by e-mail too? Turn on the daily digest on your{' '}
+              <Link to={paths.account.href()}>account page</Link>.
+            </>
+          )}
         </p>
       }
     >

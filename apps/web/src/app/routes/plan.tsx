@@ -1,8 +1,8 @@
 import type { RatedComponent, TacklePlanResult } from '@app/calc';
 import { Link, useParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
 import { Page } from '../../components/ui/page';
+import { UnavailablePage } from '../../components/ui/unavailable-page';
 import { Spinner } from '../../components/ui/spinner';
 import { paths } from '../../config/paths';
 import { errorMessage } from '../../lib/form-errors';
@@ -32,12 +32,13 @@ function PlanScreen({ planId }: { planId: number }) {
   if (query.isPending) return <Spinner label="Loading the plan…" />;
   if (query.isError) {
     return (
-      <Page title="Plan not available">
-        <Alert tone="error" title="Couldn't load this plan">
-          <p>{errorMessage(query.error)}</p>
-        </Alert>
-        <Link to={paths.boats.href()}>Back to your boats</Link>
-      </Page>
+      <UnavailablePage
+        title="Plan not available"
+        reason="Couldn't load this plan"
+        back={{ to: paths.boats.href(), label: 'Back to your boats' }}
+      >
+        <p>{errorMessage(query.error)}</p>
+      </UnavailablePage>
     );
   }
   const { plan, boat, result } = query.data;
@@ -106,12 +107,13 @@ function PlanFromParams() {
   const id = Number(planId);
   if (!Number.isInteger(id) || id <= 0) {
     return (
-      <Page title="Plan not available">
-        <Alert tone="error" title="No such plan">
-          Check the link and try again.
-        </Alert>
-        <Link to={paths.boats.href()}>Back to your boats</Link>
-      </Page>
+      <UnavailablePage
+        title="Plan not available"
+        reason="No such plan"
+        back={{ to: paths.boats.href(), label: 'Back to your boats' }}
+      >
+        Check the link and try again.
+      </UnavailablePage>
     );
   }
   return <PlanScreen planId={id} />;
