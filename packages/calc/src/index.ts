@@ -2,7 +2,13 @@
 export { CalcInputError, withFieldPrefix } from './errors';
 export {
   AIR_DENSITY_KGPM3,
+  CHAIN_SAFETY_FACTOR,
   DEFAULT_DESIGN_FACTOR,
+  NYLON_ANCHORING_FACTOR,
+  SHOCK_NYLON_MIN_M,
+  SHOCK_REDUCTION_FACTOR,
+  SNUBBER_WORKING_FACTOR,
+  STORM_WIND_KN,
   FRESH_WATER_DENSITY_KGPM3,
   SEA_WATER_DENSITY_KGPM3,
   STANDARD_GRAVITY_MPS2,
@@ -84,14 +90,19 @@ export {
   type RopeMaterial,
 } from './tables/rope-nylon';
 export {
-  ANCHOR_SUGGESTED_MARGIN,
+  ANCHOR_EFFICIENCY,
   ANCHOR_TYPES,
   ANCHOR_TYPE_LABELS,
   BOTTOM_TYPES,
   BOTTOM_TYPE_LABELS,
-  HOLDING_RATIO,
+  BURIAL_BOTTOMS,
+  DEFAULT_BOTTOM,
+  HOLDING_CURVES,
+  HOLDING_REF_KG,
   type AnchorType,
   type BottomType,
+  type BurialBottom,
+  type HoldingCurve,
 } from './tables/anchor-holding';
 
 export {
@@ -108,7 +119,12 @@ export {
   type ChainSpecMetricInput,
   type ChainSpecResult,
 } from './ratings/chain-spec';
-export { shackleSpec, type ShackleSpecInput, type ShackleSpecResult } from './ratings/shackle-spec';
+export {
+  shackleForWll,
+  shackleSpec,
+  type ShackleSpecInput,
+  type ShackleSpecResult,
+} from './ratings/shackle-spec';
 export { ropeSpec, type RopeSpecInput, type RopeSpecResult } from './ratings/rope-spec';
 
 export {
@@ -147,11 +163,31 @@ export {
 } from './checks/weakest-link';
 
 export {
+  WORKING_ANCHOR_MIN_KN,
   anchorSuggestion,
+  type AnchorMasses,
   type AnchorSuggestionInput,
   type AnchorSuggestionResult,
 } from './advice/anchor-suggestion';
 export {
+  HEAVY_BOAT_FACTOR_MAX,
+  TYPICAL_DL_RATIO,
+  anchorHoldingN,
+  anchorMassForHoldingKg,
+  heavyBoatFactor,
+} from './advice/anchor-holding';
+export {
+  DEFAULT_BOW_HEIGHT_M,
+  UPLIFT_WARN_DEG,
+  recommendTackle,
+  scopeForWind,
+  sizeLabel,
+  type ReasoningStep,
+  type RecommendTackleInput,
+  type TackleRecommendation,
+} from './recommend/recommend-tackle';
+export {
+  chainFloorIn,
   nylonChoiceLabel,
   rodeSuggestion,
   type ChainChoice,

@@ -1,4 +1,4 @@
-import { DEFAULT_DESIGN_FACTOR } from '../constants';
+import { SNUBBER_WORKING_FACTOR } from '../constants';
 import { cautionList } from '../cautions';
 import { interpolateLinear } from '../internal/interpolate';
 import {
@@ -13,38 +13,41 @@ import {
   DOUBLE_BRAID_STRAIN_FACTOR,
   NYLON_THREE_STRAND_STRAIN,
   SNUBBER_HEAVY_WEATHER_M,
-  SNUBBER_TARGET_STRETCH_M,
 } from '../tables/nylon-stretch';
 import { ROPE_CONSTRUCTIONS, ROPE_DIAMETERS_IN, type RopeConstruction } from '../tables/rope-nylon';
 import { MM_PER_IN } from '../units/units';
 
 /** Input of {@link snubberSuggestion}. */
 export interface SnubberSuggestionInput {
-  /** Working load the snubber must take, N (> 0). */
+  /** Working load the snubber is sized on, N (> 0): the table load at 30 kn. */
   loadN: number;
+  /** Length overall, m: sets the length (default: the 20 ft heavy-weather snubber). */
+  loaM?: number;
+  /** A storm plan: at least the boat's length, and a second snubber or a bridle (default false). */
+  storm?: boolean;
   /** Nylon construction (default three-strand, which stretches most). */
   construction?: RopeConstruction;
   /** Size on wet strength (default true). */
   wet?: boolean;
-  /** Wet breaking strength ÷ load required (default 4). */
-  designFactor?: number;
-  /** Stretch wanted under the load, m (default 1.37 m = 4.5 ft). */
-  targetStretchM?: number;
+  /** Wet breaking strength ÷ working load required (default 5). */
+  workingFactor?: number;
 }
 
 /** Result of {@link snubberSuggestion}. */
 export interface SnubberSuggestionResult {
   /** Standard nylon size, in. */
   sizeIn: number;
-  /** The same size in mm. */
+  /** The same rope in mm. */
   diameterMm: number;
-  /** Suggested length, m (kept between 3.05 m and 12.2 m). */
+  /** Suggested length, m: at least max(6.1 m, LOA/2), in storms at least LOA. */
   lengthM: number;
-  /** Load ÷ (wet) breaking strength. */
+  /** Rig two snubbers (or a bridle) rather than one thicker line: storm plans. */
+  bridle: boolean;
+  /** Working load ÷ (wet) breaking strength. */
   loadFraction: number;
-  /** Strain at the load (from memory curve). */
+  /** Strain at the working load (from-memory curve). */
   strain: number;
-  /** Stretch of `lengthM` under the load, m. */
+  /** Stretch of `lengthM` under the working load, m. */
   stretchM: number;
   minBreakN: number;
   basis: string;
@@ -54,8 +57,6 @@ export interface SnubberSuggestionResult {
 
 const STRAIN_X = NYLON_THREE_STRAND_STRAIN.map((p) => p[0]);
 const STRAIN_Y = NYLON_THREE_STRAND_STRAIN.map((p) => p[1]);
-const MIN_LENGTH_M = SNUBBER_HEAVY_WEATHER_M / 2;
-const MAX_LENGTH_M = SNUBBER_HEAVY_WEATHER_M * 2;
 
 const SNUBBER_CAUTIONS = cautionList(
   'Leave the chain slack behind the snubber and made fast, so the chain takes over if the snubber parts.',
@@ -73,12 +74,15 @@ export function nylonStrain(
   return construction === 'double-braid' ? strain * DOUBLE_BRAID_STRAIN_FACTOR : strain;
 }
 
+const roundUp = (m: number, step: number) => Math.ceil(m / step - 1e-9) * step;
+
 /**
- * A nylon snubber that stretches under the working load: the smallest standard line whose
- * (wet) breaking strength ≥ design factor × load (“the smallest line that takes the load so
- * that it stretches”, cruising-seamanship texts, seen); length = target stretch ÷ strain at
- * that load (strain curve from memory), kept between half and twice the 20 ft heavy-weather
- * snubber (seen).
+ * A nylon snubber sized once, on the working (30 kn) load: the smallest standard line whose
+ * wet breaking strength is at least 5 × that load, so it stretches (“the smallest line that
+ * takes the load”, cruising-seamanship texts, seen; factor common practice). Length at least
+ * max(20 ft, LOA/2) everyday and at least LOA in storms, where two snubbers or a bridle share
+ * the load instead of a thicker line (long snubbers of 20 ft or more cut peak loads by 50–70 %,
+ * Practical Sailor 2016, seen).
  */
 export function snubberSuggestion(input: SnubberSuggestionInput): SnubberSuggestionResult {
   const raw = requireObject(input, '');
@@ -89,54 +93,41 @@ export function snubberSuggestion(input: SnubberSuggestionInput): SnubberSuggest
     ROPE_CONSTRUCTIONS,
   );
   const wet = optionalBoolean(raw.wet, 'wet', true);
-  const designFactor = optionalNumber(
-    raw.designFactor,
-    'designFactor',
-    DEFAULT_DESIGN_FACTOR,
-    1,
-    20,
-  );
-  const target = optionalNumber(
-    raw.targetStretchM,
-    'targetStretchM',
-    SNUBBER_TARGET_STRETCH_M,
-    0.1,
-    5,
-  );
+  const storm = optionalBoolean(raw.storm, 'storm', false);
+  const loaM = optionalNumber(raw.loaM, 'loaM', 0, 0, 200);
+  const factor = optionalNumber(raw.workingFactor, 'workingFactor', SNUBBER_WORKING_FACTOR, 1, 20);
   const warnings: string[] = [];
   let chosen: { sizeIn: number; minBreakN: number } | undefined;
   for (const sizeIn of ROPE_DIAMETERS_IN) {
     const { minBreakN } = ropeStrength('nylon', construction, sizeIn * MM_PER_IN, wet);
     chosen = { sizeIn, minBreakN };
-    if (minBreakN >= loadN * designFactor) break;
+    if (minBreakN >= loadN * factor) break;
   }
   if (chosen === undefined) throw new RangeError('rope diameter list is empty');
-  if (chosen.minBreakN < loadN * designFactor) {
+  if (chosen.minBreakN < loadN * factor) {
     warnings.push(
-      'Even 1 in nylon is below the design factor at this load: use a bridle of two snubbers or ask a rigger.',
+      'Even 1 in nylon is below the factor at this working load: rig a bridle of two snubbers or ask a rigger.',
     );
   }
+  const lengthM = roundUp(
+    Math.max(SNUBBER_HEAVY_WEATHER_M, storm ? loaM : loaM / 2),
+    0.5,
+  );
   const loadFraction = loadN / chosen.minBreakN;
   const strain = nylonStrain(loadFraction, construction);
-  const ideal = strain > 0 ? target / strain : MAX_LENGTH_M;
-  const lengthM = Math.min(Math.max(ideal, MIN_LENGTH_M), MAX_LENGTH_M);
-  if (ideal > MAX_LENGTH_M) {
-    warnings.push(
-      'At this light load even the smallest line barely stretches; the snubber is capped at 12.2 m (40 ft).',
-    );
-  }
   return {
     sizeIn: chosen.sizeIn,
-    diameterMm: chosen.sizeIn * MM_PER_IN,
+    diameterMm: Math.round(chosen.sizeIn * MM_PER_IN * 10) / 10,
     lengthM,
+    bridle: storm,
     loadFraction,
     strain,
     stretchM: lengthM * strain,
     minBreakN: chosen.minBreakN,
     basis:
-      `Smallest nylon ${construction} line whose ${wet ? 'wet ' : ''}breaking strength is at least ${designFactor} × the load, so that it still stretches; ` +
-      'length = wanted stretch (4–5 ft for a 20 ft heavy-weather snubber, seen) ÷ the strain at that load (nylon stretch curve from memory, approximate), ' +
-      'kept between 10 and 40 ft.',
+      `Smallest nylon ${construction} line whose ${wet ? 'wet ' : ''}breaking strength is at least ${factor} × the working (30 kn) load, so that it still stretches (common practice); ` +
+      `at least ${storm ? 'the boat’s length' : 'max(20 ft, half the boat’s length)'} long, because long snubbers of 20 ft or more cut peak loads by 50–70 % (Practical Sailor, 2016, seen)` +
+      (storm ? '; in a storm rig a second snubber or a bridle rather than a thicker line.' : '.'),
     cautions: SNUBBER_CAUTIONS,
     warnings,
   };

@@ -1,5 +1,4 @@
 import { CalcInputError } from '../errors';
-import { DEFAULT_DESIGN_FACTOR } from '../constants';
 import { STANDARD_CAUTIONS } from '../cautions';
 import { optionalNumber, requireLabel, requireNumber, requireObject } from '../internal/validate';
 
@@ -17,7 +16,7 @@ export interface WeakestLinkInput {
   /** Load through the rode, N (> 0). */
   loadN: number;
   components: RatedComponent[];
-  /** Breaking factor below which a warning is raised (default 4). */
+  /** Breaking factor below which a warning is raised (none when omitted: each working limit already carries its part's factor). */
   designFactor?: number;
 }
 
@@ -45,10 +44,10 @@ export interface WeakestComponent {
 
 /** Result of {@link weakestLink}. */
 export interface WeakestLinkResult {
-  /** The component that breaks first (lowest breaking factor; ties → lower WLL margin). */
+  /** The weakest link: lowest margin on its working limit (ties → lower breaking factor). */
   weakest: WeakestComponent;
-  /** The component with the lowest WLL margin (often a shackle or splice). */
-  weakestByWll: WeakestComponent;
+  /** The component with the lowest breaking strength ÷ load: the one that would part first in an overload. */
+  weakestByBreak: WeakestComponent;
   /** WLL margins, smallest first. */
   byWll: WllMargin[];
   /** Breaking factors, smallest first. */
@@ -61,21 +60,15 @@ export interface WeakestLinkResult {
 }
 
 /**
- * Weakest link of a rode under a load: margin = WLL ÷ load and factor = breaking strength ÷
- * load for every component, both shown because a shackle or a splice is so often the weak
- * point. `ok` when every margin ≥ 1. A chain is as strong as its weakest link (49 CFR
+ * Weakest link of a rode under a load: margin = working limit ÷ load and factor = breaking
+ * strength ÷ load for every component; the weakest link is the smallest margin, because a
+ * shackle or a splice is so often the weak point. `ok` when every margin ≥ 1. A chain is as strong as its weakest link (49 CFR
  * 393.108(a): the WLL of an assembly is the lowest WLL of its parts, seen).
  */
 export function weakestLink(input: WeakestLinkInput): WeakestLinkResult {
   const raw = requireObject(input, '');
   const loadN = requireNumber(raw.loadN, 'loadN', 0, Infinity, 'min');
-  const designFactor = optionalNumber(
-    raw.designFactor,
-    'designFactor',
-    DEFAULT_DESIGN_FACTOR,
-    1,
-    20,
-  );
+  const designFactor = optionalNumber(raw.designFactor, 'designFactor', 0, 1, 20);
   if (!Array.isArray(raw.components) || raw.components.length === 0) {
     throw new CalcInputError('components', 'components must be a non-empty list');
   }
@@ -84,7 +77,7 @@ export function weakestLink(input: WeakestLinkInput): WeakestLinkResult {
   const byBreak: BreakFactor[] = [];
   const warnings: string[] = [];
   let weakest: WeakestComponent | undefined;
-  let weakestByWll: WeakestComponent | undefined;
+  let weakestByBreak: WeakestComponent | undefined;
   for (let index = 0; index < list.length; index += 1) {
     const path = `components[${index}]`;
     const item = requireObject(list[index], path);
@@ -103,37 +96,38 @@ export function weakestLink(input: WeakestLinkInput): WeakestLinkResult {
     byBreak.push({ label, index, factor: entry.factor });
     if (
       weakest === undefined ||
-      entry.factor < weakest.factor ||
-      (entry.factor === weakest.factor && entry.margin < weakest.margin)
+      entry.margin < weakest.margin ||
+      (entry.margin === weakest.margin && entry.factor < weakest.factor)
     ) {
       weakest = entry;
     }
-    if (weakestByWll === undefined || entry.margin < weakestByWll.margin) weakestByWll = entry;
+    if (weakestByBreak === undefined || entry.factor < weakestByBreak.factor)
+      weakestByBreak = entry;
     if (entry.margin < 1) {
       warnings.push(
         `${label}: the load is ${(1 / entry.margin).toFixed(2)} × its working load limit.`,
       );
     }
-    if (entry.factor < designFactor) {
+    if (designFactor > 0 && entry.factor < designFactor) {
       warnings.push(
         `${label}: breaking strength is only ${entry.factor.toFixed(2)} × the load, below the design factor ${designFactor}.`,
       );
     }
   }
-  if (weakest === undefined || weakestByWll === undefined) {
+  if (weakest === undefined || weakestByBreak === undefined) {
     throw new CalcInputError('components', 'components must be a non-empty list');
   }
   byWll.sort((x, y) => x.margin - y.margin);
   byBreak.sort((x, y) => x.factor - y.factor);
   return {
     weakest,
-    weakestByWll,
+    weakestByBreak,
     byWll,
     byBreak,
     ok: byWll.every((m) => m.margin >= 1),
     warnings,
     basis:
-      'Each part’s working load limit and breaking strength divided by the load; the rode is only as strong as its weakest part (49 CFR 393.108(a)).',
+      'Each part’s working limit (its maker’s WLL for chain and fittings; wet breaking strength ÷ 2.25 for nylon) and breaking strength divided by the load; the weakest link is the smallest working-limit margin, as the rode is only as strong as its weakest part (49 CFR 393.108(a)).',
     cautions: STANDARD_CAUTIONS,
   };
 }

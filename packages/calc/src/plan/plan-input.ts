@@ -1,5 +1,4 @@
 import { CalcInputError } from '../errors';
-import { DEFAULT_DESIGN_FACTOR } from '../constants';
 import {
   optionalBoolean,
   optionalNumber,
@@ -93,7 +92,7 @@ export interface TacklePlanInput {
   tideM?: number;
   bottom?: BottomType;
   water?: WaterType;
-  /** Breaking strength ÷ load required (default 4). */
+  /** Breaking strength ÷ load below which a part is flagged (optional: each part's working limit already carries its factor). */
   designFactor?: number;
   /** Rate rope and snubber wet (default true). */
   wet?: boolean;
@@ -110,7 +109,8 @@ export interface CheckedPlan {
   tideM: number;
   bottom: BottomType | undefined;
   water: WaterType;
-  designFactor: number;
+  /** Breaking factor below which a part is flagged, when the member sets one. */
+  designFactor: number | undefined;
   wet: boolean;
   extrapolate: boolean;
   components: PlanComponents & { connectors: PlanConnector[] };
@@ -221,7 +221,10 @@ export function checkPlanInput(input: unknown): CheckedPlan {
     tideM: optionalNumber(raw.tideM, 'tideM', 0, 0, 20),
     bottom: raw.bottom === undefined ? undefined : requireOneOf(raw.bottom, 'bottom', BOTTOM_TYPES),
     water: requireOneOf(raw.water ?? 'sea', 'water', WATER_TYPES),
-    designFactor: optionalNumber(raw.designFactor, 'designFactor', DEFAULT_DESIGN_FACTOR, 1, 20),
+    designFactor:
+      raw.designFactor === undefined
+        ? undefined
+        : optionalNumber(raw.designFactor, 'designFactor', 0, 1, 20),
     wet: optionalBoolean(raw.wet, 'wet', true),
     extrapolate: optionalBoolean(raw.extrapolate, 'extrapolate', false),
     components,

@@ -1,14 +1,26 @@
 import { withFieldPrefix } from '../errors';
+import {
+  SHOCK_NYLON_MIN_M,
+  SHOCK_REDUCTION_FACTOR,
+  SNUBBER_WORKING_FACTOR,
+  STORM_WIND_KN,
+} from '../constants';
 import { STANDARD_CAUTIONS } from '../cautions';
 import { anchorSuggestion, type AnchorSuggestionResult } from '../advice/anchor-suggestion';
-import { rodeSuggestion, type RodeSuggestionResult } from '../advice/rode-suggestion';
-import { snubberSuggestion, type SnubberSuggestionResult } from '../advice/snubber-suggestion';
+import { anchorMassForHoldingKg, heavyBoatFactor } from '../advice/anchor-holding';
+import type { RodeSuggestionResult } from '../advice/rode-suggestion';
+import type { SnubberSuggestionResult } from '../advice/snubber-suggestion';
 import { weakestLink, type RatedComponent, type WeakestLinkResult } from '../checks/weakest-link';
 import { catenary, type CatenaryResult } from '../geometry/catenary';
 import { scopeRung, type ScopeRung } from '../geometry/scope';
 import { swingRadius, type SwingRadiusResult } from '../geometry/swing-radius';
 import { designLoad, type DesignLoadResult } from '../loads/design-load';
-import type { AnchorType } from '../tables/anchor-holding';
+import {
+  recommendTackle,
+  UPLIFT_WARN_DEG,
+  type TackleRecommendation,
+} from '../recommend/recommend-tackle';
+import { BURIAL_BOTTOMS, DEFAULT_BOTTOM, type AnchorType, type BurialBottom } from '../tables/anchor-holding';
 import { checkPlanInput, type CheckedPlan, type TacklePlanInput } from './plan-input';
 import {
   rateChain,
@@ -19,11 +31,15 @@ import {
   type PlanRopeRating,
 } from './rate-components';
 
-/** The plan's anchor against the suggestion. */
+/** The plan's anchor against the holding model. */
 export interface PlanAnchorCheck {
   type: AnchorType;
   massKg: number;
   suggestion: AnchorSuggestionResult;
+  /** Mass that holds the load this plan's anchor sees (the peak-credited load at the plan's wind), kg; null on rock and weed. */
+  neededKg: number | null;
+  /** massKg ÷ neededKg. */
+  massMargin: number | null;
   meetsMinimum: boolean;
   meetsSuggested: boolean;
 }
@@ -33,6 +49,10 @@ export interface TacklePlanResult {
   designLoad: DesignLoadResult;
   /** The design load, N (same as designLoad.loadN). */
   loadN: number;
+  /** 0.7 when a storm plan has at least 6.1 m of nylon in the rode (rope or snubber), else 1. */
+  peakFactor: number;
+  /** The load the parts are checked at: loadN × peakFactor, N. */
+  checkLoadN: number;
   anchor: PlanAnchorCheck | null;
   chain: PlanChainRating | null;
   rode: PlanRopeRating | null;
@@ -49,17 +69,28 @@ export interface TacklePlanResult {
   /** At low water (tide 0), the widest circle. */
   swingRadius: SwingRadiusResult | null;
   catenary: CatenaryResult | null;
-  rodeSuggestion: RodeSuggestionResult;
-  snubberSuggestion: SnubberSuggestionResult;
+  /** What Rodewise would carry for this boat and wind (the same function every screen uses). */
+  recommendation: TackleRecommendation | null;
+  rodeSuggestion: RodeSuggestionResult | null;
+  snubberSuggestion: SnubberSuggestionResult | null;
   warnings: string[];
   cautions: readonly string[];
   basis: string;
 }
 
+function nylonStretchM(plan: CheckedPlan): number {
+  const { rode, snubber } = plan.components;
+  const rope = rode?.material === 'nylon' ? rode.lengthM : 0;
+  const snub = snubber?.material === 'nylon' ? snubber.lengthM : 0;
+  return Math.max(rope, snub);
+}
+
 /**
  * A whole ground-tackle plan in one call: design load (ABYC table), ratings of each part,
- * weakest link, scope ratio, swing radius, chain catenary, anchor check and rode / snubber
- * suggestions, with warnings and cautions. Validates everything, throwing a RangeError
+ * weakest link (smallest working-limit margin), scope, swing radius, chain catenary, anchor
+ * check against the holding model and the recommendation for the same boat and wind, with
+ * warnings and cautions. A storm plan (above 42 kn) with at least 6.1 m of nylon in the rode is
+ * checked at 70 % of the table load (stated). Validates everything, throwing a RangeError
  * ({@link CalcInputError}) that names the field path, e.g. `components.chain.tradeSizeIn`.
  */
 export function tacklePlan(input: TacklePlanInput): TacklePlanResult {
@@ -69,6 +100,9 @@ export function tacklePlan(input: TacklePlanInput): TacklePlanResult {
     designLoad({ loaM: boat.loaM, beamM: boat.beamM, hull: boat.hull, windKn, extrapolate }),
   );
   const loadN = load.loadN;
+  const credited = windKn > STORM_WIND_KN && nylonStretchM(plan) >= SHOCK_NYLON_MIN_M;
+  const peakFactor = credited ? SHOCK_REDUCTION_FACTOR : 1;
+  const checkLoadN = loadN * peakFactor;
   const warnings: string[] = [];
   const chain = rateChain(plan);
   const rode = rateRope(plan, 'rode');
@@ -80,28 +114,28 @@ export function tacklePlan(input: TacklePlanInput): TacklePlanResult {
       warnings.push(`${c.label}: no rating given, so it is not checked. Enter the maker’s WLL.`);
     else connectors.push(rated);
   });
-  const link = weakestLinkOf(loadN, plan.designFactor, chain, rode, connectors, warnings);
-  const anchor = anchorCheck(plan, warnings);
+  const link = weakestLinkOf(checkLoadN, plan.designFactor, chain, rode, connectors, warnings);
+  const anchor = anchorCheck(plan, checkLoadN, warnings);
   const rodeLengthM = (chain?.lengthM ?? 0) + (rode?.lengthM ?? 0);
   const heightM = plan.depthM + boat.bowHeightM + plan.tideM;
-  const geometry = geometryOf(plan, loadN, chain, rode, rodeLengthM, heightM, warnings);
-  const rodeAdvice = rodeSuggestion({
-    loadN,
-    anchorKg: anchor?.massKg ?? anchor?.suggestion.suggestedKg,
-    grade: chain?.grade ?? 'G43',
-    designFactor: plan.designFactor,
-    wet: plan.wet,
-  });
-  const snubberAdvice = snubberSuggestion({
-    loadN,
-    designFactor: plan.designFactor,
-    wet: plan.wet,
-  });
-  if (snubber !== null) snubberWarnings(plan, loadN, snubber, snubberAdvice, warnings);
+  const geometry = geometryOf(plan, checkLoadN, chain, rode, rodeLengthM, heightM, warnings);
+  const recommendation = recommendationFor(plan);
+  if (snubber !== null && recommendation !== null)
+    snubberWarnings(plan, snubber, recommendation, warnings);
+  if (chain !== null && snubber === null && rode === null && windKn >= 20)
+    warnings.push(
+      'An all-chain rode with no snubber snatches in gusts: add a nylon snubber of at least 20 ft (6.1 m).',
+    );
   if (load.extrapolated) warnings.push('The design load is extrapolated beyond the ABYC table.');
+  if (credited)
+    warnings.push(
+      `With ${nylonStretchM(plan).toFixed(1)} m of nylon in the rode, parts are checked at ${Math.round(SHOCK_REDUCTION_FACTOR * 100)} % of the table load (Rodewise's stated storm credit).`,
+    );
   return {
     designLoad: load,
     loadN,
+    peakFactor,
+    checkLoadN,
     anchor,
     chain,
     rode,
@@ -111,19 +145,41 @@ export function tacklePlan(input: TacklePlanInput): TacklePlanResult {
     rodeLengthM,
     heightM,
     ...geometry,
-    rodeSuggestion: rodeAdvice,
-    snubberSuggestion: snubberAdvice,
+    recommendation,
+    rodeSuggestion: recommendation?.rode ?? null,
+    snubberSuggestion: recommendation?.snubber ?? null,
     warnings,
     cautions: STANDARD_CAUTIONS,
     basis:
-      'Design load from the ABYC H-40 table; chain from 49 CFR 393.108; shackles from RR-C-271; rope from engineering tables and 49 CFR 393.108; ' +
-      'catenary after MIT 2.019; scope and swing from sailing-course practice. Each part carries its own basis.',
+      'Design load from the ABYC H-40 table; chain from 49 CFR 393.108 with UFC 4-159-03 factors; shackles from RR-C-271; nylon from engineering tables with a wet loss and an anchoring factor; ' +
+      'anchor holding after UFC 4-159-03 eq. 26; catenary after MIT 2.019; scope and swing from sailing-course practice. Each part carries its own basis.',
   };
+}
+
+function recommendationFor(plan: CheckedPlan): TackleRecommendation | null {
+  try {
+    return recommendTackle({
+      loaM: plan.boat.loaM,
+      ...(plan.boat.beamM === undefined ? {} : { beamM: plan.boat.beamM }),
+      hull: plan.boat.hull,
+      ...(plan.boat.displacementKg === undefined ? {} : { displacementKg: plan.boat.displacementKg }),
+      bowHeightM: plan.boat.bowHeightM,
+      windKn: plan.windKn,
+      anchorType: plan.components.anchor?.type ?? 'scoop',
+      ...(plan.bottom === undefined ? {} : { bottom: plan.bottom }),
+      depthM: plan.depthM,
+      tideM: plan.tideM,
+      ...(plan.components.chain ? { chainGrade: plan.components.chain.grade } : {}),
+      extrapolate: plan.extrapolate,
+    });
+  } catch {
+    return null;
+  }
 }
 
 function weakestLinkOf(
   loadN: number,
-  designFactor: number,
+  designFactor: number | undefined,
   chain: PlanChainRating | null,
   rode: PlanRopeRating | null,
   connectors: PlanConnectorRating[],
@@ -134,13 +190,12 @@ function weakestLinkOf(
   if (rode !== null) parts.push({ label: 'rope rode', wllN: rode.wllN, minBreakN: rode.minBreakN });
   for (const c of connectors) parts.push({ label: c.label, wllN: c.wllN, minBreakN: c.minBreakN });
   if (parts.length === 0) return null;
-  const result = weakestLink({ loadN, components: parts, designFactor });
+  const result = weakestLink({
+    loadN,
+    components: parts,
+    ...(designFactor === undefined ? {} : { designFactor }),
+  });
   warnings.push(...result.warnings);
-  if (rode !== null && rode.wllN < loadN) {
-    warnings.push(
-      'The rope’s working load limit is a cargo tie-down rating (design factor about 9–12); nylon rodes are often worked harder so they stretch — weigh its breaking-strength factor too.',
-    );
-  }
   if (chain !== null) {
     for (const c of connectors) {
       if (c.kind === 'shackle' && c.wllN < chain.wllN) {
@@ -153,7 +208,7 @@ function weakestLinkOf(
   return result;
 }
 
-function anchorCheck(plan: CheckedPlan, warnings: string[]): PlanAnchorCheck | null {
+function anchorCheck(plan: CheckedPlan, checkLoadN: number, warnings: string[]): PlanAnchorCheck | null {
   const anchor = plan.components.anchor;
   if (anchor === undefined) return null;
   const suggestion = withFieldPrefix('boat', () =>
@@ -168,15 +223,44 @@ function anchorCheck(plan: CheckedPlan, warnings: string[]): PlanAnchorCheck | n
       extrapolate: plan.extrapolate,
     }),
   );
-  const meetsMinimum = anchor.massKg >= suggestion.minKg;
-  const meetsSuggested = anchor.massKg >= suggestion.suggestedKg;
+  const bottom = plan.bottom ?? DEFAULT_BOTTOM;
+  const burial = (BURIAL_BOTTOMS as readonly string[]).includes(bottom);
+  if (!burial) {
+    warnings.push(
+      'On rock or weed no holding curve applies, so the anchor mass is not checked: holding there is unpredictable.',
+    );
+    return {
+      type: anchor.type,
+      massKg: anchor.massKg,
+      suggestion,
+      neededKg: null,
+      massMargin: null,
+      meetsMinimum: false,
+      meetsSuggested: false,
+    };
+  }
+  const heavy = heavyBoatFactor(plan.boat.loaM, plan.boat.displacementKg);
+  const neededKg = anchorMassForHoldingKg(anchor.type, bottom as BurialBottom, checkLoadN * heavy);
+  const meetsMinimum = anchor.massKg >= neededKg;
+  const storm = plan.windKn >= STORM_WIND_KN;
+  const meetsSuggested = storm ? meetsMinimum : anchor.massKg >= (suggestion.suggestedKg ?? Infinity);
   if (!meetsMinimum)
-    warnings.push('The anchor is lighter than the minimum our holding model gives for this wind.');
+    warnings.push(
+      `The anchor is lighter than the ${neededKg.toFixed(1)} kg our holding model needs at ${plan.windKn} kn: choose a heavier anchor or a more efficient type.`,
+    );
   else if (!meetsSuggested)
     warnings.push(
-      'The anchor meets the minimum but not the suggested mass, which allows for gusts and a poor set.',
+      `The anchor holds ${plan.windKn} kn but not a 42 kn squall, which a working anchor should survive (${(suggestion.suggestedKg ?? 0).toFixed(1)} kg).`,
     );
-  return { type: anchor.type, massKg: anchor.massKg, suggestion, meetsMinimum, meetsSuggested };
+  return {
+    type: anchor.type,
+    massKg: anchor.massKg,
+    suggestion,
+    neededKg,
+    massMargin: anchor.massKg / neededKg,
+    meetsMinimum,
+    meetsSuggested,
+  };
 }
 
 function geometryOf(
@@ -227,9 +311,9 @@ function geometryOf(
       ropeLengthM: rode?.lengthM ?? 0,
       water: plan.water,
     });
-    if (shape.liftsAtAnchor) {
+    if (shape.anchorAngleDeg > UPLIFT_WARN_DEG) {
       warnings.push(
-        'Under the design load the chain lifts at the anchor and pulls the shank up: let out more rode or add chain.',
+        `Under the design load the chain pulls the anchor ${shape.anchorAngleDeg.toFixed(0)}° upward (we warn above ${UPLIFT_WARN_DEG}°): let out more rode, add chain, or hang a kellet.`,
       );
     }
   }
@@ -238,26 +322,29 @@ function geometryOf(
 
 function snubberWarnings(
   plan: CheckedPlan,
-  loadN: number,
   snubber: PlanRopeRating,
-  advice: SnubberSuggestionResult,
+  rec: TackleRecommendation,
   warnings: string[],
 ): void {
+  const advice = rec.snubber;
   if (plan.components.snubber?.material === 'polyester') {
     warnings.push(
       'The snubber is polyester, which stretches little: nylon absorbs shock far better.',
     );
   }
-  if (snubber.minBreakN < loadN * plan.designFactor) {
+  const needBreakN = rec.workingLoadN * SNUBBER_WORKING_FACTOR;
+  if (snubber.minBreakN < needBreakN * 0.95) {
     warnings.push(
-      'The snubber is thinner than suggested: its breaking strength is below the design factor at this load.',
+      `The snubber is thinner than suggested: its breaking strength is below ${SNUBBER_WORKING_FACTOR} × the working (30 kn) load.`,
     );
-  } else if (snubber.diameterMm > advice.diameterMm * 1.2) {
+  } else if (snubber.diameterMm > advice.diameterMm * 1.35) {
     warnings.push(
-      'The snubber is much thicker than needed and will stretch little under this load.',
+      'The snubber is much thicker than needed and will stretch little; at storm winds rig a second snubber or a bridle instead.',
     );
   }
-  if (snubber.lengthM < advice.lengthM * 0.75) {
-    warnings.push('The snubber is short for this load; a longer one absorbs more shock.');
+  if (snubber.lengthM < advice.lengthM * 0.9) {
+    warnings.push(
+      `The snubber is short: at least ${advice.lengthM.toFixed(1)} m ${rec.storm ? '(the boat’s length, in a storm)' : '(20 ft or half the boat’s length)'} absorbs shock far better.`,
+    );
   }
 }

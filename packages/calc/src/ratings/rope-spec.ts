@@ -21,6 +21,7 @@ import {
   type RopePoint,
 } from '../tables/rope-nylon';
 import { MM_PER_IN, N_PER_LBF } from '../units/units';
+import { NYLON_ANCHORING_FACTOR } from '../constants';
 
 /** Input of {@link ropeSpec}. */
 export interface RopeSpecInput {
@@ -32,7 +33,7 @@ export interface RopeSpecInput {
   wet?: boolean;
   /** Strength lost by wet nylon, 0–0.6; default 0.15 (UFC 4-159-03; the Boat Mechanical Systems Handbook says about half). */
   wetLossFraction?: number;
-  /** When given, wllN = minBreakN ÷ designFactor instead of the tie-down rating. */
+  /** When given, wllN = minBreakN ÷ designFactor instead of the anchoring limit. */
   designFactor?: number;
   extrapolate?: boolean;
 }
@@ -41,11 +42,14 @@ export interface RopeSpecInput {
 export interface RopeSpecResult {
   /** Minimum breaking strength, N (after the wet loss when `wet`). */
   minBreakN: number;
-  /** Working load limit used for checks, N: tie-down rating or minBreak ÷ designFactor. */
+  /**
+   * Working limit used for anchoring checks, N: the wet breaking strength ÷ 2.25
+   * (NYLON_ANCHORING_FACTOR), or minBreak ÷ designFactor when one is given.
+   */
   wllN: number;
-  /** The cargo tie-down WLL, N (49 CFR 393.108 for nylon; derived for polyester). */
+  /** The cargo tie-down WLL, N (49 CFR 393.108 for nylon; derived for polyester): shown as a cargo rating only. */
   tieDownWllN: number;
-  wllBasis: 'tie-down' | 'design-factor';
+  wllBasis: 'anchoring' | 'design-factor';
   extrapolated: boolean;
   basis: string;
   cautions: readonly string[];
@@ -99,8 +103,9 @@ export function ropeStrength(
  * general engineering tables (seen), interpolated as strength per d²; double braid = that ×
  * the ratio of the CFR double-braid to three-strand tie-down limits (derived); polyester =
  * 0.9 × nylon (from memory). Wet nylon loses `wetLossFraction` (default 15 %, UFC; the Boat Mechanical Systems Handbook says
- * about half). wllN is the 49 CFR 393.108 tie-down limit (seen, a cargo rating with a design
- * factor of about 9–12) unless `designFactor` is given.
+ * about half). wllN is the anchoring limit, wet breaking ÷ 2.25, unless `designFactor` is
+ * given; the 49 CFR 393.108 tie-down limit (seen, a cargo rating with a design factor of about
+ * 9–12) is returned as tieDownWllN for reference.
  */
 export function ropeSpec(input: RopeSpecInput): RopeSpecResult {
   const raw = requireObject(input, '');
@@ -129,12 +134,15 @@ export function ropeSpec(input: RopeSpecInput): RopeSpecResult {
       : requireNumber(raw.designFactor, 'designFactor', 1, 20);
   const braid = construction === 'double-braid';
   const { minBreakN, tieDownWllN } = ropeStrength(material, construction, diameterMm, wet, wetLoss);
+  const wetBreakN = wet
+    ? minBreakN
+    : ropeStrength(material, construction, diameterMm, true, wetLoss).minBreakN;
   const extrapolated = diameterMm < MIN_MM || diameterMm > MAX_MM;
   return {
     minBreakN,
-    wllN: designFactor === undefined ? tieDownWllN : minBreakN / designFactor,
+    wllN: designFactor === undefined ? wetBreakN / NYLON_ANCHORING_FACTOR : minBreakN / designFactor,
     tieDownWllN,
-    wllBasis: designFactor === undefined ? 'tie-down' : 'design-factor',
+    wllBasis: designFactor === undefined ? 'anchoring' : 'design-factor',
     extrapolated,
     basis: describe(material, braid, wet, wetLoss, designFactor, extrapolated),
     cautions: ropeCautions(material, wet),
@@ -160,9 +168,10 @@ function describe(
       : '';
   const wll =
     designFactor === undefined
-      ? material === 'nylon'
-        ? ' Working load limit: the 49 CFR 393.108 cargo tie-down limit (seen), about a ninth to a twelfth of breaking.'
-        : ' Working load limit: breaking ÷ 12, the cargo tie-down factor the nylon rows imply (derived).'
+      ? ` Working limit for anchoring: the ${material === 'nylon' ? 'wet ' : ''}breaking strength ÷ ${NYLON_ANCHORING_FACTOR} (Rodewise's anchoring factor, common practice). ` +
+        (material === 'nylon'
+          ? 'The 49 CFR 393.108 tie-down limit (seen, about a ninth to a twelfth of breaking) is a cargo rating and is shown for reference only.'
+          : 'Its cargo tie-down rating (breaking ÷ 12, derived) is shown for reference only.')
       : ` Working load limit: breaking ÷ ${designFactor}, the chosen design factor.`;
   const beyond = extrapolated
     ? ' This diameter is outside 3/8–1 in and is extrapolated with d².'

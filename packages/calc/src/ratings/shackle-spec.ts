@@ -21,7 +21,7 @@ export interface ShackleSpecResult {
 }
 
 const SHACKLE_CAUTIONS = cautionList(
-  'Use a rated, forged shackle whose WLL is at least the chain’s (Boat Mechanical Systems Handbook): one size up from proof-coil chain, two from high-test.',
+  'Use a rated, forged shackle whose WLL is at least the chain’s (Boat Mechanical Systems Handbook); check the size against the table, not a rule of thumb in sizes.',
   'Mouse (seize) the pin so it cannot work loose.',
 );
 
@@ -50,4 +50,13 @@ export function shackleSpec(input: ShackleSpecInput): ShackleSpecResult {
       `(from memory; 1/2–3/4 in corroborated by RR-C-271D, seen); breaking = 5 × WLL (RR-C-271D design factor, seen).`,
     cautions: SHACKLE_CAUTIONS,
   };
+}
+
+/** The smallest shackle of the table with a WLL of at least `minWllN`, or null when none is. */
+export function shackleForWll(minWllN: number): { nominalIn: number; wllN: number; minBreakN: number } | null {
+  for (const row of SHACKLE_ROWS) {
+    const wllN = row.wllShortTons * N_PER_SHORT_TON;
+    if (wllN >= minWllN) return { nominalIn: row.nominalIn, wllN, minBreakN: wllN * SHACKLE_DESIGN_FACTOR };
+  }
+  return null;
 }

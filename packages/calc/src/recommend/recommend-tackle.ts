@@ -1,0 +1,414 @@
+import {
+  SHOCK_NYLON_MIN_M,
+  SHOCK_REDUCTION_FACTOR,
+  STORM_WIND_KN,
+} from '../constants';
+import { STANDARD_CAUTIONS } from '../cautions';
+import { withFieldPrefix } from '../errors';
+import {
+  optionalBoolean,
+  optionalNumber,
+  requireNumber,
+  requireObject,
+  requireOneOf,
+} from '../internal/validate';
+import { anchorSuggestion, type AnchorSuggestionResult } from '../advice/anchor-suggestion';
+import { rodeSuggestion, type ChainChoice, type RodeSuggestionResult } from '../advice/rode-suggestion';
+import { snubberSuggestion, type SnubberSuggestionResult } from '../advice/snubber-suggestion';
+import { catenary, type CatenaryResult } from '../geometry/catenary';
+import { scopeRung, type ScopeRung } from '../geometry/scope';
+import { designLoad, type DesignLoadResult } from '../loads/design-load';
+import { chainSpec } from '../ratings/chain-spec';
+import { shackleForWll } from '../ratings/shackle-spec';
+import { HULL_TYPES, type HullType } from '../tables/abyc-h40';
+import {
+  ANCHOR_TYPE_LABELS,
+  ANCHOR_TYPES,
+  BOTTOM_TYPES,
+  type AnchorType,
+  type BottomType,
+} from '../tables/anchor-holding';
+import { CHAIN_GRADES, CHAIN_GRADE_LABELS, CHAIN_ROWS, type ChainGrade } from '../tables/chain-cfr';
+import { inchFractionLabel } from '../units/format';
+import { M_PER_FT, MM_PER_IN } from '../units/units';
+
+/** Pull angle above the seabed at the anchor beyond which Rodewise warns, degrees (about 5°, from memory). */
+export const UPLIFT_WARN_DEG = 5;
+/** Bow-roller height taken when none is given, m. */
+export const DEFAULT_BOW_HEIGHT_M = 1;
+
+/** Input of {@link recommendTackle}. */
+export interface RecommendTackleInput {
+  loaM: number;
+  beamM?: number;
+  hull: HullType;
+  displacementKg?: number;
+  /** Bow-roller height above the water, m (default 1). */
+  bowHeightM?: number;
+  /** Wind to plan for, kn (above 0, at most 100). */
+  windKn: number;
+  anchorType: AnchorType;
+  bottom?: BottomType;
+  /** Depth at low water where the boat anchors, m. */
+  depthM: number;
+  /** Tidal rise (and surge) still to come, m (default 0). */
+  tideM?: number;
+  /** Chain grade to size (default: the gypsy's, else G43). */
+  chainGrade?: ChainGrade;
+  /** The windlass gypsy's chain, when the boat has one. */
+  gypsy?: { grade: ChainGrade; tradeSizeIn?: number };
+  /** Allow boats and winds beyond the tables (results are flagged). */
+  extrapolate?: boolean;
+}
+
+/** One line of the reasoning, for the boat and plan pages. */
+export interface ReasoningStep {
+  topic: 'load' | 'anchor' | 'chain' | 'nylon' | 'snubber' | 'shackle' | 'scope' | 'uplift';
+  text: string;
+}
+
+/** Everything the boat, plan, post and exchange screens show for one boat and one wind. */
+export interface TackleRecommendation {
+  windKn: number;
+  /** Wind above 42 kn: the rode becomes chain plus nylon. */
+  storm: boolean;
+  /** Table load at the plan's wind. */
+  designLoad: DesignLoadResult;
+  /** Table load at 30 kn, the working load a snubber is sized on. */
+  workingLoadN: number;
+  /** Wind the working gear is sized for: max(wind, 42 kn). */
+  sizingKn: number;
+  /** Table load at sizingKn, N. */
+  sizingLoadN: number;
+  /** Peak-load factor on the rode: 0.7 for a storm rode with its nylon section, else 1. */
+  peakFactor: number;
+  /** Load the chain, nylon and shackle are sized for: sizingLoadN × peakFactor, N. */
+  rodeLoadN: number;
+  anchor: {
+    type: AnchorType;
+    /** The anchor to carry, kg (suggested mass rounded up to a whole kg), or null on rock and weed. */
+    massKg: number | null;
+    minKg: number | null;
+    suggestedKg: number | null;
+    softMud: AnchorSuggestionResult['softMud'];
+    suggestion: AnchorSuggestionResult;
+  };
+  chain: (ChainChoice & { lengthM: number; massKg: number; marginOnWll: number }) | null;
+  nylon: {
+    sizeIn: number;
+    sizeMm: number;
+    metricMm: number;
+    lengthM: number;
+    minBreakN: number;
+    workingLimitN: number;
+    /** `storm-rode`: part of this plan's rode; `alternative`: the size if the rode is chain and rope. */
+    role: 'storm-rode' | 'alternative';
+    governedBy: 'handbook-rule' | 'strength';
+  } | null;
+  snubber: SnubberSuggestionResult;
+  /** Smallest table shackle with WLL at least the chain's (one rule), or null. */
+  shackle: { nominalIn: number; wllN: number; minBreakN: number } | null;
+  scope: {
+    ratio: number;
+    rung: ScopeRung | null;
+    /** Seabed to bow roller at high water, m. */
+    heightM: number;
+    rodeLengthM: number;
+  };
+  catenary: CatenaryResult | null;
+  rode: RodeSuggestionResult;
+  reasoning: ReasoningStep[];
+  warnings: string[];
+  basis: string;
+  cautions: readonly string[];
+}
+
+/** Scope for the wind, from the ladder 5:1 most weather, 7:1 storms, 10:1 severe (Boat Mechanical Systems Handbook, seen); the wind steps are common practice. */
+export function scopeForWind(windKn: number): number {
+  if (windKn < 25) return 5;
+  if (windKn <= 48) return 7;
+  return 10;
+}
+const SCOPE_STEPS = [5, 7, 10] as const;
+
+const ceilTo = (value: number, step: number) => Math.ceil(value / step - 1e-9) * step;
+const kN = (n: number) => `${(n / 1000).toFixed(1)} kN`;
+
+function gypsyChain(
+  gypsy: { grade: ChainGrade; tradeSizeIn?: number } | undefined,
+  loadN: number,
+): ChainChoice | null {
+  if (gypsy?.tradeSizeIn === undefined) return null;
+  const size = gypsy.tradeSizeIn;
+  const row = CHAIN_ROWS.find((r) => Math.abs(r.tradeSizeIn - size) < 1e-6);
+  if (row === undefined || row.wllLb[gypsy.grade] === undefined) return null;
+  const spec = chainSpec({ grade: gypsy.grade, tradeSizeIn: size });
+  if (spec.wllN < loadN) return null;
+  return {
+    ...spec,
+    grade: gypsy.grade,
+    tradeSizeIn: size,
+    nominalMm: row.materialMm,
+    governedBy: 'practice-floor',
+  };
+}
+
+/**
+ * The one tackle recommendation of Rodewise: design load (ABYC H-40 table), anchor (holding
+ * power law, sized to survive max(wind, 42 kn)), chain (WLL ≥ load, breaking ≥ 3 × load, practice
+ * floor by length), nylon (handbook rule or wet strength ≥ 2.25 × load), snubber (sized on the
+ * 30 kn load), shackle (WLL ≥ the chain's), scope and the chain's lift at the anchor. Storm
+ * plans (wind above 42 kn) get a chain-and-nylon rode, whose rode parts are sized at 70 % of the
+ * table load because the nylon cuts shock peaks; the anchor takes no such credit. Every step is
+ * explained in `reasoning` with its source. Throws {@link CalcInputError} naming the field.
+ */
+export function recommendTackle(input: RecommendTackleInput): TackleRecommendation {
+  const raw = requireObject(input, '');
+  const hull = requireOneOf(raw.hull, 'hull', HULL_TYPES);
+  const anchorType = requireOneOf(raw.anchorType, 'anchorType', ANCHOR_TYPES);
+  const bottom =
+    raw.bottom === undefined ? undefined : requireOneOf(raw.bottom, 'bottom', BOTTOM_TYPES);
+  const windKn = requireNumber(raw.windKn, 'windKn', 0, 100, 'min');
+  const depthM = requireNumber(raw.depthM, 'depthM', 0, 300);
+  const tideM = optionalNumber(raw.tideM, 'tideM', 0, 0, 30);
+  const bowHeightM = optionalNumber(raw.bowHeightM, 'bowHeightM', DEFAULT_BOW_HEIGHT_M, 0, 10);
+  const extrapolate = optionalBoolean(raw.extrapolate, 'extrapolate', false);
+  const grade = requireOneOf(
+    raw.chainGrade ?? input.gypsy?.grade ?? 'G43',
+    'chainGrade',
+    CHAIN_GRADES,
+  );
+  const boat = {
+    loaM: input.loaM,
+    hull,
+    extrapolate,
+    ...(input.beamM === undefined ? {} : { beamM: input.beamM }),
+  };
+  const load = designLoad({ ...boat, windKn });
+  const storm = windKn > STORM_WIND_KN;
+  const sizingKn = Math.max(windKn, STORM_WIND_KN);
+  const sizingLoadN = sizingKn === windKn ? load.loadN : designLoad({ ...boat, windKn: sizingKn }).loadN;
+  const workingLoadN = designLoad({ ...boat, windKn: 30 }).loadN;
+  const peakFactor = storm ? SHOCK_REDUCTION_FACTOR : 1;
+  const rodeLoadN = sizingLoadN * peakFactor;
+  const loaM = input.loaM;
+  const warnings: string[] = [];
+  const reasoning: ReasoningStep[] = [];
+
+  const suggestion = anchorSuggestion({
+    ...boat,
+    windKn,
+    anchorType,
+    ...(bottom === undefined ? {} : { bottom }),
+    ...(input.displacementKg === undefined ? {} : { displacementKg: input.displacementKg }),
+  });
+  const massKg = suggestion.suggestedKg === null ? null : Math.ceil(suggestion.suggestedKg - 1e-9);
+
+  const rode = rodeSuggestion({
+    loadN: rodeLoadN,
+    grade,
+    loaM,
+    ...(massKg === null ? {} : { anchorKg: massKg }),
+  });
+  warnings.push(...rode.warnings);
+  const fromGypsy = gypsyChain(input.gypsy, rodeLoadN);
+  let chosenChain = rode.chain;
+  if (input.gypsy?.tradeSizeIn !== undefined) {
+    if (fromGypsy !== null) chosenChain = fromGypsy;
+    else
+      warnings.push(
+        `Your gypsy takes ${CHAIN_GRADE_LABELS[input.gypsy.grade]} ${inchFractionLabel(input.gypsy.tradeSizeIn)} chain, which does not carry this load: a higher grade in the gypsy's size, or a windlass change, is needed.`,
+      );
+  }
+
+  const heightM = depthM + bowHeightM + tideM;
+  const ladderRatio = scopeForWind(windKn);
+  const layout = (ratio: number) => {
+    let rodeM = ceilTo(ratio * heightM, 1);
+    let chainM = rodeM;
+    let nylonM = 0;
+    if (storm) {
+      chainM = Math.min(rodeM, ceilTo(Math.max(3 * loaM, 3 * heightM), 1));
+      nylonM = Math.max(rodeM - chainM, ceilTo(Math.max(SHOCK_NYLON_MIN_M, loaM), 1));
+      rodeM = chainM + nylonM;
+    }
+    return { ratio, rodeM, chainM, nylonM };
+  };
+  const shapeOf = (l: ReturnType<typeof layout>, kgPerM: number) =>
+    l.rodeM > heightM
+      ? withFieldPrefix('catenary', () =>
+          catenary({
+            depthM,
+            bowHeightM,
+            tideM,
+            chainKgPerM: kgPerM,
+            horizontalLoadN: load.loadN * peakFactor,
+            chainLengthM: l.chainM,
+            ropeLengthM: l.nylonM,
+          }),
+        )
+      : null;
+  let plan = layout(ladderRatio);
+  let shape: CatenaryResult | null = null;
+  let steppedUp = false;
+  if (chosenChain !== null) {
+    shape = shapeOf(plan, chosenChain.kgPerM);
+    for (const next of SCOPE_STEPS) {
+      if (next <= plan.ratio || shape === null || shape.anchorAngleDeg <= UPLIFT_WARN_DEG) continue;
+      plan = layout(next);
+      shape = shapeOf(plan, chosenChain.kgPerM);
+      steppedUp = true;
+    }
+  }
+  const ratio = plan.ratio;
+  const rodeLengthM = plan.rodeM;
+  const chainLengthM = plan.chainM;
+  const nylonLengthM = plan.nylonM;
+  const chain =
+    chosenChain === null
+      ? null
+      : {
+          ...chosenChain,
+          lengthM: chainLengthM,
+          massKg: chosenChain.kgPerM * chainLengthM,
+          marginOnWll: chosenChain.wllN / rodeLoadN,
+        };
+  const nylon =
+    rode.nylon === null
+      ? null
+      : {
+          sizeIn: rode.nylon.sizeIn,
+          sizeMm: rode.nylon.sizeMm,
+          metricMm: rode.nylon.metricMm,
+          lengthM: storm ? nylonLengthM : rodeLengthM,
+          minBreakN: rode.nylon.minBreakN,
+          workingLimitN: rode.nylon.workingLimitN,
+          role: storm ? ('storm-rode' as const) : ('alternative' as const),
+          governedBy: rode.nylon.governedBy,
+        };
+  const snubber = snubberSuggestion({ loadN: workingLoadN, loaM, storm });
+  const shackle = chain === null ? null : shackleForWll(chain.wllN);
+  if (chain !== null && shackle === null)
+    warnings.push('No shackle in the table matches this chain’s WLL: use a rated connector of at least the chain’s WLL.');
+
+  // Reasoning, in plain words with sources.
+  const rowText =
+    load.governedBy === 'beam'
+      ? `entered by beam, which gives a larger load than the length here (the ${load.rowLoaFt.toFixed(1)} ft row)`
+      : `entered by length (the ${load.rowLoaFt.toFixed(1)} ft row)`;
+  reasoning.push({
+    topic: 'load',
+    text:
+      `Design load ${kN(load.loadN)} at ${windKn} kn from the ABYC H-40 table of horizontal loads (values from memory), ${rowText}` +
+      (windKn > 42 ? ', scaled with wind speed squared beyond the 42 kn column (extrapolated)' : '') +
+      `. The working gear is sized for ${sizingKn} kn (${kN(sizingLoadN)}), because it must survive a squall.`,
+  });
+  reasoning.push({ topic: 'anchor', text: suggestion.basis });
+  if (chain !== null)
+    reasoning.push({
+      topic: 'chain',
+      text:
+        `${CHAIN_GRADE_LABELS[chain.grade]} ${inchFractionLabel(chain.tradeSizeIn)} (${chain.nominalMm} mm): WLL ${kN(chain.wllN)}, ` +
+        `${chain.marginOnWll.toFixed(2)} × the ${kN(rodeLoadN)} it is sized for. ` +
+        (chain.governedBy === 'practice-floor'
+          ? input.gypsy?.tradeSizeIn !== undefined && fromGypsy !== null
+            ? 'Your gypsy’s size, which carries the load. '
+            : 'The load alone would allow a lighter chain; the practice floor for the boat’s length sets this size. '
+          : '') +
+        rode.basis.split('Nylon')[0]!.trim(),
+    });
+  if (storm)
+    reasoning.push({
+      topic: 'chain',
+      text: `Storm rode: ${chainLengthM} m of chain at the anchor, then ${nylonLengthM} m of nylon, the stretchy part. With that much nylon in the rode we size chain, nylon and shackle at ${Math.round(SHOCK_REDUCTION_FACTOR * 100)} % of the table load (Rodewise's assumption, below the 50–70 % peak cuts measured for long snubbers, Practical Sailor 2016); the anchor takes no credit.`,
+    });
+  if (nylon !== null)
+    reasoning.push({
+      topic: 'nylon',
+      text:
+        `${inchFractionLabel(nylon.sizeIn)} (${nylon.sizeMm} mm) nylon three-strand, or ${nylon.metricMm} mm metric rope: ` +
+        `${nylon.governedBy === 'handbook-rule' ? 'the handbook rule for the anchor governs' : 'strength governs'}; wet breaking ${kN(nylon.minBreakN)}, working limit ${kN(nylon.workingLimitN)}. ` +
+        (nylon.role === 'alternative' ? 'Use this size if your rode is chain and rope. ' : '') +
+        'The 49 CFR 393.108 tie-down rating of rope is a cargo rating and is not used for anchoring.',
+    });
+  reasoning.push({ topic: 'snubber', text: snubber.basis });
+  if (shackle !== null && chain !== null)
+    reasoning.push({
+      topic: 'shackle',
+      text: `${inchFractionLabel(shackle.nominalIn)} forged shackle: WLL ${kN(shackle.wllN)}, at least the chain's ${kN(chain.wllN)} (one rule: shackle WLL ≥ chain WLL, Boat Mechanical Systems Handbook; RR-C-271 table, from memory).`,
+    });
+  reasoning.push({
+    topic: 'scope',
+    text:
+      `${ratio}:1 scope on ${heightM.toFixed(1)} m from seabed to bow roller at high water (depth ${depthM} m + bow ${bowHeightM} m + tide ${tideM} m): ${rodeLengthM} m of rode (ladder 5:1 most weather, 7:1 storms, 10:1 severe, Boat Mechanical Systems Handbook)` +
+      (steppedUp ? `; stepped up from ${ladderRatio}:1 so the chain does not lift the anchor more than ${UPLIFT_WARN_DEG}°.` : '.'),
+  });
+  if (shape !== null) {
+    const lifts = shape.anchorAngleDeg > UPLIFT_WARN_DEG;
+    reasoning.push({
+      topic: 'uplift',
+      text: `At ${windKn} kn the pull at the anchor is ${shape.anchorAngleDeg.toFixed(1)}° above the seabed with ${shape.onBottomM.toFixed(1)} m of chain lying on it (catenary after MIT 2.019). We warn above ${UPLIFT_WARN_DEG}° (from memory): beyond that a drag anchor starts to lose holding.`,
+    });
+    if (lifts)
+      warnings.push(
+        `At ${windKn} kn the chain pulls the anchor ${shape.anchorAngleDeg.toFixed(0)}° upward: let out more rode, add chain, or hang a weight (kellet) on the rode.`,
+      );
+  }
+
+  if (suggestion.suggestedKg === null)
+    warnings.push(
+      `No anchor mass is given for ${bottom === 'rock' ? 'rock' : 'weed'}: holding there is unpredictable. Choose a sand or mud patch if you can.`,
+    );
+  if (anchorType === 'grapnel')
+    warnings.push('A grapnel is not a main anchor for a cruising boat; consider a scoop, plow or claw.');
+  if (load.extrapolated) warnings.push('The design load lies beyond the ABYC table: an extrapolation.');
+  if (storm)
+    warnings.push(
+      'In a storm, rig two snubbers or a bridle, protect every fairlead from chafe, take off windage and have a second anchor ready.',
+    );
+
+  const cautions = [
+    ...STANDARD_CAUTIONS,
+    "An anchor maker's sizing chart and the gear's own markings take precedence over these estimates.",
+    ...(storm
+      ? ['Before a storm, follow the harbour master, local rules and a qualified rigger or surveyor; a safe berth or a haul-out may beat any anchor.']
+      : []),
+  ];
+  return {
+    windKn,
+    storm,
+    designLoad: load,
+    workingLoadN,
+    sizingKn,
+    sizingLoadN,
+    peakFactor,
+    rodeLoadN,
+    anchor: {
+      type: anchorType,
+      massKg,
+      minKg: suggestion.minKg,
+      suggestedKg: suggestion.suggestedKg,
+      softMud: suggestion.softMud,
+      suggestion,
+    },
+    chain,
+    nylon,
+    snubber,
+    shackle,
+    scope: { ratio, rung: scopeRung(ratio) ?? null, heightM, rodeLengthM },
+    catenary: shape,
+    rode,
+    reasoning,
+    warnings,
+    basis: `Recommendation for a ${ANCHOR_TYPE_LABELS[anchorType]} anchor at ${windKn} kn: ${reasoning.map((r) => r.text).join(' ')}`,
+    cautions,
+  };
+}
+
+/** Imperial trade fraction of a nylon or chain size with its mm: "3/4 in (19.1 mm)". */
+export function sizeLabel(sizeIn: number): string {
+  return `${inchFractionLabel(sizeIn)} (${Math.round(sizeIn * MM_PER_IN * 10) / 10} mm)`;
+}
+
+/** LOA in feet, for tests and texts. */
+export const loaFt = (loaM: number) => loaM / M_PER_FT;
