@@ -45,6 +45,7 @@ export {
   formatLength,
   formatMass,
   inchFractionLabel,
+  tradeSizeMm,
   type FormatLengthOptions,
   type FormatOptions,
   type UnitSystem,

@@ -17,7 +17,7 @@ import {
   type ChainGrade,
 } from '../tables/chain-cfr';
 import { ROPE_DIAMETERS_IN, ROPE_DIAMETERS_MM } from '../tables/rope-nylon';
-import { inchFractionLabel } from '../units/format';
+import { inchFractionLabel, tradeSizeMm } from '../units/format';
 import { KG_PER_LB, MM_PER_IN, N_PER_LBF } from '../units/units';
 
 /** Input of {@link rodeSuggestion}. */
@@ -239,7 +239,7 @@ function nylonChoice(
     ruleDiameterIn,
     ruleDiameterMm,
     sizeIn,
-    sizeMm: Math.round(sizeIn * MM_PER_IN * 10) / 10,
+    sizeMm: tradeSizeMm(sizeIn),
     metricMm,
     minBreakN,
     workingLimitN: wetBreakN / NYLON_ANCHORING_FACTOR,

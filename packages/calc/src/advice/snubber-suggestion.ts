@@ -16,6 +16,7 @@ import {
 } from '../tables/nylon-stretch';
 import { ROPE_CONSTRUCTIONS, ROPE_DIAMETERS_IN, type RopeConstruction } from '../tables/rope-nylon';
 import { MM_PER_IN } from '../units/units';
+import { tradeSizeMm } from '../units/format';
 
 /** Input of {@link snubberSuggestion}. */
 export interface SnubberSuggestionInput {
@@ -117,7 +118,7 @@ export function snubberSuggestion(input: SnubberSuggestionInput): SnubberSuggest
   const strain = nylonStrain(loadFraction, construction);
   return {
     sizeIn: chosen.sizeIn,
-    diameterMm: Math.round(chosen.sizeIn * MM_PER_IN * 10) / 10,
+    diameterMm: tradeSizeMm(chosen.sizeIn),
     lengthM,
     bridle: storm,
     loadFraction,

@@ -13,7 +13,7 @@ describe('weakestLink', () => {
 
   it('finds the undersized shackle as the weak point by WLL', () => {
     const r = weakestLink({ loadN: lbfToN(1800), components: [chain, shackle] });
-    expect(r.weakestByWll.label).toBe('shackle');
+    expect(r.weakest.label).toBe('shackle');
     expect(r.byWll[0]?.label).toBe('shackle');
     expect(r.byWll[0]?.margin).toBeCloseTo(2000 / 1800, 9);
     expect(r.byWll[1]?.margin).toBeCloseTo(3900 / 1800, 9);
@@ -27,10 +27,22 @@ describe('weakestLink', () => {
       [...r.byBreak.map((b) => b.factor)].sort((x, y) => x - y),
     );
     // chain breaks at 3 × 3900 lb = 11,700 lb; shackle at 5 × 2000 lb = 10,000 lb.
-    expect(r.weakest.label).toBe('shackle');
-    expect(r.weakest.factor).toBeCloseTo(10000 / 3000, 9);
+    expect(r.weakestByBreak.label).toBe('shackle');
+    expect(r.weakestByBreak.factor).toBeCloseTo(10000 / 3000, 9);
     expect(r.warnings.some((w) => w.startsWith('shackle: the load is'))).toBe(true);
-    expect(r.warnings.some((w) => /below the design factor 4/.test(w))).toBe(true);
+    // No breaking-factor warning unless a factor is asked for: each WLL already carries its part's factor.
+    expect(r.warnings.some((w) => /below the design factor/.test(w))).toBe(false);
+    const asked = weakestLink({ loadN: lbfToN(3000), components: [chain, shackle], designFactor: 4 });
+    expect(asked.warnings.some((w) => /below the design factor 4/.test(w))).toBe(true);
+  });
+
+  it('names the part with the smallest working-limit margin even when another breaks first', () => {
+    // 3/4 in nylon: wet MBS 12,780 × 0.85 = 10,863 lbf, limit ÷ 2.25 = 4,828 lbf; a 4,000 lb WLL shackle breaks at 20,000 lbf.
+    const rope = { label: 'rope rode', wllN: lbfToN(4828), minBreakN: lbfToN(10863) };
+    const shackle4000 = { label: '4,000 lb shackle', wllN: lbfToN(4000), minBreakN: lbfToN(20000) };
+    const r = weakestLink({ loadN: lbfToN(3000), components: [rope, shackle4000] });
+    expect(r.weakest.label).toBe('4,000 lb shackle');
+    expect(r.weakestByBreak.label).toBe('rope rode');
   });
 
   it('is ok with no warnings when every part has margin', () => {

@@ -58,7 +58,7 @@ describe('tacklePlan', () => {
   it('checks the anchor against the suggestion', () => {
     const light = tacklePlan(buildPlan({ components: { anchor: { type: 'plow', massKg: 2 } } }));
     expect(light.anchor?.meetsMinimum).toBe(false);
-    expect(light.warnings.some((w) => /lighter than the minimum/.test(w))).toBe(true);
+    expect(light.warnings.some((w) => /lighter than the .* kg our holding model needs/.test(w))).toBe(true);
     const heavy = tacklePlan(buildPlan({ components: { anchor: { type: 'plow', massKg: 60 } } }));
     expect(heavy.anchor?.meetsSuggested).toBe(true);
   });
@@ -85,8 +85,19 @@ describe('tacklePlan', () => {
     );
     expect(r.scopeRatio).toBeLessThan(3);
     expect(r.catenary?.liftsAtAnchor).toBe(true);
+    expect(r.catenary!.anchorAngleDeg).toBeGreaterThan(5);
     expect(r.warnings.some((w) => /below 3:1/.test(w))).toBe(true);
-    expect(r.warnings.some((w) => /lifts at the anchor/.test(w))).toBe(true);
+    expect(r.warnings.some((w) => /pulls the anchor \d+° upward \(we warn above 5°\)/.test(w))).toBe(true);
+  });
+
+  // The threshold is about 5° (from memory): a chain that only just leaves the seabed is not a warning.
+  it('does not warn about a chain lifting by less than 5°', () => {
+    const r = tacklePlan(
+      buildPlan({ windKn: 15, components: { chain: { grade: 'G43', tradeSizeIn: 5 / 16, lengthM: 44 } } }),
+    );
+    expect(r.catenary).not.toBeNull();
+    expect(r.catenary!.anchorAngleDeg).toBeLessThanOrEqual(5);
+    expect(r.warnings.some((w) => /upward/.test(w))).toBe(false);
   });
 
   it('reports a rode too short to reach the seabed without throwing', () => {
@@ -108,7 +119,7 @@ describe('tacklePlan', () => {
     const r = tacklePlan(buildPlan({ components: {} }));
     expect(r.weakestLink).toBeNull();
     expect(r.scopeRatio).toBeNull();
-    expect(r.snubberSuggestion.lengthM).toBeGreaterThan(0);
+    expect(r.snubberSuggestion?.lengthM).toBeGreaterThan(0);
   });
 
   it.each([

@@ -1,4 +1,5 @@
 import {
+  NYLON_ANCHORING_FACTOR,
   SHOCK_NYLON_MIN_M,
   SHOCK_REDUCTION_FACTOR,
   STORM_WIND_KN,
@@ -29,7 +30,7 @@ import {
   type BottomType,
 } from '../tables/anchor-holding';
 import { CHAIN_GRADES, CHAIN_GRADE_LABELS, CHAIN_ROWS, type ChainGrade } from '../tables/chain-cfr';
-import { inchFractionLabel } from '../units/format';
+import { inchFractionLabel, tradeSizeMm } from '../units/format';
 import { M_PER_FT, MM_PER_IN } from '../units/units';
 
 /** Pull angle above the seabed at the anchor beyond which Rodewise warns, degrees (about 5°, from memory). */
@@ -327,7 +328,7 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
       topic: 'nylon',
       text:
         `${inchFractionLabel(nylon.sizeIn)} (${nylon.sizeMm} mm) nylon three-strand, or ${nylon.metricMm} mm metric rope: ` +
-        `${nylon.governedBy === 'handbook-rule' ? 'the handbook rule for the anchor governs' : 'strength governs'}; wet breaking ${kN(nylon.minBreakN)}, working limit ${kN(nylon.workingLimitN)}. ` +
+        `${nylon.governedBy === 'handbook-rule' ? 'the handbook rule for the anchor (0.2 in + anchor lb ÷ 185) governs' : `strength governs: wet breaking at least ${NYLON_ANCHORING_FACTOR} × the load`}; wet breaking ${kN(nylon.minBreakN)}, working limit ${kN(nylon.workingLimitN)}. ` +
         (nylon.role === 'alternative' ? 'Use this size if your rode is chain and rope. ' : '') +
         'The 49 CFR 393.108 tie-down rating of rope is a cargo rating and is not used for anchoring.',
     });
@@ -407,7 +408,7 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
 
 /** Imperial trade fraction of a nylon or chain size with its mm: "3/4 in (19.1 mm)". */
 export function sizeLabel(sizeIn: number): string {
-  return `${inchFractionLabel(sizeIn)} (${Math.round(sizeIn * MM_PER_IN * 10) / 10} mm)`;
+  return `${inchFractionLabel(sizeIn)} (${tradeSizeMm(sizeIn)} mm)`;
 }
 
 /** LOA in feet, for tests and texts. */

@@ -98,3 +98,8 @@ export function inchFractionLabel(valueIn: number): string {
   if (numerator === 0) return `${whole} in`;
   return whole === 0 ? `${numerator}/${denominator} in` : `${whole} ${numerator}/${denominator} in`;
 }
+
+/** A trade size in inches as millimetres to one decimal, the same rope or chain: 3/4 in → 19.1 mm. */
+export function tradeSizeMm(sizeIn: number): number {
+  return Math.round(sizeIn * 254 + 1e-6) / 10;
+}
