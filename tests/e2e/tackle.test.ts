@@ -87,11 +87,19 @@ describe('a member sizes, checks, saves and prints a plan', () => {
       .poll(() => everyday.getByText('Design load', { exact: true }).count(), { timeout: 15000 })
       .toBe(1);
     for (const column of [everyday, storm]) {
-      for (const part of ['Anchor', 'Chain', 'Nylon rode', 'Snubber']) {
+      for (const part of ['Anchor', 'Chain', 'Snubber', 'Shackle', 'Scope']) {
         expect(await column.getByText(part, { exact: true }).count()).toBe(1);
       }
-      expect(await column.getByText(/margin .* on WLL/).count()).toBe(1);
+      expect(await column.getByText(/the load it is sized for/).count()).toBe(1);
+      // The reasoning names the table row (entered by beam for this beamy boat) and the holding curve.
+      await column.getByText('How we worked it out').click();
+      expect(await column.getByText(/entered by beam/).count()).toBe(1);
+      expect(await column.getByText(/UFC 4-159-03 eq\. 26/).count()).toBe(1);
     }
+    // Everyday: all chain, with the rope size for a chain-and-rope rode; storm: chain plus nylon.
+    expect(await everyday.getByText('If chain and rope', { exact: true }).count()).toBe(1);
+    expect(await storm.getByText('Nylon rode', { exact: true }).count()).toBe(1);
+    expect(await storm.getByText(/rig two, or a bridle/).count()).toBe(1);
     expect(await page.getByText(/qualified rigger or marine surveyor/).count()).toBeGreaterThan(0);
     await screenshot(page, 'boat-recommendation');
     await audit(page, 'boat recommendation');
@@ -104,12 +112,17 @@ describe('a member sizes, checks, saves and prints a plan', () => {
 
     // Weakest-link check of the actual gear: add the anchor shackle.
     await page.getByLabel('Fitting', { exact: true }).selectOption('shackle');
-    await page.getByLabel('Fitting name').fill('anchor shackle');
+    // The saved storm plan already carries the recommended anchor shackle and the chain-to-rope splice.
+    const card = page.getByRole('article', { name: 'Plan card' });
+    expect(await card.getByText(/anchor shackle/).count()).toBe(1);
+    expect(await card.getByText(/Rope rode/).count()).toBe(1);
+    expect(await page.getByRole('region', { name: /Recommendation at 60 kn/ }).count()).toBe(1);
+    await page.getByLabel('Fitting name').fill('bow shackle');
     await page.getByLabel('Shackle size').selectOption(String(1 / 2));
     await page.getByRole('button', { name: 'Add fitting' }).click();
     const table = page.getByRole('table');
     await expect
-      .poll(() => table.getByRole('row', { name: /anchor shackle/ }).count(), { timeout: 15000 })
+      .poll(() => table.getByRole('row', { name: /bow shackle/ }).count(), { timeout: 15000 })
       .toBe(1);
     expect(await table.locator('tr[aria-current="true"]').count()).toBe(1);
     expect(await table.getByText('Weakest link', { exact: true }).count()).toBe(1);

@@ -180,6 +180,7 @@ export {
 export {
   DEFAULT_BOW_HEIGHT_M,
   UPLIFT_WARN_DEG,
+  planComponentsFrom,
   recommendTackle,
   scopeForWind,
   sizeLabel,

@@ -1,3 +1,4 @@
+import { must } from './testing/must';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { anchorSuggestion } from './advice/anchor-suggestion';
@@ -154,7 +155,7 @@ describe('properties', () => {
             return;
           }
           expect(b.minKg).toBeGreaterThan(a.minKg);
-          expect(b.suggestedKg!).toBeGreaterThanOrEqual(a.suggestedKg!);
+          expect(must(b.suggestedKg)).toBeGreaterThanOrEqual(must(a.suggestedKg));
         },
       ),
     );

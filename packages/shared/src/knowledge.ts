@@ -342,6 +342,21 @@ export interface SetupCardDto {
     anchorAngleDeg: number;
     liftsAtAnchor: boolean;
   } | null;
+  /** The setup's anchor against the holding model at the design wind (null without an anchor). */
+  anchor: {
+    massKg: number;
+    neededKg: number | null;
+    meetsMinimum: boolean;
+    meetsSuggested: boolean;
+  } | null;
+  /** What Rodewise recommends for the same boat and wind, the same function as the boat page. */
+  recommendation: {
+    anchorType: string;
+    anchorKg: number | null;
+    chain: string | null;
+    nylon: string | null;
+    snubber: string;
+  } | null;
   warnings: string[];
   cautions: string[];
   basis: string;

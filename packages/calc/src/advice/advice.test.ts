@@ -1,3 +1,4 @@
+import { must } from '../testing/must';
 import { describe, expect, it } from 'vitest';
 import { thrownField } from '../testing/thrown-field';
 import { HOLDING_CURVES } from '../tables/anchor-holding';
@@ -19,15 +20,22 @@ describe('anchor holding curve', () => {
       const h = anchorHoldingN('plow', 'sand', kg);
       expect(anchorMassForHoldingKg('plow', 'sand', h)).toBeCloseTo(kg, 9);
     }
-    expect(anchorHoldingN('scoop', 'mixed', 10) / 10).toBeGreaterThan(anchorHoldingN('scoop', 'mixed', 40) / 40);
+    expect(anchorHoldingN('scoop', 'mixed', 10) / 10).toBeGreaterThan(
+      anchorHoldingN('scoop', 'mixed', 40) / 40,
+    );
   });
 
   // Exponents of UFC 4-159-03 Table 5-3 (from memory): 0.80 in sand, 0.92 in mud.
   it('uses b = 0.80 in sand and 0.92 in cohesive bottoms, soft mud holding about half the middle bottom', () => {
     expect(HOLDING_CURVES.sand.exponent).toBe(0.8);
     expect(HOLDING_CURVES.mud.exponent).toBe(0.92);
-    expect(anchorHoldingN('scoop', 'mud', 20) / anchorHoldingN('scoop', 'mixed', 20)).toBeCloseTo(0.5, 9);
-    expect(anchorHoldingN('scoop', 'sand', 15)).toBeGreaterThan(anchorHoldingN('scoop', 'mixed', 15));
+    expect(anchorHoldingN('scoop', 'mud', 20) / anchorHoldingN('scoop', 'mixed', 20)).toBeCloseTo(
+      0.5,
+      9,
+    );
+    expect(anchorHoldingN('scoop', 'sand', 15)).toBeGreaterThan(
+      anchorHoldingN('scoop', 'mixed', 15),
+    );
   });
 
   it('raises a heavy boat’s load by its displacement over a D/L of 200, between 1 and 1.5 (common practice)', () => {
@@ -48,21 +56,21 @@ describe('anchorSuggestion', () => {
     expect(lb(r.loadN)).toBeCloseTo(900, 6);
     expect(lb(r.suggestedLoadN)).toBeCloseTo(1800, 6);
     expect(r.suggestedForKn).toBe(42);
-    expect(anchorHoldingN('scoop', 'sand', r.minKg!)).toBeCloseTo(r.loadN, 6);
-    expect(anchorHoldingN('scoop', 'sand', r.suggestedKg!)).toBeCloseTo(r.suggestedLoadN, 6);
+    expect(anchorHoldingN('scoop', 'sand', must(r.minKg))).toBeCloseTo(r.loadN, 6);
+    expect(anchorHoldingN('scoop', 'sand', must(r.suggestedKg))).toBeCloseTo(r.suggestedLoadN, 6);
     const storm = anchorSuggestion({ ...boat, windKn: 60, anchorType: 'scoop', bottom: 'sand' });
-    expect(storm.minKg).toBeCloseTo(storm.suggestedKg!, 9);
+    expect(storm.minKg).toBeCloseTo(must(storm.suggestedKg), 9);
   });
 
   it('takes the middle bottom when none is given and shows soft mud beside it', () => {
     const r = anchorSuggestion({ ...boat, windKn: 30, anchorType: 'plow' });
     expect(r.bottomAssumed).toBe('mixed');
     expect(r.bottomGiven).toBe(false);
-    expect(r.softMud?.suggestedKg).toBeGreaterThan(r.suggestedKg! * 1.8);
+    expect(r.softMud?.suggestedKg).toBeGreaterThan(must(r.suggestedKg) * 1.8);
     expect(r.basis).toMatch(/middle bottom/);
     const given = anchorSuggestion({ ...boat, windKn: 30, anchorType: 'plow', bottom: 'mud' });
     expect(given.softMud).toBeNull();
-    expect(given.suggestedKg).toBeCloseTo(r.softMud!.suggestedKg, 9);
+    expect(given.suggestedKg).toBeCloseTo(must(r.softMud).suggestedKg, 9);
   });
 
   it('gives a caution, not a mass, on rock and weed', () => {
@@ -78,9 +86,16 @@ describe('anchorSuggestion', () => {
   it('adds cautions for a grapnel and for a heavy boat', () => {
     const g = anchorSuggestion({ ...boat, windKn: 30, anchorType: 'grapnel' });
     expect(g.cautions.some((c) => /grapnel/.test(c))).toBe(true);
-    const heavy = anchorSuggestion({ ...boat, displacementKg: 15000, windKn: 30, anchorType: 'plow' });
+    const heavy = anchorSuggestion({
+      ...boat,
+      displacementKg: 15000,
+      windKn: 30,
+      anchorType: 'plow',
+    });
     expect(heavy.heavyBoatFactor).toBeGreaterThan(1);
-    expect(heavy.suggestedKg!).toBeGreaterThan(anchorSuggestion({ ...boat, windKn: 30, anchorType: 'plow' }).suggestedKg!);
+    expect(must(heavy.suggestedKg)).toBeGreaterThan(
+      must(anchorSuggestion({ ...boat, windKn: 30, anchorType: 'plow' }).suggestedKg),
+    );
     expect(heavy.cautions.some((c) => /heavy boat/.test(c))).toBe(true);
   });
 });
@@ -104,15 +119,19 @@ describe('rodeSuggestion', () => {
     // 5/8 in: 8,910 × 0.85 = 7,574 lbf < 9,000; 3/4 in: 12,780 × 0.85 = 10,863 lbf ≥ 9,000.
     expect(r.nylon?.sizeIn).toBe(3 / 4);
     expect(r.nylon?.sizeMm).toBeCloseTo(19.1, 9);
-    expect(lb(r.nylon!.minBreakN)).toBeCloseTo(12780 * 0.85, 6);
+    expect(lb(must(r.nylon).minBreakN)).toBeCloseTo(12780 * 0.85, 6);
     expect(r.nylon?.governedBy).toBe('strength');
   });
 
   it('goes one size up for a rope-chain windlass', () => {
     const plain = rodeSuggestion({ loadN: lbfToN(400), anchorKg: lbToKg(36) });
-    const windlass = rodeSuggestion({ loadN: lbfToN(400), anchorKg: lbToKg(36), ropeChainWindlass: true });
+    const windlass = rodeSuggestion({
+      loadN: lbfToN(400),
+      anchorKg: lbToKg(36),
+      ropeChainWindlass: true,
+    });
     expect(windlass.nylon?.sizeIn).toBe(7 / 16);
-    expect(windlass.nylon!.sizeIn).toBeGreaterThan(plain.nylon!.sizeIn);
+    expect(must(windlass.nylon).sizeIn).toBeGreaterThan(must(plain.nylon).sizeIn);
   });
 
   // UFC 4-159-03 Table 3-7 (seen): factor 3 on new chain; G43 breaks at 3 × WLL, so 4,286 lbf takes 3/8 in (5,400), not 7/16.
@@ -148,7 +167,9 @@ describe('rodeSuggestion', () => {
     [{ loadN: 100, anchorKg: -1 }, 'anchorKg'],
     [{ loadN: 100, loaM: -2 }, 'loaM'],
   ])('rejects bad input (case %#) naming %s', (input, field) => {
-    expect(thrownField(() => rodeSuggestion(input as Parameters<typeof rodeSuggestion>[0]))).toBe(field);
+    expect(thrownField(() => rodeSuggestion(input as Parameters<typeof rodeSuggestion>[0]))).toBe(
+      field,
+    );
   });
 });
 
@@ -164,7 +185,9 @@ describe('snubberSuggestion', () => {
 
   // Practical Sailor 2016 (seen): snubbers of 20 ft or more; Rodewise: max(20 ft, LOA/2) everyday, ≥ LOA in storms.
   it('is at least max(20 ft, half the length) everyday and at least the length in storms, rigged as a bridle', () => {
-    expect(snubberSuggestion({ loadN: lbfToN(900), loaM: ftToM(30) }).lengthM).toBeGreaterThanOrEqual(ftToM(20));
+    expect(
+      snubberSuggestion({ loadN: lbfToN(900), loaM: ftToM(30) }).lengthM,
+    ).toBeGreaterThanOrEqual(ftToM(20));
     expect(snubberSuggestion({ loadN: lbfToN(2000), loaM: 16 }).lengthM).toBeGreaterThanOrEqual(8);
     const storm = snubberSuggestion({ loadN: lbfToN(900), loaM: ftToM(35), storm: true });
     expect(storm.lengthM).toBeGreaterThanOrEqual(ftToM(35));

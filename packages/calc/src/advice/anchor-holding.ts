@@ -22,7 +22,9 @@ export function anchorMassForHoldingKg(
   holdingN: number,
 ): number {
   const curve = HOLDING_CURVES[bottom];
-  return curve.refKg * (holdingN / (ANCHOR_EFFICIENCY[type] * curve.refHoldingN)) ** (1 / curve.exponent);
+  return (
+    curve.refKg * (holdingN / (ANCHOR_EFFICIENCY[type] * curve.refHoldingN)) ** (1 / curve.exponent)
+  );
 }
 
 /** Displacement–length ratio (on LOA) taken as typical for a cruising boat (common practice). */

@@ -145,9 +145,13 @@ function describe(
   return (
     `Holding follows a drag-anchor power law, H = H_R × (W ÷ ${curve.refKg} kg)^${curve.exponent} (the form of UFC 4-159-03 eq. 26, after NCEL TDS 83-08R; ` +
     `exponent from its Table 5-3, from memory), with H_R = ${(curve.refHoldingN / 1000).toFixed(1)} kN for a well-set scoop in ${BOTTOM_TYPE_LABELS[bottom]}` +
-    (bottomGiven ? '' : ' (the middle bottom, taken because none is given; soft mud is shown beside it)') +
+    (bottomGiven
+      ? ''
+      : ' (the middle bottom, taken because none is given; soft mud is shown beside it)') +
     ` (calibrated to handbook examples and to what cruisers carry, from memory)` +
-    (eff === 1 ? '' : `, times ${eff} for a ${label} (relative to a scoop, common practice, from memory)`) +
+    (eff === 1
+      ? ''
+      : `, times ${eff} for a ${label} (relative to a scoop, common practice, from memory)`) +
     `. The minimum holds the table load at the plan's wind with a factor of safety of 1.0, as UFC 4-159-03 Table 3-7 uses for a vessel's own anchoring (seen); ` +
     `the suggested working anchor holds it at ${suggestedForKn} kn, because a working anchor must survive a squall.` +
     (heavy > 1
@@ -168,7 +172,9 @@ function anchorCautions(type: AnchorType, bottom: BottomType, heavy: number): st
   if (bottom === 'weed')
     list.push('Weed keeps many anchors from penetrating: check the set, or choose another spot.');
   if (bottom === 'mud')
-    list.push('Soft mud holds about half as well as a firm bottom: let out more scope and allow time to set.');
+    list.push(
+      'Soft mud holds about half as well as a firm bottom: let out more scope and allow time to set.',
+    );
   if (type === 'grapnel')
     list.push(
       'A grapnel suits dinghies, small craft and rock; it is not a primary anchor for a cruising boat.',
@@ -180,6 +186,8 @@ function anchorCautions(type: AnchorType, bottom: BottomType, heavy: number): st
       'A fisherman anchor holds mostly by weight and one fluke; the rode can foul the upper arm.',
     );
   if (heavy > 1)
-    list.push('A heavy boat for its length surges harder at anchor: its anchor is sized up for that.');
+    list.push(
+      'A heavy boat for its length surges harder at anchor: its anchor is sized up for that.',
+    );
   return list;
 }

@@ -111,7 +111,8 @@ function smallestSize(grade: ChainGrade, loadN: number, atLeastIn = 0): number |
 function chainChoice(grade: ChainGrade, loadN: number, floorIn: number): ChainChoice | null {
   const byLoad = smallestSize(grade, loadN);
   if (byLoad === null) return null;
-  const tradeSizeIn = byLoad >= floorIn - 1e-9 ? byLoad : smallestSize(grade, 0, floorIn) ?? byLoad;
+  const tradeSizeIn =
+    byLoad >= floorIn - 1e-9 ? byLoad : (smallestSize(grade, 0, floorIn) ?? byLoad);
   const spec = chainSpec({ grade, tradeSizeIn });
   const row = CHAIN_ROWS.find((r) => Math.abs(r.tradeSizeIn - tradeSizeIn) < 1e-9);
   return {
@@ -170,7 +171,8 @@ export function rodeSuggestion(input: RodeSuggestionInput): RodeSuggestionResult
   const grade = requireOneOf(raw.grade ?? 'G43', 'grade', CHAIN_GRADES);
   const windlass = optionalBoolean(raw.ropeChainWindlass, 'ropeChainWindlass', false);
   const wet = optionalBoolean(raw.wet, 'wet', true);
-  const loaM = raw.loaM === undefined ? undefined : optionalNumber(raw.loaM, 'loaM', 0, 0, 200, 'min');
+  const loaM =
+    raw.loaM === undefined ? undefined : optionalNumber(raw.loaM, 'loaM', 0, 0, 200, 'min');
   const anchorKg =
     raw.anchorKg === undefined
       ? undefined

@@ -110,10 +110,7 @@ export function snubberSuggestion(input: SnubberSuggestionInput): SnubberSuggest
       'Even 1 in nylon is below the factor at this working load: rig a bridle of two snubbers or ask a rigger.',
     );
   }
-  const lengthM = roundUp(
-    Math.max(SNUBBER_HEAVY_WEATHER_M, storm ? loaM : loaM / 2),
-    0.5,
-  );
+  const lengthM = roundUp(Math.max(SNUBBER_HEAVY_WEATHER_M, storm ? loaM : loaM / 2), 0.5);
   const loadFraction = loadN / chosen.minBreakN;
   const strain = nylonStrain(loadFraction, construction);
   return {

@@ -32,7 +32,11 @@ describe('weakestLink', () => {
     expect(r.warnings.some((w) => w.startsWith('shackle: the load is'))).toBe(true);
     // No breaking-factor warning unless a factor is asked for: each WLL already carries its part's factor.
     expect(r.warnings.some((w) => /below the design factor/.test(w))).toBe(false);
-    const asked = weakestLink({ loadN: lbfToN(3000), components: [chain, shackle], designFactor: 4 });
+    const asked = weakestLink({
+      loadN: lbfToN(3000),
+      components: [chain, shackle],
+      designFactor: 4,
+    });
     expect(asked.warnings.some((w) => /below the design factor 4/.test(w))).toBe(true);
   });
 

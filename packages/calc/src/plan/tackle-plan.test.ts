@@ -1,3 +1,4 @@
+import { must } from '../testing/must';
 import { describe, expect, it } from 'vitest';
 import { thrownField } from '../testing/thrown-field';
 import { ftToM, lbfToN, N_PER_LBF } from '../units/units';
@@ -58,7 +59,9 @@ describe('tacklePlan', () => {
   it('checks the anchor against the suggestion', () => {
     const light = tacklePlan(buildPlan({ components: { anchor: { type: 'plow', massKg: 2 } } }));
     expect(light.anchor?.meetsMinimum).toBe(false);
-    expect(light.warnings.some((w) => /lighter than the .* kg our holding model needs/.test(w))).toBe(true);
+    expect(
+      light.warnings.some((w) => /lighter than the .* kg our holding model needs/.test(w)),
+    ).toBe(true);
     const heavy = tacklePlan(buildPlan({ components: { anchor: { type: 'plow', massKg: 60 } } }));
     expect(heavy.anchor?.meetsSuggested).toBe(true);
   });
@@ -85,18 +88,23 @@ describe('tacklePlan', () => {
     );
     expect(r.scopeRatio).toBeLessThan(3);
     expect(r.catenary?.liftsAtAnchor).toBe(true);
-    expect(r.catenary!.anchorAngleDeg).toBeGreaterThan(5);
+    expect(must(r.catenary).anchorAngleDeg).toBeGreaterThan(5);
     expect(r.warnings.some((w) => /below 3:1/.test(w))).toBe(true);
-    expect(r.warnings.some((w) => /pulls the anchor \d+° upward \(we warn above 5°\)/.test(w))).toBe(true);
+    expect(
+      r.warnings.some((w) => /pulls the anchor \d+° upward \(we warn above 5°\)/.test(w)),
+    ).toBe(true);
   });
 
   // The threshold is about 5° (from memory): a chain that only just leaves the seabed is not a warning.
   it('does not warn about a chain lifting by less than 5°', () => {
     const r = tacklePlan(
-      buildPlan({ windKn: 15, components: { chain: { grade: 'G43', tradeSizeIn: 5 / 16, lengthM: 44 } } }),
+      buildPlan({
+        windKn: 15,
+        components: { chain: { grade: 'G43', tradeSizeIn: 5 / 16, lengthM: 44 } },
+      }),
     );
     expect(r.catenary).not.toBeNull();
-    expect(r.catenary!.anchorAngleDeg).toBeLessThanOrEqual(5);
+    expect(must(r.catenary).anchorAngleDeg).toBeLessThanOrEqual(5);
     expect(r.warnings.some((w) => /upward/.test(w))).toBe(false);
   });
 

@@ -20,7 +20,12 @@ import {
   UPLIFT_WARN_DEG,
   type TackleRecommendation,
 } from '../recommend/recommend-tackle';
-import { BURIAL_BOTTOMS, DEFAULT_BOTTOM, type AnchorType, type BurialBottom } from '../tables/anchor-holding';
+import {
+  BURIAL_BOTTOMS,
+  DEFAULT_BOTTOM,
+  type AnchorType,
+  type BurialBottom,
+} from '../tables/anchor-holding';
 import { checkPlanInput, type CheckedPlan, type TacklePlanInput } from './plan-input';
 import {
   rateChain,
@@ -162,7 +167,9 @@ function recommendationFor(plan: CheckedPlan): TackleRecommendation | null {
       loaM: plan.boat.loaM,
       ...(plan.boat.beamM === undefined ? {} : { beamM: plan.boat.beamM }),
       hull: plan.boat.hull,
-      ...(plan.boat.displacementKg === undefined ? {} : { displacementKg: plan.boat.displacementKg }),
+      ...(plan.boat.displacementKg === undefined
+        ? {}
+        : { displacementKg: plan.boat.displacementKg }),
       bowHeightM: plan.boat.bowHeightM,
       windKn: plan.windKn,
       anchorType: plan.components.anchor?.type ?? 'scoop',
@@ -208,7 +215,11 @@ function weakestLinkOf(
   return result;
 }
 
-function anchorCheck(plan: CheckedPlan, checkLoadN: number, warnings: string[]): PlanAnchorCheck | null {
+function anchorCheck(
+  plan: CheckedPlan,
+  checkLoadN: number,
+  warnings: string[],
+): PlanAnchorCheck | null {
   const anchor = plan.components.anchor;
   if (anchor === undefined) return null;
   const suggestion = withFieldPrefix('boat', () =>
@@ -243,7 +254,9 @@ function anchorCheck(plan: CheckedPlan, checkLoadN: number, warnings: string[]):
   const neededKg = anchorMassForHoldingKg(anchor.type, bottom as BurialBottom, checkLoadN * heavy);
   const meetsMinimum = anchor.massKg >= neededKg;
   const storm = plan.windKn >= STORM_WIND_KN;
-  const meetsSuggested = storm ? meetsMinimum : anchor.massKg >= (suggestion.suggestedKg ?? Infinity);
+  const meetsSuggested = storm
+    ? meetsMinimum
+    : anchor.massKg >= (suggestion.suggestedKg ?? Infinity);
   if (!meetsMinimum)
     warnings.push(
       `The anchor is lighter than the ${neededKg.toFixed(1)} kg our holding model needs at ${plan.windKn} kn: choose a heavier anchor or a more efficient type.`,

@@ -62,16 +62,33 @@ describe('ropeSpec', () => {
   });
 
   // Anchoring limit: wet breaking (less 15 %, UFC 4-159-03 Table 3-7 note, seen) ÷ 2.25 (Rodewise's factor, common practice).
-  it.each(NYLON_MBS)('%s in: anchoring working limit = dry MBS × 0.85 ÷ 2.25 (%s lbf)', (dIn, mbs) => {
-    const dry = ropeSpec({ material: 'nylon', construction: 'three-strand', diameterMm: inToMm(dIn) });
-    const wet = ropeSpec({ material: 'nylon', construction: 'three-strand', diameterMm: inToMm(dIn), wet: true });
-    expect(lbf(dry.wllN)).toBeCloseTo((mbs * 0.85) / 2.25, 6);
-    expect(wet.wllN).toBeCloseTo(dry.wllN, 6);
-  });
+  it.each(NYLON_MBS)(
+    '%s in: anchoring working limit = dry MBS × 0.85 ÷ 2.25 (%s lbf)',
+    (dIn, mbs) => {
+      const dry = ropeSpec({
+        material: 'nylon',
+        construction: 'three-strand',
+        diameterMm: inToMm(dIn),
+      });
+      const wet = ropeSpec({
+        material: 'nylon',
+        construction: 'three-strand',
+        diameterMm: inToMm(dIn),
+        wet: true,
+      });
+      expect(lbf(dry.wllN)).toBeCloseTo((mbs * 0.85) / 2.25, 6);
+      expect(wet.wllN).toBeCloseTo(dry.wllN, 6);
+    },
+  );
 
   // A 3/4 in hurricane rode (common practice) is no longer read against its cargo rating: at 4,000 lb it is within its limit.
   it('rates 3/4 in nylon above a 4,000 lb load for anchoring', () => {
-    const r = ropeSpec({ material: 'nylon', construction: 'three-strand', diameterMm: inToMm(3 / 4), wet: true });
+    const r = ropeSpec({
+      material: 'nylon',
+      construction: 'three-strand',
+      diameterMm: inToMm(3 / 4),
+      wet: true,
+    });
     expect(lbf(r.wllN)).toBeGreaterThan(4000);
     expect(lbf(r.tieDownWllN)).toBeCloseTo(1420, 6);
   });

@@ -140,7 +140,8 @@ export function ropeSpec(input: RopeSpecInput): RopeSpecResult {
   const extrapolated = diameterMm < MIN_MM || diameterMm > MAX_MM;
   return {
     minBreakN,
-    wllN: designFactor === undefined ? wetBreakN / NYLON_ANCHORING_FACTOR : minBreakN / designFactor,
+    wllN:
+      designFactor === undefined ? wetBreakN / NYLON_ANCHORING_FACTOR : minBreakN / designFactor,
     tieDownWllN,
     wllBasis: designFactor === undefined ? 'anchoring' : 'design-factor',
     extrapolated,

@@ -53,10 +53,13 @@ export function shackleSpec(input: ShackleSpecInput): ShackleSpecResult {
 }
 
 /** The smallest shackle of the table with a WLL of at least `minWllN`, or null when none is. */
-export function shackleForWll(minWllN: number): { nominalIn: number; wllN: number; minBreakN: number } | null {
+export function shackleForWll(
+  minWllN: number,
+): { nominalIn: number; wllN: number; minBreakN: number } | null {
   for (const row of SHACKLE_ROWS) {
     const wllN = row.wllShortTons * N_PER_SHORT_TON;
-    if (wllN >= minWllN) return { nominalIn: row.nominalIn, wllN, minBreakN: wllN * SHACKLE_DESIGN_FACTOR };
+    if (wllN >= minWllN)
+      return { nominalIn: row.nominalIn, wllN, minBreakN: wllN * SHACKLE_DESIGN_FACTOR };
   }
   return null;
 }

@@ -14,7 +14,11 @@ import {
   requireOneOf,
 } from '../internal/validate';
 import { anchorSuggestion, type AnchorSuggestionResult } from '../advice/anchor-suggestion';
-import { rodeSuggestion, type ChainChoice, type RodeSuggestionResult } from '../advice/rode-suggestion';
+import {
+  rodeSuggestion,
+  type ChainChoice,
+  type RodeSuggestionResult,
+} from '../advice/rode-suggestion';
 import { snubberSuggestion, type SnubberSuggestionResult } from '../advice/snubber-suggestion';
 import { catenary, type CatenaryResult } from '../geometry/catenary';
 import { scopeRung, type ScopeRung } from '../geometry/scope';
@@ -31,7 +35,8 @@ import {
 } from '../tables/anchor-holding';
 import { CHAIN_GRADES, CHAIN_GRADE_LABELS, CHAIN_ROWS, type ChainGrade } from '../tables/chain-cfr';
 import { inchFractionLabel, tradeSizeMm } from '../units/format';
-import { M_PER_FT, MM_PER_IN } from '../units/units';
+import { M_PER_FT } from '../units/units';
+import type { PlanComponents, PlanConnector } from '../plan/plan-input';
 
 /** Pull angle above the seabed at the anchor beyond which Rodewise warns, degrees (about 5°, from memory). */
 export const UPLIFT_WARN_DEG = 5;
@@ -188,7 +193,8 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
   const load = designLoad({ ...boat, windKn });
   const storm = windKn > STORM_WIND_KN;
   const sizingKn = Math.max(windKn, STORM_WIND_KN);
-  const sizingLoadN = sizingKn === windKn ? load.loadN : designLoad({ ...boat, windKn: sizingKn }).loadN;
+  const sizingLoadN =
+    sizingKn === windKn ? load.loadN : designLoad({ ...boat, windKn: sizingKn }).loadN;
   const workingLoadN = designLoad({ ...boat, windKn: 30 }).loadN;
   const peakFactor = storm ? SHOCK_REDUCTION_FACTOR : 1;
   const rodeLoadN = sizingLoadN * peakFactor;
@@ -290,7 +296,9 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
   const snubber = snubberSuggestion({ loadN: workingLoadN, loaM, storm });
   const shackle = chain === null ? null : shackleForWll(chain.wllN);
   if (chain !== null && shackle === null)
-    warnings.push('No shackle in the table matches this chain’s WLL: use a rated connector of at least the chain’s WLL.');
+    warnings.push(
+      'No shackle in the table matches this chain’s WLL: use a rated connector of at least the chain’s WLL.',
+    );
 
   // Reasoning, in plain words with sources.
   const rowText =
@@ -301,7 +309,9 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
     topic: 'load',
     text:
       `Design load ${kN(load.loadN)} at ${windKn} kn from the ABYC H-40 table of horizontal loads (values from memory), ${rowText}` +
-      (windKn > 42 ? ', scaled with wind speed squared beyond the 42 kn column (extrapolated)' : '') +
+      (windKn > 42
+        ? ', scaled with wind speed squared beyond the 42 kn column (extrapolated)'
+        : '') +
       `. The working gear is sized for ${sizingKn} kn (${kN(sizingLoadN)}), because it must survive a squall.`,
   });
   reasoning.push({ topic: 'anchor', text: suggestion.basis });
@@ -316,7 +326,7 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
             ? 'Your gypsy’s size, which carries the load. '
             : 'The load alone would allow a lighter chain; the practice floor for the boat’s length sets this size. '
           : '') +
-        rode.basis.split('Nylon')[0]!.trim(),
+        (rode.basis.split('Nylon')[0] ?? '').trim(),
     });
   if (storm)
     reasoning.push({
@@ -342,7 +352,9 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
     topic: 'scope',
     text:
       `${ratio}:1 scope on ${heightM.toFixed(1)} m from seabed to bow roller at high water (depth ${depthM} m + bow ${bowHeightM} m + tide ${tideM} m): ${rodeLengthM} m of rode (ladder 5:1 most weather, 7:1 storms, 10:1 severe, Boat Mechanical Systems Handbook)` +
-      (steppedUp ? `; stepped up from ${ladderRatio}:1 so the chain does not lift the anchor more than ${UPLIFT_WARN_DEG}°.` : '.'),
+      (steppedUp
+        ? `; stepped up from ${ladderRatio}:1 so the chain does not lift the anchor more than ${UPLIFT_WARN_DEG}°.`
+        : '.'),
   });
   if (shape !== null) {
     const lifts = shape.anchorAngleDeg > UPLIFT_WARN_DEG;
@@ -361,8 +373,11 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
       `No anchor mass is given for ${bottom === 'rock' ? 'rock' : 'weed'}: holding there is unpredictable. Choose a sand or mud patch if you can.`,
     );
   if (anchorType === 'grapnel')
-    warnings.push('A grapnel is not a main anchor for a cruising boat; consider a scoop, plow or claw.');
-  if (load.extrapolated) warnings.push('The design load lies beyond the ABYC table: an extrapolation.');
+    warnings.push(
+      'A grapnel is not a main anchor for a cruising boat; consider a scoop, plow or claw.',
+    );
+  if (load.extrapolated)
+    warnings.push('The design load lies beyond the ABYC table: an extrapolation.');
   if (storm)
     warnings.push(
       'In a storm, rig two snubbers or a bridle, protect every fairlead from chafe, take off windage and have a second anchor ready.',
@@ -372,7 +387,9 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
     ...STANDARD_CAUTIONS,
     "An anchor maker's sizing chart and the gear's own markings take precedence over these estimates.",
     ...(storm
-      ? ['Before a storm, follow the harbour master, local rules and a qualified rigger or surveyor; a safe berth or a haul-out may beat any anchor.']
+      ? [
+          'Before a storm, follow the harbour master, local rules and a qualified rigger or surveyor; a safe berth or a haul-out may beat any anchor.',
+        ]
       : []),
   ];
   return {
@@ -413,3 +430,40 @@ export function sizeLabel(sizeIn: number): string {
 
 /** LOA in feet, for tests and texts. */
 export const loaFt = (loaM: number) => loaM / M_PER_FT;
+
+/**
+ * The recommendation as a plan's components, so a saved plan carries exactly what was shown:
+ * the anchor, the chain at its length, the storm rode's nylon (spliced to the chain), the
+ * snubber and the anchor shackle.
+ */
+export function planComponentsFrom(rec: TackleRecommendation): PlanComponents {
+  const connectors: PlanConnector[] = [];
+  if (rec.shackle !== null)
+    connectors.push({ label: 'anchor shackle', kind: 'shackle', nominalIn: rec.shackle.nominalIn });
+  const components: PlanComponents = {
+    snubber: {
+      material: 'nylon',
+      diameterMm: rec.snubber.diameterMm,
+      lengthM: rec.snubber.lengthM,
+    },
+    connectors,
+  };
+  if (rec.anchor.massKg !== null)
+    components.anchor = { type: rec.anchor.type, massKg: rec.anchor.massKg };
+  if (rec.chain !== null)
+    components.chain = {
+      grade: rec.chain.grade,
+      tradeSizeIn: rec.chain.tradeSizeIn,
+      lengthM: rec.chain.lengthM,
+    };
+  if (rec.nylon !== null && rec.nylon.role === 'storm-rode') {
+    components.rode = {
+      material: 'nylon',
+      construction: 'three-strand',
+      diameterMm: rec.nylon.sizeMm,
+      lengthM: rec.nylon.lengthM,
+    };
+    connectors.push({ label: 'chain-to-rope splice', kind: 'splice' });
+  }
+  return components;
+}

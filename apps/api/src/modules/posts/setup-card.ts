@@ -1,4 +1,10 @@
-import { CalcInputError, tacklePlan } from '@app/calc';
+import {
+  ANCHOR_TYPE_LABELS,
+  CHAIN_GRADE_LABELS,
+  CalcInputError,
+  inchFractionLabel,
+  tacklePlan,
+} from '@app/calc';
 import type { PostSetup, SetupCardDto } from '@app/shared';
 import { AppError } from '../../errors/app-error';
 
@@ -54,6 +60,27 @@ export function computeSetupCard(setup: PostSetup): SetupCardDto {
           bowAngleDeg: r.catenary.bowAngleDeg,
           anchorAngleDeg: r.catenary.anchorAngleDeg,
           liftsAtAnchor: r.catenary.liftsAtAnchor,
+        }
+      : null,
+    anchor: r.anchor
+      ? {
+          massKg: r.anchor.massKg,
+          neededKg: r.anchor.neededKg,
+          meetsMinimum: r.anchor.meetsMinimum,
+          meetsSuggested: r.anchor.meetsSuggested,
+        }
+      : null,
+    recommendation: r.recommendation
+      ? {
+          anchorType: ANCHOR_TYPE_LABELS[r.recommendation.anchor.type],
+          anchorKg: r.recommendation.anchor.massKg,
+          chain: r.recommendation.chain
+            ? `${inchFractionLabel(r.recommendation.chain.tradeSizeIn)} (${r.recommendation.chain.nominalMm} mm) ${CHAIN_GRADE_LABELS[r.recommendation.chain.grade]}`
+            : null,
+          nylon: r.recommendation.nylon
+            ? `${inchFractionLabel(r.recommendation.nylon.sizeIn)} (${r.recommendation.nylon.sizeMm} mm) nylon${r.recommendation.nylon.role === 'alternative' ? ' if the rode is chain and rope' : ' rode'}`
+            : null,
+          snubber: `${inchFractionLabel(r.recommendation.snubber.sizeIn)} (${r.recommendation.snubber.diameterMm} mm) nylon, ${r.recommendation.snubber.lengthM} m${r.recommendation.snubber.bridle ? ', two or a bridle' : ''}`,
         }
       : null,
     warnings: r.warnings,

@@ -1,4 +1,4 @@
-import { tacklePlan, type TacklePlanResult } from '@app/calc';
+import { tacklePlan, type BottomType, type TacklePlanResult } from '@app/calc';
 import type { PlanComponents } from '@app/shared';
 import type { Boat } from '../../models';
 
@@ -6,7 +6,7 @@ export interface PlanConditions {
   windKn: number;
   depthM: number;
   tideM?: number;
-  bottom?: 'sand' | 'mud' | 'clay' | 'weed' | 'rock';
+  bottom?: BottomType;
   components: PlanComponents;
 }
 

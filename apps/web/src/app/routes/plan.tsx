@@ -9,6 +9,7 @@ import { errorMessage } from '../../lib/form-errors';
 import { RequireAuth } from '../../features/auth/components/require-auth';
 import { CatenaryDrawing } from '../../features/calculators/components/catenary-drawing';
 import { WeakestLinkTable } from '../../features/calculators/components/weakest-link-table';
+import { RecommendationColumn } from '../../features/boats/components/recommendation-column';
 import { usePlan } from '../../features/plans/api/get-plan';
 import { useUpdatePlan } from '../../features/plans/api/update-plan';
 import { ConnectorEditor } from '../../features/plans/components/connector-editor';
@@ -59,6 +60,21 @@ function PlanScreen({ planId }: { planId: number }) {
         </div>
       </div>
       <PlanCard data={query.data} />
+      {result.recommendation && (
+        <section aria-labelledby="rec-heading" className="flex flex-col gap-3 print:hidden">
+          <h2 id="rec-heading" className="text-xl">
+            What Rodewise would carry for this plan
+          </h2>
+          <p className="text-sm text-ink-700">
+            The same recommendation as on the boat page, for this plan&apos;s wind, depth, tide and
+            seabed, so you can compare it with your gear above.
+          </p>
+          <RecommendationColumn
+            title={`Recommendation at ${plan.windKn} kn`}
+            rec={result.recommendation}
+          />
+        </section>
+      )}
       <section aria-labelledby="link-heading" className="flex flex-col gap-3 print:hidden">
         <h2 id="link-heading" className="text-xl">
           Weakest-link check of your gear
@@ -71,7 +87,11 @@ function PlanScreen({ planId }: { planId: number }) {
           <WeakestLinkTable
             parts={linkParts(result)}
             result={link}
-            caption={`At the design load of the plan`}
+            caption={
+              result.peakFactor < 1
+                ? `At ${Math.round(result.peakFactor * 100)} % of the design load (storm credit for the nylon in the rode)`
+                : 'At the design load of the plan'
+            }
           />
         ) : (
           <p className="text-sm">No rated parts yet: add the chain or a fitting.</p>

@@ -13,6 +13,7 @@ export interface PlanDraft {
   condition: PlanCondition;
   windKn: number;
   depthM: number;
+  tideM: number;
   components: PlanComponents;
 }
 
@@ -24,20 +25,12 @@ export interface BoatRecommendationProps {
 }
 
 const WINDS = [
-  {
-    windKn: 30,
-    title: 'Everyday: 30 kn',
-    condition: 'everyday',
-    scope: 5,
-    name: 'Everyday, 30 kn',
-  },
-  { windKn: 60, title: 'Storm: 60 kn', condition: 'storm', scope: 7, name: 'Storm, 60 kn' },
-  // 10:1 is the handbook ladder's rung for severe weather (see packages/calc scopeRung).
+  { windKn: 30, title: 'Everyday: 30 kn', condition: 'everyday', name: 'Everyday, 30 kn' },
+  { windKn: 60, title: 'Storm: 60 kn', condition: 'storm', name: 'Storm, 60 kn' },
   {
     windKn: 70,
     title: 'Hurricane hole: 70 kn',
     condition: 'hurricane-hole',
-    scope: 10,
     name: 'Hurricane hole, 70 kn',
   },
 ] as const;
@@ -46,15 +39,19 @@ const WINDS = [
 export function BoatRecommendation({ boat, onSavePlan, savingWindKn }: BoatRecommendationProps) {
   const [anchorType, setAnchorType] = useState<AnchorType>('plow');
   const [depthM, setDepthM] = useState<number | undefined>(6);
+  const [tideM, setTideM] = useState<number | undefined>(0);
   const depthError =
     depthM === undefined
       ? 'Enter the depth you usually anchor in'
       : depthM < 0.5 || depthM > 100
         ? 'Depth must be 0.5–100 m'
         : undefined;
+  const tideError =
+    tideM !== undefined && (tideM < 0 || tideM > 15) ? 'Tidal rise must be 0–15 m' : undefined;
+  const where = { depthM: depthError ? 6 : (depthM ?? 6), tideM: tideError ? 0 : (tideM ?? 0) };
   return (
     <div className="flex flex-col gap-4">
-      <div className="grid gap-3 sm:grid-cols-2">
+      <div className="grid gap-3 sm:grid-cols-3">
         <SelectField
           label="Anchor type"
           options={ANCHOR_TYPES.map((t) => ({ value: t, label: ANCHOR_TYPE_LABELS[t] }))}
@@ -66,13 +63,21 @@ export function BoatRecommendation({ boat, onSavePlan, savingWindKn }: BoatRecom
           kind="length"
           value={depthM}
           onValueChange={setDepthM}
-          hint="Sets the chain length: 5:1 everyday, 7:1 in a storm, 10:1 in a hurricane hole"
+          hint="Low-water depth: sets the rode length (5:1 in light weather, 7:1 from 25 kn, 10:1 in severe storms)"
           error={depthError}
+        />
+        <QuantityField
+          label="Tidal rise to come"
+          kind="length"
+          value={tideM}
+          onValueChange={setTideM}
+          hint="Added to the depth for the rode length (plus any surge in a storm)"
+          error={tideError}
         />
       </div>
       <div className="grid gap-4 md:grid-cols-2 xl:grid-cols-3" data-testid="recommendations">
         {WINDS.map((w) => {
-          const outcome = recommendFor(boat, w.windKn, anchorType);
+          const outcome = recommendFor(boat, w.windKn, anchorType, where);
           if (!outcome.ok) {
             return (
               <Alert key={w.windKn} tone="error" title={`${w.title}: cannot size this boat`}>
@@ -87,13 +92,14 @@ export function BoatRecommendation({ boat, onSavePlan, savingWindKn }: BoatRecom
               rec={outcome.value}
               isSaving={savingWindKn === w.windKn}
               onSave={() => {
-                if (depthM === undefined || depthError) return;
+                if (depthM === undefined || depthError || tideError) return;
                 onSavePlan({
                   name: w.name,
                   condition: w.condition,
                   windKn: w.windKn,
                   depthM,
-                  components: recommendedComponents(outcome.value, boat, depthM, w.scope),
+                  tideM: tideM ?? 0,
+                  components: recommendedComponents(outcome.value),
                 });
               }}
             />

@@ -1,21 +1,27 @@
-import { CHAIN_GRADE_LABELS, inchFractionLabel, nylonChoiceLabel } from '@app/calc';
+import {
+  ANCHOR_TYPE_LABELS,
+  CHAIN_GRADE_LABELS,
+  inchFractionLabel,
+  type TackleRecommendation,
+} from '@app/calc';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Quantity } from '../../units/components/quantity';
-import type { Recommendation } from '../utils/recommend';
+import { RecommendationReasoning } from './recommendation-reasoning';
 
 export interface RecommendationColumnProps {
   title: string;
-  rec: Recommendation;
-  onSave: () => void;
-  isSaving: boolean;
+  rec: TackleRecommendation;
+  /** Omit for a read-only column (the plan page). */
+  onSave?: () => void;
+  isSaving?: boolean;
 }
 
 const times = (value: number) => `${value.toFixed(2)} ×`;
 
-/** One wind's suggested anchor, chain, rode and snubber with their margins and warnings. */
+/** One wind's anchor, chain, nylon, snubber and shackle with their margins, warnings and reasoning. */
 export function RecommendationColumn({ title, rec, onSave, isSaving }: RecommendationColumnProps) {
-  const { load, anchor, rode, snubber, chainMargin } = rec;
+  const { designLoad: load, anchor, chain, nylon, snubber, shackle } = rec;
   return (
     <section
       aria-label={title}
@@ -27,41 +33,86 @@ export function RecommendationColumn({ title, rec, onSave, isSaving }: Recommend
         <dd>
           <Quantity value={load.loadN} kind="force" />
           {load.extrapolated && ' (extrapolated)'}
+          {load.governedBy === 'beam' && (
+            <span className="block text-ink-700">table entered by beam</span>
+          )}
         </dd>
         <dt className="font-bold">Anchor</dt>
         <dd>
-          {rec.anchorType} of <Quantity value={anchor.suggestedKg} kind="mass" /> (model minimum{' '}
-          <Quantity value={anchor.minKg} kind="mass" />)
+          {anchor.massKg === null ? (
+            'no mass on this seabed: see the warnings'
+          ) : (
+            <>
+              {ANCHOR_TYPE_LABELS[anchor.type]} of <Quantity value={anchor.massKg} kind="mass" />
+              <span className="block text-ink-700">
+                holds {rec.sizingKn} kn
+                {anchor.softMud && (
+                  <>
+                    ; in soft mud <Quantity value={anchor.softMud.suggestedKg} kind="mass" />
+                  </>
+                )}
+              </span>
+            </>
+          )}
         </dd>
         <dt className="font-bold">Chain</dt>
         <dd>
-          {rode.chain ? (
+          {chain ? (
             <>
-              {inchFractionLabel(rode.chain.tradeSizeIn)} {CHAIN_GRADE_LABELS[rode.chain.grade]},
-              WLL <Quantity value={rode.chain.wllN} kind="force" />
-              {chainMargin && (
-                <span className="block text-ink-700">
-                  margin {times(chainMargin.wll)} on WLL, {times(chainMargin.breaking)} on breaking
-                </span>
-              )}
+              {inchFractionLabel(chain.tradeSizeIn)} ({chain.nominalMm} mm){' '}
+              {CHAIN_GRADE_LABELS[chain.grade]}, <Quantity value={chain.lengthM} kind="length" />
+              <span className="block text-ink-700">
+                WLL <Quantity value={chain.wllN} kind="force" />, {times(chain.marginOnWll)} the
+                load it is sized for
+              </span>
             </>
           ) : (
             'none in the table carries this load'
           )}
         </dd>
-        <dt className="font-bold">Nylon rode</dt>
+        <dt className="font-bold">
+          {nylon?.role === 'storm-rode' ? 'Nylon rode' : 'If chain and rope'}
+        </dt>
         <dd>
-          {rode.nylon
-            ? `${nylonChoiceLabel(rode.nylon)} three-strand`
-            : 'none up to 1 in is enough'}
+          {nylon ? (
+            <>
+              {inchFractionLabel(nylon.sizeIn)} ({nylon.sizeMm} mm) nylon three-strand
+              {nylon.role === 'storm-rode' && (
+                <>
+                  , <Quantity value={nylon.lengthM} kind="length" /> spliced to the chain
+                </>
+              )}
+              <span className="block text-ink-700">metric: {nylon.metricMm} mm</span>
+            </>
+          ) : (
+            'none up to 1 in is enough'
+          )}
         </dd>
         <dt className="font-bold">Snubber</dt>
         <dd>
-          {inchFractionLabel(snubber.sizeIn)} nylon,{' '}
+          {inchFractionLabel(snubber.sizeIn)} ({snubber.diameterMm} mm) nylon,{' '}
           <Quantity value={snubber.lengthM} kind="length" /> long
-          <span className="block text-ink-700">
-            stretches about <Quantity value={snubber.stretchM} kind="length" /> at the load
-          </span>
+          {snubber.bridle && <span className="block text-ink-700">rig two, or a bridle</span>}
+        </dd>
+        <dt className="font-bold">Shackle</dt>
+        <dd>
+          {shackle ? (
+            <>
+              {inchFractionLabel(shackle.nominalIn)} forged, WLL{' '}
+              <Quantity value={shackle.wllN} kind="force" />
+            </>
+          ) : (
+            'a rated connector of at least the chain’s WLL'
+          )}
+        </dd>
+        <dt className="font-bold">Scope</dt>
+        <dd>
+          {rec.scope.ratio} : 1, <Quantity value={rec.scope.rodeLengthM} kind="length" /> of rode
+          {rec.catenary && (
+            <span className="block text-ink-700">
+              pull at the anchor {rec.catenary.anchorAngleDeg.toFixed(1)}°
+            </span>
+          )}
         </dd>
       </dl>
       {rec.warnings.length > 0 && (
@@ -73,21 +124,17 @@ export function RecommendationColumn({ title, rec, onSave, isSaving }: Recommend
           </ul>
         </Alert>
       )}
-      <details className="text-xs text-ink-700">
-        <summary className="cursor-pointer font-bold">Basis and sources</summary>
-        <p className="mt-1">{load.basis}</p>
-        <p className="mt-1">{anchor.basis}</p>
-        <p className="mt-1">{rode.basis}</p>
-        <p className="mt-1">{snubber.basis}</p>
-      </details>
-      <Button
-        onClick={onSave}
-        isPending={isSaving}
-        pendingLabel="Saving…"
-        className="mt-auto self-start"
-      >
-        Save as plan
-      </Button>
+      <RecommendationReasoning rec={rec} open={onSave === undefined} />
+      {onSave && (
+        <Button
+          onClick={onSave}
+          isPending={isSaving ?? false}
+          pendingLabel="Saving…"
+          className="mt-auto self-start"
+        >
+          Save as plan
+        </Button>
+      )}
     </section>
   );
 }

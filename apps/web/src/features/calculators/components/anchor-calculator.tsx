@@ -1,6 +1,7 @@
 import {
   ANCHOR_TYPES,
   BOTTOM_TYPES,
+  BOTTOM_TYPE_LABELS,
   STANDARD_CAUTIONS,
   anchorSuggestion,
   type AnchorType,
@@ -39,12 +40,13 @@ export function AnchorCalculator() {
   return (
     <CalcCard
       title="Anchor suggestion"
-      intro="A starting mass for an anchor of a given type, from the design load and a holding ratio."
+      intro="A starting mass for an anchor of a given type, from the design load and a drag-anchor holding curve: the same model as your boat's recommendation."
       basis={r?.basis}
-      source="Design load from the ABYC H-40 table (from memory); holding ratios are Rodewise's model (from memory, approximate)."
+      source="Design load from the ABYC H-40 table (from memory); holding as a power law of anchor mass, the form of UFC 4-159-03 eq. 26 (small-craft figures from memory, calibrated to handbook examples and practice)."
       assumptions={[
         'A well-set anchor at a scope of 5:1 or more.',
-        'Suggested = 1.5 × minimum for gusts, veering and an imperfect set (common practice).',
+        'Minimum: holds the load at your wind. Suggested: holds it at 42 kn or your wind if higher, because a working anchor must survive a squall.',
+        'No seabed chosen: firm mud or mixed, with soft mud shown beside it.',
         "An anchor maker's sizing chart for your boat takes precedence.",
       ]}
       cautions={r?.cautions ?? STANDARD_CAUTIONS}
@@ -66,16 +68,33 @@ export function AnchorCalculator() {
           }
         />
       </div>
-      {r ? (
+      {r && r.suggestedKg !== null && r.minKg !== null ? (
         <ResultList
           label="Anchor results"
           items={[
-            { label: 'Suggested mass', value: <Quantity value={r.suggestedKg} kind="mass" /> },
+            {
+              label: `Suggested mass (holds ${r.suggestedForKn} kn)`,
+              value: <Quantity value={r.suggestedKg} kind="mass" />,
+            },
             { label: 'Minimum by the model', value: <Quantity value={r.minKg} kind="mass" /> },
+            ...(r.softMud
+              ? [
+                  {
+                    label: 'In soft mud',
+                    value: (
+                      <>
+                        <Quantity value={r.softMud.suggestedKg} kind="mass" /> suggested
+                      </>
+                    ),
+                  },
+                ]
+              : []),
             { label: 'Design load', value: <Quantity value={r.loadN} kind="force" /> },
-            { label: 'Seabed assumed', value: r.bottomAssumed },
+            { label: 'Seabed assumed', value: BOTTOM_TYPE_LABELS[r.bottomAssumed] },
           ]}
         />
+      ) : r ? (
+        <NoResult message={r.basis} />
       ) : (
         <NoResult
           message={outcome.ok ? 'Enter the length overall and the design wind.' : outcome.message}

@@ -1,4 +1,4 @@
-import { DEFAULT_DESIGN_FACTOR, type RatedComponent, type WeakestLinkResult } from '@app/calc';
+import type { RatedComponent, WeakestLinkResult } from '@app/calc';
 import { ScrollRegion } from '../../../components/ui/scroll-region';
 import { cn } from '../../../lib/cn';
 import { Quantity } from '../../units/components/quantity';
@@ -7,6 +7,7 @@ export interface WeakestLinkTableProps {
   /** The parts in load-path order, as passed to `weakestLink`. */
   parts: readonly RatedComponent[];
   result: WeakestLinkResult;
+  /** A breaking factor to flag parts below; none by default (each working limit carries its part's factor). */
   designFactor?: number;
   caption?: string;
 }
@@ -14,13 +15,14 @@ export interface WeakestLinkTableProps {
 const times = (value: number) => `${value.toFixed(2)} ×`;
 
 /**
- * Each part's margin on its working load limit and factor on its breaking strength at the load; the
- * part that breaks first is highlighted and named in words, not by colour alone.
+ * Each part's margin on its working limit and factor on its breaking strength at the load; the
+ * weakest link (smallest working-limit margin) is highlighted and named in words, not by colour
+ * alone, and the part that would part first in an overload is named too.
  */
 export function WeakestLinkTable({
   parts,
   result,
-  designFactor = DEFAULT_DESIGN_FACTOR,
+  designFactor,
   caption = 'Weakest-link check',
 }: WeakestLinkTableProps) {
   const marginOf = new Map(result.byWll.map((m) => [m.index, m.margin]));
@@ -35,13 +37,13 @@ export function WeakestLinkTable({
               Part
             </th>
             <th scope="col" className="py-2 pr-2">
-              Working load limit
+              Working limit
             </th>
             <th scope="col" className="py-2 pr-2">
               Breaking strength
             </th>
             <th scope="col" className="py-2 pr-2">
-              Margin on WLL
+              Margin on working limit
             </th>
             <th scope="col" className="py-2">
               Factor on breaking
@@ -70,9 +72,9 @@ export function WeakestLinkTable({
                       Weakest link
                     </span>
                   )}
-                  {result.weakestByWll.index === index && !isWeakest && (
+                  {result.weakestByBreak.index === index && !isWeakest && (
                     <span className="ml-2 rounded-pill bg-ink-700 px-2 py-0.5 text-xs text-white">
-                      Lowest WLL margin
+                      Parts first in an overload
                     </span>
                   )}
                 </th>
@@ -86,9 +88,14 @@ export function WeakestLinkTable({
                   {times(margin)}
                   {margin < 1 && <span className="sr-only"> (over its working load limit)</span>}
                 </td>
-                <td className={cn('py-2', factor < designFactor && 'text-flare-700')}>
+                <td
+                  className={cn(
+                    'py-2',
+                    designFactor !== undefined && factor < designFactor && 'text-flare-700',
+                  )}
+                >
                   {times(factor)}
-                  {factor < designFactor && (
+                  {designFactor !== undefined && factor < designFactor && (
                     <span className="sr-only"> (below the design factor {designFactor})</span>
                   )}
                 </td>
@@ -99,10 +106,15 @@ export function WeakestLinkTable({
       </table>
       <p className="mt-2 text-sm">
         {result.ok
-          ? 'Every part is within its working load limit.'
-          : 'At least one part is over its working load limit.'}{' '}
-        Weakest link: <strong>{result.weakest.label}</strong> (breaks at{' '}
-        {times(result.weakest.factor)} the load).
+          ? 'Every part is within its working limit.'
+          : 'At least one part is over its working limit.'}{' '}
+        Weakest link: <strong>{result.weakest.label}</strong> ({times(result.weakest.margin)} its
+        working limit, breaks at {times(result.weakest.factor)} the load).
+      </p>
+      <p className="mt-1 text-xs text-ink-700">
+        Working limit: the maker&apos;s WLL for chain and fittings; for nylon, its wet breaking
+        strength ÷ 2.25 (Rodewise&apos;s anchoring factor). A rope&apos;s cargo tie-down rating is
+        not an anchoring limit.
       </p>
     </ScrollRegion>
   );

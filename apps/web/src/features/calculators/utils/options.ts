@@ -21,7 +21,7 @@ import {
 export const HULL_OPTIONS = HULL_TYPES.map((v) => ({ value: v, label: HULL_TYPE_LABELS[v] }));
 export const ANCHOR_OPTIONS = ANCHOR_TYPES.map((v) => ({ value: v, label: ANCHOR_TYPE_LABELS[v] }));
 export const BOTTOM_OPTIONS = [
-  { value: '', label: 'not known (poorest of sand, mud, clay)' },
+  { value: '', label: 'not known (firm mud or mixed; soft mud shown too)' },
   ...BOTTOM_TYPES.map((v) => ({ value: v, label: BOTTOM_TYPE_LABELS[v] })),
 ];
 export const GRADE_OPTIONS = CHAIN_GRADES.map((v) => ({ value: v, label: CHAIN_GRADE_LABELS[v] }));

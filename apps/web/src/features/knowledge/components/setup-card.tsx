@@ -80,7 +80,35 @@ export function SetupCard({ card, units }: { card: SetupCardDto; units: UnitSyst
             value={`${len(card.catenary.onBottomM)} of chain on the seabed, pull at the anchor ${fix(card.catenary.anchorAngleDeg)}°`}
           />
         )}
+        {card.anchor && card.anchor.neededKg !== null && (
+          <Row
+            term="Anchor against the holding model"
+            value={`${
+              card.anchor.meetsSuggested
+                ? 'holds this wind and a squall'
+                : card.anchor.meetsMinimum
+                  ? 'holds this wind only'
+                  : 'too light for this wind'
+            } (needs ${formatMass(card.anchor.neededKg, units)})`}
+          />
+        )}
       </dl>
+      {card.recommendation && (
+        <>
+          <h3 className="text-base">What Rodewise would carry at {setup.windKn} kn</h3>
+          <dl className="grid grid-cols-1 gap-x-6 gap-y-1 text-sm sm:grid-cols-2">
+            {card.recommendation.anchorKg !== null && (
+              <Row
+                term="Anchor"
+                value={`${card.recommendation.anchorType}, ${formatMass(card.recommendation.anchorKg, units)}`}
+              />
+            )}
+            {card.recommendation.chain && <Row term="Chain" value={card.recommendation.chain} />}
+            {card.recommendation.nylon && <Row term="Nylon" value={card.recommendation.nylon} />}
+            <Row term="Snubber" value={card.recommendation.snubber} />
+          </dl>
+        </>
+      )}
       {card.warnings.length > 0 && (
         <ul className="list-disc pl-5 text-sm font-bold text-flare-700">
           {card.warnings.map((w) => (

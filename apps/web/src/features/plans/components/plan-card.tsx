@@ -114,11 +114,15 @@ export function PlanCard({ data }: { data: PlanWithResult }) {
               <>
                 <dt className="font-bold">Anchor vs model</dt>
                 <dd>
-                  {result.anchor.meetsSuggested
-                    ? 'meets the suggested mass'
-                    : result.anchor.meetsMinimum
-                      ? 'meets the minimum only'
-                      : 'below the minimum'}
+                  {result.anchor.neededKg === null
+                    ? 'not checked on this seabed'
+                    : result.anchor.meetsSuggested
+                      ? 'holds this plan’s wind and a squall'
+                      : result.anchor.meetsMinimum
+                        ? 'holds this plan’s wind only'
+                        : 'too light for this wind'}
+                  {result.anchor.massMargin !== null &&
+                    ` (${times(result.anchor.massMargin)} the mass needed)`}
                 </dd>
               </>
             )}
@@ -126,7 +130,7 @@ export function PlanCard({ data }: { data: PlanWithResult }) {
               <>
                 <dt className="font-bold">Weakest link</dt>
                 <dd>
-                  {link.weakest.label}: {times(link.weakest.margin)} WLL,{' '}
+                  {link.weakest.label}: {times(link.weakest.margin)} its working limit,{' '}
                   {times(link.weakest.factor)} breaking
                 </dd>
               </>
@@ -148,7 +152,8 @@ export function PlanCard({ data }: { data: PlanWithResult }) {
       <footer className="border-t border-ink-900 pt-2 text-xs">
         Ratings are for new, undamaged gear; follow the maker&apos;s ratings and local regulations;
         in doubt ask a qualified rigger or surveyor. Loads are steady estimates: gusts and waves add
-        shock loads. Sources: ABYC H-40 load table, 49 CFR 393.108, RR-C-271, MIT 2.019 catenary.
+        shock loads. Sources: ABYC H-40 load table, UFC 4-159-03 (anchor holding and factors of
+        safety), 49 CFR 393.108, RR-C-271, MIT 2.019 catenary.
       </footer>
     </article>
   );
