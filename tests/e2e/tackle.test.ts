@@ -93,7 +93,7 @@ describe('a member sizes, checks, saves and prints a plan', () => {
       expect(await column.getByText(/the load it is sized for/).count()).toBe(1);
       // The reasoning names the table row (entered by beam for this beamy boat) and the holding curve.
       await column.getByText('How we worked it out').click();
-      expect(await column.getByText(/entered by beam/).count()).toBe(1);
+      expect(await column.getByText(/entered by beam, which gives a larger load/).count()).toBe(1);
       expect(await column.getByText(/UFC 4-159-03 eq\. 26/).count()).toBe(1);
     }
     // Everyday: all chain, with the rope size for a chain-and-rope rode; storm: chain plus nylon.
