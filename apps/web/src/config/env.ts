@@ -1,31 +1,22 @@
-// zod/mini keeps the entry chunk small; the full zod loads only with the screens that need forms.
-import * as z from 'zod/mini';
+// The entry chunk carries no schema library: only zod's core config, so that every later zod parse runs
+// without JIT (zod would otherwise probe `new Function`, which our Content-Security-Policy, script-src 'self',
+// forbids). The full zod loads with the screens that need forms.
+import { config } from 'zod/v4/core';
 
-// No JIT: zod would otherwise probe `new Function`, which our Content-Security-Policy (script-src 'self') forbids.
-z.config({ jitless: true });
+config({ jitless: true });
 
-const envSchema = z.object({
-  VITE_API_BASE_URL: z._default(
-    z
-      .string()
-      .check(
-        z.regex(
-          /^(\/|https?:\/\/)/,
-          'VITE_API_BASE_URL must be a path starting with / or an http(s) URL',
-        ),
-      ),
-    '/api',
-  ),
-});
+const API_BASE = /^(\/|https?:\/\/)/;
 
-const parsed = envSchema.safeParse(import.meta.env);
-if (!parsed.success) {
-  throw new Error(
-    `Bad client configuration:\n${parsed.error.issues.map((issue) => `- ${issue.message}`).join('\n')}`,
-  );
+/** Reads the client configuration from `import.meta.env`; throws with a clear message when it is bad. */
+export function readEnv(source: Record<string, unknown>): { apiBaseUrl: string } {
+  const raw = source.VITE_API_BASE_URL ?? '/api';
+  if (typeof raw !== 'string' || !API_BASE.test(raw)) {
+    throw new Error(
+      'Bad client configuration:\n- VITE_API_BASE_URL must be a path starting with / or an http(s) URL',
+    );
+  }
+  return { apiBaseUrl: raw.replace(/\/$/, '') };
 }
 
 /** Client configuration, parsed once from `import.meta.env`. */
-export const env = {
-  apiBaseUrl: parsed.data.VITE_API_BASE_URL.replace(/\/$/, ''),
-} as const;
+export const env = readEnv(import.meta.env);
