@@ -68,24 +68,24 @@ export const HOLDING_REF_KG = 15;
  * about half of it (common practice, from memory). Pull tests scatter by a factor of two.
  */
 export const HOLDING_CURVES: Readonly<Record<BurialBottom, HoldingCurve>> = {
-  sand: { refKg: HOLDING_REF_KG, refHoldingN: 15000, exponent: 0.8, mark: 'from memory' },
-  mixed: { refKg: HOLDING_REF_KG, refHoldingN: 12000, exponent: 0.92, mark: 'from memory' },
-  mud: { refKg: HOLDING_REF_KG, refHoldingN: 6000, exponent: 0.92, mark: 'from memory' },
-  clay: { refKg: HOLDING_REF_KG, refHoldingN: 10800, exponent: 0.92, mark: 'from memory' },
+  sand: { refKg: HOLDING_REF_KG, refHoldingN: 13125, exponent: 0.8, mark: 'from memory' },
+  mixed: { refKg: HOLDING_REF_KG, refHoldingN: 10500, exponent: 0.92, mark: 'from memory' },
+  mud: { refKg: HOLDING_REF_KG, refHoldingN: 5250, exponent: 0.92, mark: 'from memory' },
+  clay: { refKg: HOLDING_REF_KG, refHoldingN: 9450, exponent: 0.92, mark: 'from memory' },
 };
 
 /**
  * Holding of each type relative to a new-generation scoop of the same mass (common practice,
- * from memory): pull tests in cruising magazines put traditional plows and claws at about
- * three quarters of a scoop; a high-tensile fluke holds nearly as well once buried; a
- * fisherman needs about 1.5 times a plow's mass (Boat Mechanical Systems Handbook, seen); a
- * grapnel is for dinghies and rock, not a main anchor.
+ * from memory): traditional plows, claws and high-tensile flukes hold somewhat less than a
+ * scoop, and the Boat Mechanical Systems Handbook treats them as equivalent for sizing (seen);
+ * a fisherman needs about 1.5 times a plow's mass (same handbook, seen); a grapnel is for
+ * dinghies and rock, not a main anchor.
  */
 export const ANCHOR_EFFICIENCY: Readonly<Record<AnchorType, number>> = {
   scoop: 1,
-  plow: 0.79,
-  claw: 0.75,
+  plow: 0.9,
+  claw: 0.85,
   fluke: 0.9,
-  fisherman: 0.54,
+  fisherman: 0.62,
   grapnel: 0.25,
 };
