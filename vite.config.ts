@@ -1,7 +1,35 @@
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
+import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { defineConfig } from 'vite';
+import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
+import { defineConfig, type Plugin } from 'vite';
+
+/** Writes .br and .gz beside every built script, style sheet and SVG, so the API serves them without compressing per request. */
+export function precompress(): Plugin {
+  let outDir = '';
+  return {
+    name: 'rodewise-precompress',
+    apply: 'build',
+    configResolved(config) {
+      outDir = config.build.outDir;
+    },
+    closeBundle() {
+      const dir = join(outDir, 'assets');
+      for (const name of readdirSync(dir)) {
+        if (!/\.(js|css|svg|json)$/.test(name)) continue;
+        const body = readFileSync(join(dir, name));
+        if (body.length < 1024) continue;
+        writeFileSync(
+          join(dir, `${name}.br`),
+          brotliCompressSync(body, { params: { [constants.BROTLI_PARAM_QUALITY]: 11 } }),
+        );
+        writeFileSync(join(dir, `${name}.gz`), gzipSync(body, { level: 9 }));
+      }
+    },
+  };
+}
 
 const apiPort = process.env.API_PORT ?? '4310';
 
@@ -9,7 +37,7 @@ const apiPort = process.env.API_PORT ?? '4310';
 export default defineConfig({
   root: fileURLToPath(new URL('./apps/web', import.meta.url)),
   publicDir: fileURLToPath(new URL('./apps/web/public', import.meta.url)),
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), precompress()],
   server: {
     port: 5173,
     proxy: {

@@ -2,9 +2,10 @@ import { existsSync } from 'node:fs';
 import { appendFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import compression from 'compression';
+import expressStaticGzip from 'express-static-gzip';
 import connectSessionSequelize from 'connect-session-sequelize';
 import { csrfSync } from 'csrf-sync';
-import express, { type Express, type RequestHandler } from 'express';
+import express, { type Express, type Request, type RequestHandler, type Response } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -213,9 +214,18 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
 
   const webDist = env.WEB_DIST;
   if (webDist && existsSync(join(webDist, 'index.html'))) {
+    // Hashed assets: brotli or gzip files written at build time (vite.config.ts), cached for a year.
     app.use(
       '/assets',
-      express.static(join(webDist, 'assets'), { immutable: true, maxAge: '365d', index: false }),
+      expressStaticGzip(join(webDist, 'assets'), {
+        enableBrotli: true,
+        orderPreference: ['br', 'gzip'],
+        index: false,
+        serveStatic: { immutable: true, maxAge: '365d', index: false },
+      }),
+      (_req: Request, res: Response) => {
+        res.status(404).type('text/plain').send('Not found');
+      },
     );
     app.use(express.static(webDist, { index: false, maxAge: '1h' }));
     app.get('/{*splat}', (_req, res) => {

@@ -1,0 +1,68 @@
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { brotliCompressSync, gzipSync } from 'node:zlib';
+import request from 'supertest';
+import { afterAll, describe, expect, it } from 'vitest';
+import { createTestApp } from './testing/test-app';
+
+// A built client with the .br and .gz files the build writes beside each asset (vite.config.ts precompress()).
+const webDist = mkdtempSync(join(tmpdir(), 'rw-static-'));
+mkdirSync(join(webDist, 'assets'));
+writeFileSync(join(webDist, 'index.html'), '<!doctype html><title>Rodewise</title>');
+const script = `export const n = ${JSON.stringify('x'.repeat(4000))};\n`;
+writeFileSync(join(webDist, 'assets', 'route-abc123.js'), script);
+writeFileSync(join(webDist, 'assets', 'route-abc123.js.br'), brotliCompressSync(script));
+writeFileSync(join(webDist, 'assets', 'route-abc123.js.gz'), gzipSync(script));
+const built = createTestApp({ WEB_DIST: webDist });
+afterAll(() => {
+  built.close();
+  rmSync(webDist, { recursive: true, force: true });
+});
+
+const raw = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (c: Buffer) => chunks.push(c));
+  res.on('end', () => cb(null, Buffer.concat(chunks)));
+};
+
+describe('pre-compressed assets', () => {
+  it('serves the brotli file to a browser that accepts it, cached for a year as immutable', async () => {
+    const res = await request(built.app)
+      .get('/assets/route-abc123.js')
+      .set('Accept-Encoding', 'gzip, deflate, br')
+      .buffer(true)
+      .parse(raw);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBe('br');
+    expect(res.headers['content-type']).toMatch(/javascript/);
+    expect(res.headers['cache-control']).toMatch(/max-age=31536000.*immutable/);
+    expect(res.headers.vary).toMatch(/Accept-Encoding/i);
+    // The client decodes what it was sent: the brotli file, byte for byte the script.
+    expect((res.body as Buffer).toString()).toBe(script);
+    expect(Number(res.headers['content-length'])).toBe(brotliCompressSync(script).length);
+  });
+
+  it('serves gzip to a client without brotli and the plain file to one that accepts neither', async () => {
+    const gz = await request(built.app)
+      .get('/assets/route-abc123.js')
+      .set('Accept-Encoding', 'gzip')
+      .buffer(true)
+      .parse(raw);
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    const plain = await request(built.app)
+      .get('/assets/route-abc123.js')
+      .set('Accept-Encoding', 'identity')
+      .buffer(true)
+      .parse(raw);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect((plain.body as Buffer).toString()).toBe(script);
+  });
+
+  // A stale page asking for an old hashed file must get a 404, not index.html served as a script.
+  it('answers 404 for an asset that does not exist', async () => {
+    const res = await request(built.app).get('/assets/missing-000.js');
+    expect(res.status).toBe(404);
+    expect(res.headers['content-type']).not.toMatch(/html/);
+  });
+});
