@@ -27,7 +27,9 @@ export function CatenaryDrawing({ result, waterLevelM, hasRope }: CatenaryDrawin
   const label =
     `Rode drawn to scale: ${length(reachM)} from anchor to bow, ${length(heightM)} from seabed to bow roller, ` +
     `${length(result.onBottomM)} of chain on the seabed` +
-    (result.liftsAtAnchor ? '; the chain lifts at the anchor.' : '.');
+    (result.liftsAtAnchor
+      ? `; the chain leaves the seabed at the anchor, pulling ${result.anchorAngleDeg.toFixed(1)}° upward.`
+      : '.');
   return (
     <figure className="flex flex-col gap-1">
       <svg

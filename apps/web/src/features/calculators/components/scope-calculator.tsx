@@ -8,6 +8,7 @@ import {
   scope,
   scopeRung,
   type ChainGrade,
+  UPLIFT_WARN_DEG,
 } from '@app/calc';
 import { useState } from 'react';
 import { Quantity } from '../../units/components/quantity';
@@ -190,8 +191,10 @@ export function ScopeCalculator() {
           </p>
           <WarningList
             warnings={
-              r.shape.liftsAtAnchor
-                ? ['The chain lifts at the anchor under this load: let out more rode.']
+              r.shape.anchorAngleDeg > UPLIFT_WARN_DEG
+                ? [
+                    `Under this load the chain pulls the anchor ${r.shape.anchorAngleDeg.toFixed(0)}° upward (we warn above ${UPLIFT_WARN_DEG}°, from memory): let out more rode, add chain or hang a kellet.`,
+                  ]
                 : []
             }
           />
