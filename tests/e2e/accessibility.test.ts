@@ -67,6 +67,8 @@ beforeAll(async () => {
   const myListings = await data<Array<{ id: number; status: string }>>(page, '/api/listings/mine');
   const listings = await data<Array<{ id: number }>>(page, '/api/listings');
   const threads = await data<Array<{ id: number }>>(page, '/api/threads');
+  const watches = await data<Array<{ id: number; status: string }>>(page, '/api/storm-watches');
+  const watchId = (watches.find((w) => w.status === 'open') ?? watches[0])?.id;
   await page.close();
   const need = (label: string, id: number | undefined) => {
     expect(id, `seeded ${label}`).toBeDefined();
@@ -107,6 +109,12 @@ beforeAll(async () => {
     ),
     messages: paths.messages.href(),
     thread: paths.thread.href(need('thread', threads[0]?.id)),
+    storm: paths.storm.href(),
+    stormNew: paths.stormNew.href(),
+    stormChecklist: paths.stormChecklist.href(),
+    stormWatch: paths.stormWatch.href(need('storm watch', watchId)),
+    stormBoard: paths.stormBoard.href(need('storm watch', watchId)),
+    stormBoat: paths.stormBoat.href(need('storm watch', watchId), need('boat', boatId)),
   };
 });
 afterAll(async () => {

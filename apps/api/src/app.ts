@@ -33,6 +33,7 @@ import { moderationRouter, reportsRouter } from './modules/moderation/moderation
 import { notificationsRouter } from './modules/posts/notifications.router';
 import { postsRouter } from './modules/posts/posts.router';
 import { searchRouter } from './modules/search/search.router';
+import { stormRouter } from './modules/storm/storm.router';
 import { topicsRouter } from './modules/topics/topics.router';
 import { uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
 import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
@@ -200,6 +201,7 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   mount(app, '/api/listings', listingsRouter(exchange));
   mount(app, '/api/threads', threadsRouter(exchange));
   mount(app, '/api/saved-searches', savedSearchesRouter());
+  mount(app, '/api/storm-watches', stormRouter({ sequelize, publicUrl: env.PUBLIC_URL }));
   // The listing search index is built from MariaDB at start (and lazily on first search if that fails).
   ensureListingIndex().catch((err: unknown) => logger.warn({ err }, 'listing index not built yet'));
   const stopListingSweeper =

@@ -18,6 +18,13 @@ const SIGNED_IN: Row = {
 };
 const ADMIN: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 403, admin: 'ok' };
 const MODERATOR: Row = { visitor: 401, member: 403, moderator: 'ok', treasurer: 403, admin: 403 };
+const MODERATOR_OR_ADMIN: Row = {
+  visitor: 401,
+  member: 403,
+  moderator: 'ok',
+  treasurer: 403,
+  admin: 'ok',
+};
 const TREASURER: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 'ok', admin: 403 };
 
 /**
@@ -129,6 +136,18 @@ const MATRIX: Record<string, Row> = {
   'POST /api/treasury/reminders': TREASURER,
   'GET /api/treasury/ledger.csv': TREASURER,
   'GET /api/treasury/summary': TREASURER,
+  'GET /api/storm-watches/checklist': SIGNED_IN,
+  'PUT /api/storm-watches/checklist': MODERATOR_OR_ADMIN,
+  'GET /api/storm-watches': SIGNED_IN,
+  'POST /api/storm-watches': MODERATOR_OR_ADMIN,
+  'GET /api/storm-watches/:watchId': SIGNED_IN,
+  'POST /api/storm-watches/:watchId/close': MODERATOR_OR_ADMIN,
+  'GET /api/storm-watches/:watchId/board': SIGNED_IN,
+  'GET /api/storm-watches/:watchId/board.csv': MODERATOR_OR_ADMIN,
+  'GET /api/storm-watches/:watchId/buddies': MODERATOR_OR_ADMIN,
+  'GET /api/storm-watches/:watchId/boats/:boatId': SIGNED_IN,
+  'PUT /api/storm-watches/:watchId/boats/:boatId': SIGNED_IN,
+  'PUT /api/storm-watches/:watchId/boats/:boatId/buddy': MODERATOR_OR_ADMIN,
 };
 
 /** State-changing routes that take no CSRF token, and why. */

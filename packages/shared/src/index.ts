@@ -5,3 +5,4 @@ export * from './errors';
 export * from './dues';
 export * from './knowledge';
 export * from './exchange';
+export * from './storm';

@@ -7,7 +7,8 @@ import {
   type Sequelize,
 } from 'sequelize';
 
-export type AuditArea = 'auth' | 'admin' | 'moderation' | 'treasury' | 'payments' | 'exchange';
+export type AuditArea =
+  'auth' | 'admin' | 'moderation' | 'treasury' | 'payments' | 'exchange' | 'storm';
 
 /** Append-only log of who did what, when and why. Never updated or deleted. */
 export class AuditEvent extends Model<

@@ -21,6 +21,7 @@ import { Report, initReport } from './report.model';
 import { Topic, initTopic } from './topic.model';
 import { Vote, initVote } from './vote.model';
 import { initExchangeModels } from './exchange.models';
+import { StormReadiness, StormWatch, initStormModels } from './storm.models';
 
 let initialised: Sequelize | null = null;
 
@@ -71,6 +72,10 @@ export function initModels(sequelize: Sequelize) {
   Comment.belongsTo(User, { as: 'author', foreignKey: 'authorId' });
   Report.belongsTo(User, { as: 'reporter', foreignKey: 'reporterId' });
   initExchangeModels(sequelize);
+  initStormModels(sequelize);
+  StormWatch.belongsTo(User, { as: 'openedBy', foreignKey: 'openedById' });
+  StormReadiness.belongsTo(Boat, { as: 'boat', foreignKey: 'boatId' });
+  StormReadiness.belongsTo(User, { as: 'buddy', foreignKey: 'buddyUserId' });
   initialised = sequelize;
 }
 
@@ -96,6 +101,8 @@ export {
   Report,
   Topic,
   Vote,
+  StormWatch,
+  StormReadiness,
 };
 export {
   Listing,

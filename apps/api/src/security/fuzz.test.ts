@@ -190,6 +190,16 @@ beforeAll(async () => {
       paidAt: new Date(),
     })
   ).id;
+  ids.watchId = (
+    await c.post('/api/storm-watches', {
+      name: 'Fuzz gale',
+      sustainedKn: 40,
+      gustKn: 55,
+      arrivesAt: '2026-12-10T06:00:00Z',
+      endsAt: '2026-12-11T06:00:00Z',
+      harborIds: [harborId],
+    })
+  ).body.data.id as number;
   for (const [k, v] of Object.entries(ids)) expect(v, k).toBeGreaterThan(0);
 });
 

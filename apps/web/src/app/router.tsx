@@ -65,6 +65,32 @@ export const SCREEN_ROUTES: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/plan')).PlanRoute }),
   },
   {
+    path: paths.storm.path,
+    lazy: async () => ({ Component: (await import('./routes/storm')).StormRoute }),
+  },
+  {
+    path: paths.stormNew.path,
+    lazy: async () => ({ Component: (await import('./routes/storm-new')).StormNewRoute }),
+  },
+  {
+    path: paths.stormChecklist.path,
+    lazy: async () => ({
+      Component: (await import('./routes/storm-checklist')).StormChecklistRoute,
+    }),
+  },
+  {
+    path: paths.stormWatch.path,
+    lazy: async () => ({ Component: (await import('./routes/storm-watch')).StormWatchRoute }),
+  },
+  {
+    path: paths.stormBoard.path,
+    lazy: async () => ({ Component: (await import('./routes/storm-board')).StormBoardRoute }),
+  },
+  {
+    path: paths.stormBoat.path,
+    lazy: async () => ({ Component: (await import('./routes/storm-boat')).StormBoatRoute }),
+  },
+  {
     path: paths.dues.path,
     lazy: async () => ({ Component: (await import('./routes/dues')).DuesRoute }),
   },

@@ -81,6 +81,14 @@ export const NAV_ITEMS: readonly NavItem[] = [
     signedIn: true,
   },
   {
+    id: 'storm',
+    kind: 'link',
+    label: 'Storm watch',
+    to: paths.storm.href(),
+    section: 'primary',
+    signedIn: true,
+  },
+  {
     id: 'dues',
     kind: 'link',
     label: 'Dues',

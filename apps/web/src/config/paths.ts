@@ -46,6 +46,23 @@ export const paths = {
     path: '/exchange/listings/:listingId/edit',
     href: (listingId: number | string) => `/exchange/listings/${listingId}/edit`,
   },
+  storm: { path: '/storm', href: () => '/storm' },
+  stormNew: { path: '/storm/new', href: () => '/storm/new' },
+  stormChecklist: { path: '/storm/checklist', href: () => '/storm/checklist' },
+  stormWatch: {
+    path: '/storm/:watchId',
+    href: (watchId: number | string) => `/storm/${watchId}`,
+  },
+  stormBoard: {
+    path: '/storm/:watchId/board',
+    href: (watchId: number | string, harborId?: number) =>
+      `/storm/${watchId}/board${harborId ? `?harbour=${harborId}` : ''}`,
+  },
+  stormBoat: {
+    path: '/storm/:watchId/boats/:boatId',
+    href: (watchId: number | string, boatId: number | string) =>
+      `/storm/${watchId}/boats/${boatId}`,
+  },
   messages: { path: '/messages', href: () => '/messages' },
   thread: {
     path: '/messages/:threadId',

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { DEFAULT_STORM_CHECKLIST, stormChecklistSchema } from '@app/shared';
 import { ClubSetting, Harbor } from '../../models';
 
 /** Every club setting, with its schema and default. Stored as JSON in club_settings. */
@@ -20,6 +21,8 @@ export const SETTINGS = {
       renewalWindowDays: 30,
       lapseAfterDays: 90,
     }),
+  /** The storm-watch checklist template; each new watch copies it. */
+  stormChecklist: stormChecklistSchema.default({ items: DEFAULT_STORM_CHECKLIST }),
 } as const;
 export type SettingKey = keyof typeof SETTINGS;
 export type SettingValue<K extends SettingKey> = z.infer<(typeof SETTINGS)[K]>;

@@ -324,7 +324,7 @@ export async function resolveHeld(
 }
 
 /** RFC 4180 field quoting; a leading = + - @ is defused so spreadsheets do not run it as a formula (OWASP CSV injection). */
-function csvField(v: string | number | null): string {
+export function csvField(v: string | number | null): string {
   if (v === null) return '';
   let s = String(v);
   if (typeof v === 'string' && /^[=+\-@\t\r]/.test(s) && !/^-?\d+(\.\d+)?$/.test(s)) s = `'${s}`;
