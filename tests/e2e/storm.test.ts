@@ -18,8 +18,8 @@ const BRAM = 'bram@larkspit.example';
 const WATCH = 'Gale Tessary';
 
 // The flagged plan carries a 3/16 in shackle (1/3 short ton WLL in the shackle table): at a 70 kn gust on a 9 m
-// boat it is loaded several times past its WLL whatever the exact load model. The passing plan has 1/2 in G70
-// chain and a 3/4 in shackle on a 7 m boat: several times inside every WLL. Wide margins both ways.
+// boat it is loaded several times past its WLL whatever the exact load model. The passing plan has 5/8 in G70
+// chain and a 1 in shackle on a 7 m boat: several times inside every WLL. Wide margins both ways.
 const SMALL_SHACKLE = {
   name: 'Gale plan, small shackle',
   components: {
@@ -31,9 +31,9 @@ const SMALL_SHACKLE = {
 const HEAVY_GEAR = {
   name: 'Gale plan, heavy gear',
   components: {
-    chain: { grade: 'G70', tradeSizeIn: 0.5, lengthM: 70 },
+    chain: { grade: 'G70', tradeSizeIn: 0.625, lengthM: 70 },
     snubber: { material: 'nylon', diameterMm: 18, lengthM: 10 },
-    connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.75 }],
+    connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 1 }],
   },
 };
 
@@ -149,6 +149,8 @@ describe('storm watch in Chromium', () => {
     const greywakeRow = mod.locator('tr[data-boat="Greywake"]');
     await marramRow.locator('[data-band="below-wll"]').waitFor();
     expect(await marramRow.innerText()).toMatch(/Weakest: anchor shackle/);
+    expect(await marramRow.innerText()).toMatch(/Flagged: below WLL at the gust/);
+    expect(await marramRow.innerText()).toMatch(/In progress/);
     await greywakeRow.locator('[data-band="passes"]').waitFor();
     expect(await greywakeRow.innerText()).toMatch(/Ready/);
     await mod.getByLabel('Buddy for Marram').selectOption({ label: 'Bram Cleatson' });

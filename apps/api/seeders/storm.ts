@@ -156,7 +156,7 @@ export const seedStorm: AreaSeeder = async ({ transaction, users, harbors, now }
       watch: open,
       boat: 'Slow Tern',
       location: 'marina-berth',
-      plan: true,
+      plan: false,
       ticked: allIds,
       help: false,
     },

@@ -1,6 +1,11 @@
 import type { z } from 'zod';
 import { Op } from 'sequelize';
-import type { ReadinessDto, ReadinessStatus, readinessInputSchema } from '@app/shared';
+import type {
+  ReadinessDto,
+  ReadinessStatus,
+  StormCheckDto,
+  readinessInputSchema,
+} from '@app/shared';
 import { invalid, notFound } from '../../errors/app-error';
 import { Boat, StormReadiness, TacklePlan, User, UserRole, type StormWatch } from '../../models';
 import { recordAudit } from '../audit/audit.service';
@@ -10,14 +15,22 @@ import { getOpenWatch, getWatch, isStormManager } from './storm.service';
 
 type ReadinessInput = z.output<typeof readinessInputSchema>;
 
-/** The board's status of one boat, derived from its readiness row. */
-export function statusOf(r: StormReadiness | undefined, watch: StormWatch): ReadinessStatus {
+/**
+ * The board's status of one boat, derived from its readiness row and its plan's check: a boat whose plan is
+ * loaded past a working load limit at the forecast gust is never "ready".
+ */
+export function statusOf(
+  r: StormReadiness | undefined,
+  watch: StormWatch,
+  check: StormCheckDto | null,
+): ReadinessStatus {
   if (!r || r.filledAt === null) return 'not-started';
   if (r.helpWanted) return 'help-wanted';
   if (r.location === 'leaving') return 'away';
   const allTicked = watch.checklist.every((i) => r.ticked.includes(i.id));
   const hasPlan = r.location !== 'own-anchor' || r.planId !== null;
-  return r.location !== null && allTicked && hasPlan ? 'ready' : 'in-progress';
+  const planHolds = check === null || check.band !== 'below-wll';
+  return r.location !== null && allTicked && hasPlan && planHolds ? 'ready' : 'in-progress';
 }
 
 interface Row {
@@ -39,13 +52,14 @@ function seesDetails(viewer: User, watch: StormWatch, row: Row) {
 function toReadinessDto(viewer: User, watch: StormWatch, row: Row): ReadinessDto {
   const { boat, readiness: r, plan } = row;
   const buddy = r?.buddy ?? null;
+  const check = plan ? stormCheck(boat, plan, watch, r?.depthM ?? null) : null;
   return {
     boatId: boat.id,
     boatName: boat.name,
     ownerId: boat.ownerId,
     ownerName: boat.owner?.displayName ?? '',
     harborId: boat.homeHarborId,
-    status: statusOf(r, watch),
+    status: statusOf(r, watch, check),
     mine: boat.ownerId === viewer.id,
     details: seesDetails(viewer, watch, row)
       ? {
@@ -56,7 +70,7 @@ function toReadinessDto(viewer: User, watch: StormWatch, row: Row): ReadinessDto
           helpWanted: r?.helpWanted ?? false,
           helpNote: r?.helpNote ?? '',
           buddy: buddy ? { id: buddy.id, name: buddy.displayName } : null,
-          check: plan ? stormCheck(boat, plan, watch, r?.depthM ?? null) : null,
+          check,
           updatedAt: r?.filledAt?.toISOString() ?? null,
         }
       : null,

@@ -20,16 +20,16 @@ beforeEach(resetDb);
 const SLOOP = { name: 'Test Marram', hull: 'sail', loaM: 9.1, beamM: 3.2, bowHeightM: 1.1 };
 const SMALL = { name: 'Test Greywake', hull: 'sail', loaM: 7.3, beamM: 2.6, bowHeightM: 0.9 };
 // Gear chosen far from any line: a 3/16 in shackle (1/3 short ton WLL, RR-C-271 from memory) is loaded several
-// times past its WLL at a 70 kn gust on a 9 m boat; 1/2 in G70 chain with a 3/4 in shackle stays well within.
+// times past its WLL at a 70 kn gust on a 9 m boat; 5/8 in G70 chain with a 1 in shackle stays well within.
 const SMALL_SHACKLE = {
   chain: { grade: 'G43', tradeSizeIn: 0.375, lengthM: 60 },
   snubber: { material: 'nylon', diameterMm: 16, lengthM: 8 },
   connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.1875 }],
 };
 const GENEROUS = {
-  chain: { grade: 'G70', tradeSizeIn: 0.5, lengthM: 70 },
+  chain: { grade: 'G70', tradeSizeIn: 0.625, lengthM: 70 },
   snubber: { material: 'nylon', diameterMm: 18, lengthM: 10 },
-  connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.75 }],
+  connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 1 }],
 };
 
 const watchBody = (harborIds: number[]) => ({
@@ -171,6 +171,8 @@ describe('storm watch: readiness and the check against the forecast', () => {
     expect(check.weakestLink.breakFactor).toBeCloseTo(expectedWeakest?.factor ?? NaN, 9);
     expect(check.weakestLink.wllMargin).toBeLessThan(1);
     expect(check.band).toBe('below-wll');
+    // Every item ticked, but a plan loaded past a WLL keeps the boat from "ready".
+    expect(saved.body.data.status).toBe('in-progress');
     expect(check.scopeRatio).toBeCloseTo(direct.scopeRatio ?? NaN, 9);
     expect(check.tideM).toBeCloseTo(2, 9);
     const atSustained = tacklePlan({ ...input, windKn: 55 });

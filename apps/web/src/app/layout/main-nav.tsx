@@ -107,7 +107,7 @@ export function MainNav() {
   return (
     <nav
       aria-label="Main"
-      className="relative md:flex md:flex-1"
+      className="relative md:flex md:min-w-0 md:flex-1"
       onKeyDown={(event) => {
         if (event.key === 'Escape') setIsOpen(false);
       }}
@@ -126,7 +126,7 @@ export function MainNav() {
         id={listId}
         className={cn(
           'absolute right-0 z-40 mt-2 w-[min(18rem,calc(100vw-2rem))] flex-col gap-1 rounded-lg bg-ink-900 p-2 shadow-card',
-          'md:static md:mt-0 md:flex md:w-auto md:flex-1 md:flex-row md:items-center md:bg-transparent md:p-0 md:shadow-none',
+          'md:static md:mt-0 md:flex md:w-auto md:flex-1 md:flex-row md:flex-wrap md:items-center md:bg-transparent md:p-0 md:shadow-none',
           isOpen ? 'flex' : 'hidden',
         )}
       >

@@ -75,6 +75,11 @@ export function BoardTable({
                 <td className="pr-2">{r.harborId ? (harbour.get(r.harborId) ?? '—') : '—'}</td>
                 <td className="pr-2">
                   <StatusBadge status={r.status} />
+                  {check?.band === 'below-wll' && (
+                    <p className="mt-1 text-xs font-bold text-flare-700">
+                      Flagged: below WLL at the gust
+                    </p>
+                  )}
                   {d?.helpWanted && d.helpNote && <p className="mt-1 text-xs">{d.helpNote}</p>}
                 </td>
                 <td className="pr-2">{d?.location ? STORM_LOCATION_LABELS[d.location] : '—'}</td>
