@@ -138,6 +138,53 @@ describe('OWASP XSS Filter Evasion Cheat Sheet payloads through plain-text field
     expect(fails).toEqual({});
   });
 
+  it('storm watch names and notes, and readiness help notes, come back as the same text', async () => {
+    const boatId = (
+      await member.post('/api/boats', {
+        name: 'Storm sloop',
+        hull: 'sail',
+        loaM: 9.75,
+        bowHeightM: 1.2,
+        homeHarborId: harborId,
+      })
+    ).body.data.id as number;
+    const fails = await failuresOf(fitting(80, 2), async (p) => {
+      const opened = await mod.post('/api/storm-watches', {
+        name: p,
+        sustainedKn: 40,
+        gustKn: 55,
+        arrivesAt: '2026-12-10T06:00:00Z',
+        endsAt: '2026-12-11T06:00:00Z',
+        harborIds: [harborId],
+        note: p,
+      });
+      if (opened.status !== 201) return `watch ${opened.status}`;
+      const watchId = opened.body.data.id as number;
+      const saved = await member.put(`/api/storm-watches/${watchId}/boats/${boatId}`, {
+        location: 'marina-berth',
+        helpWanted: true,
+        helpNote: p,
+      });
+      if (saved.status !== 200) return `readiness ${saved.status}`;
+      const got = (await member.get(`/api/storm-watches/${watchId}`)).body.data.watch;
+      const row = (await mod.get(`/api/storm-watches/${watchId}/board`)).body.data.rows[0];
+      return (
+        same('watch name', got.name, p) ??
+        same('watch note', got.note, p) ??
+        same('help note', row?.details?.helpNote, p)
+      );
+    });
+    expect(fails).toEqual({});
+    // Every watch mailed the members: its name and note are escaped in the mail HTML.
+    await flushOutbox();
+    const mails = await inbox(memberEmail, 'Storm watch');
+    expect(mails.length).toBe(fitting(80, 2).length);
+    const bad = mails.flatMap((m) =>
+      executableMarkup(m.html ?? '').map((b) => `${m.subject}: ${b}`),
+    );
+    expect(bad).toEqual([]);
+  }, 120_000);
+
   it('display names come back as the same text', async () => {
     const fails = await failuresOf(fitting(80, 2), async (p) => {
       const res = await member.patch('/api/account', { displayName: p });

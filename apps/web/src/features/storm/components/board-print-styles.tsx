@@ -8,7 +8,7 @@ const PRINT_CSS = `
   #root > div > header, #root > div > footer, #root > div > a { display: none !important; }
   #root main { padding: 0 !important; }
   html, body { background: #fff !important; }
-  [data-board] { overflow: visible !important; font-size: 9.5pt; }
+  [data-board], [data-board] [role=region] { overflow: visible !important; font-size: 9.5pt; }
   [data-board] table { min-width: 0 !important; }
   [data-board] *, [data-print-heading] * { color: #000 !important; }
   [data-board] tr { break-inside: avoid; }
