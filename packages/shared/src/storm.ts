@@ -202,6 +202,14 @@ export interface StormCheckDto {
   /** Tide still to come in the plan plus the forecast surge, m. */
   tideM: number;
   scopeRatio: number | null;
+  /** @app/calc's recommendTackle for the boat at the same gust and water, to set beside the plan's gear. */
+  recommended: {
+    chain: { grade: string; tradeSizeIn: number } | null;
+    shackleIn: number | null;
+    anchorKg: number | null;
+    scopeRatio: number;
+    basis: string;
+  } | null;
   warnings: string[];
   cautions: string[];
   basis: string;

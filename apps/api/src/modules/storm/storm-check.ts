@@ -1,4 +1,10 @@
-import { tacklePlan, type TacklePlanInput, type TacklePlanResult } from '@app/calc';
+import {
+  CalcInputError,
+  recommendTackle,
+  tacklePlan,
+  type TacklePlanInput,
+  type TacklePlanResult,
+} from '@app/calc';
 import { TIGHT_MARGIN_BELOW, type MarginBand, type StormCheckDto } from '@app/shared';
 import type { Boat, StormWatch, TacklePlan } from '../../models';
 
@@ -63,6 +69,43 @@ function bandOf(margin: number | null): MarginBand | null {
 }
 
 /**
+ * What @app/calc's recommendTackle gives this boat at the gust, in the plan's water, for comparison with the
+ * plan's own gear; null when the recommendation cannot be computed for this boat (e.g. beyond its tables).
+ */
+function recommendationAt(
+  boat: Boat,
+  plan: TacklePlan,
+  input: TacklePlanInput,
+): StormCheckDto['recommended'] {
+  try {
+    const rec = recommendTackle({
+      loaM: boat.loaM,
+      hull: boat.hull,
+      bowHeightM: boat.bowHeightM,
+      ...(boat.beamM ? { beamM: boat.beamM } : {}),
+      ...(boat.displacementKg ? { displacementKg: boat.displacementKg } : {}),
+      windKn: input.windKn,
+      anchorType: plan.components.anchor?.type ?? 'plow',
+      ...(plan.bottom ? { bottom: plan.bottom } : {}),
+      depthM: input.depthM,
+      tideM: input.tideM ?? 0,
+      ...(plan.components.chain ? { chainGrade: plan.components.chain.grade } : {}),
+      extrapolate: true,
+    });
+    return {
+      chain: rec.chain ? { grade: rec.chain.grade, tradeSizeIn: rec.chain.tradeSizeIn } : null,
+      shackleIn: rec.shackle?.nominalIn ?? null,
+      anchorKg: rec.anchor.massKg,
+      scopeRatio: rec.scope.ratio,
+      basis: rec.basis,
+    };
+  } catch (err) {
+    if (err instanceof CalcInputError) return null;
+    throw err;
+  }
+}
+
+/**
  * Checks a saved plan against the watch's forecast with @app/calc's tacklePlan: the peak check at the gust
  * figure (the weakest link by WLL margin, and its margin at the sustained wind), scope for the given depth with
  * the surge on top of the tide, and the snubber, scope and chafe warnings in plain words.
@@ -77,7 +120,7 @@ export function stormCheck(
   const atGust = tacklePlan(input);
   const atSustained = tacklePlan({ ...input, windKn: watch.sustainedKn });
   const link = atGust.weakestLink;
-  const weakest = link?.weakestByWll ?? null;
+  const weakest = link?.weakest ?? null;
   const sustainedMargin =
     weakest === null
       ? null
@@ -106,6 +149,7 @@ export function stormCheck(
     depthM: input.depthM,
     tideM: input.tideM ?? 0,
     scopeRatio: atGust.scopeRatio,
+    recommended: recommendationAt(boat, plan, input),
     warnings: [...atGust.warnings, ...chafeWarnings(atGust)],
     cautions: [...STORM_CAUTIONS, ...atGust.cautions],
     basis: `Checked at the forecast gust of ${watch.gustKn} kn (the peak load), with the margin at the sustained ${watch.sustainedKn} kn beside it. ${atGust.basis}`,

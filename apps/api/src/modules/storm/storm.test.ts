@@ -1,4 +1,4 @@
-import { tacklePlan } from '@app/calc';
+import { recommendTackle, tacklePlan } from '@app/calc';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Harbor, Notification, OutboxEmail, Post, StormReadiness } from '../../models';
 import { seedTopics } from '../posts/testing/knowledge-fixtures';
@@ -162,7 +162,7 @@ describe('storm watch: readiness and the check against the forecast', () => {
       components: SMALL_SHACKLE as never,
     };
     const direct = tacklePlan(input);
-    const expectedWeakest = direct.weakestLink?.weakestByWll;
+    const expectedWeakest = direct.weakestLink?.weakest;
     expect(expectedWeakest?.label).toBe('anchor shackle');
     expect(check.windKn).toBe(70);
     expect(check.loadN).toBeCloseTo(direct.loadN, 6);
@@ -185,6 +185,22 @@ describe('storm watch: readiness and the check against the forecast', () => {
     expect(check.warnings.join(' ')).toMatch(/[Cc]hafe/);
     expect(check.cautions.join(' ')).toMatch(/harbour master/);
     expect(check.basis).toMatch(/gust of 70 kn/);
+    // Beside the plan, the recommendation for the same boat, gust and water.
+    const rec = recommendTackle({
+      loaM: 9.1,
+      beamM: 3.2,
+      hull: 'sail',
+      bowHeightM: 1.1,
+      windKn: 70,
+      anchorType: 'plow',
+      depthM: 6,
+      tideM: 2,
+      chainGrade: 'G43',
+      extrapolate: true,
+    });
+    expect(check.recommended.shackleIn).toBe(rec.shackle?.nominalIn ?? null);
+    expect(check.recommended.chain?.tradeSizeIn).toBe(rec.chain?.tradeSizeIn);
+    expect(check.recommended.shackleIn).toBeGreaterThan(0.1875);
 
     const other = await s.b.c.put(`/api/storm-watches/${s.watchId}/boats/${s.bBoat.boatId}`, {
       location: 'own-anchor',
@@ -201,7 +217,7 @@ describe('storm watch: readiness and the check against the forecast', () => {
       components: GENEROUS as never,
     });
     expect(passing.weakestLink.wllMargin).toBeCloseTo(
-      directB.weakestLink?.weakestByWll.margin ?? NaN,
+      directB.weakestLink?.weakest.margin ?? NaN,
       9,
     );
     expect(passing.weakestLink.wllMargin).toBeGreaterThanOrEqual(1.5);

@@ -1,3 +1,4 @@
+import { inchFractionLabel } from '@app/calc';
 import type { StormCheckDto } from '@app/shared';
 import { Quantity } from '../../units/components/quantity';
 import { MarginBadge } from './margin-badge';
@@ -60,6 +61,22 @@ export function CheckPanel({ check }: { check: StormCheckDto }) {
         <Quantity value={check.depthM} kind="length" /> of water with{' '}
         <Quantity value={check.tideM} kind="length" /> of tide and surge on top.
       </p>
+      {check.recommended && (
+        <p>
+          For comparison, the calc package recommends for this boat at {check.windKn} kn:{' '}
+          {[
+            check.recommended.chain &&
+              `${inchFractionLabel(check.recommended.chain.tradeSizeIn)} in ${check.recommended.chain.grade} chain`,
+            check.recommended.shackleIn !== null &&
+              `a ${inchFractionLabel(check.recommended.shackleIn)} in shackle`,
+            check.recommended.anchorKg !== null && `an anchor of ${check.recommended.anchorKg} kg`,
+            `scope ${check.recommended.scopeRatio.toFixed(0)}:1`,
+          ]
+            .filter(Boolean)
+            .join(', ')}
+          .
+        </p>
+      )}
       {check.warnings.length > 0 && (
         <div>
           <h3 className="text-base font-bold">Warnings</h3>

@@ -67,6 +67,7 @@ describe('BoardTable', () => {
           depthM: 6,
           tideM: 2,
           scopeRatio: 7,
+          recommended: null,
           warnings: [],
           cautions: [],
           basis: '',
