@@ -20,6 +20,7 @@ import {
   rootSql,
   startServer,
 } from './lib/mariadb.mjs';
+import { freshSecrets } from './lib/secrets.mjs';
 import { mustRun, stopService, TSX, waitForHttp } from './lib/setup.mjs';
 
 const PORT = Number(process.env.BENCH_API_PORT ?? 4810);
@@ -40,7 +41,13 @@ const db = dbEnv(cfg, DB);
 const keep = process.env.BENCH_API_KEEP_DB === '1';
 if (!keep) recreateDatabase(cfg, DB);
 const uploadDir = join(OUT_DIR, 'uploads');
-const common = { ...db, NODE_ENV: 'production', LOG_LEVEL: 'silent', UPLOAD_DIR: uploadDir };
+const common = {
+  ...db,
+  ...freshSecrets(),
+  NODE_ENV: 'production',
+  LOG_LEVEL: 'silent',
+  UPLOAD_DIR: uploadDir,
+};
 mustRun(TSX, ['apps/api/src/cli/seed-bench.ts'], { env: common });
 const counts = rootSql(
   cfg,
