@@ -102,7 +102,7 @@ export function authRouter(deps: AuthRouterDeps) {
     res.json({ data: { user: toUserDto(user) } });
   });
 
-  r.post('/resend-verification', resetLimit, async (req, res) => {
+  r.post('/resend-verification', resetLimit, (req, res) => {
     const { email } = resetRequestSchema.parse(req.body);
     // After the answer, so its timing does not say whether the address is registered or verified.
     later('resend verification', () => auth.resendVerification(deps, email));
@@ -138,7 +138,7 @@ export function authRouter(deps: AuthRouterDeps) {
     res.json({ data: sessionDto(req, res, deps.newCsrfToken) });
   });
 
-  r.post('/password-reset', resetLimit, async (req, res) => {
+  r.post('/password-reset', resetLimit, (req, res) => {
     const { email } = resetRequestSchema.parse(req.body);
     // After the answer, so known and unknown addresses answer in the same time.
     later('password reset request', () => auth.requestPasswordReset(deps, email));
