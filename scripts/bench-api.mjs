@@ -228,13 +228,18 @@ try {
       connections: SIGNINS,
       requests: SIGN_IN,
     });
-    const [reads] = await Promise.all([
+    const [reads, si] = await Promise.all([
       load('mixed reads + sign-ins', { connections: 50, requests: VISIT }),
       signIns,
     ]);
     return {
       ...reads,
-      signIns: { ok: signInStatus.ok, other: signInStatus.other, rps: signInStatus.ok / SECONDS },
+      signIns: {
+        ok: signInStatus.ok,
+        other: signInStatus.other,
+        rps: signInStatus.ok / SECONDS,
+        errors: si.errors + si.timeouts,
+      },
     };
   }
 
@@ -304,9 +309,9 @@ try {
   }
   if (withSignIns) {
     const plain = runs.find((r) => r.connections === 50 && r.name === 'mixed anonymous reads');
-    const { ok, other, rps } = withSignIns.signIns;
+    const { ok, other, rps, errors } = withSignIns.signIns;
     console.log(
-      `sign-ins during "mixed reads + sign-ins": ${SIGNINS} connections, ${ok} signed in (${fmt(rps, 1)}/s); other answers: ${JSON.stringify(other)}`,
+      `sign-ins during "mixed reads + sign-ins": ${SIGNINS} connections, ${ok} signed in (${fmt(rps, 1)}/s); other answers: ${JSON.stringify(other)}, ${errors} errors or timeouts`,
     );
     console.log(
       `p99 of the other routes (50 connections): ${fmt(plain?.p99 ?? 0)} ms without sign-ins, ${fmt(withSignIns.p99)} ms with`,
