@@ -28,6 +28,7 @@ export default tseslint.config(
             'vitest.config.ts',
             'scripts/*.mjs',
             'scripts/lib/*.mjs',
+            'apps/api/src/modules/auth/*.mjs',
           ],
         },
         tsconfigRootDir: import.meta.dirname,

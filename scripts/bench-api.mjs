@@ -6,6 +6,7 @@
 //   BENCH_API_SECONDS=20 (per run) · BENCH_API_CONNECTIONS=50,200 · BENCH_API_DB=rodewise_bench_api
 //   BENCH_WEB_DIST=<dir> (built client; default .data/bench/web, built there when missing) · BENCH_API_KEEP_DB=1 (reuse the seeded db)
 //   BENCH_API_ROUTES=1 (also load each route of the mix alone, 5 s at 50 connections, to find a slow one)
+//   BENCH_API_SIGNINS=10 (connections signing in during the "reads + sign-ins" run at 50 read connections; 0 skips it)
 //   BENCH_LIGHTHOUSE=0 (skip the Lighthouse audits that run against the same server after the load)
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, openSync, writeFileSync } from 'node:fs';
@@ -20,12 +21,14 @@ import {
   rootSql,
   startServer,
 } from './lib/mariadb.mjs';
+import { freshSecrets } from './lib/secrets.mjs';
 import { mustRun, stopService, TSX, waitForHttp } from './lib/setup.mjs';
 
 const PORT = Number(process.env.BENCH_API_PORT ?? 4810);
 const DB = process.env.BENCH_API_DB ?? 'rodewise_bench_api';
 const SECONDS = Number(process.env.BENCH_API_SECONDS ?? 20);
 const LEVELS = (process.env.BENCH_API_CONNECTIONS ?? '50,200').split(',').map(Number);
+const SIGNINS = Number(process.env.BENCH_API_SIGNINS ?? 10);
 const OUT_DIR = join(ROOT, '.data', 'bench');
 // Its own build (npm run bench empties .data/bench first), so a stale dist/web is never what gets measured.
 const WEB_DIST = process.env.BENCH_WEB_DIST ?? join(OUT_DIR, 'web');
@@ -40,7 +43,13 @@ const db = dbEnv(cfg, DB);
 const keep = process.env.BENCH_API_KEEP_DB === '1';
 if (!keep) recreateDatabase(cfg, DB);
 const uploadDir = join(OUT_DIR, 'uploads');
-const common = { ...db, NODE_ENV: 'production', LOG_LEVEL: 'silent', UPLOAD_DIR: uploadDir };
+const common = {
+  ...db,
+  ...freshSecrets(),
+  NODE_ENV: 'production',
+  LOG_LEVEL: 'silent',
+  UPLOAD_DIR: uploadDir,
+};
 mustRun(TSX, ['apps/api/src/cli/seed-bench.ts'], { env: common });
 const counts = rootSql(
   cfg,
@@ -167,6 +176,73 @@ try {
     };
   }
 
+  // Sign-ins as the web client does them: GET /api/auth/me for the CSRF token (and its cookie), then POST
+  // /api/auth/login, as the enlarged club's members (bcrypt at the production cost, in the API's worker pool).
+  // bench-member-N numbering starts after the demo club's own members, so the first fifty are skipped.
+  let member = 0;
+  const signInStatus = { ok: 0, other: {} };
+  const SIGN_IN = [
+    {
+      method: 'GET',
+      path: '/api/auth/me',
+      onResponse: (_status, body, context, headers) => {
+        // autocannon keeps the server's header casing (Set-Cookie).
+        const key = Object.keys(headers ?? {}).find((k) => k.toLowerCase() === 'set-cookie');
+        const set = [].concat(key ? headers[key] : []);
+        context.cookie = set.map((c) => String(c).split(';')[0]).join('; ');
+        try {
+          context.csrf = JSON.parse(body).data.csrfToken;
+        } catch {
+          context.csrf = '';
+        }
+      },
+    },
+    {
+      method: 'POST',
+      path: '/api/auth/login',
+      setupRequest: (req, context) => ({
+        ...req,
+        headers: {
+          ...req.headers,
+          'content-type': 'application/json',
+          'x-csrf-token': context.csrf ?? '',
+          ...(context.cookie ? { cookie: context.cookie } : {}),
+        },
+        body: JSON.stringify({
+          email: `bench-member-${50 + (member++ % Math.max(1, counts[0] - 100))}@larkspit.example`,
+          password: 'bench-member-only',
+        }),
+      }),
+      onResponse: (status) => {
+        if (status === 200) signInStatus.ok += 1;
+        else signInStatus.other[status] = (signInStatus.other[status] ?? 0) + 1;
+      },
+    },
+  ];
+
+  /** The read mix at 50 connections while `SIGNINS` connections sign in; only the reads' times are kept. */
+  async function readsWithSignIns() {
+    const signIns = autocannon({
+      url: BASE,
+      duration: SECONDS,
+      connections: SIGNINS,
+      requests: SIGN_IN,
+    });
+    const [reads, si] = await Promise.all([
+      load('mixed reads + sign-ins', { connections: 50, requests: VISIT }),
+      signIns,
+    ]);
+    return {
+      ...reads,
+      signIns: {
+        ok: signInStatus.ok,
+        other: signInStatus.other,
+        rps: signInStatus.ok / SECONDS,
+        errors: si.errors + si.timeouts,
+      },
+    };
+  }
+
   // Warm-up: JIT, the search index, connection pools.
   await load('warm-up', { connections: 10, duration: 5, requests: VISIT });
 
@@ -180,6 +256,8 @@ try {
     );
     runs.push(await load('mixed anonymous reads', { connections, requests: VISIT }));
   }
+  const withSignIns = SIGNINS > 0 && LEVELS.includes(50) ? await readsWithSignIns() : undefined;
+  if (withSignIns) runs.push(withSignIns);
   const perRoute = [];
   if (process.env.BENCH_API_ROUTES === '1') {
     for (const [name, path] of [
@@ -228,6 +306,22 @@ try {
       measured: `${mixed.errors + ceil.errors} errors, ${mixed.non2xx + ceil.non2xx} non-2xx`,
       pass: mixed.errors + ceil.errors + mixed.non2xx + ceil.non2xx === 0,
     });
+  }
+  if (withSignIns) {
+    const plain = runs.find((r) => r.connections === 50 && r.name === 'mixed anonymous reads');
+    const { ok, other, rps, errors } = withSignIns.signIns;
+    console.log(
+      `sign-ins during "mixed reads + sign-ins": ${SIGNINS} connections, ${ok} signed in (${fmt(rps, 1)}/s); other answers: ${JSON.stringify(other)}, ${errors} errors or timeouts`,
+    );
+    console.log(
+      `p99 of the other routes (50 connections): ${fmt(plain?.p99 ?? 0)} ms without sign-ins, ${fmt(withSignIns.p99)} ms with`,
+    );
+    if (plain)
+      targets.push({
+        target: `sign-ins do not move the other routes' p99 (≤ 1.5× or ≤ +50 ms; ${SIGNINS} signing in)`,
+        measured: `${fmt(plain.p99)} → ${fmt(withSignIns.p99)} ms`,
+        pass: withSignIns.p99 <= Math.max(plain.p99 * 1.5, plain.p99 + 50) && ok > 0,
+      });
   }
   console.log('');
   for (const t of targets) console.log(`${mark(t.pass)}  ${t.target}: ${t.measured}`);

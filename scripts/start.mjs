@@ -3,6 +3,7 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { dbEnv, profileConfig, provision, ROOT, startServer } from './lib/mariadb.mjs';
+import { ensureSecrets } from './lib/secrets.mjs';
 import { ensureDeps, mustRun, startService, stopService, TSX, waitForHttp } from './lib/setup.mjs';
 
 const dev = process.argv.includes('--dev');
@@ -22,7 +23,14 @@ async function main() {
   provision(cfg, [cfg.database]);
   const db = dbEnv(cfg);
   const publicUrl = dev ? `http://127.0.0.1:${PORTS.vite}` : `http://127.0.0.1:${PORTS.api}`;
-  const common = { ...db, NODE_ENV: dev ? 'development' : 'production', PUBLIC_URL: publicUrl };
+  // Random per-install secrets (.data/secrets.json, mode 0600): the API refuses the public defaults in production.
+  const secrets = ensureSecrets();
+  const common = {
+    ...db,
+    ...secrets,
+    NODE_ENV: dev ? 'development' : 'production',
+    PUBLIC_URL: publicUrl,
+  };
 
   mustRun(TSX, ['apps/api/src/cli/seed.ts'], { env: common });
   if (!dev) {
@@ -42,6 +50,7 @@ async function main() {
     children.push(
       startService('payments', TSX, ['apps/fake-payments/src/main.ts'], {
         FAKE_PAYMENTS_PORT: String(PORTS.payments),
+        STRIPE_WEBHOOK_SECRET: secrets.STRIPE_WEBHOOK_SECRET,
         FAKE_PAYMENTS_DIR: join(ROOT, '.data', 'fake-payments'),
         FAKE_PAYMENTS_WEBHOOK_URL: `http://127.0.0.1:${PORTS.api}/api/payments/webhook`,
         FAKE_PAYMENTS_PUBLIC_URL: `http://127.0.0.1:${PORTS.payments}`,

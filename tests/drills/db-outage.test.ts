@@ -9,6 +9,7 @@ import {
   stopServer,
 } from '../../scripts/lib/mariadb.mjs';
 import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
+import { freshSecrets } from '../../scripts/lib/secrets.mjs';
 
 // A MariaDB of its own (port 3309, .data/mariadb-drill) so stopping it disturbs no other test.
 const cfg = profileConfig('drill', { port: 3309, dataDir: '.data/mariadb-drill' });
@@ -23,6 +24,7 @@ beforeAll(async () => {
   const env = {
     ...dbEnv(cfg, 'rodewise_drill'),
     NODE_ENV: 'production',
+    ...freshSecrets(),
     LOG_LEVEL: 'silent',
     SMTP_PORT: '1',
   };

@@ -11,6 +11,7 @@ import {
   startServer,
 } from '../../scripts/lib/mariadb.mjs';
 import { startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
+import { freshSecrets } from '../../scripts/lib/secrets.mjs';
 import { sqlNumber, sqlRows, waitUntil } from './drill-helpers';
 
 // The shared test MariaDB (never stopped here) with its own empty database (the API migrates it); the API and the mail sink run as separate
@@ -41,6 +42,7 @@ beforeAll(async () => {
     {
       ...env,
       NODE_ENV: 'production',
+      ...freshSecrets(),
       PORT: String(API_PORT),
       PUBLIC_URL: API,
       SMTP_PORT: String(SMTP_PORT),

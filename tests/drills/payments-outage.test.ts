@@ -11,6 +11,7 @@ import {
   startServer,
 } from '../../scripts/lib/mariadb.mjs';
 import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
+import { freshSecrets } from '../../scripts/lib/secrets.mjs';
 import { signIn, sqlNumber, sqlRows, waitUntil } from './drill-helpers';
 
 // The shared test MariaDB (never stopped here) with a database of its own; the API and the fake payment provider
@@ -25,10 +26,12 @@ const PAY_DIR = join(ROOT, '.data', 'drill-fake-payments');
 const MEMBER = 'maren@larkspit.example'; // the demo seed keeps her dues owing
 const PASSWORD = 'harbour-demo-2026';
 
+const secrets = freshSecrets();
 const env = { ...dbEnv(cfg, DB), LOG_LEVEL: 'silent' };
 const apiEnv = {
   ...env,
   NODE_ENV: 'production',
+  ...secrets,
   PORT: String(API_PORT),
   PUBLIC_URL: API,
   SMTP_PORT: '1',
@@ -38,6 +41,7 @@ const apiEnv = {
 };
 const payEnv = {
   FAKE_PAYMENTS_PORT: String(PAY_PORT),
+  STRIPE_WEBHOOK_SECRET: secrets.STRIPE_WEBHOOK_SECRET,
   FAKE_PAYMENTS_DIR: PAY_DIR,
   FAKE_PAYMENTS_WEBHOOK_URL: `${API}/api/payments/webhook`,
   FAKE_PAYMENTS_PUBLIC_URL: PAY,

@@ -8,6 +8,7 @@ import {
   startServer,
 } from '../../scripts/lib/mariadb.mjs';
 import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
+import { freshSecrets } from '../../scripts/lib/secrets.mjs';
 
 const cfg = profileConfig('test');
 const PORTS = [4391, 4392] as const;
@@ -20,6 +21,7 @@ beforeAll(async () => {
   const env = {
     ...dbEnv(cfg, 'rodewise_drill_multi'),
     NODE_ENV: 'production',
+    ...freshSecrets(),
     LOG_LEVEL: 'silent',
     SMTP_PORT: '1',
   };

@@ -10,6 +10,7 @@ import {
   ROOT,
   startServer,
 } from '../../scripts/lib/mariadb.mjs';
+import { freshSecrets } from '../../scripts/lib/secrets.mjs';
 import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
 
 declare module 'vitest' {
@@ -40,8 +41,10 @@ export async function setup(project: TestProject) {
   provision(cfg, [database]);
   recreateDatabase(cfg, database);
   const baseUrl = `http://127.0.0.1:${E2E_PORTS.api}`;
+  const secrets = freshSecrets();
   const env = {
     ...dbEnv(cfg, database),
+    ...secrets,
     NODE_ENV: 'production',
     PUBLIC_URL: baseUrl,
     LOG_LEVEL: 'warn',
@@ -74,6 +77,7 @@ export async function setup(project: TestProject) {
         ['apps/fake-payments/src/main.ts'],
         {
           FAKE_PAYMENTS_PORT: String(E2E_PORTS.payments),
+          STRIPE_WEBHOOK_SECRET: secrets.STRIPE_WEBHOOK_SECRET,
           FAKE_PAYMENTS_DIR: join(ROOT, '.data', `${database}-payments`),
           FAKE_PAYMENTS_WEBHOOK_URL: `${baseUrl}/api/payments/webhook`,
           FAKE_PAYMENTS_PUBLIC_URL: `http://127.0.0.1:${E2E_PORTS.payments}`,

@@ -14,6 +14,7 @@ import type { Env } from './config/env';
 import { AppError } from './errors/app-error';
 import { mount } from './lib/routes';
 import { throttleSessionTouch } from './lib/session-touch';
+import { visitorCsrf } from './lib/visitor-csrf';
 import type { Logger } from './logger';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { initModels } from './models';
@@ -63,7 +64,9 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   const uploadDir = env.UPLOAD_DIR ?? DEFAULT_UPLOAD_DIR;
   configureStorage(localDiskStorage(uploadDir));
   const app = express();
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-* are believed only from the proxies TRUST_PROXY names (none by default), so a client reaching
+  // the API directly cannot pick its own address for the rate limits.
+  app.set('trust proxy', env.TRUST_PROXY);
   app.disable('x-powered-by');
   // gzip for the client bundle, HTML and larger JSON answers (below 1 KB nothing is compressed).
   app.use(compression());
@@ -122,7 +125,17 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
       return typeof h === 'string' ? h : undefined;
     },
   });
+  const visitor = visitorCsrf(env.SESSION_SECRET, env.COOKIE_SECURE);
+  const SAFE = new Set(['GET', 'HEAD', 'OPTIONS']);
   const csrf: RequestHandler = (req, res, next) => {
+    // A signed-out visitor without a stored session proves the request with the signed double-submit pair.
+    if (!SAFE.has(req.method) && !req.user && !req.session.csrfToken) {
+      const h = req.headers['x-csrf-token'];
+      if (visitor.verify(req, typeof h === 'string' ? h : undefined)) {
+        next();
+        return;
+      }
+    }
     csrfSynchronisedProtection(req, res, (err?: unknown) => {
       if (err)
         next(
@@ -158,6 +171,11 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   api.post('/payments/webhook', ...paymentsWebhook({ env, sequelize, logger }));
   mount(app, '/api', api);
 
+  // Answers carry members' names, addresses, messages and payments: no browser or proxy keeps a copy.
+  app.use('/api', (_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
   app.use('/api', express.json({ limit: '200kb' }));
   app.use(
     '/api',
@@ -179,11 +197,14 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   app.use('/api', passport.initialize(), passport.session() as RequestHandler);
   app.use('/api', csrf);
 
-  const newCsrfToken = (req: express.Request) => generateToken(req, true);
+  // Members get a synchroniser token in their session; a visitor without a stored session gets the signed
+  // double-submit token, so a cookieless GET /api/auth/me writes no session row.
+  const newCsrfToken = (req: express.Request, res: express.Response) =>
+    req.user || req.session.csrfToken ? generateToken(req, true) : visitor.issue(req, res);
   mount(app, '/api/health', healthRouter(sequelize));
-  mount(app, '/api/auth', authRouter({ ...authDeps, env, passport, newCsrfToken }));
+  mount(app, '/api/auth', authRouter({ ...authDeps, env, passport, newCsrfToken, logger }));
   const digest = { publicUrl: env.PUBLIC_URL, secret: env.SESSION_SECRET };
-  mount(app, '/api/account', accountRouter(authDeps, digest));
+  mount(app, '/api/account', accountRouter(authDeps, digest, env));
   mount(app, '/api/admin', adminRouter(sequelize));
   mount(app, '/api/club', clubRouter());
   mount(app, '/api/boats', boatsRouter());
@@ -199,7 +220,7 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   mount(app, '/api/uploads', uploadsRouter());
   const exchange = { publicUrl: env.PUBLIC_URL };
   mount(app, '/api/listings', listingsRouter(exchange));
-  mount(app, '/api/threads', threadsRouter(exchange));
+  mount(app, '/api/threads', threadsRouter({ ...exchange, messageLimit: env.MESSAGE_RATE_LIMIT }));
   mount(app, '/api/saved-searches', savedSearchesRouter());
   mount(app, '/api/storm-watches', stormRouter({ sequelize, publicUrl: env.PUBLIC_URL }));
   // The listing search index is built from MariaDB at start (and lazily on first search if that fails).

@@ -156,7 +156,12 @@ const CSRF_EXEMPT: Record<string, string> = {
   'POST /api/payments/webhook': 'called by the payment provider, authenticated by its signature',
 };
 
-const built = createTestApp({ LOGIN_RATE_LIMIT: '10000' });
+const built = createTestApp({
+  LOGIN_RATE_LIMIT: '10000',
+  SIGNUP_RATE_LIMIT: '100000',
+  PASSWORD_CHANGE_RATE_LIMIT: '100000',
+  MESSAGE_RATE_LIMIT: '100000',
+});
 afterAll(() => built.close());
 
 const ROLE_SETS: Record<Exclude<Who, 'visitor'>, Role[]> = {

@@ -5,6 +5,7 @@ import { createSequelize } from './db';
 import { createLogger } from './logger';
 import { migrateUp } from './migrator';
 import { initModels } from './models';
+import { closePasswordPool } from './modules/auth/password-hash';
 import { createTransport, startOutboxWorker } from './modules/mail/outbox.service';
 
 const env = loadEnv();
@@ -34,7 +35,7 @@ async function shutdown(signal: string) {
   server.close();
   server.closeIdleConnections();
   setTimeout(() => process.exit(0), 3000).unref();
-  await sequelize.close().catch(() => undefined);
+  await Promise.all([sequelize.close(), closePasswordPool()]).catch(() => undefined);
   process.exit(0);
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'));

@@ -15,11 +15,18 @@ const email = z
   .max(254, 'E-mail is too long')
   .pipe(z.email('Enter a valid e-mail address'));
 
+/** bcrypt reads only a password's first 72 bytes (UTF-8): longer ones are refused rather than cut short. */
+export const PASSWORD_MAX_BYTES = 72;
+const utf8Bytes = (s: string) => new TextEncoder().encode(s).length;
+
 /** Password rules shared by sign-up, reset and change. */
 export const passwordSchema = z
   .string({ error: 'Password is required' })
   .min(10, 'Use at least 10 characters')
-  .max(200, 'Use at most 200 characters');
+  .max(200, 'Use at most 72 characters')
+  .refine((v) => utf8Bytes(v) <= PASSWORD_MAX_BYTES, {
+    message: 'Use at most 72 characters (accented letters and symbols count as two to four)',
+  });
 
 export const signupSchema = z.object({
   email,

@@ -1,5 +1,11 @@
 import { z } from 'zod';
 
+/** Public defaults for local runs; production refuses them (see loadEnv). */
+export const DEFAULT_SESSION_SECRET = 'rodewise-local-session-secret-change-me';
+export const DEFAULT_WEBHOOK_SECRET = 'whsec_rodewise_local_fake';
+/** Shortest secret production accepts: 32 characters (`npm start` generates 43 random base64url characters). */
+export const MIN_SECRET_LENGTH = 32;
+
 const bool = z.enum(['0', '1', 'true', 'false']).transform((v) => v === '1' || v === 'true');
 
 const envSchema = z.object({
@@ -12,7 +18,7 @@ const envSchema = z.object({
   DB_USER: z.string().min(1).default('rodewise'),
   DB_PASSWORD: z.string().default('rodewise-local-only'),
   DB_POOL_MAX: z.coerce.number().int().min(1).default(20),
-  SESSION_SECRET: z.string().min(16).default('rodewise-local-session-secret-change-me'),
+  SESSION_SECRET: z.string().min(16).default(DEFAULT_SESSION_SECRET),
   SESSION_MAX_AGE_H: z.coerce
     .number()
     .positive()
@@ -27,22 +33,47 @@ const envSchema = z.object({
   OUTBOX_INTERVAL_MS: z.coerce.number().int().min(0).default(1000),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   RESET_RATE_LIMIT: z.coerce.number().int().min(1).default(5),
+  /** Sign-ups per address per hour. */
+  SIGNUP_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  /** Wrong current passwords per member per 15 minutes on the password change form. */
+  PASSWORD_CHANGE_RATE_LIMIT: z.coerce.number().int().min(1).default(5),
+  /** Buyer and seller messages per member per 10 minutes. */
+  MESSAGE_RATE_LIMIT: z.coerce.number().int().min(1).default(30),
+  /**
+   * Express `trust proxy`: unset (the default) trusts no proxy, so X-Forwarded-For is ignored and rate limits key
+   * on the socket address. Behind a reverse proxy set `loopback`, a hop count (`1`) or the proxy's addresses.
+   */
+  TRUST_PROXY: z.string().optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   WEB_DIST: z.string().optional(),
   UPLOAD_DIR: z.string().optional(),
   /** When set, every CSP violation report is also appended here as one JSON line (the e2e run reads it). */
   CSP_REPORT_FILE: z.string().optional(),
   STRIPE_SECRET_KEY: z.string().default('sk_test_rodewise_local_fake'),
-  STRIPE_WEBHOOK_SECRET: z.string().default('whsec_rodewise_local_fake'),
+  STRIPE_WEBHOOK_SECRET: z.string().default(DEFAULT_WEBHOOK_SECRET),
   STRIPE_HOST: z.string().optional(),
   STRIPE_PORT: z.coerce.number().int().optional(),
   STRIPE_PROTOCOL: z.enum(['http', 'https']).optional(),
 });
 
-export type Env = Omit<z.infer<typeof envSchema>, 'BCRYPT_COST' | 'COOKIE_SECURE'> & {
+export type Env = Omit<
+  z.infer<typeof envSchema>,
+  'BCRYPT_COST' | 'COOKIE_SECURE' | 'TRUST_PROXY'
+> & {
   BCRYPT_COST: number;
   COOKIE_SECURE: boolean;
+  /** The value for Express's `trust proxy` setting. */
+  TRUST_PROXY: boolean | number | string;
 };
+
+/** `TRUST_PROXY`: unset or `false` → trust nobody; `true`; a hop count; otherwise Express's address list. */
+function trustProxy(raw: string | undefined): boolean | number | string {
+  const v = raw?.trim();
+  if (!v || v === 'false' || v === '0') return false;
+  if (v === 'true') return true;
+  if (/^\d+$/.test(v)) return Number(v);
+  return v;
+}
 
 /** Parses process.env once; a bad variable stops boot with a list of what is wrong. */
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
@@ -56,8 +87,27 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   const cost = e.BCRYPT_COST ?? (e.NODE_ENV === 'test' ? 4 : 12);
   if (e.NODE_ENV === 'production' && cost < 12)
     throw new Error('BCRYPT_COST must be at least 12 in production');
+  // Anyone can read the defaults in this file: with them a webhook could be forged (dues credited without
+  // paying) and digest stop links signed. `npm start` generates both into .data/secrets.json.
+  if (e.NODE_ENV === 'production') {
+    const weak = (
+      [
+        ['SESSION_SECRET', e.SESSION_SECRET, DEFAULT_SESSION_SECRET],
+        ['STRIPE_WEBHOOK_SECRET', e.STRIPE_WEBHOOK_SECRET, DEFAULT_WEBHOOK_SECRET],
+      ] as const
+    ).filter(([, value, fallback]) => value === fallback || value.length < MIN_SECRET_LENGTH);
+    if (weak.length)
+      throw new Error(
+        `${weak.map(([name]) => name).join(' and ')} must be set to a random value of at least ${MIN_SECRET_LENGTH} characters in production (not the built-in default)`,
+      );
+  }
   // A production site served over https gets Secure cookies unless told otherwise; local http runs stay usable.
   const cookieSecure =
     e.COOKIE_SECURE ?? (e.NODE_ENV === 'production' && e.PUBLIC_URL.startsWith('https://'));
-  return { ...e, BCRYPT_COST: cost, COOKIE_SECURE: cookieSecure };
+  return {
+    ...e,
+    BCRYPT_COST: cost,
+    COOKIE_SECURE: cookieSecure,
+    TRUST_PROXY: trustProxy(e.TRUST_PROXY),
+  };
 }

@@ -8,7 +8,13 @@ import { resetPostIndex } from '../modules/search/post-index';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
 
 // Property-based input tests (fast-check): random JSON thrown at every state-changing route.
-const built = createTestApp({ LOGIN_RATE_LIMIT: '100000', RESET_RATE_LIMIT: '100000' });
+const built = createTestApp({
+  LOGIN_RATE_LIMIT: '100000',
+  RESET_RATE_LIMIT: '100000',
+  SIGNUP_RATE_LIMIT: '100000',
+  PASSWORD_CHANGE_RATE_LIMIT: '100000',
+  MESSAGE_RATE_LIMIT: '100000',
+});
 afterAll(() => built.close());
 
 /**

@@ -18,6 +18,9 @@ const prod = createTestApp({
   WEB_DIST: webDist,
   NODE_ENV: 'production',
   PUBLIC_URL: 'https://club.example',
+  TRUST_PROXY: 'loopback',
+  SESSION_SECRET: 'a-random-production-session-secret-of-40-chars',
+  STRIPE_WEBHOOK_SECRET: 'whsec_a-random-production-webhook-secret-0123',
 });
 afterAll(() => {
   local.close();

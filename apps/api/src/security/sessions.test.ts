@@ -7,9 +7,16 @@ import { buildUser, client, createTestApp, resetDb, TEST_PASSWORD } from '../tes
 
 const built = createTestApp({ LOGIN_RATE_LIMIT: '3', RESET_RATE_LIMIT: '3' });
 // The production configuration behind an https address, as a club would deploy it.
+// Production refuses the built-in secrets, and sees https only through a proxy it is told to trust.
+const SECRETS = {
+  SESSION_SECRET: 'a-random-production-session-secret-of-40-chars',
+  STRIPE_WEBHOOK_SECRET: 'whsec_a-random-production-webhook-secret-0123',
+};
 const prod = createTestApp({
   NODE_ENV: 'production',
   PUBLIC_URL: 'https://club.example',
+  TRUST_PROXY: 'loopback',
+  ...SECRETS,
 });
 afterAll(() => {
   built.close();
@@ -21,6 +28,11 @@ const setCookies = (res: request.Response) =>
   ([] as string[]).concat(res.headers['set-cookie'] ?? []);
 const sessionCookie = (res: request.Response) =>
   setCookies(res).find((c) => c.startsWith('rw.sid='));
+/** Every cookie an answer set, as a Cookie header value (the session and the visitor's CSRF nonce). */
+const cookieHeader = (res: request.Response) =>
+  setCookies(res)
+    .map((c) => c.split(';')[0])
+    .join('; ');
 /** `rw.sid=…` as a Cookie header value. */
 const cookiePair = (res: request.Response) => sessionCookie(res)?.split(';')[0] ?? '';
 /** The session id inside a signed `rw.sid=s:<id>.<signature>` cookie. */
@@ -35,8 +47,10 @@ async function csrfFor(app: typeof built.app, cookie: string) {
 describe('session fixation', () => {
   it('a session id planted before sign-in is replaced at sign-in and stays anonymous', async () => {
     const user = await buildUser();
-    // The attacker gets a session id and plants it in the victim's browser.
-    const planted = await request(built.app).get('/api/auth/me');
+    const attacker = await buildUser();
+    // The attacker gets a stored session id (their own sign-in) and plants it in the victim's browser.
+    const attackerClient = await client(built.app);
+    const planted = await attackerClient.signIn(attacker.email);
     const plantedPair = cookiePair(planted);
     const plantedSid = sidIn(plantedPair);
     expect(plantedSid).toBeTruthy();
@@ -45,7 +59,7 @@ describe('session fixation', () => {
     const login = await request(built.app)
       .post('/api/auth/login')
       .set('Cookie', plantedPair)
-      .set('X-CSRF-Token', (planted.body as { data: { csrfToken: string } }).data.csrfToken)
+      .set('X-CSRF-Token', attackerClient.token)
       .send({ email: user.email, password: TEST_PASSWORD });
     expect(login.status).toBe(200);
     const newSid = sidIn(cookiePair(login));
@@ -98,13 +112,26 @@ describe('cookie flags', () => {
   it('adds Secure in the production configuration behind https', async () => {
     expect(prod.env.COOKIE_SECURE).toBe(true);
     expect(
-      loadEnv({ NODE_ENV: 'production', PUBLIC_URL: 'https://club.example' }).COOKIE_SECURE,
+      loadEnv({ ...SECRETS, NODE_ENV: 'production', PUBLIC_URL: 'https://club.example' })
+        .COOKIE_SECURE,
     ).toBe(true);
     expect(
-      loadEnv({ NODE_ENV: 'production', PUBLIC_URL: 'http://127.0.0.1:4310' }).COOKIE_SECURE,
+      loadEnv({ ...SECRETS, NODE_ENV: 'production', PUBLIC_URL: 'http://127.0.0.1:4310' })
+        .COOKIE_SECURE,
     ).toBe(false);
-    // The reverse proxy in front terminates TLS and says so; the app trusts only a loopback proxy.
-    const res = await request(prod.app).get('/api/auth/me').set('X-Forwarded-Proto', 'https');
+    // The reverse proxy in front terminates TLS and says so; the app trusts only the proxy TRUST_PROXY names.
+    const user = await buildUser();
+    const me = await request(prod.app).get('/api/auth/me').set('X-Forwarded-Proto', 'https');
+    const visitorCookie = setCookies(me).find((c) => c.startsWith('rw.vcsrf=')) ?? '';
+    expect(visitorCookie).toMatch(/;\s*Secure/i);
+    expect(visitorCookie).toMatch(/;\s*HttpOnly/i);
+    const res = await request(prod.app)
+      .post('/api/auth/login')
+      .set('X-Forwarded-Proto', 'https')
+      .set('Cookie', cookieHeader(me))
+      .set('X-CSRF-Token', (me.body as { data: { csrfToken: string } }).data.csrfToken)
+      .send({ email: user.email, password: TEST_PASSWORD });
+    expect(res.status).toBe(200);
     const cookie = sessionCookie(res) ?? '';
     expect(cookie).toMatch(/;\s*Secure/i);
     expect(cookie).toMatch(/;\s*HttpOnly/i);
@@ -142,26 +169,34 @@ describe('rate limits', () => {
       message: expect.stringMatching(/too many password reset attempts/i),
     });
 
+    // Confirmations are limited per link: the fourth try of one token is refused, another link still works.
     const guesses: number[] = [];
     for (let i = 0; i < 4; i += 1)
       guesses.push(
         (
           await c.post('/api/auth/password-reset/confirm', {
-            token: `guessed-token-${i}-${'x'.repeat(40)}`,
+            token: `guessed-token-${'x'.repeat(40)}`,
             password: 'a-brand-new-secret',
           })
         ).status,
       );
     expect(guesses.slice(0, 3).every((s) => s >= 400 && s < 429)).toBe(true);
     expect(guesses[3]).toBe(429);
+    const other = await c.post('/api/auth/password-reset/confirm', {
+      token: `another-token-${'y'.repeat(40)}`,
+      password: 'a-brand-new-secret',
+    });
+    expect(other.status).toBe(410);
   });
 });
 
 describe('password hashing cost', () => {
   it('is at least 12 in the production configuration, and production refuses less', () => {
-    expect(loadEnv({ NODE_ENV: 'production' }).BCRYPT_COST).toBeGreaterThanOrEqual(12);
+    expect(loadEnv({ ...SECRETS, NODE_ENV: 'production' }).BCRYPT_COST).toBeGreaterThanOrEqual(12);
     expect(prod.env.BCRYPT_COST).toBeGreaterThanOrEqual(12);
-    expect(() => loadEnv({ NODE_ENV: 'production', BCRYPT_COST: '10' })).toThrow(/at least 12/);
+    expect(() => loadEnv({ ...SECRETS, NODE_ENV: 'production', BCRYPT_COST: '10' })).toThrow(
+      /at least 12/,
+    );
   });
 
   it('the hash stored at sign-up under the production configuration uses that cost', async () => {
@@ -169,7 +204,7 @@ describe('password hashing cost', () => {
     const res = await request(prod.app)
       .post('/api/auth/signup')
       .set('X-Forwarded-Proto', 'https')
-      .set('Cookie', cookiePair(me))
+      .set('Cookie', cookieHeader(me))
       .set('X-CSRF-Token', (me.body as { data: { csrfToken: string } }).data.csrfToken)
       .send({
         email: 'cost-check@test.example',

@@ -19,7 +19,12 @@ import { executableMarkup, visibleText } from './html-check';
 // list is the fixture modules/posts/testing/owasp-xss-payloads.ts) through every plain-text field the server stores
 // and the client shows. Each must come back as the same text, and every piece of HTML the server itself produces
 // (rendered post bodies, e-mail HTML) must hold no executable markup when parsed by parse5.
-const built = createTestApp({ LOGIN_RATE_LIMIT: '100000' });
+const built = createTestApp({
+  LOGIN_RATE_LIMIT: '100000',
+  SIGNUP_RATE_LIMIT: '100000',
+  PASSWORD_CHANGE_RATE_LIMIT: '100000',
+  MESSAGE_RATE_LIMIT: '100000',
+});
 afterAll(() => built.close());
 
 /** Payloads that fit a field of at most `max` characters (after the trim every text field applies). */

@@ -8,6 +8,7 @@ import { loadEnv, type Env } from '../config/env';
 import { createSequelize } from '../db';
 import { createLogger } from '../logger';
 import { initModels, User, UserRole } from '../models';
+import { settleBackground } from '../lib/background';
 import { createTransport, drainOutbox } from '../modules/mail/outbox.service';
 import { clearClubCache } from '../modules/club/club-cache';
 import { clearAnonymousListingCache } from '../modules/listings/listing-read-cache';
@@ -119,6 +120,8 @@ export type Client = Awaited<ReturnType<typeof client>>;
 
 /** Sends everything waiting in the outbox to the test mail sink. */
 export async function flushOutbox() {
+  // Mail some routes queue after answering (reset requests) is queued first.
+  await settleBackground();
   const { sequelize, env } = testDb();
   const transport = createTransport(env);
   let total = 0;

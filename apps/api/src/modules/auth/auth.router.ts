@@ -6,7 +6,6 @@ import {
   type Response,
 } from 'express';
 import type { createPassport } from './passport';
-import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
 import {
   loginSchema,
   resetConfirmSchema,
@@ -17,6 +16,9 @@ import {
 } from '@app/shared';
 import type { Env } from '../../config/env';
 import { AppError } from '../../errors/app-error';
+import { inBackground } from '../../lib/background';
+import { clientIp, limiter, normalisedEmail, secretKey } from '../../lib/rate-limit';
+import type { Logger } from '../../logger';
 import type { User } from '../../models';
 import * as auth from './auth.service';
 import { toUserDto } from './user.presenter';
@@ -24,40 +26,22 @@ import { toUserDto } from './user.presenter';
 export interface AuthRouterDeps extends auth.AuthDeps {
   env: Env;
   passport: ReturnType<typeof createPassport>;
-  newCsrfToken: (req: Request) => string;
+  newCsrfToken: (req: Request, res: Response) => string;
+  logger: Logger;
 }
 
 const toError = (err: unknown): Error =>
   err instanceof Error ? err : new Error(typeof err === 'string' ? err : 'authentication failed');
 
-const emailOf = (body: unknown) => {
-  const e = (body as { email?: unknown } | undefined)?.email;
-  return typeof e === 'string' ? e.toLowerCase() : '';
-};
-
-const limited = (limit: number, windowMs: number, what: string) =>
-  rateLimit({
-    windowMs,
-    limit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    // Per address and per account, so one member's typos don't lock out the clubhouse Wi-Fi.
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '0.0.0.0')}|${emailOf(req.body)}`,
-    handler: (_req, res) => {
-      res.status(429).json({
-        error: {
-          code: 'RATE_LIMITED',
-          message: `Too many ${what} attempts. Wait a few minutes and try again.`,
-        },
-      });
-    },
-  });
-
 /** The session DTO, with a fresh CSRF token bound to the current session. */
-export function sessionDto(req: Request, newCsrfToken: (req: Request) => string): SessionDto {
+export function sessionDto(
+  req: Request,
+  res: Response,
+  newCsrfToken: (req: Request, res: Response) => string,
+): SessionDto {
   return {
     user: req.user ? toUserDto(req.user) : null,
-    csrfToken: req.session.csrfToken ?? newCsrfToken(req),
+    csrfToken: req.session.csrfToken ?? newCsrfToken(req, res),
   };
 }
 
@@ -69,14 +53,44 @@ function logIn(req: Request, user: User): Promise<void> {
 
 export function authRouter(deps: AuthRouterDeps) {
   const r = Router();
-  const loginLimit = limited(deps.env.LOGIN_RATE_LIMIT, 15 * 60_000, 'sign-in');
-  const resetLimit = limited(deps.env.RESET_RATE_LIMIT, 60 * 60_000, 'password reset');
+  const { env } = deps;
+  const accountAtIp = (req: Request) => `${clientIp(req)}|${normalisedEmail(req.body)}`;
+  // Per account and address, failures only: a clubhouse shares one address, and one member's typos (or a
+  // member guessing) never lock out the treasurer signing in from the same Wi-Fi.
+  const loginLimit = limiter({
+    limit: env.LOGIN_RATE_LIMIT,
+    windowMs: 15 * 60_000,
+    what: 'sign-in attempts',
+    key: accountAtIp,
+    countSuccess: false,
+  });
+  const resetLimit = limiter({
+    limit: env.RESET_RATE_LIMIT,
+    windowMs: 60 * 60_000,
+    what: 'password reset attempts',
+    key: accountAtIp,
+  });
+  // Per link: guessing tokens is limited per token, and one visitor's expired link blocks no one else's.
+  const resetConfirmLimit = limiter({
+    limit: env.RESET_RATE_LIMIT,
+    windowMs: 60 * 60_000,
+    what: 'attempts with this reset link',
+    key: (req) => secretKey((req.body as { token?: unknown } | undefined)?.token),
+  });
+  const signupLimit = limiter({
+    limit: env.SIGNUP_RATE_LIMIT,
+    windowMs: 60 * 60_000,
+    what: 'sign-ups from this address',
+    key: clientIp,
+  });
+  const later = (what: string, work: () => Promise<unknown>) =>
+    inBackground(work, (err) => deps.logger.error({ err }, `${what} failed`));
 
   r.get('/me', (req, res) => {
-    res.json({ data: sessionDto(req, deps.newCsrfToken) });
+    res.json({ data: sessionDto(req, res, deps.newCsrfToken) });
   });
 
-  r.post('/signup', async (req, res) => {
+  r.post('/signup', signupLimit, async (req, res) => {
     const input = signupSchema.parse(req.body);
     await auth.signup(deps, input);
     res.status(201).json({ data: { email: input.email } });
@@ -88,9 +102,10 @@ export function authRouter(deps: AuthRouterDeps) {
     res.json({ data: { user: toUserDto(user) } });
   });
 
-  r.post('/resend-verification', resetLimit, async (req, res) => {
+  r.post('/resend-verification', resetLimit, (req, res) => {
     const { email } = resetRequestSchema.parse(req.body);
-    await auth.resendVerification(deps, email);
+    // After the answer, so its timing does not say whether the address is registered or verified.
+    later('resend verification', () => auth.resendVerification(deps, email));
     res.status(202).json({ data: { ok: true } });
   });
 
@@ -112,7 +127,7 @@ export function authRouter(deps: AuthRouterDeps) {
     // req.login regenerates the session id (no fixation); the CSRF token is renewed with it.
     await logIn(req, user);
     req.session.csrfToken = undefined;
-    res.json({ data: sessionDto(req, deps.newCsrfToken) });
+    res.json({ data: sessionDto(req, res, deps.newCsrfToken) });
   });
 
   r.post('/logout', async (req, res) => {
@@ -120,16 +135,17 @@ export function authRouter(deps: AuthRouterDeps) {
       req.logout((err: unknown) => (err ? reject(toError(err)) : resolve())),
     );
     req.session.csrfToken = undefined;
-    res.json({ data: sessionDto(req, deps.newCsrfToken) });
+    res.json({ data: sessionDto(req, res, deps.newCsrfToken) });
   });
 
-  r.post('/password-reset', resetLimit, async (req, res) => {
+  r.post('/password-reset', resetLimit, (req, res) => {
     const { email } = resetRequestSchema.parse(req.body);
-    await auth.requestPasswordReset(deps, email);
+    // After the answer, so known and unknown addresses answer in the same time.
+    later('password reset request', () => auth.requestPasswordReset(deps, email));
     res.status(202).json({ data: { ok: true } });
   });
 
-  r.post('/password-reset/confirm', resetLimit, async (req, res) => {
+  r.post('/password-reset/confirm', resetConfirmLimit, async (req, res) => {
     const input = resetConfirmSchema.parse(req.body);
     await auth.confirmPasswordReset(deps, input);
     res.json({ data: { ok: true } });

@@ -1,12 +1,12 @@
 import { randomBytes } from 'node:crypto';
-import bcrypt from 'bcryptjs';
-import type { Sequelize, Transaction } from 'sequelize';
+import { Op, type Sequelize, type Transaction } from 'sequelize';
 import type { ResetConfirmInput, SignupInput } from '@app/shared';
 import { AppError } from '../../errors/app-error';
 import { Session, User, UserRole } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
+import { passwords } from './password-hash';
 import { consumeToken, issueToken } from './tokens';
 
 export interface AuthDeps {
@@ -17,16 +17,16 @@ export interface AuthDeps {
 
 // A bcrypt hash of a random string at the configured cost, compared when the e-mail is unknown so that both
 // paths take the same time and sign-in does not reveal which addresses have accounts.
-const dummyHashes = new Map<number, string>();
+const dummyHashes = new Map<number, Promise<string>>();
 const dummyHash = (cost: number) => {
   let h = dummyHashes.get(cost);
-  if (!h) dummyHashes.set(cost, (h = bcrypt.hashSync(randomBytes(16).toString('hex'), cost)));
+  if (!h) dummyHashes.set(cost, (h = passwords.hash(randomBytes(16).toString('hex'), cost)));
   return h;
 };
 
 export const findUserByEmail = (email: string) =>
   User.findOne({
-    where: { email: email.toLowerCase() },
+    where: { email: email.trim().toLowerCase() },
     include: [{ model: UserRole, as: 'roles' }],
   });
 
@@ -35,10 +35,14 @@ export const findUserById = (id: number) =>
 
 /**
  * Creates an unverified member and e-mails a verification link. When the address is already registered, the
- * owner gets a "you already have an account" note instead, so sign-up never reveals who is a member.
+ * owner gets a "you already have an account" note instead, so sign-up never reveals who is a member. Both paths
+ * hash the password once (the cost that dominates the answer time), so timing does not tell them apart either.
  */
 export async function signup(deps: AuthDeps, input: SignupInput): Promise<void> {
-  const existing = await findUserByEmail(input.email);
+  const [existing, passwordHash] = await Promise.all([
+    findUserByEmail(input.email),
+    passwords.hash(input.password, deps.bcryptCost),
+  ]);
   if (existing) {
     await enqueueEmail(
       actionEmail({
@@ -55,7 +59,6 @@ export async function signup(deps: AuthDeps, input: SignupInput): Promise<void> 
     );
     return;
   }
-  const passwordHash = await bcrypt.hash(input.password, deps.bcryptCost);
   await deps.sequelize.transaction(async (transaction) => {
     const user = await User.create(
       { email: input.email, displayName: input.displayName, passwordHash, emailVerifiedAt: null },
@@ -110,7 +113,10 @@ export async function checkCredentials(
   password: string,
 ): Promise<User> {
   const user = await findUserByEmail(email);
-  const ok = await bcrypt.compare(password, user?.passwordHash ?? dummyHash(deps.bcryptCost));
+  const ok = await passwords.compare(
+    password,
+    user?.passwordHash ?? (await dummyHash(deps.bcryptCost)),
+  );
   if (!user || !ok) throw new AppError('UNAUTHENTICATED', 'E-mail or password is wrong');
   if (!user.emailVerifiedAt) {
     throw new AppError(
@@ -121,7 +127,10 @@ export async function checkCredentials(
   return user;
 }
 
-/** E-mails a reset link when the account exists; the caller always answers 202. */
+/**
+ * E-mails a reset link when the account exists. The router answers 202 before this runs (`inBackground`), so
+ * known and unknown addresses answer in the same time.
+ */
 export async function requestPasswordReset(deps: AuthDeps, email: string): Promise<void> {
   const user = await findUserByEmail(email);
   if (!user) return;
@@ -145,7 +154,7 @@ export async function confirmPasswordReset(
   deps: AuthDeps,
   input: ResetConfirmInput,
 ): Promise<void> {
-  const passwordHash = await bcrypt.hash(input.password, deps.bcryptCost);
+  const passwordHash = await passwords.hash(input.password, deps.bcryptCost);
   await deps.sequelize.transaction(async (t) => {
     const userId = await consumeToken(input.token, 'reset', t);
     const user = await User.findByPk(userId, { transaction: t, lock: t.LOCK.UPDATE });
@@ -179,17 +188,51 @@ export async function confirmPasswordReset(
   });
 }
 
-/** Changes the password of a signed-in user after checking the current one. */
+/**
+ * Changes the password of a signed-in user after checking the current one, signs out every other session of
+ * theirs (this device stays signed in) and tells them by e-mail.
+ */
 export async function changePassword(
   deps: AuthDeps,
   user: User,
   currentPassword: string,
   newPassword: string,
+  currentSessionId: string,
 ) {
-  if (!(await bcrypt.compare(currentPassword, user.passwordHash))) {
+  if (!(await passwords.compare(currentPassword, user.passwordHash))) {
     throw new AppError('VALIDATION_FAILED', 'Some fields need attention', {
       currentPassword: 'This is not your current password',
     });
   }
-  await user.update({ passwordHash: await bcrypt.hash(newPassword, deps.bcryptCost) });
+  const passwordHash = await passwords.hash(newPassword, deps.bcryptCost);
+  await deps.sequelize.transaction(async (t) => {
+    await user.update({ passwordHash }, { transaction: t });
+    await Session.destroy({
+      where: { userId: user.id, sid: { [Op.ne]: currentSessionId } },
+      transaction: t,
+    });
+    await recordAudit(
+      {
+        actorId: user.id,
+        area: 'auth',
+        action: 'password.change',
+        subjectType: 'user',
+        subjectId: String(user.id),
+      },
+      t,
+    );
+    await enqueueEmail(
+      actionEmail({
+        to: user.email,
+        kind: 'password-changed',
+        subject: 'Your Rodewise password was changed',
+        greeting: `Hello ${user.displayName},`,
+        lines: [
+          'Your password was just changed from your account page. Every other device was signed out; the one you used stays signed in.',
+        ],
+        footer: 'If this was not you, reset your password now and tell your club admin.',
+      }),
+      t,
+    );
+  });
 }

@@ -16,6 +16,7 @@ import {
   ROOT,
   startServer,
 } from '../../../../../scripts/lib/mariadb.mjs';
+import { freshSecrets } from '../../../../../scripts/lib/secrets.mjs';
 import { listingSearchSchema, type ListingInput } from '@app/shared';
 import { loadEnv } from '../../config/env';
 import { createSequelize } from '../../db';
@@ -32,7 +33,7 @@ const cfg = profileConfig('test');
 await startServer(cfg, { quiet: true });
 provision(cfg, [DB]);
 recreateDatabase(cfg, DB);
-const env = { ...dbEnv(cfg, DB), NODE_ENV: 'production', LOG_LEVEL: 'silent' };
+const env = { ...dbEnv(cfg, DB), ...freshSecrets(), NODE_ENV: 'production', LOG_LEVEL: 'silent' };
 const sequelize = createSequelize(loadEnv(env));
 initModels(sequelize);
 await migrateUp(sequelize);

@@ -50,6 +50,11 @@ export const backoffMs = (attempts: number) =>
 
 const LOCK_MS = 60_000;
 
+/** Kinds whose body carries a single-use sign-in-grade link (verification, password reset). */
+export const TOKEN_MAIL_KINDS: ReadonlySet<string> = new Set(['verify-email', 'password-reset']);
+/** What such a row's body becomes once sent: the outbox keeps no usable link in clear. */
+export const REDACTED_BODY = '[Removed after sending: this message carried a single-use link.]';
+
 /**
  * Claims due messages with SELECT … FOR UPDATE SKIP LOCKED (so several API processes never send the same row),
  * sends them, and records the outcome. Returns how many were sent and how many failed this round.
@@ -96,6 +101,7 @@ export async function drainOutbox(
         messageId: `<outbox-${row.id}@rodewise.local>`,
       });
       // Static updates by id: the instance still holds the pre-claim status, so instance.update() would skip it.
+      const redact = TOKEN_MAIL_KINDS.has(row.kind);
       await OutboxEmail.update(
         {
           status: 'sent',
@@ -103,6 +109,7 @@ export async function drainOutbox(
           lockedUntil: null,
           attempts: row.attempts + 1,
           lastError: null,
+          ...(redact ? { textBody: REDACTED_BODY, htmlBody: null } : {}),
         },
         { where: { id: row.id } },
       );

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { idParam, messageInputSchema } from '@app/shared';
+import { limiter } from '../../lib/rate-limit';
 import { currentUser, requireAuth } from '../../middleware/require-auth';
 import * as threads from './threads.service';
 
@@ -10,16 +11,23 @@ const openSchema = messageInputSchema.extend({
 });
 
 /** `/api/threads`: buyer–seller conversations about listings. */
-export function threadsRouter(deps: { publicUrl: string }) {
+export function threadsRouter(deps: { publicUrl: string; messageLimit: number }) {
   const r = Router();
   r.use(requireAuth());
+  // Opening a conversation and replying share one budget per member, so no one can flood sellers' inboxes.
+  const messageLimit = limiter({
+    limit: deps.messageLimit,
+    windowMs: 10 * 60_000,
+    what: 'messages in a short time',
+    key: (req) => `user:${currentUser(req).id}`,
+  });
   r.get('/', async (req, res) => {
     res.json({ data: await threads.inbox(currentUser(req)) });
   });
   r.get('/unread', async (req, res) => {
     res.json({ data: { unread: await threads.unreadTotal(currentUser(req)) } });
   });
-  r.post('/', async (req, res) => {
+  r.post('/', messageLimit, async (req, res) => {
     const input = openSchema.parse(req.body);
     const t = await threads.openThread(
       deps.publicUrl,
@@ -33,7 +41,7 @@ export function threadsRouter(deps: { publicUrl: string }) {
     const { threadId } = params.parse(req.params);
     res.json({ data: await threads.readThread(currentUser(req), Number(threadId)) });
   });
-  r.post('/:threadId/messages', async (req, res) => {
+  r.post('/:threadId/messages', messageLimit, async (req, res) => {
     const { threadId } = params.parse(req.params);
     const { body } = messageInputSchema.parse(req.body);
     await threads.reply(deps.publicUrl, currentUser(req), Number(threadId), body);
