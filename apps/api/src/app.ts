@@ -33,7 +33,8 @@ import { notificationsRouter } from './modules/posts/notifications.router';
 import { postsRouter } from './modules/posts/posts.router';
 import { searchRouter } from './modules/search/search.router';
 import { topicsRouter } from './modules/topics/topics.router';
-import { uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
+import { uploadsFromStorage, uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
+import { s3Storage } from './modules/uploads/s3-storage';
 import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
 import { startListingSweeper } from './modules/listings/listing-expiry';
 import { ensureListingIndex } from './modules/listings/listing-index';
@@ -59,7 +60,18 @@ export interface BuiltApp {
 export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   initModels(sequelize);
   const uploadDir = env.UPLOAD_DIR ?? DEFAULT_UPLOAD_DIR;
-  configureStorage(localDiskStorage(uploadDir));
+  configureStorage(
+    env.STORAGE === 's3'
+      ? s3Storage({
+          bucket: env.S3_BUCKET,
+          region: env.S3_REGION,
+          endpoint: env.S3_ENDPOINT,
+          accessKeyId: env.S3_ACCESS_KEY_ID,
+          secretAccessKey: env.S3_SECRET_ACCESS_KEY,
+          forcePathStyle: env.S3_FORCE_PATH_STYLE,
+        })
+      : localDiskStorage(uploadDir),
+  );
   const app = express();
   app.set('trust proxy', 'loopback');
   app.disable('x-powered-by');
@@ -209,7 +221,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   const stopDigests = env.NODE_ENV === 'test' ? () => undefined : startDigestJob(digest, logger);
 
   app.use('/api', notFoundHandler);
-  app.use('/uploads', ...uploadsStatic(uploadDir));
+  if (env.STORAGE === 's3') app.use('/uploads', uploadsFromStorage());
+  else app.use('/uploads', ...uploadsStatic(uploadDir));
 
   const webDist = env.WEB_DIST;
   if (webDist && existsSync(join(webDist, 'index.html'))) {

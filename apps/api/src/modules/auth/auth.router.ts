@@ -6,7 +6,7 @@ import {
   type Response,
 } from 'express';
 import type { createPassport } from './passport';
-import rateLimit, { ipKeyGenerator } from 'express-rate-limit';
+import rateLimit, { ipKeyGenerator, type Store } from 'express-rate-limit';
 import {
   loginSchema,
   resetConfirmSchema,
@@ -17,6 +17,7 @@ import {
 } from '@app/shared';
 import type { Env } from '../../config/env';
 import { AppError } from '../../errors/app-error';
+import { SequelizeRateLimitStore } from '../../lib/rate-limit-store';
 import type { User } from '../../models';
 import * as auth from './auth.service';
 import { toUserDto } from './user.presenter';
@@ -35,9 +36,10 @@ const emailOf = (body: unknown) => {
   return typeof e === 'string' ? e.toLowerCase() : '';
 };
 
-const limited = (limit: number, windowMs: number, what: string) =>
+const limited = (limit: number, windowMs: number, what: string, store?: Store) =>
   rateLimit({
     windowMs,
+    store,
     limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
@@ -69,8 +71,11 @@ function logIn(req: Request, user: User): Promise<void> {
 
 export function authRouter(deps: AuthRouterDeps) {
   const r = Router();
-  const loginLimit = limited(deps.env.LOGIN_RATE_LIMIT, 15 * 60_000, 'sign-in');
-  const resetLimit = limited(deps.env.RESET_RATE_LIMIT, 60 * 60_000, 'password reset');
+  // Counters live in the database so every API process counts the same attempts.
+  const loginStore = new SequelizeRateLimitStore(deps.sequelize, 'login');
+  const resetStore = new SequelizeRateLimitStore(deps.sequelize, 'reset');
+  const loginLimit = limited(deps.env.LOGIN_RATE_LIMIT, 15 * 60_000, 'sign-in', loginStore);
+  const resetLimit = limited(deps.env.RESET_RATE_LIMIT, 60 * 60_000, 'password reset', resetStore);
 
   r.get('/me', (req, res) => {
     res.json({ data: sessionDto(req, deps.newCsrfToken) });
