@@ -36,7 +36,8 @@ import { postsRouter } from './modules/posts/posts.router';
 import { searchRouter } from './modules/search/search.router';
 import { stormRouter } from './modules/storm/storm.router';
 import { topicsRouter } from './modules/topics/topics.router';
-import { uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
+import { uploadsFromStorage, uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
+import { s3Storage } from './modules/uploads/s3-storage';
 import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
 import { startListingSweeper } from './modules/listings/listing-expiry';
 import { ensureListingIndex } from './modules/listings/listing-index';
@@ -62,7 +63,18 @@ export interface BuiltApp {
 export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   initModels(sequelize);
   const uploadDir = env.UPLOAD_DIR ?? DEFAULT_UPLOAD_DIR;
-  configureStorage(localDiskStorage(uploadDir));
+  configureStorage(
+    env.STORAGE === 's3'
+      ? s3Storage({
+          bucket: env.S3_BUCKET,
+          region: env.S3_REGION,
+          endpoint: env.S3_ENDPOINT,
+          accessKeyId: env.S3_ACCESS_KEY_ID,
+          secretAccessKey: env.S3_SECRET_ACCESS_KEY,
+          forcePathStyle: env.S3_FORCE_PATH_STYLE,
+        })
+      : localDiskStorage(uploadDir),
+  );
   const app = express();
   // X-Forwarded-* are believed only from the proxies TRUST_PROXY names (none by default), so a client reaching
   // the API directly cannot pick its own address for the rate limits.
@@ -220,7 +232,11 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   mount(app, '/api/uploads', uploadsRouter());
   const exchange = { publicUrl: env.PUBLIC_URL };
   mount(app, '/api/listings', listingsRouter(exchange));
-  mount(app, '/api/threads', threadsRouter({ ...exchange, messageLimit: env.MESSAGE_RATE_LIMIT }));
+  mount(
+    app,
+    '/api/threads',
+    threadsRouter({ ...exchange, messageLimit: env.MESSAGE_RATE_LIMIT, sequelize }),
+  );
   mount(app, '/api/saved-searches', savedSearchesRouter());
   mount(app, '/api/storm-watches', stormRouter({ sequelize, publicUrl: env.PUBLIC_URL }));
   // The listing search index is built from MariaDB at start (and lazily on first search if that fails).
@@ -233,7 +249,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   const stopDigests = env.NODE_ENV === 'test' ? () => undefined : startDigestJob(digest, logger);
 
   app.use('/api', notFoundHandler);
-  app.use('/uploads', ...uploadsStatic(uploadDir));
+  if (env.STORAGE === 's3') app.use('/uploads', uploadsFromStorage());
+  else app.use('/uploads', ...uploadsStatic(uploadDir));
 
   const webDist = env.WEB_DIST;
   if (webDist && existsSync(join(webDist, 'index.html'))) {

@@ -1,10 +1,14 @@
 import { QueryTypes, Sequelize } from 'sequelize';
 import type { Env } from './config/env';
+import { installTransactionRetry } from './lib/tx-retry';
 import type { Logger } from './logger';
 
-/** One Sequelize instance per process, MariaDB dialect; fails fast while the server is unreachable. */
+/**
+ * One Sequelize instance per process, MariaDB dialect; fails fast while the server is unreachable. Managed
+ * transactions run again on a deadlock or a Galera certification conflict (lib/tx-retry.ts).
+ */
 export function createSequelize(env: Env, logger?: Logger): Sequelize {
-  return new Sequelize({
+  const sequelize = new Sequelize({
     dialect: 'mariadb',
     host: env.DB_HOST,
     port: env.DB_PORT,
@@ -22,6 +26,10 @@ export function createSequelize(env: Env, logger?: Logger): Sequelize {
     timezone: '+00:00',
     define: { underscored: true, charset: 'utf8mb4', collate: 'utf8mb4_unicode_ci' },
     retry: { max: 0 },
+  });
+  return installTransactionRetry(sequelize, {
+    onRetry: (err, attempt) =>
+      logger?.info({ err, attempt }, 'transaction retried after a deadlock'),
   });
 }
 

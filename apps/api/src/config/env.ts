@@ -47,6 +47,14 @@ const envSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   WEB_DIST: z.string().optional(),
   UPLOAD_DIR: z.string().optional(),
+  /** Where uploads go: `disk` (UPLOAD_DIR, the default) or `s3` (any S3-compatible object storage, S3_* below). */
+  STORAGE: z.enum(['disk', 's3']).default('disk'),
+  S3_BUCKET: z.string().min(1).default('rodewise-uploads'),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  S3_ENDPOINT: z.url().optional(),
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  S3_FORCE_PATH_STYLE: bool.optional(),
   /** When set, every CSP violation report is also appended here as one JSON line (the e2e run reads it). */
   CSP_REPORT_FILE: z.string().optional(),
   STRIPE_SECRET_KEY: z.string().default('sk_test_rodewise_local_fake'),

@@ -1,6 +1,8 @@
 import { createHash } from 'node:crypto';
 import type { Request } from 'express';
 import rateLimit, { ipKeyGenerator, type Options } from 'express-rate-limit';
+import type { Sequelize } from 'sequelize';
+import { SequelizeRateLimitStore } from './rate-limit-store';
 
 /** The e-mail in a body as the account is stored: trimmed and lower-case (padding must not buy a fresh key). */
 export const normalisedEmail = (body: unknown) => {
@@ -19,7 +21,8 @@ export const secretKey = (value: unknown) =>
 
 /**
  * A limiter answering 429 `RATE_LIMITED` in the API's error shape. `key` decides who shares a budget; with
- * `countSuccess: false` only failed attempts (status ≥ 400) use it up.
+ * `countSuccess: false` only failed attempts (status ≥ 400) use it up. With `sequelize` the counters live in
+ * MariaDB under `name` (`rate_limit_hits`), so every API process behind a load balancer counts the same attempts.
  */
 export function limiter(opts: {
   limit: number;
@@ -27,8 +30,13 @@ export function limiter(opts: {
   what: string;
   key: (req: Request) => string;
   countSuccess?: boolean;
+  sequelize?: Sequelize;
+  name?: string;
 }) {
   const options: Partial<Options> = {
+    ...(opts.sequelize
+      ? { store: new SequelizeRateLimitStore(opts.sequelize, opts.name ?? opts.what) }
+      : {}),
     windowMs: opts.windowMs,
     limit: opts.limit,
     standardHeaders: 'draft-8',

@@ -34,6 +34,11 @@ export function isDbDown(err: unknown): boolean {
   const code =
     (err as { code?: unknown; parent?: { code?: unknown } } | null)?.parent?.code ??
     (err as { code?: unknown } | null)?.code;
+  // 1047: a Galera node that is leaving or rejoining the cluster ("WSREP has not yet prepared node").
+  const errno =
+    (err as { parent?: { errno?: unknown } } | null)?.parent?.errno ??
+    (err as { errno?: unknown } | null)?.errno;
+  if (errno === 1047) return true;
   return (
     typeof code === 'string' &&
     [

@@ -18,6 +18,8 @@ export function accountRouter(
     limit: env.PASSWORD_CHANGE_RATE_LIMIT,
     windowMs: 15 * 60_000,
     what: 'password change attempts',
+    sequelize: deps.sequelize,
+    name: 'password-change',
     key: (req) => `user:${currentUser(req).id}`,
     countSuccess: false,
   });

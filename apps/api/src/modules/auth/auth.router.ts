@@ -61,6 +61,8 @@ export function authRouter(deps: AuthRouterDeps) {
     limit: env.LOGIN_RATE_LIMIT,
     windowMs: 15 * 60_000,
     what: 'sign-in attempts',
+    sequelize: deps.sequelize,
+    name: 'login',
     key: accountAtIp,
     countSuccess: false,
   });
@@ -68,6 +70,8 @@ export function authRouter(deps: AuthRouterDeps) {
     limit: env.RESET_RATE_LIMIT,
     windowMs: 60 * 60_000,
     what: 'password reset attempts',
+    sequelize: deps.sequelize,
+    name: 'reset',
     key: accountAtIp,
   });
   // Per link: guessing tokens is limited per token, and one visitor's expired link blocks no one else's.
@@ -75,12 +79,16 @@ export function authRouter(deps: AuthRouterDeps) {
     limit: env.RESET_RATE_LIMIT,
     windowMs: 60 * 60_000,
     what: 'attempts with this reset link',
+    sequelize: deps.sequelize,
+    name: 'reset-confirm',
     key: (req) => secretKey((req.body as { token?: unknown } | undefined)?.token),
   });
   const signupLimit = limiter({
     limit: env.SIGNUP_RATE_LIMIT,
     windowMs: 60 * 60_000,
     what: 'sign-ups from this address',
+    sequelize: deps.sequelize,
+    name: 'signup',
     key: clientIp,
   });
   const later = (what: string, work: () => Promise<unknown>) =>

@@ -1,6 +1,7 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { Op } from 'sequelize';
 import { invalid } from '../../errors/app-error';
+import { runWithLease } from '../../lib/job-lease';
 import type { Logger } from '../../logger';
 import { Notification, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
@@ -129,12 +130,19 @@ export async function sendNotificationDigests(ctx: DigestContext, at = new Date(
   return { sent, considered: users.length };
 }
 
-/** Runs the digest every `intervalMs` (hourly by default); returns a stop function. Errors are logged and retried. */
+/**
+ * Runs the digest every `intervalMs` (hourly by default); returns a stop function. Errors are logged and retried.
+ * The `notification-digest` lease makes one process of a cluster run each round.
+ */
 export function startDigestJob(ctx: DigestContext, logger: Logger, intervalMs = 3_600_000) {
   const tick = () => {
-    sendNotificationDigests(ctx).then(
+    const db = User.sequelize;
+    if (!db) return;
+    runWithLease(db, 'notification-digest', intervalMs * 0.9, () =>
+      sendNotificationDigests(ctx),
+    ).then(
       (r) => {
-        if (r.sent) logger.info(r, 'notification digests queued');
+        if (r.ran && r.result.sent) logger.info(r.result, 'notification digests queued');
       },
       (err: unknown) => logger.debug({ err }, 'digest round skipped'),
     );

@@ -1,3 +1,4 @@
+import type { Sequelize } from 'sequelize';
 import { Router } from 'express';
 import { z } from 'zod';
 import { idParam, messageInputSchema } from '@app/shared';
@@ -11,7 +12,11 @@ const openSchema = messageInputSchema.extend({
 });
 
 /** `/api/threads`: buyer–seller conversations about listings. */
-export function threadsRouter(deps: { publicUrl: string; messageLimit: number }) {
+export function threadsRouter(deps: {
+  publicUrl: string;
+  messageLimit: number;
+  sequelize?: Sequelize;
+}) {
   const r = Router();
   r.use(requireAuth());
   // Opening a conversation and replying share one budget per member, so no one can flood sellers' inboxes.
@@ -19,6 +24,7 @@ export function threadsRouter(deps: { publicUrl: string; messageLimit: number })
     limit: deps.messageLimit,
     windowMs: 10 * 60_000,
     what: 'messages in a short time',
+    ...(deps.sequelize ? { sequelize: deps.sequelize, name: 'messages' } : {}),
     key: (req) => `user:${currentUser(req).id}`,
   });
   r.get('/', async (req, res) => {

@@ -1,14 +1,27 @@
 import { randomUUID } from 'node:crypto';
-import { mkdir, rm, writeFile } from 'node:fs/promises';
+import { createReadStream } from 'node:fs';
+import { mkdir, rm, stat, writeFile } from 'node:fs/promises';
+import type { Readable } from 'node:stream';
 import { dirname, join, resolve, sep } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-/** Where uploaded files live. Local disk by default; an S3-compatible store can implement the same interface. */
+/** A stored file as read back: its bytes as a stream and what to answer with. */
+export interface StoredObject {
+  body: Readable;
+  contentType: string;
+  length?: number;
+}
+
+/** Where uploaded files live: local disk by default (`localDiskStorage`), S3-compatible storage in a cluster (`s3Storage`). */
 export interface Storage {
   put(key: string, buffer: Buffer, contentType: string): Promise<void>;
   delete(key: string): Promise<void>;
   url(key: string): string;
+  /** The file under `key`, or null when there is none. */
+  read(key: string): Promise<StoredObject | null>;
 }
+
+const TYPES: Record<string, string> = { webp: 'image/webp', jpg: 'image/jpeg', png: 'image/png' };
 
 /** `.data/uploads` at the repository root. */
 export const DEFAULT_UPLOAD_DIR = fileURLToPath(
@@ -55,6 +68,18 @@ export function localDiskStorage(dir: string): Storage & { dir: string } {
       await rm(pathOf(key), { force: true });
     },
     url: (key) => `${UPLOADS_PUBLIC_PATH}/${key}`,
+    async read(key) {
+      if (!isSafeKey(key)) return null;
+      const p = pathOf(key);
+      const s = await stat(p).catch(() => null);
+      if (!s?.isFile()) return null;
+      const ext = key.slice(key.lastIndexOf('.') + 1);
+      return {
+        body: createReadStream(p),
+        contentType: TYPES[ext] ?? 'application/octet-stream',
+        length: s.size,
+      };
+    },
   };
 }
 

@@ -3,6 +3,7 @@ import multer from 'multer';
 import { AppError } from '../../errors/app-error';
 import { currentUser, requireAuth } from '../../middleware/require-auth';
 import { MAX_IMAGE_BYTES } from './image';
+import { getStorage, isSafeKey } from './storage';
 import { storeImage } from './uploads.service';
 
 /** multer in memory with the image limits; the bytes are verified by content afterwards. */
@@ -47,4 +48,38 @@ export function uploadsStatic(dir: string): RequestHandler[] {
     next();
   };
   return [nosniff, serve, notFound];
+}
+
+/**
+ * Serves stored files from whatever storage is configured (object storage in a cluster), with the same headers as
+ * `uploadsStatic`; unknown or unsafe keys get 404.
+ */
+export function uploadsFromStorage(): RequestHandler {
+  return (req, res, next) => {
+    if (req.method !== 'GET' && req.method !== 'HEAD') return next();
+    const key = decodeURIComponent(req.path.replace(/^\//, ''));
+    res.set('X-Content-Type-Options', 'nosniff');
+    if (!isSafeKey(key)) {
+      res.status(404).type('text/plain').send('Not found');
+      return;
+    }
+    getStorage()
+      .read(key)
+      .then((obj) => {
+        if (!obj) {
+          res.status(404).type('text/plain').send('Not found');
+          return;
+        }
+        res.set('Cache-Control', 'public, max-age=31536000, immutable');
+        res.type(obj.contentType);
+        if (obj.length !== undefined) res.set('Content-Length', String(obj.length));
+        if (req.method === 'HEAD') {
+          obj.body.destroy();
+          res.end();
+          return;
+        }
+        obj.body.on('error', next);
+        obj.body.pipe(res);
+      }, next);
+  };
 }

@@ -1,0 +1,14 @@
+import { describe, expect, it } from 'vitest';
+import { isDbDown } from './error-handler';
+
+describe('isDbDown', () => {
+  it('treats a Galera node that is not ready (1047) and lost connections as the database being down', () => {
+    expect(isDbDown({ parent: { errno: 1047, code: 'ER_UNKNOWN_COM_ERROR' } })).toBe(true);
+    expect(isDbDown({ parent: { code: 'ECONNREFUSED' } })).toBe(true);
+  });
+
+  it('leaves query errors to the normal handling', () => {
+    expect(isDbDown({ parent: { errno: 1062, code: 'ER_DUP_ENTRY' } })).toBe(false);
+    expect(isDbDown(new Error('bad'))).toBe(false);
+  });
+});
