@@ -88,7 +88,7 @@ const question = {
   kind: 'question',
   title: 'Snubber length for a 9 m sloop?',
   excerpt: 'An invented question.',
-  status: 'published',
+  status: 'approved',
   visibility: 'public',
   topic: { id: 1, slug: 'anchoring', name: 'Anchoring' },
   author: { id: 9, displayName: 'Tamsin Keel' },
