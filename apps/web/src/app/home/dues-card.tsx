@@ -4,7 +4,7 @@ import { paths } from '../../config/paths';
 import { useMyDues } from '../../features/dues/api/get-my-dues';
 import { DuesStatusBadge } from '../../features/dues/components/status-badge';
 import { HomeCard, HomeEmpty } from './home-card';
-import { readableDate } from './home-format';
+import { readableDate } from '../../lib/format-date';
 
 /** The member's dues: status, when the membership runs to, and a way to pay what is owed. */
 export function DuesCard() {

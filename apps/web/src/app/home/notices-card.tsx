@@ -2,7 +2,8 @@ import { Link } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { useNotices } from '../../features/notifications/api/get-notices';
 import { HomeCard, HomeEmpty } from './home-card';
-import { countOf, readableDate } from './home-format';
+import { readableDate } from '../../lib/format-date';
+import { countOf } from './home-format';
 
 /** Unread notices (replies, answers, decisions), newest first. */
 export function NoticesCard() {

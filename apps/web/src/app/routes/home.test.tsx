@@ -133,7 +133,9 @@ describe('the member home', () => {
     );
     expect(within(duesCard).getByText('Overdue')).toBeInTheDocument();
     const notices = screen.getByRole('region', { name: 'Notices' });
-    expect(await within(notices).findByText('1 unread notice')).toBeInTheDocument();
+    expect(
+      await within(notices).findByText('1 unread notice', {}, { timeout: 5000 }),
+    ).toBeInTheDocument();
     const questions = screen.getByRole('region', { name: 'Open questions' });
     expect(await within(questions).findByText(/1 comment$/)).toBeInTheDocument();
     expect(screen.getByRole('region', { name: 'Gear that fits Petrel' })).toBeInTheDocument();
