@@ -3,7 +3,7 @@ import { paths } from '../../config/paths';
 import { useNotices } from '../../features/notifications/api/get-notices';
 import { HomeCard, HomeEmpty } from './home-card';
 import { readableDate } from '../../lib/format-date';
-import { countOf } from './home-format';
+import { countOf } from '../../lib/plural';
 
 /** Unread notices (replies, answers, decisions), newest first. */
 export function NoticesCard() {

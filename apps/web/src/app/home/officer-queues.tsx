@@ -4,7 +4,7 @@ import { paths } from '../../config/paths';
 import { useModerationCount } from '../../features/moderation/api/get-queue';
 import { useSummary } from '../../features/treasury/api/get-summary';
 import { HomeCard, HomeEmpty } from './home-card';
-import { countOf } from './home-format';
+import { countOf } from '../../lib/plural';
 
 function QueueLine({
   count,

@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { paths } from '../../config/paths';
 import { usePosts } from '../../features/knowledge/api/get-posts';
 import { HomeCard, HomeEmpty } from './home-card';
-import { countOf } from './home-format';
+import { countOf } from '../../lib/plural';
 
 export interface PostsCardProps {
   title: string;
