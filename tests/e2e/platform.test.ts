@@ -1,7 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '@app/shared';
-import { navFor } from '../../apps/web/src/config/nav';
+import { navEntries, navFor } from '../../apps/web/src/config/nav';
 import { audit, baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
 
 let browser: Browser;
@@ -29,13 +29,16 @@ describe('role-aware navigation in Chromium', () => {
       if (email) await signIn(page, email);
       await page.goto(`${baseUrl()}/`);
       const nav = page.getByRole('navigation', { name: 'Main' });
-      const expected = navFor(email ? { roles } : null).map((i) => i.label);
-      await expect
-        .poll(async () => (await nav.locator('li > a, li > button').allInnerTexts()).length, {
-          timeout: 10000,
-        })
-        .toBe(expected.length);
-      const shown = (await nav.locator('li > a, li > button').allInnerTexts()).map((t) => t.trim());
+      // In the order the bar shows them: each group's items where the group sits.
+      const visible = navFor(email ? { roles } : null);
+      const expected = (['primary', 'account'] as const)
+        .flatMap((section) => navEntries(visible, section))
+        .flatMap((e) => (e.kind === 'item' ? [e.item] : e.items))
+        .map((i) => i.label);
+      // Items only (a group's own button carries aria-controls); textContent, as grouped items are folded away.
+      const items = nav.locator('li > a, li > button:not([aria-controls])');
+      await expect.poll(async () => items.count(), { timeout: 10000 }).toBe(expected.length);
+      const shown = (await items.allTextContents()).map((t) => t.trim());
       // Each item starts with its label (an item may add a count after it).
       expect(shown.length).toBe(expected.length);
       expected.forEach((label, i) =>

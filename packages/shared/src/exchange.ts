@@ -267,7 +267,8 @@ export interface SellerDto {
   id: number;
   displayName: string;
   memberSince: string;
-  paidUp: boolean;
+  /** Whether the seller's dues are paid; left out for signed-out visitors. */
+  paidUp?: boolean;
 }
 export interface ListingSummaryDto {
   id: number;

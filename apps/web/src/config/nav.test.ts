@@ -1,6 +1,6 @@
 import type { Role } from '@app/shared';
 import { describe, expect, it } from 'vitest';
-import { NAV_ITEMS, navFor, type NavItem } from './nav';
+import { NAV_ITEMS, navEntries, navFor, type NavEntry, type NavItem } from './nav';
 
 const labels = (items: NavItem[]) => items.map((item) => item.label);
 const asUser = (...roles: Role[]) => ({ roles });
@@ -20,7 +20,7 @@ describe('navFor', () => {
         'My boats',
         'Storm watch',
         'Notices',
-        'Account',
+        'Settings',
         'Sign out',
       ],
     ],
@@ -37,7 +37,7 @@ describe('navFor', () => {
         'Storm watch',
         'Dues',
         'Notices',
-        'Account',
+        'Settings',
         'Sign out',
       ],
     ],
@@ -54,7 +54,7 @@ describe('navFor', () => {
         'Storm watch',
         'Moderation',
         'Notices',
-        'Account',
+        'Settings',
         'Sign out',
       ],
     ],
@@ -71,7 +71,7 @@ describe('navFor', () => {
         'Storm watch',
         'Treasury',
         'Notices',
-        'Account',
+        'Settings',
         'Sign out',
       ],
     ],
@@ -88,7 +88,7 @@ describe('navFor', () => {
         'Storm watch',
         'Admin',
         'Notices',
-        'Account',
+        'Settings',
         'Sign out',
       ],
     ],
@@ -107,7 +107,7 @@ describe('navFor', () => {
         'Treasury',
         'Admin',
         'Notices',
-        'Account',
+        'Settings',
         'Sign out',
       ],
     ],
@@ -125,7 +125,7 @@ describe('navFor', () => {
         'Treasury',
         'Moderation',
         'Notices',
-        'Account',
+        'Settings',
         'Sign out',
       ],
     ],
@@ -160,5 +160,65 @@ describe('navFor', () => {
   it('gives every item a unique id', () => {
     const ids = NAV_ITEMS.map((item) => item.id);
     expect(new Set(ids).size).toBe(ids.length);
+  });
+});
+
+const shape = (entries: NavEntry[]) =>
+  entries.map((e) =>
+    e.kind === 'item'
+      ? e.item.label
+      : `${e.group.label}: ${e.items.map((i) => i.label).join(', ')}`,
+  );
+
+describe('navEntries', () => {
+  it('keeps the bar to the club areas plus one menu for a member', () => {
+    const items = navFor(asUser('member'));
+    expect(shape(navEntries(items, 'primary'))).toEqual([
+      'Home',
+      'Knowledge',
+      'Calculators',
+      'Exchange',
+      'Storm watch',
+    ]);
+    expect(shape(navEntries(items, 'account'))).toEqual([
+      'Account: Messages, My boats, Dues, Notices, Settings, Sign out',
+    ]);
+  });
+
+  it("gathers an officer's desks under one menu", () => {
+    const items = navFor(asUser('member', 'moderator', 'treasurer', 'admin'));
+    expect(shape(navEntries(items, 'primary'))).toEqual([
+      'Home',
+      'Knowledge',
+      'Calculators',
+      'Exchange',
+      'Storm watch',
+      'Desks: Treasury, Moderation, Admin',
+    ]);
+  });
+
+  it('leaves visitors their sign-in links and no empty menus', () => {
+    const items = navFor(null);
+    expect(shape(navEntries(items, 'primary'))).toEqual([
+      'Home',
+      'Knowledge',
+      'Calculators',
+      'Exchange',
+    ]);
+    expect(shape(navEntries(items, 'account'))).toEqual(['Sign in', 'Join']);
+  });
+
+  it('places a new item by its group alone', () => {
+    const extra: NavItem = {
+      id: 'extra',
+      kind: 'link',
+      label: 'Extra desk',
+      to: '/extra',
+      section: 'primary',
+      roles: ['moderator'],
+      group: 'desks',
+    };
+    const items = navFor(asUser('moderator'), [...NAV_ITEMS, extra]);
+    expect(shape(navEntries(items, 'primary')).at(-1)).toBe('Desks: Moderation, Extra desk');
   });
 });

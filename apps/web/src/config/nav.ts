@@ -4,6 +4,24 @@ import { paths } from './paths';
 /** Where an item sits: `primary` = the club's areas, `account` = the person's own links at the end. */
 export type NavSection = 'primary' | 'account';
 
+/**
+ * A menu that gathers several items under one button on wide screens (on a phone the menu lists them
+ * under a heading). `desks` = the officers' work, `account` = the signed-in person's own things.
+ */
+export type NavGroupId = 'desks' | 'account';
+
+export interface NavGroup {
+  id: NavGroupId;
+  label: string;
+  section: NavSection;
+}
+
+/** The groups, in display order within their section. */
+export const NAV_GROUPS: readonly NavGroup[] = [
+  { id: 'desks', label: 'Desks', section: 'primary' },
+  { id: 'account', label: 'Account', section: 'account' },
+];
+
 interface NavItemBase {
   /** Stable id, also the React key. */
   id: string;
@@ -13,6 +31,8 @@ interface NavItemBase {
   roles?: readonly Role[];
   /** true: signed-in people only; false: visitors only; left out: everyone. */
   signedIn?: boolean;
+  /** The menu this item sits in; left out: shown on its own in the bar. */
+  group?: NavGroupId;
 }
 
 export interface NavLinkItem extends NavItemBase {
@@ -36,9 +56,10 @@ export interface NavActionItem extends NavItemBase {
 export type NavItem = NavLinkItem | NavActionItem;
 
 /**
- * Every navigation item, in display order. To add an area (calculators, boats, knowledge, exchange, dues,
- * treasury, moderation), add its path to `config/paths.ts` and one entry here, e.g.
- * `{ id: 'treasury', kind: 'link', label: 'Treasury', to: paths.treasury.href(), section: 'primary', roles: ['treasurer'] }`.
+ * Every navigation item, in display order. To add an area, add its path to `config/paths.ts` and one entry
+ * here, e.g. `{ id: 'treasury', kind: 'link', label: 'Treasury', to: paths.treasury.href(), section: 'primary',
+ * roles: ['treasurer'], group: 'desks' }`. Leave `group` out for an item of its own in the bar; the bar holds
+ * the four club areas plus one or two menus, so keep new top-level items rare (1024 px must not wrap).
  */
 export const NAV_ITEMS: readonly NavItem[] = [
   { id: 'home', kind: 'link', label: 'Home', to: paths.home.href(), end: true, section: 'primary' },
@@ -71,6 +92,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     section: 'primary',
     signedIn: true,
     badge: 'messages-unread',
+    group: 'account',
   },
   {
     id: 'boats',
@@ -79,6 +101,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     to: paths.boats.href(),
     section: 'primary',
     signedIn: true,
+    group: 'account',
   },
   {
     id: 'storm',
@@ -95,6 +118,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     to: paths.dues.href(),
     section: 'primary',
     roles: ['member'],
+    group: 'account',
   },
   {
     id: 'treasury',
@@ -103,6 +127,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     to: paths.treasury.href(),
     section: 'primary',
     roles: ['treasurer'],
+    group: 'desks',
   },
   {
     id: 'moderation',
@@ -112,6 +137,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     section: 'primary',
     roles: ['moderator'],
     badge: 'moderation-waiting',
+    group: 'desks',
   },
   {
     id: 'admin-users',
@@ -120,6 +146,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     to: paths.adminUsers.href(),
     section: 'primary',
     roles: ['admin'],
+    group: 'desks',
   },
   {
     id: 'sign-in',
@@ -145,14 +172,16 @@ export const NAV_ITEMS: readonly NavItem[] = [
     section: 'account',
     signedIn: true,
     badge: 'notices-unread',
+    group: 'account',
   },
   {
     id: 'account',
     kind: 'link',
-    label: 'Account',
+    label: 'Settings',
     to: paths.account.href(),
     section: 'account',
     signedIn: true,
+    group: 'account',
   },
   {
     id: 'sign-out',
@@ -161,6 +190,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     action: 'sign-out',
     section: 'account',
     signedIn: true,
+    group: 'account',
   },
 ];
 
@@ -178,4 +208,37 @@ export function navFor(
   items: readonly NavItem[] = NAV_ITEMS,
 ): NavItem[] {
   return items.filter((item) => canSee(item, user));
+}
+
+/** One entry of the bar: an item on its own, or a group with the visible items inside it. */
+export type NavEntry =
+  { kind: 'item'; item: NavItem } | { kind: 'group'; group: NavGroup; items: NavItem[] };
+
+/**
+ * The visible items of one section arranged for the bar: ungrouped items in their order, each group at
+ * the place of its first visible item (a grouped item belongs to its group's section). A group with no
+ * visible item is left out.
+ */
+export function navEntries(
+  items: readonly NavItem[],
+  section: NavSection,
+  groups: readonly NavGroup[] = NAV_GROUPS,
+): NavEntry[] {
+  const entries: NavEntry[] = [];
+  for (const item of items) {
+    const group = item.group ? groups.find((g) => g.id === item.group) : undefined;
+    // A grouped item sits where its group sits.
+    if ((group?.section ?? item.section) !== section) continue;
+    if (!group) {
+      entries.push({ kind: 'item', item });
+      continue;
+    }
+    const existing = entries.find(
+      (e): e is Extract<NavEntry, { kind: 'group' }> =>
+        e.kind === 'group' && e.group.id === group.id,
+    );
+    if (existing) existing.items.push(item);
+    else entries.push({ kind: 'group', group, items: [item] });
+  }
+  return entries;
 }

@@ -59,7 +59,9 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
       first = await visitor.get(`/api/listings/${id}`);
     });
     expect(first?.status).toBe(200);
-    expect(first?.body.data.seller).toMatchObject({ paidUp: true, memberSince: '2024-03-01' });
+    expect(first?.body.data.seller).toMatchObject({ memberSince: '2024-03-01' });
+    // Whether the seller's dues are paid is club business, not shown to visitors.
+    expect(first?.body.data.seller).not.toHaveProperty('paidUp');
     // Listing, harbour, photos, seller, membership and plan in a single statement.
     expect(missQueries).toHaveLength(1);
     expect(missQueries[0]).toMatch(/`membership_plans`/);
@@ -98,14 +100,21 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
     expect(after.body.data.thumbUrl).toEqual(after.body.data.photos[0].thumbUrl);
   });
 
-  it('updates the paid-up badge as soon as the membership changes', async () => {
+  it("updates a member's paid-up badge as soon as the membership changes, and never shows it to visitors", async () => {
     const { id, user } = await publishedListing(false);
     const visitor = await client(built.app);
-    expect((await visitor.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(false);
+    const member = await signedIn(['member']);
+    expect((await member.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(false);
+    expect((await visitor.get(`/api/listings/${id}`)).body.data.seller).not.toHaveProperty(
+      'paidUp',
+    );
     const through = new Date(Date.now() + 30 * 86_400_000).toISOString().slice(0, 10);
     const m = await Membership.findOne({ where: { userId: user.id } });
     await m?.update({ paidThrough: through });
-    expect((await visitor.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(true);
+    expect((await member.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(true);
+    expect((await visitor.get(`/api/listings/${id}`)).body.data.seller).not.toHaveProperty(
+      'paidUp',
+    );
   });
 
   it('stops showing a listing to visitors as soon as it is hidden', async () => {
@@ -284,12 +293,12 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
     const { id, user } = await publishedListing();
     const lapsed = new Date(Date.now() - 10 * 86_400_000).toISOString().slice(0, 10);
     await Membership.update({ paidThrough: lapsed }, { where: { userId: user.id } });
-    const visitor = await client(built.app);
+    const member = await signedIn(['member']);
     // Ten days past paid-through, inside the plan's 30-day default grace period.
-    expect((await visitor.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(true);
+    expect((await member.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(true);
     const m = await Membership.findOne({ where: { userId: user.id } });
     await MembershipPlan.update({ graceDays: 0 }, { where: { id: m?.planId ?? 0 } });
-    expect((await visitor.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(false);
+    expect((await member.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(false);
   });
 
   it('still checks the fit query for visitors (400 with the field), as before the cache', async () => {

@@ -46,15 +46,18 @@ const sellerInclude = {
   ],
 };
 
-/** Seller card from a user loaded with `membership.plan` (see sellerInclude). */
-function sellerDtoOf(user: User, at: Date): SellerDto {
+/**
+ * Seller card from a user loaded with `membership.plan` (see sellerInclude). Whether the seller's dues are
+ * paid is club business: only signed-in viewers get it.
+ */
+function sellerDtoOf(user: User, at: Date, signedIn: boolean): SellerDto {
   // Loaded through the User.hasOne(Membership, { as: 'membership' }) association.
   const membership = (user as User & { membership?: Membership | null }).membership ?? null;
   return {
     id: user.id,
     displayName: user.displayName,
     memberSince: membership?.joinedOn ?? user.createdAt.toISOString().slice(0, 10),
-    paidUp: membershipPaidUp(membership, at),
+    ...(signedIn ? { paidUp: membershipPaidUp(membership, at) } : {}),
   };
 }
 
@@ -71,7 +74,7 @@ export async function getVisibleListingPage(
   if (!listing) throw notFound('Listing');
   assertVisible(viewer, listing);
   if (!listing.seller) throw notFound('Seller');
-  return { listing, seller: sellerDtoOf(listing.seller, at) };
+  return { listing, seller: sellerDtoOf(listing.seller, at, viewer !== null) };
 }
 
 function assertVisible(viewer: User | null, listing: Listing) {
@@ -102,7 +105,7 @@ export async function getVisibleListing(viewer: User | null, id: number): Promis
 export async function sellerOf(sellerId: number, at = new Date()): Promise<SellerDto> {
   const user = await User.findByPk(sellerId, { include: sellerInclude.include });
   if (!user) throw notFound('Seller');
-  return sellerDtoOf(user, at);
+  return sellerDtoOf(user, at, true);
 }
 
 const PAID_UP_NEEDED = {

@@ -110,7 +110,8 @@ export function treasuryRouter(deps: { env: Env; sequelize: Sequelize }) {
     res
       .type('text/csv; charset=utf-8')
       .attachment(`ledger-${new Date().toISOString().slice(0, 10)}.csv`)
-      .send(csv);
+      // A byte-order mark first, so spreadsheet programs read the file as UTF-8 (names, €).
+      .send(`\uFEFF${csv}`);
   });
   r.get('/summary', async (req, res) => {
     const { fiscalYear } = summaryQuerySchema.parse(req.query);

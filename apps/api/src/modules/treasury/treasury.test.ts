@@ -132,7 +132,9 @@ describe('treasurer desk', () => {
     const res = await c.get('/api/treasury/ledger.csv');
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
-    const lines = res.text.trim().split('\r\n');
+    // A byte-order mark first, so spreadsheet programs read UTF-8.
+    expect(res.text.charCodeAt(0)).toBe(0xfeff);
+    const lines = res.text.slice(1).trim().split('\r\n');
     expect(lines[0]).toBe(LEDGER_COLUMNS.join(','));
     expect(lines).toHaveLength(4);
     const parse = (line: string) =>

@@ -49,7 +49,7 @@ describe('app shell', () => {
     ).toBeInTheDocument();
     const nav = await mainNav();
     expect(within(nav).getByRole('link', { name: 'Admin' })).toBeInTheDocument();
-    expect(within(nav).getByRole('link', { name: 'Account' })).toBeInTheDocument();
+    expect(within(nav).getByRole('link', { name: 'Settings' })).toBeInTheDocument();
     expect(within(nav).getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
     expect(within(nav).queryByRole('link', { name: 'Sign in' })).not.toBeInTheDocument();
   });

@@ -186,3 +186,33 @@ describe('messages badge in the main navigation', () => {
     expect(requests.some((r) => r.url.startsWith('/api/threads'))).toBe(false);
   });
 });
+
+describe('grouped menus in the main navigation', () => {
+  it("opens the member's account menu, closes it with Escape and returns focus to its button", async () => {
+    mockApi({ 'GET /api/club': () => ({ body: { data: club } }) });
+    renderApp({ route: '/', session: buildSession(buildUser({ roles: ['member'] })) });
+    const user = userEvent.setup();
+    const nav = await mainNav();
+    const button = await within(nav).findByRole('button', { name: 'Account' });
+    expect(button).toHaveAttribute('aria-expanded', 'false');
+    const menu = within(nav).getByRole('list', { name: 'Account' });
+    expect(within(menu).getByRole('link', { name: 'Dues' })).toHaveAttribute('href', '/dues');
+    expect(within(menu).getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
+    await user.click(button);
+    expect(button).toHaveAttribute('aria-expanded', 'true');
+    await user.keyboard('{Escape}');
+    expect(button).toHaveAttribute('aria-expanded', 'false');
+    expect(button).toHaveFocus();
+  });
+
+  it('puts the moderation count on the Desks button', async () => {
+    mockApi({
+      'GET /api/club': () => ({ body: { data: club } }),
+      'GET /api/moderation/count': () => ({ body: { data: count(4) } }),
+    });
+    renderApp({ route: '/', session: buildSession(buildUser({ roles: ['member', 'moderator'] })) });
+    expect(
+      await within(await mainNav()).findByRole('button', { name: 'Desks, 4 waiting' }),
+    ).toHaveAttribute('aria-controls');
+  });
+});

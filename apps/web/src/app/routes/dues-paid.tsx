@@ -7,6 +7,7 @@ import { paths } from '../../config/paths';
 import { errorMessage } from '../../lib/form-errors';
 import { RequireAuth } from '../../features/auth/components/require-auth';
 import { useCheckoutStatus } from '../../features/dues/api/get-checkout-status';
+import { readableDate } from '../../lib/format-date';
 
 function PaidScreen({ sessionId }: { sessionId: string }) {
   const status = useCheckoutStatus(sessionId);
@@ -28,7 +29,11 @@ function PaidScreen({ sessionId }: { sessionId: string }) {
       {s?.status === 'succeeded' && (
         <Alert tone="success" title="Payment received">
           <p>{formatMoney(s.amountMinor, s.currency)} received.</p>
-          <p data-testid="paid-through">Paid through {s.paidThrough}</p>
+          {s.paidThrough && (
+            <p data-testid="paid-through">
+              Paid through <time dateTime={s.paidThrough}>{readableDate(s.paidThrough)}</time>
+            </p>
+          )}
           <p>A receipt is on its way to your e-mail.</p>
         </Alert>
       )}

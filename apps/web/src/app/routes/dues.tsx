@@ -10,6 +10,7 @@ import { useStartCheckout } from '../../features/dues/api/start-checkout';
 import { PaymentHistory } from '../../features/dues/components/payment-history';
 import { QuoteCard } from '../../features/dues/components/quote-card';
 import { DuesStatusBadge } from '../../features/dues/components/status-badge';
+import { readableDate } from '../../lib/format-date';
 
 function DuesScreen() {
   const dues = useMyDues();
@@ -64,12 +65,13 @@ function DuesScreen() {
                 <dt className="font-bold">Paid through</dt>
                 <dd data-testid="paid-through">
                   {d.membership.paidThrough
-                    ? `Paid through ${d.membership.paidThrough}`
+                    ? readableDate(d.membership.paidThrough)
                     : 'Not paid yet'}
                 </dd>
                 <dt className="font-bold">Fiscal year</dt>
                 <dd>
-                  {d.fiscalYear.label} ({d.fiscalYear.start} to {d.fiscalYear.end})
+                  {d.fiscalYear.label} ({readableDate(d.fiscalYear.start)} to{' '}
+                  {readableDate(d.fiscalYear.end)})
                 </dd>
               </dl>
             ) : (

@@ -85,7 +85,7 @@ export function ListingDetail({ listing }: { listing: ListingDto }) {
               month: 'long',
             })}
           </p>
-          {listing.seller.paidUp ? (
+          {listing.seller.paidUp === undefined ? null : listing.seller.paidUp ? (
             <p className="mt-1 inline-flex rounded-pill border border-kelp-700 bg-kelp-50 px-2 text-xs font-bold text-kelp-700">
               Paid-up member
             </p>

@@ -2,6 +2,7 @@ import type { HighlightPiece, PostSummaryDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { HighlightText } from './highlight-text';
 import { PostStatusBadge } from './post-status-badge';
+import { countOf } from '../../../lib/plural';
 
 export interface PostCardProps {
   post: PostSummaryDto;
@@ -33,8 +34,10 @@ export function PostCard({ post, href, title, snippet, showStatus }: PostCardPro
         {snippet ? <HighlightText pieces={snippet} /> : post.excerpt}
       </p>
       <p className="text-xs text-ink-600">
-        {post.author.displayName} · {post.helpfulCount} found it helpful · {post.commentCount}{' '}
-        {post.kind === 'question' ? 'answers' : 'comments'}
+        {post.author.displayName} · {post.helpfulCount} found it helpful ·{' '}
+        {post.kind === 'question'
+          ? countOf(post.commentCount, 'answer', 'answers')
+          : countOf(post.commentCount, 'comment', 'comments')}
       </p>
     </li>
   );

@@ -2,6 +2,7 @@ import { formatMoney } from '@app/shared';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/form-errors';
+import { countOf } from '../../../lib/plural';
 import { usePreviewReminders, useSendReminders } from '../api/reminders';
 
 /** Preview, then send, reminders to the selected members (only due and overdue ones receive one). */
@@ -13,7 +14,7 @@ export function RemindersPanel({ userIds }: { userIds: number[] }) {
       <h2 id="reminders-heading" className="text-xl">
         Reminders
       </h2>
-      <p className="text-sm">{userIds.length} members selected.</p>
+      <p className="text-sm">{countOf(userIds.length, 'member', 'members')} selected.</p>
       <div className="flex flex-wrap gap-2">
         <Button
           variant="secondary"
@@ -28,7 +29,10 @@ export function RemindersPanel({ userIds }: { userIds: number[] }) {
           isPending={send.isPending}
           onClick={() => send.mutate({ userIds })}
         >
-          Send {preview.data?.recipients.length ?? 0} reminders
+          {/* The count is known only once the preview has said who is due or overdue. */}
+          {preview.data
+            ? `Send ${countOf(preview.data.recipients.length, 'reminder', 'reminders')}`
+            : 'Send reminders (preview first)'}
         </Button>
       </div>
       {(preview.isError || send.isError) && (
@@ -38,7 +42,7 @@ export function RemindersPanel({ userIds }: { userIds: number[] }) {
       )}
       {send.data && (
         <Alert tone="success" title="Reminders queued">
-          <p>{send.data.sent} reminders are on their way.</p>
+          <p>{countOf(send.data.sent, 'reminder is', 'reminders are')} on their way.</p>
         </Alert>
       )}
       {preview.data && (

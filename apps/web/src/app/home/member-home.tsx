@@ -1,0 +1,48 @@
+import type { UserDto } from '@app/shared';
+import { useBoats } from '../../features/boats/api/get-boats';
+import { DuesCard } from './dues-card';
+import { ListingsCard } from './listings-card';
+import { MyBoatsCard } from './my-boats-card';
+import { NoticesCard } from './notices-card';
+import { ModeratorQueue, TreasurerQueue } from './officer-queues';
+import { PostsCard } from './posts-card';
+
+/** Gear on the exchange that fits the member's first boat, near its home harbour when it has one. */
+function FitsMyBoat() {
+  const boats = useBoats();
+  const boat = boats.data?.[0];
+  if (!boat) return null;
+  const filters: Record<string, string> = { fitsBoat: String(boat.id), fitsOnly: 'true' };
+  if (boat.homeHarborId) filters.harborId = String(boat.homeHarborId);
+  return (
+    <ListingsCard
+      title={`Gear that fits ${boat.name}`}
+      filters={filters}
+      fitsBoat={boat.id}
+      empty={`No listing near ${boat.name}'s harbour fits her right now.`}
+    />
+  );
+}
+
+/** The signed-in home: the officer's queues first, then the member's boats, dues, notices and finds. */
+export function MemberHome({ user }: { user: UserDto }) {
+  const isModerator = user.roles.includes('moderator');
+  const isTreasurer = user.roles.includes('treasurer');
+  return (
+    <>
+      {(isModerator || isTreasurer) && (
+        <div className="grid gap-4 md:grid-cols-2" aria-label="Your desks" role="group">
+          {isModerator && <ModeratorQueue />}
+          {isTreasurer && <TreasurerQueue />}
+        </div>
+      )}
+      <div className="grid gap-4 md:grid-cols-2">
+        <MyBoatsCard />
+        {user.roles.includes('member') && <DuesCard />}
+        <NoticesCard />
+        <FitsMyBoat />
+        <PostsCard title="Open questions" show="open-questions" />
+      </div>
+    </>
+  );
+}
