@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BOTTOMS, HULLS, planComponentsSchema } from './boats';
+import { nonEmptyPatchOf } from './patch';
 
 export const POST_KINDS = ['article', 'question'] as const;
 export type PostKind = (typeof POST_KINDS)[number];
@@ -178,9 +179,8 @@ export type PostInput = z.input<typeof postInputSchema>;
 /** Creating a post: a draft unless `submit` is true (then it goes to moderation). */
 export const createPostSchema = postInputSchema.extend({ submit: z.boolean().default(false) });
 export type CreatePostInput = z.input<typeof createPostSchema>;
-export const postPatchSchema = postInputSchema
-  .partial()
-  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+/** A change to a post: only the fields sent change (visibility stays unless sent). */
+export const postPatchSchema = nonEmptyPatchOf(postInputSchema);
 export type PostPatchInput = z.input<typeof postPatchSchema>;
 
 export const postListQuerySchema = z.object({
