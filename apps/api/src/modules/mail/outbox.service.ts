@@ -12,6 +12,28 @@ export interface OutgoingEmail {
   kind: string;
 }
 
+/** The `outbox_emails.subject` column's width, in characters. */
+export const SUBJECT_MAX = 200;
+
+/**
+ * A subject that fits the column: line breaks become spaces (a header is one line) and a long one is cut on a
+ * whole character (never inside a surrogate pair or a combining sequence) with an ellipsis.
+ */
+export function clipSubject(subject: string, max = SUBJECT_MAX): string {
+  const oneLine = subject.replace(/[\r\n\t]+/g, ' ').trim();
+  const chars = Array.from(
+    new Intl.Segmenter('en', { granularity: 'grapheme' }).segment(oneLine),
+    (g) => g.segment,
+  );
+  if (Array.from(oneLine).length <= max) return oneLine;
+  let out = '';
+  for (const g of chars) {
+    if (Array.from(out + g).length > max - 1) break;
+    out += g;
+  }
+  return `${out.trimEnd()}…`;
+}
+
 /** Stores a message in the outbox (inside the caller's transaction when given); the worker sends it. */
 export async function enqueueEmail(
   mail: OutgoingEmail,
@@ -20,7 +42,7 @@ export async function enqueueEmail(
   return OutboxEmail.create(
     {
       toAddress: mail.to,
-      subject: mail.subject,
+      subject: clipSubject(mail.subject),
       textBody: mail.text,
       htmlBody: mail.html ?? null,
       kind: mail.kind,
