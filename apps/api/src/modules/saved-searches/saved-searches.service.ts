@@ -1,12 +1,13 @@
 import { Op, UniqueConstraintError } from 'sequelize';
 import type { SavedSearchCriteria } from '@app/shared';
 import { AppError, notFound } from '../../errors/app-error';
+import { withParentLocked } from '../../lib/serialize';
 import { SavedSearch, SavedSearchHit, User, type Listing } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { matchesCriteria } from '../listings/listing-index';
 
-const MAX_SAVED = 20;
+export const MAX_SAVED = 20;
 
 /** The actor's saved searches, newest first. */
 export const listSavedSearches = (actor: User) =>
@@ -14,9 +15,11 @@ export const listSavedSearches = (actor: User) =>
 
 /** Saves a search (at most 20 per member). */
 export async function createSavedSearch(actor: User, name: string, criteria: SavedSearchCriteria) {
-  if ((await SavedSearch.count({ where: { userId: actor.id } })) >= MAX_SAVED)
-    throw new AppError('CONFLICT', `You can keep at most ${MAX_SAVED} saved searches`);
-  return SavedSearch.create({ userId: actor.id, name, criteria });
+  return withParentLocked(User, actor.id, async (transaction) => {
+    if ((await SavedSearch.count({ where: { userId: actor.id }, transaction })) >= MAX_SAVED)
+      throw new AppError('CONFLICT', `You can keep at most ${MAX_SAVED} saved searches`);
+    return SavedSearch.create({ userId: actor.id, name, criteria }, { transaction });
+  });
 }
 
 /** Deletes one of the actor's saved searches; anyone else's is not found. */
