@@ -62,6 +62,7 @@ beforeAll(async () => {
     STRIPE_PROTOCOL: 'http',
     STRIPE_SECRET_KEY: KEY,
     STRIPE_WEBHOOK_SECRET: SECRET,
+    STRIPE_TIMEOUT_MS: '700',
   });
   handler = built.app;
 });
@@ -73,8 +74,16 @@ afterAll(async () => {
   await rm(dataDir, { recursive: true, force: true });
 });
 
+const setFaults = (faults: { refundAnswerDelayMs: number }) =>
+  fetch(`${fake.url}/__fake/faults`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify(faults),
+  });
+
 beforeEach(async () => {
   refuseWebhooks = false;
+  await setFaults({ refundAnswerDelayMs: 0 });
   await resetDb();
 });
 
@@ -457,5 +466,56 @@ describe('double payment for one period', () => {
       return p?.status === 'held' ? p : null;
     });
     expect(held.heldReason).toMatch(/already paid/);
+  });
+});
+
+describe('a refund that times out at the provider', () => {
+  it('stays pending, is settled by the provider’s event, and is never refunded twice', async () => {
+    const { user, c } = await owingMember();
+    const { sessionId, quote } = await checkoutAndPay(c);
+    const payment = await waitFor(async () => {
+      const p = await Payment.findOne({ where: { providerSessionId: sessionId } });
+      return p?.status === 'succeeded' ? p : null;
+    });
+    const { c: tc } = await treasurer();
+    // The provider makes the refund but its answer comes too late, and its event does not get through yet.
+    expect((await setFaults({ refundAnswerDelayMs: 5000 })).status).toBe(200);
+    refuseWebhooks = true;
+    const res = await tc.post(`/api/treasury/payments/${payment.id}/refunds`, {
+      amountMinor: quote.amountMinor,
+      reason: 'Leaving the club',
+    });
+    expect(res.status).toBe(201);
+    expect(res.body.data.status).toBe('pending');
+    const refundId = res.body.data.id as number;
+    expect((await Refund.findByPk(refundId))?.status).toBe('pending');
+    expect(await AuditEvent.count({ where: { action: 'refund.provider-unanswered' } })).toBe(1);
+
+    // The treasurer tries again: the pending refund still counts, so nothing more can go back.
+    const again = await tc.post(`/api/treasury/payments/${payment.id}/refunds`, {
+      amountMinor: quote.amountMinor,
+      reason: 'Leaving the club',
+    });
+    expect(again.status).toBe(400);
+    expect(again.body.error.fields.amountMinor).toMatch(/left to refund/);
+
+    // The provider made exactly one refund, whatever the SDK retried.
+    const created = await fetch(`${fake.url}/__fake/events?type=refund.created`);
+    const events = ((await created.json()) as { data: Stripe.Event[] }).data;
+    expect(events).toHaveLength(1);
+
+    // Its event arrives: the refund settles and the cover goes back.
+    refuseWebhooks = false;
+    await setFaults({ refundAnswerDelayMs: 0 });
+    await fetch(`${fake.url}/__fake/events/${events[0]?.id ?? ''}/resend`, { method: 'POST' });
+    const done = await waitFor(async () => {
+      const r = await Refund.findByPk(refundId);
+      return r?.status === 'succeeded' ? r : null;
+    });
+    expect(done.providerRefundId).toMatch(/^re_/);
+    expect(await Refund.count({ where: { paymentId: payment.id } })).toBe(1);
+    expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBe(
+      '2020-03-31',
+    );
   });
 });
