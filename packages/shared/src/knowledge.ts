@@ -313,7 +313,12 @@ export interface PostSummaryDto {
   excerpt: string;
   status: PostStatus;
   visibility: PostVisibility;
-  topic: { id: number; slug: string; name: string } | null;
+  topic: {
+    id: number;
+    slug: string;
+    name: string; /** In the moderation queue: this entry is an edit of a published post (readers still see the published one). */
+    editOfPublished?: boolean;
+  } | null;
   author: PostAuthorDto;
   hasSetup: boolean;
   helpfulCount: number;
@@ -359,9 +364,27 @@ export interface CommentDto {
   replies: CommentDto[];
 }
 
+/** Where an edit of a published post stands: waiting, sent back with a note, or turned down. */
+export type RevisionStatus = 'pending' | 'changes-requested' | 'rejected';
+
+/** An edit of a published post that waits for a moderator (shown to its author and moderators only). */
+export interface PostRevisionDto {
+  status: RevisionStatus;
+  kind: PostKind;
+  title: string;
+  topicId: number | null;
+  boatId: number | null;
+  visibility: PostVisibility;
+  body: unknown;
+  bodyHtml: string;
+  setup: PostSetup | null;
+}
+
 export interface PostDetailDto extends PostSummaryDto {
   body: unknown;
   bodyHtml: string;
+  /** The author's edit waiting for a moderator; the fields above stay what readers see until it is approved. */
+  revision: PostRevisionDto | null;
   moderationNote: string | null;
   boat: { id: number; name: string; hull: string; loaM: number } | null;
   setupCard: SetupCardDto | null;
