@@ -47,6 +47,20 @@ export function PostRoute() {
           <p>{p.moderationNote}</p>
         </Alert>
       )}
+      {p.revision && (
+        <Alert
+          tone={p.revision.status === 'pending' ? 'info' : 'warning'}
+          title={
+            p.revision.status === 'pending'
+              ? 'An edit of this post waits for a moderator'
+              : 'An edit of this post was sent back'
+          }
+        >
+          <p>
+            Readers see the published version below until the edit “{p.revision.title}” is approved.
+          </p>
+        </Alert>
+      )}
       {p.viewer.canModerate && <PostModerationBar post={p} />}
       {p.boat && (
         <p className="text-sm text-ink-700">
