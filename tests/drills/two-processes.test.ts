@@ -1,4 +1,6 @@
 import type { ChildProcess } from 'node:child_process';
+import type { AddressInfo } from 'node:net';
+import { SMTPServer } from 'smtp-server';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
   dbEnv,
@@ -9,12 +11,36 @@ import {
 } from '../../scripts/lib/mariadb.mjs';
 import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
 import { freshSecrets } from '../../scripts/lib/secrets.mjs';
+import { sqlNumber, waitUntil } from './drill-helpers';
 
 const cfg = profileConfig('test');
 const PORTS = [4391, 4392] as const;
 const apis: ChildProcess[] = [];
+const DB = 'rodewise_drill_multi';
+
+// A mail server that takes SLOW_SMTP_MS to accept each message, and notes every Message-ID it accepts.
+const SLOW_SMTP_MS = 2600;
+const received: string[] = [];
+const smtp = new SMTPServer({
+  authOptional: true,
+  disabledCommands: ['STARTTLS', 'AUTH'],
+  logger: false,
+  onData(stream, _session, callback) {
+    let data = '';
+    stream.on('data', (chunk: Buffer) => (data += chunk.toString('latin1')));
+    stream.on('end', () => {
+      const id = /^Message-ID:\s*(\S+)/im.exec(data)?.[1];
+      setTimeout(() => {
+        if (id) received.push(id);
+        callback();
+      }, SLOW_SMTP_MS);
+    });
+  },
+});
 
 beforeAll(async () => {
+  await new Promise<void>((r) => smtp.listen(0, '127.0.0.1', r));
+  const smtpPort = (smtp.server.address() as AddressInfo).port;
   await startServer(cfg, { quiet: true });
   provision(cfg, ['rodewise_drill_multi']);
   recreateDatabase(cfg, 'rodewise_drill_multi');
@@ -23,7 +49,8 @@ beforeAll(async () => {
     NODE_ENV: 'production',
     ...freshSecrets(),
     LOG_LEVEL: 'silent',
-    SMTP_PORT: '1',
+    SMTP_PORT: String(smtpPort),
+    OUTBOX_INTERVAL_MS: '200',
   };
   mustRun(TSX, ['apps/api/src/cli/seed.ts'], { env, stdio: 'ignore' });
   for (const port of PORTS)
@@ -40,6 +67,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await Promise.all(apis.map((a) => stopService(a)));
+  await new Promise<void>((r) => smtp.close(() => r()));
 });
 
 const sid = (res: Response) =>
@@ -143,4 +171,39 @@ describe('two API processes on one MariaDB', () => {
     }
     expect(goneOnB).toBe(true);
   });
+});
+
+describe('the outbox claim lease is longer than a worst-case send round', () => {
+  it('two API processes draining one outbox through a slow mail server never send one mail twice', async () => {
+    // 26 mails at 2.6 s each: one process alone needs over a minute for them.
+    const values = Array.from(
+      { length: 26 },
+      (_, i) =>
+        `('lease-drill-${i}@drill.example', 'Lease drill ${i}', 'body', NULL, 'drill', 'pending', 0, NOW(), NULL, NULL, NULL, NOW(), NOW())`,
+    ).join(', ');
+    sqlNumber(
+      cfg,
+      DB,
+      `INSERT INTO outbox_emails (to_address, subject, text_body, html_body, kind, status, attempts, next_attempt_at, locked_until, last_error, sent_at, created_at, updated_at) VALUES ${values}; SELECT ROW_COUNT();`,
+    );
+    await waitUntil(
+      'the drill mails to be sent',
+      () =>
+        sqlNumber(
+          cfg,
+          DB,
+          "SELECT COUNT(*) FROM outbox_emails WHERE kind = 'drill' AND status <> 'sent'",
+        ) === 0,
+      150_000,
+    );
+    // A round still under way elsewhere would show up as a late duplicate: give it a moment.
+    await new Promise((r) => setTimeout(r, SLOW_SMTP_MS * 2));
+    const drillIds = sqlNumber(cfg, DB, "SELECT COUNT(*) FROM outbox_emails WHERE kind = 'drill'");
+    expect(drillIds).toBe(26);
+    const counts = new Map<string, number>();
+    for (const id of received) counts.set(id, (counts.get(id) ?? 0) + 1);
+    const twice = [...counts].filter(([, n]) => n > 1).map(([id]) => id);
+    expect(twice).toEqual([]);
+    expect(received.length).toBeGreaterThanOrEqual(26);
+  }, 200_000);
 });

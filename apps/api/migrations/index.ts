@@ -8,6 +8,7 @@ import * as m0006 from './20261202-0006-plan-kinds';
 import * as m0007 from './20261202-0007-topics-retired';
 import * as m0008 from './20261202-0008-listings-updated-ms';
 import * as m0009 from './20261202-0009-notification-digest';
+import * as m0020 from './20261202-0020-post-revisions';
 import * as m0030 from './20261202-0030-storm-watch';
 import * as m0040 from './20261202-0040-cluster-state';
 
@@ -27,6 +28,7 @@ export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [
   ['20261202-0007-topics-retired', m0007],
   ['20261202-0008-listings-updated-ms', m0008],
   ['20261202-0009-notification-digest', m0009],
+  ['20261202-0020-post-revisions', m0020],
   ['20261202-0030-storm-watch', m0030],
   ['20261202-0040-cluster-state', m0040],
 ];

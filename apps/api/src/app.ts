@@ -230,7 +230,7 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   mount(app, '/api/moderation', moderationRouter({ publicUrl: env.PUBLIC_URL }));
   mount(app, '/api/notifications', notificationsRouter());
   mount(app, '/api/uploads', uploadsRouter());
-  const exchange = { publicUrl: env.PUBLIC_URL };
+  const exchange = { publicUrl: env.PUBLIC_URL, logger };
   mount(app, '/api/listings', listingsRouter(exchange));
   mount(
     app,

@@ -17,6 +17,7 @@ import {
   presentSession,
 } from './checkout';
 import { createCustomer, getCustomer, listCustomers, updateCustomer } from './customers';
+import { delayAnswer, noFaults, type Faults } from './faults';
 import type { Ledger } from './ledger';
 import {
   customerCreateSchema,
@@ -41,7 +42,11 @@ function idOf(req: Request): string {
 }
 
 /** The `/v1` API subset Rodewise uses, behind the secret-key check. */
-export function createApiRouter(ledger: Ledger, apiKey: string | undefined): Router {
+export function createApiRouter(
+  ledger: Ledger,
+  apiKey: string | undefined,
+  faults: Faults = noFaults(),
+): Router {
   const router = express.Router();
   router.use(providerHeaders, authenticate(apiKey));
   router.use(express.urlencoded({ extended: true, limit: '1mb' }), express.json({ limit: '1mb' }));
@@ -72,6 +77,10 @@ export function createApiRouter(ledger: Ledger, apiKey: string | undefined): Rou
   );
   get('/charges/:id', (req) => ledger.expand(getCharge(ledger, idOf(req)), expandOf(req)));
 
+  router.post(
+    '/refunds',
+    delayAnswer(() => faults.refundAnswerDelayMs),
+  );
   post('/refunds', (req) => {
     const params = parseParams(refundCreateSchema, req.body);
     return ledger.expand(createRefund(ledger, params), params.expand);

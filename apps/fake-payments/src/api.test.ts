@@ -247,6 +247,37 @@ describe('refunds', () => {
     );
   });
 
+  it('with a refund answer delay, makes the refund at once but answers late, so the caller times out', async () => {
+    const { paymentIntentId } = await h.paidSession(5000);
+    const set = await fetch(`${h.fake.url}/__fake/faults`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ refundAnswerDelayMs: 2000 }),
+    });
+    expect(set.status).toBe(200);
+    const { port } = new URL(h.fake.url);
+    const impatient = new Stripe(TEST_KEY, {
+      host: '127.0.0.1',
+      port: Number(port),
+      protocol: 'http',
+      timeout: 300,
+      maxNetworkRetries: 0,
+    });
+    const error: unknown = await impatient.refunds
+      .create({ payment_intent: paymentIntentId }, { idempotencyKey: 'refund-once' })
+      .catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(Stripe.errors.StripeConnectionError);
+    const { latest_charge } = await h.stripe.paymentIntents.retrieve(paymentIntentId);
+    const charge = await h.stripe.charges.retrieve(latest_charge as string);
+    expect(charge.amount_refunded).toBe(5000);
+    const bad = await fetch(`${h.fake.url}/__fake/faults`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ refundAnswerDelayMs: -1 }),
+    });
+    expect(bad.status).toBe(400);
+  });
+
   it('refuses to refund a payment that has not succeeded', async () => {
     const session = await h.createSession();
     await h.pay(session.url ?? '', '4000 0000 0000 0002');

@@ -1,6 +1,7 @@
 import express from 'express';
 import type { Router } from 'express';
 import { z } from 'zod';
+import { faultsSchema, noFaults, type Faults } from './faults';
 import type { Ledger } from './ledger';
 import type { Delivery, EventObject } from './types';
 import type { WebhookDispatcher } from './webhook-dispatcher';
@@ -11,8 +12,12 @@ const idParamsSchema = z.object({ id: z.string().min(1) });
 /** An event as the test helpers list it: the event itself plus its delivery state. */
 export type EventWithDelivery = EventObject & { delivery: Delivery | null };
 
-/** Helpers for tests and local debugging (no API key): `/__fake/events` and `/api/health`. */
-export function createFakeRouter(ledger: Ledger, dispatcher: WebhookDispatcher): Router {
+/** Helpers for tests and local debugging (no API key): `/__fake/events`, `/__fake/faults` and `/api/health`. */
+export function createFakeRouter(
+  ledger: Ledger,
+  dispatcher: WebhookDispatcher,
+  faults: Faults = noFaults(),
+): Router {
   const router = express.Router();
   const withDelivery = (event: EventObject): EventWithDelivery => ({
     ...event,
@@ -37,6 +42,19 @@ export function createFakeRouter(ledger: Ledger, dispatcher: WebhookDispatcher):
       .reverse()
       .map(withDelivery);
     res.json({ data: events });
+  });
+
+  // Switches faults on or off for tests: `{ "refundAnswerDelayMs": 3000 }` delays the refund API's answers.
+  router.post('/__fake/faults', express.json(), (req, res) => {
+    const parsed = faultsSchema.safeParse(req.body);
+    if (!parsed.success) {
+      res.status(400).json({
+        error: { code: 'VALIDATION_FAILED', message: 'refundAnswerDelayMs must be 0–120000 ms' },
+      });
+      return;
+    }
+    Object.assign(faults, parsed.data);
+    res.json({ data: faults });
   });
 
   router.post('/__fake/events/:id/resend', (req, res) => {

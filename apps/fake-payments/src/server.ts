@@ -6,6 +6,7 @@ import express from 'express';
 import type { ErrorRequestHandler, Express } from 'express';
 import { createApiRouter } from './api-router';
 import { expireDueSessions } from './checkout';
+import { noFaults } from './faults';
 import { createFakeRouter } from './fake-router';
 import { Ledger } from './ledger';
 import { createPayRouter } from './pay-router';
@@ -101,12 +102,13 @@ function createApp(
   apiKey: string | undefined,
 ): Express {
   const app = express();
+  const faults = noFaults();
   app.disable('x-powered-by');
   // The SDK encodes nested params with brackets (expand[0]=…); parse them the way the provider does.
   app.set('query parser', 'extended');
-  app.use('/v1', createApiRouter(ledger, apiKey));
+  app.use('/v1', createApiRouter(ledger, apiKey, faults));
   app.use('/pay', createPayRouter(ledger));
-  app.use(createFakeRouter(ledger, dispatcher));
+  app.use(createFakeRouter(ledger, dispatcher, faults));
   app.use(pageErrorHandler);
   return app;
 }

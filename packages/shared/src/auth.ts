@@ -28,6 +28,14 @@ export const passwordSchema = z
     message: 'Use at most 72 characters (accented letters and symbols count as two to four)',
   });
 
+/**
+ * Characters a reader cannot see but that change what they see: control characters (C0, DEL, C1), line and
+ * paragraph separators, zero-width spaces and the byte-order mark, and the bidirectional marks, embeddings,
+ * overrides and isolates (Unicode UAX #9) that can make a name read as someone else's.
+ */
+export const HIDDEN_CHARACTERS =
+  /[\p{Cc}\u061C\u200B\u200E\u200F\u2028-\u202E\u2060\u2066-\u2069\uFEFF]/u;
+
 export const signupSchema = z.object({
   email,
   password: passwordSchema,
@@ -35,7 +43,11 @@ export const signupSchema = z.object({
     .string({ error: 'Name is required' })
     .trim()
     .min(2, 'Name needs at least 2 characters')
-    .max(80, 'Name is too long'),
+    .max(80, 'Name is too long')
+    .refine((v) => !HIDDEN_CHARACTERS.test(v), {
+      message:
+        'Use letters, digits, spaces and punctuation only (no control or text-direction characters)',
+    }),
 });
 export type SignupInput = z.infer<typeof signupSchema>;
 

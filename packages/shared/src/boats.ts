@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { nonEmptyPatchOf, patchOf } from './patch';
 
 export const HULLS = ['sail', 'power', 'multihull'] as const;
 export type Hull = (typeof HULLS)[number];
@@ -45,9 +46,8 @@ export const boatInputSchema = z.object({
   homeHarborId: z.number().int().positive().nullable().optional(),
 });
 export type BoatInput = z.input<typeof boatInputSchema>;
-export const boatPatchSchema = boatInputSchema
-  .partial()
-  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+/** A change to a boat: only the fields sent change (no defaults, so bow height is never reset). */
+export const boatPatchSchema = nonEmptyPatchOf(boatInputSchema);
 
 export interface BoatDto {
   id: number;
@@ -114,7 +114,8 @@ export const tacklePlanInputSchema = z.object({
   notes: z.string().max(4000, 'Notes are too long').default(''),
 });
 export type TacklePlanInput = z.input<typeof tacklePlanInputSchema>;
-export const tacklePlanPatchSchema = tacklePlanInputSchema.omit({ boatId: true }).partial();
+/** A change to a plan: only the fields sent change (tide and notes stay unless sent). */
+export const tacklePlanPatchSchema = patchOf(tacklePlanInputSchema.omit({ boatId: true }));
 
 export interface TacklePlanDto {
   id: number;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BOTTOMS, HULLS, planComponentsSchema } from './boats';
+import { nonEmptyPatchOf } from './patch';
 
 export const POST_KINDS = ['article', 'question'] as const;
 export type PostKind = (typeof POST_KINDS)[number];
@@ -178,9 +179,8 @@ export type PostInput = z.input<typeof postInputSchema>;
 /** Creating a post: a draft unless `submit` is true (then it goes to moderation). */
 export const createPostSchema = postInputSchema.extend({ submit: z.boolean().default(false) });
 export type CreatePostInput = z.input<typeof createPostSchema>;
-export const postPatchSchema = postInputSchema
-  .partial()
-  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+/** A change to a post: only the fields sent change (visibility stays unless sent). */
+export const postPatchSchema = nonEmptyPatchOf(postInputSchema);
 export type PostPatchInput = z.input<typeof postPatchSchema>;
 
 export const postListQuerySchema = z.object({
@@ -313,7 +313,12 @@ export interface PostSummaryDto {
   excerpt: string;
   status: PostStatus;
   visibility: PostVisibility;
-  topic: { id: number; slug: string; name: string } | null;
+  topic: {
+    id: number;
+    slug: string;
+    name: string; /** In the moderation queue: this entry is an edit of a published post (readers still see the published one). */
+    editOfPublished?: boolean;
+  } | null;
   author: PostAuthorDto;
   hasSetup: boolean;
   helpfulCount: number;
@@ -374,9 +379,27 @@ export interface CommentDto {
   replies: CommentDto[];
 }
 
+/** Where an edit of a published post stands: waiting, sent back with a note, or turned down. */
+export type RevisionStatus = 'pending' | 'changes-requested' | 'rejected';
+
+/** An edit of a published post that waits for a moderator (shown to its author and moderators only). */
+export interface PostRevisionDto {
+  status: RevisionStatus;
+  kind: PostKind;
+  title: string;
+  topicId: number | null;
+  boatId: number | null;
+  visibility: PostVisibility;
+  body: unknown;
+  bodyHtml: string;
+  setup: PostSetup | null;
+}
+
 export interface PostDetailDto extends PostSummaryDto {
   body: unknown;
   bodyHtml: string;
+  /** The author's edit waiting for a moderator; the fields above stay what readers see until it is approved. */
+  revision: PostRevisionDto | null;
   moderationNote: string | null;
   boat: { id: number; name: string; hull: string; loaM: number } | null;
   setupCard: SetupCardDto | null;

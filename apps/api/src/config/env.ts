@@ -62,6 +62,8 @@ const envSchema = z.object({
   STRIPE_HOST: z.string().optional(),
   STRIPE_PORT: z.coerce.number().int().optional(),
   STRIPE_PROTOCOL: z.enum(['http', 'https']).optional(),
+  /** How long one call to the payment provider may take before it counts as unanswered (the SDK's default is 80 s). */
+  STRIPE_TIMEOUT_MS: z.coerce.number().int().min(100).max(120_000).default(20_000),
 });
 
 export type Env = Omit<

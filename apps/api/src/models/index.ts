@@ -113,3 +113,4 @@ export {
   SavedSearch,
   SavedSearchHit,
 } from './exchange.models';
+export type { PostRevision } from './post.model';

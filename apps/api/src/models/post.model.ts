@@ -7,7 +7,20 @@ import {
   type NonAttribute,
   type Sequelize,
 } from 'sequelize';
-import type { PostKind, PostSetup, PostStatus, PostVisibility } from '@app/shared';
+import type { PostKind, PostSetup, PostStatus, PostVisibility, RevisionStatus } from '@app/shared';
+
+/** What readers would see once a revision is approved. */
+export interface PostRevision {
+  kind: PostKind;
+  title: string;
+  topicId: number | null;
+  boatId: number | null;
+  visibility: PostVisibility;
+  setup: PostSetup | null;
+  bodyJson: unknown;
+  bodyHtml: string;
+  bodyText: string;
+}
 import type { Topic } from './topic.model';
 import type { User } from './user.model';
 
@@ -24,6 +37,11 @@ export class Post extends Model<InferAttributes<Post>, InferCreationAttributes<P
   declare bodyText: string;
   /** The plain text as last approved, to measure how much an edit changes. */
   declare approvedText: string | null;
+  /** The title as last approved. */
+  declare approvedTitle: CreationOptional<string | null>;
+  /** An edit of a published post waiting for a moderator; readers see the published columns meanwhile. */
+  declare revision: CreationOptional<PostRevision | null>;
+  declare revisionStatus: CreationOptional<RevisionStatus | null>;
   declare status: PostStatus;
   declare visibility: PostVisibility;
   declare setup: PostSetup | null;
@@ -52,6 +70,9 @@ export function initPost(sequelize: Sequelize) {
       bodyHtml: { type: DataTypes.TEXT('medium'), allowNull: false },
       bodyText: { type: DataTypes.TEXT('medium'), allowNull: false },
       approvedText: { type: DataTypes.TEXT('medium'), allowNull: true },
+      approvedTitle: { type: DataTypes.STRING(160), allowNull: true },
+      revision: { type: DataTypes.JSON, allowNull: true },
+      revisionStatus: { type: DataTypes.STRING(20), allowNull: true },
       status: { type: DataTypes.STRING(20), allowNull: false },
       visibility: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'public' },
       setup: { type: DataTypes.JSON, allowNull: true },

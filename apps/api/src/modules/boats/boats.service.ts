@@ -1,10 +1,13 @@
 import type { z } from 'zod';
 import type { boatInputSchema, boatPatchSchema } from '@app/shared';
 import { AppError, notFound } from '../../errors/app-error';
-import { Boat, Harbor, type User } from '../../models';
+import { withParentLocked } from '../../lib/serialize';
+import { Boat, Harbor, User } from '../../models';
 
 type BoatInput = z.output<typeof boatInputSchema>;
 type BoatPatch = z.output<typeof boatPatchSchema>;
+
+export const MAX_BOATS = 20;
 
 /** The actor's boats, newest first. */
 export const listBoats = (actor: User) =>
@@ -26,19 +29,25 @@ async function checkHarbor(id: number | null | undefined) {
 
 export async function createBoat(actor: User, input: BoatInput) {
   await checkHarbor(input.homeHarborId);
-  const count = await Boat.count({ where: { ownerId: actor.id } });
-  if (count >= 20) throw new AppError('CONFLICT', 'You can keep at most 20 boat profiles');
-  return Boat.create({
-    ownerId: actor.id,
-    name: input.name,
-    hull: input.hull,
-    loaM: input.loaM,
-    beamM: input.beamM ?? null,
-    displacementKg: input.displacementKg ?? null,
-    draftM: input.draftM ?? null,
-    bowHeightM: input.bowHeightM,
-    gypsy: input.gypsy ?? null,
-    homeHarborId: input.homeHarborId ?? null,
+  return withParentLocked(User, actor.id, async (transaction) => {
+    const count = await Boat.count({ where: { ownerId: actor.id }, transaction });
+    if (count >= MAX_BOATS)
+      throw new AppError('CONFLICT', `You can keep at most ${MAX_BOATS} boat profiles`);
+    return Boat.create(
+      {
+        ownerId: actor.id,
+        name: input.name,
+        hull: input.hull,
+        loaM: input.loaM,
+        beamM: input.beamM ?? null,
+        displacementKg: input.displacementKg ?? null,
+        draftM: input.draftM ?? null,
+        bowHeightM: input.bowHeightM,
+        gypsy: input.gypsy ?? null,
+        homeHarborId: input.homeHarborId ?? null,
+      },
+      { transaction },
+    );
   });
 }
 

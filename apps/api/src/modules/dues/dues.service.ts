@@ -10,6 +10,7 @@ import type {
 import { formatMoney } from '@app/shared';
 import type { Env } from '../../config/env';
 import { AppError, invalid, notFound } from '../../errors/app-error';
+import { withNamedLock } from '../../lib/serialize';
 import { Membership, MembershipPlan, Payment, Refund, User } from '../../models';
 import { getSetting } from '../club/club.service';
 import { stripeClient } from '../payments/stripe-client';
@@ -22,6 +23,7 @@ import {
   type DuesCalendar,
   type QuoteResult,
 } from './calendar';
+import { ALREADY_PAID } from './ledger-effects';
 import { toPaymentDto, toPlanDto } from './dues.presenter';
 
 /** The club's dues calendar setting. */
@@ -142,6 +144,81 @@ export async function startCheckout(
       `Your dues are paid through ${membership?.paidThrough ?? ''}; there is nothing to pay yet`,
     );
 
+  // One checkout per member at a time: a named lock per member is held while an open checkout for the same plan
+  // and period is looked up (and reused) or a new one is opened, so a double click or a second tab cannot open two.
+  const sequelize = Payment.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised');
+  return withNamedLock(
+    sequelize,
+    `rodewise:checkout:${actor.id}`,
+    async () =>
+      (await reusableCheckout(actor, plan, quote, env)) ??
+      openCheckout(actor, plan, quote, env, now),
+    () =>
+      new AppError('CONFLICT', 'Another checkout of yours is being opened; try again in a moment'),
+  );
+}
+
+/**
+ * The member's checkout still open at the provider for the same plan, period and amount, if any. A checkout the
+ * provider reports paid, but whose confirmation has not arrived yet, is a CONFLICT: paying again would pay twice.
+ * One that expired at the provider is marked expired here and a new one is opened.
+ */
+async function reusableCheckout(
+  actor: User,
+  plan: MembershipPlan,
+  quote: DuesQuoteDto,
+  env: Env,
+): Promise<CheckoutDto | null> {
+  const pending = await Payment.findAll({
+    where: {
+      userId: actor.id,
+      planId: plan.id,
+      method: 'card',
+      status: 'pending',
+      coversFrom: quote.coversFrom,
+      coversTo: quote.coversTo,
+      providerSessionId: { [Op.ne]: null },
+    },
+    order: [['id', 'DESC']],
+  });
+  const stripe = stripeClient(env);
+  for (const p of pending) {
+    if (!p.providerSessionId) continue;
+    let session: Awaited<ReturnType<typeof stripe.checkout.sessions.retrieve>>;
+    try {
+      session = await stripe.checkout.sessions.retrieve(p.providerSessionId);
+    } catch {
+      throw new AppError(
+        'UPSTREAM_UNAVAILABLE',
+        'The card payment service did not answer. Nothing was charged; please try again in a few minutes.',
+      );
+    }
+    if (session.status === 'complete' || session.payment_status === 'paid')
+      throw new AppError(
+        'CONFLICT',
+        'Your payment for this period is being confirmed by the card service. Wait a minute before paying again.',
+      );
+    if (session.status === 'expired') {
+      await Payment.update({ status: 'expired' }, { where: { id: p.id, status: 'pending' } });
+      continue;
+    }
+    if (p.expectedMinor === quote.amountMinor && session.url)
+      return { sessionId: session.id, url: session.url };
+    // The amount owed changed (a late fee began, say): the old checkout is closed before a new one opens.
+    await stripe.checkout.sessions.expire(session.id).catch(() => undefined);
+    await Payment.update({ status: 'expired' }, { where: { id: p.id, status: 'pending' } });
+  }
+  return null;
+}
+
+async function openCheckout(
+  actor: User,
+  plan: MembershipPlan,
+  quote: DuesQuoteDto,
+  env: Env,
+  now: Date,
+): Promise<CheckoutDto> {
   const payment = await Payment.create({
     userId: actor.id,
     planId: plan.id,
@@ -216,7 +293,9 @@ export async function checkoutStatus(actor: User, sessionId: string): Promise<Ch
   const message =
     payment.status === 'pending' && payment.note
       ? `${payment.note}. You can go back and try another card.`
-      : STATUS_MESSAGES[payment.status];
+      : payment.status === 'held' && payment.heldReason?.startsWith(ALREADY_PAID)
+        ? 'Your dues for this period were already paid, so this payment was not credited again. The treasurer will refund it or apply it and contact you.'
+        : STATUS_MESSAGES[payment.status];
   return {
     status: payment.status,
     amountMinor: payment.amountMinor,

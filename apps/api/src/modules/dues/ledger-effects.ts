@@ -6,6 +6,24 @@ import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { daysBetween } from './calendar';
 
+/** How a held payment's reason starts when it paid for a period that was already paid. */
+export const ALREADY_PAID = 'Already paid:';
+
+/**
+ * When the member's dues already cover the whole of this payment's period (paid by an earlier checkout, a second
+ * tab, or a payment the treasurer recorded), the reason to hold it for the treasurer instead of crediting it again.
+ */
+export async function alreadyPaidReason(payment: Payment, t: Transaction): Promise<string | null> {
+  if (!payment.coversTo) return null;
+  const m = await Membership.findOne({
+    where: { userId: payment.userId },
+    lock: t.LOCK.UPDATE,
+    transaction: t,
+  });
+  if (!m?.paidThrough || daysBetween(m.paidThrough, payment.coversTo) > 0) return null;
+  return `${ALREADY_PAID} the dues from ${payment.coversFrom ?? '?'} to ${payment.coversTo} were already paid (paid through ${m.paidThrough}); refund this payment or credit it on purpose`;
+}
+
 /**
  * Credits a succeeded payment to the member's membership: paid-through moves to the payment's cover end when that
  * is later, and the plan follows the payment. Creates the membership when the member has none.

@@ -1,6 +1,6 @@
 import { MAX_LISTING_PHOTOS } from '@app/shared';
 import { AppError, invalid } from '../../errors/app-error';
-import { ListingPhoto, type User } from '../../models';
+import { Listing, ListingPhoto, type User } from '../../models';
 import { processImage, type ProcessedImage } from '../uploads/image';
 import { getStorage, newKey, thumbKey } from '../uploads/storage';
 import { listingChanged } from './listing-index';
@@ -39,6 +39,19 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
   if (!sequelize) throw new Error('Models are not initialised');
   try {
     const rows = await sequelize.transaction(async (transaction) => {
+      // Counted again under the listing's row lock: concurrent uploads queue here, so the limit holds and
+      // positions never repeat.
+      await Listing.findByPk(listingId, { transaction, lock: transaction.LOCK.UPDATE });
+      const now = await ListingPhoto.findAll({
+        where: { listingId },
+        attributes: ['position'],
+        transaction,
+      });
+      if (now.length + processed.length > MAX_LISTING_PHOTOS)
+        throw invalid({
+          [FIELD]: `A listing can have at most ${MAX_LISTING_PHOTOS} photos (it has ${now.length})`,
+        });
+      const next = now.reduce((max, p) => Math.max(max, p.position + 1), 0);
       const out: ListingPhoto[] = [];
       for (const [i, img] of processed.entries()) {
         const key = newKey('listings');
@@ -55,7 +68,7 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
               thumbKey: tKey,
               width: img.width,
               height: img.height,
-              position: existing + i,
+              position: next + i,
             },
             { transaction },
           ),

@@ -1,5 +1,6 @@
 import { Op } from 'sequelize';
-import { LISTING_LIFETIME_DAYS, type SellerDto } from '@app/shared';
+import type { InferAttributes } from 'sequelize';
+import { LISTING_LIFETIME_DAYS, type ListingStatus, type SellerDto } from '@app/shared';
 import { AppError, invalid, notFound } from '../../errors/app-error';
 import {
   Harbor,
@@ -10,6 +11,7 @@ import {
   MembershipPlan,
   User,
 } from '../../models';
+import type { Logger } from '../../logger';
 import { getSetting } from '../club/club.service';
 import { isPaidUp, membershipPaidUp } from '../dues/paid-up';
 import { actionEmail } from '../mail/templates';
@@ -20,6 +22,8 @@ import { checkSpecs, sizeMmOf, type ParsedListing } from './listing-specs';
 
 export interface ExchangeContext {
   publicUrl: string;
+  /** Where a failed saved-search alert round is reported (it never fails the seller's request). */
+  logger?: Logger;
 }
 
 const DAY_MS = 86_400_000;
@@ -148,9 +152,37 @@ function fieldsOf(input: ParsedListing) {
   };
 }
 
+/**
+ * After the listing went live (its row is committed): refresh the index, then queue the saved-search alerts in
+ * the outbox. The listing is live whatever happens to the alerts, so a failure there is logged and the seller's
+ * request still succeeds; each alert is queued with its hit row in one transaction, so a later relist or edit
+ * sends the ones that were missed and never repeats one.
+ */
 async function afterActivated(ctx: ExchangeContext, listing: Listing) {
   await refreshListing(listing.id);
-  await notifySavedSearches(ctx, listing);
+  try {
+    await notifySavedSearches(ctx, listing);
+  } catch (err) {
+    ctx.logger?.error({ err, listingId: listing.id }, 'saved-search alerts not queued');
+  }
+}
+
+/**
+ * Moves a listing from one of `from` to the new state with one conditional UPDATE, so two concurrent changes
+ * (sold and withdraw, say) cannot both apply: the loser gets CONFLICT and the row keeps the winner's state.
+ */
+async function transition(
+  listing: Listing,
+  from: readonly ListingStatus[],
+  changes: Partial<InferAttributes<Listing>>,
+  message: string,
+) {
+  const [affected] = await Listing.update(changes, {
+    where: { id: listing.id, status: { [Op.in]: from } },
+  });
+  if (affected === 0) throw new AppError('CONFLICT', message);
+  await listing.reload();
+  return listing;
 }
 
 /** Creates a draft, or publishes at once when `publish` (paid-up policy applies). Throws VALIDATION_FAILED per field. */
@@ -185,7 +217,12 @@ export async function updateListing(actor: User, id: number, input: ParsedListin
   if (listing.status === 'sold') throw new AppError('CONFLICT', 'A sold listing cannot be edited');
   checkSpecs(input);
   await checkHarbor(input.harborId);
-  await listing.update(fieldsOf(input));
+  await transition(
+    listing,
+    ['draft', 'active', 'expired', 'withdrawn'],
+    fieldsOf(input),
+    'A sold listing cannot be edited',
+  );
   await refreshListing(id);
   return listing;
 }
@@ -201,7 +238,12 @@ export async function publishListing(
   if (listing.status !== 'draft')
     throw new AppError('CONFLICT', 'Only a draft can be published; use relist for the others');
   await assertMayList(actor, at);
-  await listing.update({ status: 'active', publishedAt: at, expiresAt: expiryFrom(at) });
+  await transition(
+    listing,
+    ['draft'],
+    { status: 'active', publishedAt: at, expiresAt: expiryFrom(at) },
+    'Only a draft can be published; use relist for the others',
+  );
   await afterActivated(ctx, listing);
   return listing;
 }
@@ -217,13 +259,18 @@ export async function relistListing(
   if (!['sold', 'expired', 'withdrawn'].includes(listing.status))
     throw new AppError('CONFLICT', 'Only a sold, expired or withdrawn listing can be relisted');
   await assertMayList(actor, at);
-  await listing.update({
-    status: 'active',
-    publishedAt: at,
-    expiresAt: expiryFrom(at),
-    soldAt: null,
-    soldThreadId: null,
-  });
+  await transition(
+    listing,
+    ['sold', 'expired', 'withdrawn'],
+    {
+      status: 'active',
+      publishedAt: at,
+      expiresAt: expiryFrom(at),
+      soldAt: null,
+      soldThreadId: null,
+    },
+    'Only a sold, expired or withdrawn listing can be relisted',
+  );
   await afterActivated(ctx, listing);
   return listing;
 }
@@ -233,7 +280,12 @@ export async function withdrawListing(actor: User, id: number) {
   const listing = await getOwnListing(actor, id);
   if (!['draft', 'active'].includes(listing.status))
     throw new AppError('CONFLICT', 'Only a draft or active listing can be withdrawn');
-  await listing.update({ status: 'withdrawn' });
+  await transition(
+    listing,
+    ['draft', 'active'],
+    { status: 'withdrawn' },
+    'Only a draft or active listing can be withdrawn',
+  );
   await refreshListing(id);
   return listing;
 }
@@ -256,7 +308,12 @@ export async function markSold(
       throw invalid({ threadId: 'Choose one of this listing’s conversations' });
     buyer = await User.findByPk(thread.buyerId);
   }
-  await listing.update({ status: 'sold', soldAt: at, soldThreadId: threadId ?? null });
+  await transition(
+    listing,
+    ['active'],
+    { status: 'sold', soldAt: at, soldThreadId: threadId ?? null },
+    'Only an active listing can be marked sold',
+  );
   await refreshListing(id);
   if (buyer)
     await enqueueEmail(

@@ -13,6 +13,28 @@ export interface OutgoingEmail {
   kind: string;
 }
 
+/** The `outbox_emails.subject` column's width, in characters. */
+export const SUBJECT_MAX = 200;
+
+/**
+ * A subject that fits the column: line breaks become spaces (a header is one line) and a long one is cut on a
+ * whole character (never inside a surrogate pair or a combining sequence) with an ellipsis.
+ */
+export function clipSubject(subject: string, max = SUBJECT_MAX): string {
+  const oneLine = subject.replace(/[\r\n\t]+/g, ' ').trim();
+  const chars = Array.from(
+    new Intl.Segmenter('en', { granularity: 'grapheme' }).segment(oneLine),
+    (g) => g.segment,
+  );
+  if (Array.from(oneLine).length <= max) return oneLine;
+  let out = '';
+  for (const g of chars) {
+    if (Array.from(out + g).length > max - 1) break;
+    out += g;
+  }
+  return `${out.trimEnd()}…`;
+}
+
 /** Stores a message in the outbox (inside the caller's transaction when given); the worker sends it. */
 export async function enqueueEmail(
   mail: OutgoingEmail,
@@ -21,7 +43,7 @@ export async function enqueueEmail(
   return OutboxEmail.create(
     {
       toAddress: mail.to,
-      subject: mail.subject,
+      subject: clipSubject(mail.subject),
       textBody: mail.text,
       htmlBody: mail.html ?? null,
       kind: mail.kind,
@@ -33,15 +55,19 @@ export async function enqueueEmail(
   );
 }
 
+const CONNECTION_TIMEOUT_MS = 3000;
+const GREETING_TIMEOUT_MS = 3000;
+const SOCKET_TIMEOUT_MS = 5000;
+
 export function createTransport(env: Env): Transporter {
   return nodemailer.createTransport({
     host: env.SMTP_HOST,
     port: env.SMTP_PORT,
     secure: false,
     ignoreTLS: true,
-    connectionTimeout: 3000,
-    greetingTimeout: 3000,
-    socketTimeout: 5000,
+    connectionTimeout: CONNECTION_TIMEOUT_MS,
+    greetingTimeout: GREETING_TIMEOUT_MS,
+    socketTimeout: SOCKET_TIMEOUT_MS,
   });
 }
 
@@ -49,7 +75,21 @@ export function createTransport(env: Env): Transporter {
 export const backoffMs = (attempts: number) =>
   Math.min(300_000, 2000 * 2 ** Math.max(0, attempts - 1));
 
-const LOCK_MS = 60_000;
+/**
+ * The longest one message may take: connecting, the greeting, then the SMTP exchange (MAIL, RCPT, DATA and the
+ * body, each step allowed the socket timeout of silence; three of them counted) and the row update afterwards.
+ */
+export const SEND_BUDGET_MS =
+  CONNECTION_TIMEOUT_MS + GREETING_TIMEOUT_MS + 3 * SOCKET_TIMEOUT_MS + 2000;
+/** Messages claimed per round. */
+export const ROUND_SIZE = 10;
+/**
+ * How long a claim lasts: longer than the worst-case round (every message taking its whole budget) plus a
+ * margin, so another API process never takes over a row this one may still send. A row is only ever sent
+ * while at least one full budget is left on its claim (see drainOutbox), which makes this hold even when a
+ * round runs slow; a process that dies mid-round leaves its rows to the others when the claim runs out.
+ */
+export const LEASE_MS = ROUND_SIZE * SEND_BUDGET_MS + 30_000;
 
 /** Kinds whose body carries a single-use sign-in-grade link (verification, password reset). */
 export const TOKEN_MAIL_KINDS: ReadonlySet<string> = new Set(['verify-email', 'password-reset']);
@@ -65,9 +105,10 @@ export async function drainOutbox(
   transport: Transporter,
   from: string,
   logger?: Logger,
-  limit = 25,
+  limit = ROUND_SIZE,
 ) {
   const now = new Date();
+  const leaseEnds = now.getTime() + LEASE_MS;
   const claimed = await sequelize.transaction(async (t) => {
     const rows = await OutboxEmail.findAll({
       where: {
@@ -83,7 +124,7 @@ export async function drainOutbox(
     });
     if (rows.length) {
       await OutboxEmail.update(
-        { status: 'sending', lockedUntil: new Date(now.getTime() + LOCK_MS) },
+        { status: 'sending', lockedUntil: new Date(leaseEnds) },
         { where: { id: rows.map((r) => r.id) }, transaction: t },
       );
     }
@@ -91,7 +132,16 @@ export async function drainOutbox(
   });
   let sent = 0;
   let failed = 0;
-  for (const row of claimed) {
+  for (const [i, row] of claimed.entries()) {
+    if (Date.now() + SEND_BUDGET_MS > leaseEnds) {
+      // Too little of the claim is left to send one more safely: hand the rest back unsent.
+      await OutboxEmail.update(
+        { status: 'pending', lockedUntil: null },
+        { where: { id: claimed.slice(i).map((r) => r.id), status: 'sending' } },
+      );
+      logger?.warn({ released: claimed.length - i }, 'outbox round ran long; rest released');
+      break;
+    }
     try {
       await transport.sendMail({
         from,

@@ -27,7 +27,18 @@ export function moderationRouter(ctx: mod.ModContext) {
     const counts = await approvedCommentCounts(q.posts.map((p) => p.id));
     res.json({
       data: {
-        posts: q.posts.map((p) => toPostSummaryDto(p, counts.get(p.id) ?? 0)),
+        posts: q.posts.map((p) => {
+          const summary = toPostSummaryDto(p, counts.get(p.id) ?? 0);
+          if (p.status !== 'approved' || !p.revision) return summary;
+          // An edit of a published post: the queue shows the edit, marked as such.
+          const text = p.revision.bodyText.replace(/\s+/g, ' ');
+          return {
+            ...summary,
+            title: p.revision.title,
+            excerpt: text.length > 220 ? `${text.slice(0, 220).trimEnd()}…` : text,
+            editOfPublished: true,
+          };
+        }),
         comments: q.comments.map(toQueueCommentDto),
         reports: await Promise.all(q.reports.map(toReportDto)),
       },

@@ -3,7 +3,15 @@ import type { z } from 'zod';
 import type { commentDecisionSchema, decisionSchema, postFlagsSchema } from '@app/shared';
 
 import { AppError, notFound } from '../../errors/app-error';
-import { AuditEvent, Comment, ListingReport, Post, Report, User } from '../../models';
+import {
+  AuditEvent,
+  Comment,
+  ListingReport,
+  Post,
+  Report,
+  User,
+  type PostRevision,
+} from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { notifyReply, postPath } from '../posts/comments.service';
 import { POST_INCLUDE } from '../posts/post-access';
@@ -40,7 +48,9 @@ const audit = (
 export async function queue() {
   const [posts, comments, reports] = await Promise.all([
     Post.findAll({
-      where: { status: 'pending' },
+      where: {
+        [Op.or]: [{ status: 'pending' }, { status: 'approved', revisionStatus: 'pending' }],
+      },
       include: POST_INCLUDE,
       order: [['updatedAt', 'ASC']],
     }),
@@ -67,7 +77,11 @@ const LISTING_MODERATION_ACTIONS = ['listing.hide', 'listing.unhide', 'listing-r
 /** How much waits for a moderator (for the navigation badge), listing reports included. */
 export async function counts() {
   const [pendingPosts, pendingComments, openReports, openListingReports] = await Promise.all([
-    Post.count({ where: { status: 'pending' } }),
+    Post.count({
+      where: {
+        [Op.or]: [{ status: 'pending' }, { status: 'approved', revisionStatus: 'pending' }],
+      },
+    }),
     Comment.count({ where: { status: 'pending' } }),
     Report.count({ where: { status: 'open' } }),
     ListingReport.count({ where: { status: 'open' } }),
@@ -98,6 +112,8 @@ const POST_OUTCOME = {
 export async function decidePost(ctx: ModContext, actor: User, postId: number, d: Decision) {
   const post = await Post.findByPk(postId);
   if (!post) throw notFound('Post');
+  if (post.status === 'approved' && post.revision && post.revisionStatus === 'pending')
+    return decideRevision(ctx, actor, post, post.revision, d);
   if (post.status !== 'pending')
     throw new AppError('CONFLICT', `This post is ${post.status}, not pending`);
   const o = POST_OUTCOME[d.action];
@@ -131,6 +147,74 @@ export async function decidePost(ctx: ModContext, actor: User, postId: number, d
       lines.push(
         `A moderator says: ${d.reason}`,
         'Your text is kept: edit it and submit it again.',
+      );
+    await tellAuthor(
+      ctx.publicUrl,
+      { userId: post.authorId, subject: o.subject, lines, path: postPath(post.id) },
+      t,
+    );
+  });
+  await indexPost(post.id);
+  return post;
+}
+
+const REVISION_OUTCOME = {
+  approve: { subject: 'Your edit is published', action: 'post.revision-approve' },
+  reject: { subject: 'Your edit was not approved', action: 'post.revision-reject' },
+  'request-changes': {
+    subject: 'Your edit needs changes',
+    action: 'post.revision-request-changes',
+  },
+} as const;
+
+/**
+ * Decides an edit of a published post: approval publishes the revision (it becomes the approved version);
+ * rejection or a request for changes keeps the published version and the author's revision, with the note.
+ */
+async function decideRevision(
+  ctx: ModContext,
+  actor: User,
+  post: Post,
+  revision: PostRevision,
+  d: Decision,
+) {
+  const o = REVISION_OUTCOME[d.action];
+  await Post.sequelize?.transaction(async (t) => {
+    await post.update(
+      d.action === 'approve'
+        ? {
+            ...revision,
+            approvedText: revision.bodyText,
+            approvedTitle: revision.title,
+            revision: null,
+            revisionStatus: null,
+            moderationNote: null,
+          }
+        : {
+            revisionStatus: d.action === 'reject' ? 'rejected' : 'changes-requested',
+            moderationNote: d.reason,
+          },
+      { transaction: t },
+    );
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'moderation',
+        action: o.action,
+        subjectType: 'post',
+        subjectId: String(post.id),
+        reason: d.reason || null,
+        details: { title: revision.title },
+      },
+      t,
+    );
+    const lines = [`“${revision.title}”`];
+    if (d.action === 'approve')
+      lines.push('A moderator approved your edit and it is now published.');
+    else
+      lines.push(
+        `A moderator says: ${d.reason}`,
+        'Readers still see the published version. Your edit is kept: change it and send it again.',
       );
     await tellAuthor(
       ctx.publicUrl,

@@ -62,6 +62,7 @@ beforeAll(async () => {
     STRIPE_PROTOCOL: 'http',
     STRIPE_SECRET_KEY: KEY,
     STRIPE_WEBHOOK_SECRET: SECRET,
+    STRIPE_TIMEOUT_MS: '700',
   });
   handler = built.app;
 });
@@ -73,8 +74,16 @@ afterAll(async () => {
   await rm(dataDir, { recursive: true, force: true });
 });
 
+const setFaults = (faults: { refundAnswerDelayMs: number }) =>
+  fetch(`${fake.url}/__fake/faults`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify(faults),
+  });
+
 beforeEach(async () => {
   refuseWebhooks = false;
+  await setFaults({ refundAnswerDelayMs: 0 });
   await resetDb();
 });
 
@@ -363,5 +372,150 @@ describe('webhook', () => {
     ).toBe(1);
     // Nothing is deleted: the payment stays on the ledger beside its refund.
     expect(await Payment.count({ where: { id: payment.id, status: 'succeeded' } })).toBe(1);
+  });
+});
+
+describe('double payment for one period', () => {
+  it('reuses the member’s open checkout for the same plan and period instead of opening another', async () => {
+    const { user, c } = await owingMember();
+    const first = await c.post('/api/dues/checkout', {});
+    const again = await c.post('/api/dues/checkout', {});
+    expect(first.status).toBe(201);
+    expect(again.status).toBe(201);
+    expect(again.body.data.sessionId).toBe(first.body.data.sessionId);
+    const racing = await Promise.all([
+      c.post('/api/dues/checkout', {}),
+      c.post('/api/dues/checkout', {}),
+      c.post('/api/dues/checkout', {}),
+    ]);
+    expect(new Set(racing.map((r) => r.body.data.sessionId as string))).toEqual(
+      new Set([first.body.data.sessionId as string]),
+    );
+    expect(await Payment.count({ where: { userId: user.id } })).toBe(1);
+  });
+
+  it('opens a fresh checkout when the open one expired at the provider', async () => {
+    const { user, c } = await owingMember();
+    const first = (await c.post('/api/dues/checkout', {})).body.data as { sessionId: string };
+    const stripe = new Stripe(KEY, { host: '127.0.0.1', port: fake.port, protocol: 'http' });
+    await stripe.checkout.sessions.expire(first.sessionId);
+    const second = await c.post('/api/dues/checkout', {});
+    expect(second.status).toBe(201);
+    expect(second.body.data.sessionId).not.toBe(first.sessionId);
+    expect(await Payment.count({ where: { userId: user.id, status: 'pending' } })).toBe(1);
+  });
+
+  it('holds a second payment for an already-paid period for the treasurer, crediting it once', async () => {
+    const { user, c } = await owingMember();
+    // Two pending checkouts for one period (as a race before this rule, or another device, could leave them).
+    const first = (await c.post('/api/dues/checkout', {})).body.data as {
+      sessionId: string;
+      url: string;
+    };
+    await Payment.update({ status: 'expired' }, { where: { providerSessionId: first.sessionId } });
+    const second = (await c.post('/api/dues/checkout', {})).body.data as {
+      sessionId: string;
+      url: string;
+    };
+    await Payment.update({ status: 'pending' }, { where: { providerSessionId: first.sessionId } });
+    expect(second.sessionId).not.toBe(first.sessionId);
+
+    await payOnHostedPage(first.url, '4242 4242 4242 4242');
+    const credited = await waitFor(async () => {
+      const p = await Payment.findOne({ where: { providerSessionId: first.sessionId } });
+      return p?.status === 'succeeded' ? p : null;
+    });
+    const paidThrough = (await Membership.findOne({ where: { userId: user.id } }))?.paidThrough;
+    expect(paidThrough).toBe(credited.coversTo);
+
+    await payOnHostedPage(second.url, '4242 4242 4242 4242');
+    const held = await waitFor(async () => {
+      const p = await Payment.findOne({ where: { providerSessionId: second.sessionId } });
+      return p?.status === 'held' ? p : null;
+    });
+    expect(held.heldReason).toMatch(/already paid/);
+    expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBe(
+      paidThrough,
+    );
+    expect(await OutboxEmail.count({ where: { kind: 'dues-receipt' } })).toBe(1);
+    const status = (await c.get(`/api/dues/checkout/${second.sessionId}`)).body.data;
+    expect(status.status).toBe('held');
+    expect(status.message).toMatch(/already paid/);
+
+    const { c: tc } = await treasurer();
+    const listed = (await tc.get('/api/treasury/payments?status=held')).body.data;
+    expect(listed.map((p: { id: number; heldReason: string }) => [p.id, p.heldReason])).toEqual([
+      [held.id, held.heldReason],
+    ]);
+  });
+
+  it('holds a card payment for a period the treasurer already recorded as paid', async () => {
+    const { user, c } = await owingMember();
+    const open = (await c.post('/api/dues/checkout', {})).body.data as {
+      url: string;
+      sessionId: string;
+    };
+    const pending = await Payment.findOne({ where: { providerSessionId: open.sessionId } });
+    await Membership.update(
+      { paidThrough: pending?.coversTo ?? null },
+      { where: { userId: user.id } },
+    );
+    await payOnHostedPage(open.url, '4242 4242 4242 4242');
+    const held = await waitFor(async () => {
+      const p = await Payment.findByPk(pending?.id ?? 0);
+      return p?.status === 'held' ? p : null;
+    });
+    expect(held.heldReason).toMatch(/already paid/);
+  });
+});
+
+describe('a refund that times out at the provider', () => {
+  it('stays pending, is settled by the provider’s event, and is never refunded twice', async () => {
+    const { user, c } = await owingMember();
+    const { sessionId, quote } = await checkoutAndPay(c);
+    const payment = await waitFor(async () => {
+      const p = await Payment.findOne({ where: { providerSessionId: sessionId } });
+      return p?.status === 'succeeded' ? p : null;
+    });
+    const { c: tc } = await treasurer();
+    // The provider makes the refund but its answer comes too late, and its event does not get through yet.
+    expect((await setFaults({ refundAnswerDelayMs: 5000 })).status).toBe(200);
+    refuseWebhooks = true;
+    const res = await tc.post(`/api/treasury/payments/${payment.id}/refunds`, {
+      amountMinor: quote.amountMinor,
+      reason: 'Leaving the club',
+    });
+    expect(res.status).toBe(201);
+    expect(res.body.data.status).toBe('pending');
+    const refundId = res.body.data.id as number;
+    expect((await Refund.findByPk(refundId))?.status).toBe('pending');
+    expect(await AuditEvent.count({ where: { action: 'refund.provider-unanswered' } })).toBe(1);
+
+    // The treasurer tries again: the pending refund still counts, so nothing more can go back.
+    const again = await tc.post(`/api/treasury/payments/${payment.id}/refunds`, {
+      amountMinor: quote.amountMinor,
+      reason: 'Leaving the club',
+    });
+    expect(again.status).toBe(400);
+    expect(again.body.error.fields.amountMinor).toMatch(/left to refund/);
+
+    // The provider made exactly one refund, whatever the SDK retried.
+    const created = await fetch(`${fake.url}/__fake/events?type=refund.created`);
+    const events = ((await created.json()) as { data: Stripe.Event[] }).data;
+    expect(events).toHaveLength(1);
+
+    // Its event arrives: the refund settles and the cover goes back.
+    refuseWebhooks = false;
+    await setFaults({ refundAnswerDelayMs: 0 });
+    await fetch(`${fake.url}/__fake/events/${events[0]?.id ?? ''}/resend`, { method: 'POST' });
+    const done = await waitFor(async () => {
+      const r = await Refund.findByPk(refundId);
+      return r?.status === 'succeeded' ? r : null;
+    });
+    expect(done.providerRefundId).toMatch(/^re_/);
+    expect(await Refund.count({ where: { paymentId: payment.id } })).toBe(1);
+    expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBe(
+      '2020-03-31',
+    );
   });
 });

@@ -3,6 +3,7 @@ import type Stripe from 'stripe';
 import { Payment, ProviderEvent, Refund } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import {
+  alreadyPaidReason,
   creditMembership,
   queueReceipt,
   reverseCoverIfFullyRefunded,
@@ -159,6 +160,21 @@ async function sessionCompleted(
     reasons.push(`amount ${amount} does not match the ${payment.expectedMinor ?? 0} expected`);
   if (currency !== payment.currency)
     reasons.push(`currency ${currency} does not match the plan's ${payment.currency}`);
+  const alreadyPaid = await alreadyPaidReason(payment, t);
+  if (alreadyPaid) {
+    await payment.update(
+      {
+        amountMinor: amount,
+        currency: currency.slice(0, 3) || payment.currency,
+        providerPaymentIntentId: intent,
+        paidAt: new Date(),
+        status: 'held',
+        heldReason: alreadyPaid.slice(0, 300),
+      },
+      { transaction: t },
+    );
+    return paymentSubject(payment, 'held', { reasons: [alreadyPaid] });
+  }
   const base = {
     amountMinor: amount,
     currency: currency.slice(0, 3) || payment.currency,

@@ -34,6 +34,20 @@ export async function toPostDetailDto(post: Post, viewer: User | null): Promise<
     ...toPostSummaryDto(post, approvedCount),
     body: post.bodyJson,
     bodyHtml: post.bodyHtml,
+    revision:
+      (isAuthor || mod) && post.revision && post.revisionStatus
+        ? {
+            status: post.revisionStatus,
+            kind: post.revision.kind,
+            title: post.revision.title,
+            topicId: post.revision.topicId,
+            boatId: post.revision.boatId,
+            visibility: post.revision.visibility,
+            body: post.revision.bodyJson,
+            bodyHtml: post.revision.bodyHtml,
+            setup: post.revision.setup,
+          }
+        : null,
     moderationNote: isAuthor || mod ? post.moderationNote : null,
     boat: boat ? { id: boat.id, name: boat.name, hull: boat.hull, loaM: boat.loaM } : null,
     setupCard,

@@ -2,7 +2,7 @@ import type { z } from 'zod';
 import { Op } from 'sequelize';
 import type { createPostSchema, postListQuerySchema, postPatchSchema } from '@app/shared';
 import { AppError, invalid, notFound } from '../../errors/app-error';
-import { Boat, Post, Topic, Vote, type User } from '../../models';
+import { Boat, Post, Topic, Vote, type PostRevision, type User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { getSetting } from '../club/club.service';
 import { indexPost } from '../search/post-index';
@@ -63,6 +63,7 @@ export async function createPost(actor: User, input: CreateInput): Promise<Post>
     bodyHtml: html,
     bodyText: text,
     approvedText: publishNow ? text : null,
+    approvedTitle: publishNow ? input.title : null,
     status: publishNow ? 'approved' : input.submit ? 'pending' : 'draft',
     visibility: input.visibility,
     setup: input.setup ?? null,
@@ -77,35 +78,83 @@ export async function createPost(actor: User, input: CreateInput): Promise<Post>
   return post;
 }
 
+const LINK = /<a\s[^>]*?href="([^"]*)"/g;
+const IMAGE = /<img\s[^>]*?src="([^"]*)"/g;
+const all = (re: RegExp, html: string) => [...html.matchAll(re)].map((m) => m[1] ?? '').sort();
+const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
+
+/** The reader-facing fields of a post as it stands (the published version for an approved post). */
+const liveOf = (post: Post): PostRevision => ({
+  kind: post.kind,
+  title: post.title,
+  topicId: post.topicId,
+  boatId: post.boatId,
+  visibility: post.visibility,
+  setup: post.setup,
+  bodyJson: post.bodyJson,
+  bodyHtml: post.bodyHtml,
+  bodyText: post.bodyText,
+});
+
 /**
- * Saves the author's edit (autosave uses this too). An approved post returns to pending only when the edit
- * changes more than the club's `substantialEditRatio` of its words; a moderator's edit stays published and is
- * logged. Someone else's post reads as not found.
+ * Whether `next` differs from the published post only by a small text edit: the same kind, topic, boat,
+ * visibility and setup card, the same links and images, and title plus text within the club's
+ * `substantialEditRatio` of the version a moderator approved (not of the latest small edit, so small edits
+ * cannot add up to a rewrite).
+ */
+async function isSmallTextEdit(post: Post, next: PostRevision): Promise<boolean> {
+  const live = liveOf(post);
+  const sameFrame =
+    next.kind === live.kind &&
+    next.topicId === live.topicId &&
+    next.boatId === live.boatId &&
+    next.visibility === live.visibility &&
+    same(next.setup, live.setup) &&
+    same(all(LINK, next.bodyHtml), all(LINK, live.bodyHtml)) &&
+    same(all(IMAGE, next.bodyHtml), all(IMAGE, live.bodyHtml));
+  if (!sameFrame) return false;
+  const before = `${post.approvedTitle ?? post.title}\n${post.approvedText ?? post.bodyText}`;
+  const after = `${next.title}\n${next.bodyText}`;
+  return editRatio(before, after) <= (await getSetting('substantialEditRatio'));
+}
+
+/**
+ * Saves the author's edit (autosave uses this too). Drafts and posts not yet published take the edit as it is.
+ * For a published post, a small text edit is published at once; anything more (see isSmallTextEdit) becomes a
+ * revision that waits for a moderator while readers keep seeing the published version. A moderator's own edit
+ * is published at once and logged. Someone else's post reads as not found.
  */
 export async function updatePost(actor: User, postId: number, input: PatchInput): Promise<Post> {
   const post = await loadOwnPost(actor, postId);
-  await checkRefs(actor, input, post.topicId);
-  const changes: Partial<Post> = {};
-  if (input.kind !== undefined) changes.kind = input.kind;
-  if (input.title !== undefined) changes.title = input.title;
-  if (input.topicId !== undefined) changes.topicId = input.topicId;
-  if (input.visibility !== undefined) changes.visibility = input.visibility;
-  if (input.boatId !== undefined) changes.boatId = input.boatId;
-  if (input.setup !== undefined) changes.setup = input.setup;
+  await checkRefs(actor, input, post.revision?.topicId ?? post.topicId);
+  const base: PostRevision = post.revision ?? liveOf(post);
+  const next: PostRevision = { ...base };
+  if (input.kind !== undefined) next.kind = input.kind;
+  if (input.title !== undefined) next.title = input.title;
+  if (input.topicId !== undefined) next.topicId = input.topicId;
+  if (input.visibility !== undefined) next.visibility = input.visibility;
+  if (input.boatId !== undefined) next.boatId = input.boatId;
+  if (input.setup !== undefined) next.setup = input.setup;
   if (input.body !== undefined) {
     const { html, text } = renderBody(input.body);
-    Object.assign(changes, { bodyJson: input.body, bodyHtml: html, bodyText: text });
+    Object.assign(next, { bodyJson: input.body, bodyHtml: html, bodyText: text });
   }
-  if (post.status === 'approved') {
-    const before = `${post.title}\n${post.approvedText ?? post.bodyText}`;
-    const after = `${changes.title ?? post.title}\n${changes.bodyText ?? post.bodyText}`;
-    const substantial = editRatio(before, after) > (await getSetting('substantialEditRatio'));
-    if (substantial && isModerator(actor)) {
-      changes.approvedText = changes.bodyText ?? post.bodyText;
-      await selfPublishAudit(actor, post, 'post.self-edit');
-    } else if (substantial) changes.status = 'pending';
+  if (post.status !== 'approved') {
+    await post.update(next);
+  } else if (isModerator(actor)) {
+    await post.update({
+      ...next,
+      approvedText: next.bodyText,
+      approvedTitle: next.title,
+      revision: null,
+      revisionStatus: null,
+    });
+    await selfPublishAudit(actor, post, 'post.self-edit');
+  } else if (await isSmallTextEdit(post, next)) {
+    await post.update({ ...next, revision: null, revisionStatus: null });
+  } else {
+    await post.update({ revision: next, revisionStatus: 'pending' });
   }
-  await post.update(changes);
   await indexPost(post.id);
   return post;
 }
@@ -113,12 +162,20 @@ export async function updatePost(actor: User, postId: number, input: PatchInput)
 /** Sends a draft, rejected or sent-back post to moderation (a moderator's own post publishes at once). */
 export async function submitPost(actor: User, postId: number): Promise<Post> {
   const post = await loadOwnPost(actor, postId);
+  // A published post: its edits are already where they belong (published, or a revision in the queue); a
+  // revision a moderator sent back goes to the queue again.
+  if (post.status === 'approved') {
+    if (post.revision && post.revisionStatus !== 'pending')
+      await post.update({ revisionStatus: 'pending' });
+    return post;
+  }
   if (!['draft', 'rejected', 'changes-requested'].includes(post.status))
     throw new AppError('CONFLICT', `This post is ${post.status}; there is nothing to submit`);
   if (isModerator(actor)) {
     await post.update({
       status: 'approved',
       approvedText: post.bodyText,
+      approvedTitle: post.title,
       publishedAt: post.publishedAt ?? new Date(),
       moderationNote: null,
     });

@@ -124,7 +124,7 @@ describe('posts through moderation', () => {
     expect(log?.actorId).toBe(user.id);
   });
 
-  it('an approved post edited a little stays approved; a substantial edit returns it to pending', async () => {
+  it('an approved post edited a little stays approved; a substantial edit waits for a moderator', async () => {
     await setSetting('substantialEditRatio', 0.3);
     const { c } = await signedIn();
     const words = 'one two three four five six seven eight nine ten';
@@ -135,10 +135,16 @@ describe('posts through moderation', () => {
       body: docOf('Ten words', `${words} eleven`),
     });
     expect(small.body.data.status).toBe('approved');
+    expect(small.body.data.revision).toBeNull();
     const big = await c.patch(`/api/posts/${id}`, {
       body: docOf('Ten words', 'a completely different text about storm lines and chafe gear'),
     });
-    expect(big.body.data.status).toBe('pending');
+    // Readers keep the approved text; the edit is a revision in the queue.
+    expect(big.body.data.status).toBe('approved');
+    expect(big.body.data.bodyHtml).toContain('eleven');
+    expect(big.body.data.revision).toMatchObject({ status: 'pending' });
+    expect(big.body.data.revision.bodyHtml).toContain('storm lines');
+    expect((await mod.get('/api/moderation/count')).body.data.pendingPosts).toBe(1);
   });
 
   it('drafts autosave, are private, and another member cannot edit them', async () => {

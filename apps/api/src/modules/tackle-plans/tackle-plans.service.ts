@@ -2,12 +2,15 @@ import type { z } from 'zod';
 import { CalcInputError } from '@app/calc';
 import type { tacklePlanInputSchema, tacklePlanPatchSchema } from '@app/shared';
 import { AppError, notFound } from '../../errors/app-error';
-import { TacklePlan, type Boat, type User } from '../../models';
+import { withParentLocked } from '../../lib/serialize';
+import { Boat, TacklePlan, type User } from '../../models';
 import { getOwnBoat } from '../boats/boats.service';
 import { computePlan } from './plan-compute';
 
 type PlanInput = z.output<typeof tacklePlanInputSchema>;
 type PlanPatch = z.output<typeof tacklePlanPatchSchema>;
+
+export const MAX_PLANS_PER_BOAT = 30;
 
 /** Runs the plan through @app/calc; an input the engineering rejects (RangeError) becomes a 400 naming the field. */
 export function validatePlan(
@@ -45,12 +48,13 @@ export async function getOwnPlan(actor: User, planId: number) {
 export async function createPlan(actor: User, input: PlanInput) {
   const boat = await getOwnBoat(actor, input.boatId);
   validatePlan(boat, input);
-  if ((await TacklePlan.count({ where: { boatId: boat.id } })) >= 30)
-    throw new AppError('CONFLICT', 'A boat can keep at most 30 plans');
-  const plan = await TacklePlan.create({
-    ...input,
-    bottom: input.bottom ?? null,
-    ownerId: actor.id,
+  const plan = await withParentLocked(Boat, boat.id, async (transaction) => {
+    if ((await TacklePlan.count({ where: { boatId: boat.id }, transaction })) >= MAX_PLANS_PER_BOAT)
+      throw new AppError('CONFLICT', `A boat can keep at most ${MAX_PLANS_PER_BOAT} plans`);
+    return TacklePlan.create(
+      { ...input, bottom: input.bottom ?? null, ownerId: actor.id },
+      { transaction },
+    );
   });
   return { plan, boat };
 }

@@ -77,11 +77,28 @@ export async function getOwnThread(actor: User, id: number): Promise<ListingThre
   return thread;
 }
 
-/** Adds a reply to a thread the actor takes part in and e-mails the other party. */
+/**
+ * Adds a reply to a thread the actor takes part in and e-mails the other party. The rules for opening a
+ * conversation hold for every reply too: the listing must be on the exchange (active and not hidden, or sold
+ * through this very conversation, for the hand-over), and under the club's paid-up policy the writer must be
+ * paid up.
+ */
 export async function reply(publicUrl: string, actor: User, id: number, body: string) {
   const thread = await getOwnThread(actor, id);
   const listing = thread.listing;
   if (!listing) throw notFound('Listing');
+  const open =
+    listing.hiddenAt === null &&
+    (listing.status === 'active' ||
+      (listing.status === 'sold' && listing.soldThreadId === thread.id));
+  if (!open)
+    throw new AppError(
+      'CONFLICT',
+      listing.hiddenAt !== null
+        ? 'A moderator has taken this listing off the exchange, so the conversation is closed'
+        : `This listing is ${listing.status}, so the conversation is closed`,
+    );
+  await assertMayTrade(actor, 'message');
   const now = new Date();
   const message = await ListingMessage.create({ threadId: id, senderId: actor.id, body });
   await thread.update({

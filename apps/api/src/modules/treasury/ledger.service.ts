@@ -158,6 +158,23 @@ export async function recordOfflinePayment(
   });
 }
 
+export const refundIdempotencyKey = (refundId: number) => `rodewise-refund-${refundId}`;
+
+/**
+ * True when the provider's answer never arrived (a timeout, a dropped connection, a 5xx from its side): the
+ * request may or may not have been carried out, so nothing may be concluded from it.
+ */
+function unanswered(err: unknown): boolean {
+  if (err instanceof Stripe.errors.StripeConnectionError) {
+    // A refused connection never reached the provider: that refund was certainly not made.
+    const code = (err.detail as { code?: unknown } | undefined)?.code;
+    return code !== 'ECONNREFUSED';
+  }
+  if (err instanceof Stripe.errors.StripeAPIError) return true;
+  const status = (err as { statusCode?: unknown } | null)?.statusCode;
+  return typeof status === 'number' && status >= 500;
+}
+
 /**
  * Refunds part or all of a payment. Card refunds go through the provider and complete when its webhook says so;
  * offline refunds (money handed back by the treasurer) complete at once. Never more than what is left to refund.
@@ -215,17 +232,34 @@ export async function refundPayment(
   });
   if (refund.offline || !refund.intent) return refund.row;
   try {
-    const r = await stripeClient(deps.env).refunds.create({
-      payment_intent: refund.intent,
-      amount: input.amountMinor,
-      metadata: { refundId: String(refund.row.id), paymentId: String(paymentId) },
-    });
+    const r = await stripeClient(deps.env).refunds.create(
+      {
+        payment_intent: refund.intent,
+        amount: input.amountMinor,
+        metadata: { refundId: String(refund.row.id), paymentId: String(paymentId) },
+      },
+      // One key per refund row: a retry (the SDK's or ours) can never refund the money twice.
+      { idempotencyKey: refundIdempotencyKey(refund.row.id) },
+    );
     // The webhook may already have matched the refund by its metadata; only fill the id when still empty.
     await Refund.update(
       { providerRefundId: r.id },
       { where: { id: refund.row.id, providerRefundId: null } },
     );
   } catch (err) {
+    if (unanswered(err)) {
+      // The provider may have made the refund and only its answer was lost. The refund stays pending (and keeps
+      // its amount out of "left to refund"); the provider's refund event settles it either way.
+      await recordAudit({
+        actorId: actor.id,
+        area: 'treasury',
+        action: 'refund.provider-unanswered',
+        subjectType: 'refund',
+        subjectId: String(refund.row.id),
+        details: { message: err instanceof Error ? err.message : 'unknown error' },
+      });
+      return (await Refund.findByPk(refund.row.id)) ?? refund.row;
+    }
     await refund.row.update({ status: 'failed', completedAt: new Date() });
     const refused = err instanceof Stripe.errors.StripeInvalidRequestError;
     await recordAudit({
@@ -252,7 +286,7 @@ export async function refundPayment(
       );
     throw new AppError(
       'UPSTREAM_UNAVAILABLE',
-      'The payment provider refused or did not answer the refund; nothing was refunded. Try again later.',
+      'The payment provider refused the refund; nothing was refunded. Try again later.',
     );
   }
   return (await Refund.findByPk(refund.row.id)) ?? refund.row;

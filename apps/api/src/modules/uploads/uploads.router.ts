@@ -6,13 +6,36 @@ import { MAX_IMAGE_BYTES } from './image';
 import { getStorage, isSafeKey } from './storage';
 import { storeImage } from './uploads.service';
 
+/**
+ * A multipart body the parser cannot read (no boundary, a broken part header, a body cut off before its closing
+ * boundary) is the client's fault: 400 naming the upload field, never a 500.
+ */
+const readable =
+  (parse: RequestHandler, field: string): RequestHandler =>
+  (req, res, next) => {
+    parse(req, res, (err?: unknown) => {
+      if (!err || err instanceof multer.MulterError || err instanceof AppError) {
+        next(err);
+        return;
+      }
+      const message =
+        'The upload arrived incomplete or malformed. Choose the file again and resend it.';
+      next(new AppError('VALIDATION_FAILED', message, { [field]: message }));
+    });
+  };
+
 /** multer in memory with the image limits; the bytes are verified by content afterwards. */
-export const imageUpload = (maxFiles: number) =>
-  multer({
+export const imageUpload = (maxFiles: number) => {
+  const m = multer({
     storage: multer.memoryStorage(),
     // One file over the limit is let through to multer so it reports LIMIT_UNEXPECTED_FILE with the field name.
     limits: { fileSize: MAX_IMAGE_BYTES, files: maxFiles + 1, fields: 40, parts: maxFiles + 41 },
   });
+  return {
+    single: (field: string) => readable(m.single(field), field),
+    array: (field: string, max: number) => readable(m.array(field, max), field),
+  };
+};
 
 /** `POST /api/uploads/images` (signed in, multipart field `image`) → `{ data: { url, thumbUrl, width, height } }`. */
 export function uploadsRouter() {

@@ -47,6 +47,20 @@ export function PostRoute() {
           <p>{p.moderationNote}</p>
         </Alert>
       )}
+      {p.revision && (
+        <Alert
+          tone={p.revision.status === 'pending' ? 'info' : 'warning'}
+          title={
+            p.revision.status === 'pending'
+              ? 'An edit of this post waits for a moderator'
+              : 'An edit of this post was sent back'
+          }
+        >
+          <p>
+            Readers see the published version below until the edit “{p.revision.title}” is approved.
+          </p>
+        </Alert>
+      )}
       {p.viewer.canModerate && <PostModerationBar post={p} />}
       {p.boat && (
         <p className="text-sm text-ink-700">
@@ -59,6 +73,22 @@ export function PostRoute() {
         dangerouslySetInnerHTML={{ __html: p.bodyHtml }}
       />
       {p.setupCard && <SetupCard card={p.setupCard} units={user?.unitSystem ?? 'metric'} />}
+      {p.revision && p.viewer.canModerate && (
+        <section aria-labelledby="revision-heading" className="border-l-4 border-ink-300 pl-4">
+          <h2 id="revision-heading" className="text-lg font-bold">
+            The edit waiting for review: {p.revision.title}
+          </h2>
+          <p className="text-sm text-ink-600">
+            {p.revision.visibility === 'members' ? 'Members only' : 'Public'}
+            {p.revision.setup ? ' · with a setup block' : ''}
+          </p>
+          {/* sanitized on the server like bodyHtml above */}
+          <div
+            className={`max-w-prose ${POST_BODY_CLASSES}`}
+            dangerouslySetInnerHTML={{ __html: p.revision.bodyHtml }}
+          />
+        </section>
+      )}
       <div className="flex flex-wrap items-center gap-3">
         {user && user.id !== p.author.id && p.status === 'approved' && (
           <Button

@@ -31,20 +31,32 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
   // A retired topic is offered only to the post already filed under it.
   const topics = allTopics.filter((t) => !t.retired || t.id === post?.topic?.id);
   const save = useSavePost();
+  // An edit waiting for a moderator is what the author goes on editing; readers still see the published post.
+  const rev = post?.revision ?? null;
+  const published = post?.status === 'approved';
+  const [revisionStatus, setRevisionStatus] = useState(rev?.status ?? null);
   const [postId, setPostId] = useState<number | null>(post?.id ?? null);
-  const [title, setTitle] = useState(post?.title ?? '');
-  const [kind, setKind] = useState<'article' | 'question'>(post?.kind ?? 'article');
-  const [topicId, setTopicId] = useState<number>(post?.topic?.id ?? topics[0]?.id ?? 0);
-  const [visibility, setVisibility] = useState<'public' | 'members'>(post?.visibility ?? 'public');
-  const [boatId, setBoatId] = useState<number | null>(post?.boat?.id ?? null);
+  const [title, setTitle] = useState(rev?.title ?? post?.title ?? '');
+  const [kind, setKind] = useState<'article' | 'question'>(rev?.kind ?? post?.kind ?? 'article');
+  const [topicId, setTopicId] = useState<number>(
+    rev?.topicId ?? post?.topic?.id ?? topics[0]?.id ?? 0,
+  );
+  const [visibility, setVisibility] = useState<'public' | 'members'>(
+    rev?.visibility ?? post?.visibility ?? 'public',
+  );
+  const [boatId, setBoatId] = useState<number | null>(rev ? rev.boatId : (post?.boat?.id ?? null));
   const [body, setBody] = useState<JSONContent | null>(
-    (post?.body as JSONContent | undefined) ?? null,
+    ((rev?.body ?? post?.body) as JSONContent | undefined) ?? null,
   );
   const [hasSetup, setHasSetup] = useState(
-    post?.setupCard !== null && post?.setupCard !== undefined,
+    rev ? rev.setup !== null : post?.setupCard !== null && post?.setupCard !== undefined,
   );
   const [setup, setSetup] = useState<SetupValues>(
-    post?.setupCard ? fromSetup(post.setupCard.setup) : EMPTY_SETUP,
+    rev?.setup
+      ? fromSetup(rev.setup)
+      : post?.setupCard
+        ? fromSetup(post.setupCard.setup)
+        : EMPTY_SETUP,
   );
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [savedAt, setSavedAt] = useState<Date | null>(null);
@@ -76,6 +88,7 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
         submit,
       });
       setPostId(saved.id);
+      setRevisionStatus(saved.revision?.status ?? null);
       setSavedAt(new Date());
       setErrors({});
       dirty.current = false;
@@ -119,6 +132,21 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
         <Alert tone="warning" title="A moderator asked for changes">
           <p>{post.moderationNote}</p>
         </Alert>
+      )}
+      {published && revisionStatus === 'pending' && (
+        <Alert tone="info" title="Your edit goes back to moderation">
+          <p>
+            These changes wait for a moderator. Readers see the published version until the edit is
+            approved.
+          </p>
+        </Alert>
+      )}
+      {published && !revisionStatus && (
+        <p className="text-sm text-ink-600">
+          This post is published. A small correction to its text is published straight away; new
+          links or images, a setup block, a different topic, boat or visibility, or a larger rewrite
+          go back to a moderator first, and readers keep the published version meanwhile.
+        </p>
       )}
       <fieldset className="flex flex-wrap gap-4">
         <legend className="sr-only">Kind of post</legend>
@@ -214,7 +242,7 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
       )}
       <div className="flex flex-wrap items-center gap-3">
         <Button type="submit" isPending={save.isPending}>
-          Send to the moderators
+          {published ? 'Save the edit' : 'Send to the moderators'}
         </Button>
         <Button variant="secondary" onClick={() => void persist(false)} isPending={save.isPending}>
           Save draft

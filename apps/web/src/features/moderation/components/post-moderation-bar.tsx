@@ -48,7 +48,7 @@ export function PostModerationBar({ post }: { post: PostDetailDto }) {
       className="flex flex-wrap items-center gap-2 rounded-md border border-dashed border-ink-600 p-2"
     >
       <span className="text-sm font-bold">Moderator:</span>
-      {post.status === 'pending' && (
+      {(post.status === 'pending' || post.revision?.status === 'pending') && (
         <>
           <Button size="sm" onClick={() => void decide('approve')} isPending={moderate.isPending}>
             Approve
