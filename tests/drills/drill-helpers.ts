@@ -20,8 +20,9 @@ export function sqlNumber(cfg: DbConfig, db: string, query: string): number {
 const sidOf = (res: Response) =>
   res.headers
     .getSetCookie()
-    .find((c) => c.startsWith('rw.sid='))
-    ?.split(';')[0];
+    .filter((c) => c.startsWith('rw.sid=') || c.startsWith('rw.vcsrf='))
+    .map((c) => c.split(';')[0])
+    .join('; ');
 
 export interface DrillSession {
   cookie: string;
@@ -41,7 +42,7 @@ export async function signIn(base: string, email: string, password: string): Pro
     body: JSON.stringify({ email, password }),
   });
   if (login.status !== 200) throw new Error(`sign-in as ${email} answered ${login.status}`);
-  cookie = sidOf(login) ?? cookie;
+  cookie = sidOf(login) || cookie;
   csrf = ((await login.json()) as { data: { csrfToken: string } }).data.csrfToken;
   const session: DrillSession = {
     cookie,
