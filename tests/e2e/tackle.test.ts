@@ -146,6 +146,23 @@ describe('a member sizes, checks, saves and prints a plan', () => {
       1,
     );
     await screenshot(page, 'plan-card');
+
+    // The calculators start from the saved boat: pick it once at the top and every card follows.
+    await page.emulateMedia({ media: 'screen' });
+    await page.goto(`${baseUrl()}/calculators`);
+    const block = page.getByRole('region', { name: 'Your boat and conditions' });
+    await block.getByLabel('Start from one of your boats').selectOption({ label: boatName });
+    await block.getByLabel('Design wind').fill('60 kn');
+    const anchor = page.getByRole('region', { name: 'Anchor suggestion' });
+    await expect
+      .poll(() => anchor.getByLabel('Length overall (LOA)').inputValue(), { timeout: 5000 })
+      .toMatch(/^(34 ft|10\.36? m)$/);
+    expect(await anchor.getByLabel('Design wind').inputValue()).toMatch(/^60 kn$/);
+    expect(
+      await anchor.getByText('Using the boat and conditions at the top of the page.').count(),
+    ).toBe(1);
+    await audit(page, 'calculators from a saved boat');
+    await screenshot(page, 'calculators-from-boat');
     await page.close();
   });
 });

@@ -11,6 +11,7 @@ import * as m0009 from './20261202-0009-notification-digest';
 import * as m0020 from './20261202-0020-post-revisions';
 import * as m0030 from './20261202-0030-storm-watch';
 import * as m0040 from './20261202-0040-cluster-state';
+import * as m0041 from './20261202-0041-uploaded-images';
 
 export interface MigrationModule {
   up: (p: { context: QueryInterface }) => Promise<void>;
@@ -31,4 +32,5 @@ export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [
   ['20261202-0020-post-revisions', m0020],
   ['20261202-0030-storm-watch', m0030],
   ['20261202-0040-cluster-state', m0040],
+  ['20261202-0041-uploaded-images', m0041],
 ];

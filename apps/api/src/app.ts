@@ -38,6 +38,7 @@ import { stormRouter } from './modules/storm/storm.router';
 import { topicsRouter } from './modules/topics/topics.router';
 import { uploadsFromStorage, uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
 import { s3Storage } from './modules/uploads/s3-storage';
+import { configureImageQuota, startImageSweeper } from './modules/uploads/image-quota';
 import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
 import { startListingSweeper } from './modules/listings/listing-expiry';
 import { ensureListingIndex } from './modules/listings/listing-index';
@@ -75,6 +76,11 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
         })
       : localDiskStorage(uploadDir),
   );
+  configureImageQuota({
+    quotaBytes: env.IMAGE_QUOTA_MB * 1_000_000,
+    maxUnused: env.IMAGE_UNUSED_MAX,
+    graceMs: env.IMAGE_GRACE_HOURS * 3_600_000,
+  });
   const app = express();
   // X-Forwarded-* are believed only from the proxies TRUST_PROXY names (none by default), so a client reaching
   // the API directly cannot pick its own address for the rate limits.
@@ -247,6 +253,8 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   const stopListingSync = env.NODE_ENV === 'test' ? () => undefined : startListingIndexSync(logger);
   // Daily e-mail of unread notices for members who opted in (tests call sendNotificationDigests directly).
   const stopDigests = env.NODE_ENV === 'test' ? () => undefined : startDigestJob(digest, logger);
+  // Hourly removal of post images that no saved post shows after the grace period.
+  const stopImageSweeper = env.NODE_ENV === 'test' ? () => undefined : startImageSweeper(logger);
 
   app.use('/api', notFoundHandler);
   if (env.STORAGE === 's3') app.use('/uploads', uploadsFromStorage());
@@ -281,6 +289,7 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
       stopListingSweeper();
       stopListingSync();
       stopDigests();
+      stopImageSweeper();
       (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.();
     },
   };

@@ -90,6 +90,7 @@ const MATRIX: Record<string, Row> = {
   'POST /api/notifications/read': SIGNED_IN,
   'POST /api/notifications/:notificationId/read': SIGNED_IN,
   'POST /api/uploads/images': SIGNED_IN,
+  'GET /api/uploads/usage': SIGNED_IN,
   'GET /api/listings': PUBLIC,
   'GET /api/listings/mine': SIGNED_IN,
   'GET /api/listings/reports': MODERATOR,

@@ -49,6 +49,12 @@ const envSchema = z.object({
   UPLOAD_DIR: z.string().optional(),
   /** Where uploads go: `disk` (UPLOAD_DIR, the default) or `s3` (any S3-compatible object storage, S3_* below). */
   STORAGE: z.enum(['disk', 's3']).default('disk'),
+  /** Images each member may keep (post images plus listing photos), in MB. */
+  IMAGE_QUOTA_MB: z.coerce.number().positive().default(200),
+  /** Post images a member may have uploaded but not yet in a saved post. */
+  IMAGE_UNUSED_MAX: z.coerce.number().int().min(1).default(40),
+  /** Hours an unused post image is kept before the hourly sweep removes it. */
+  IMAGE_GRACE_HOURS: z.coerce.number().positive().default(24),
   S3_BUCKET: z.string().min(1).default('rodewise-uploads'),
   S3_REGION: z.string().min(1).default('us-east-1'),
   S3_ENDPOINT: z.url().optional(),

@@ -20,6 +20,7 @@ import { Post, initPost } from './post.model';
 import { Report, initReport } from './report.model';
 import { Topic, initTopic } from './topic.model';
 import { Vote, initVote } from './vote.model';
+import { UploadedImage, initUploadedImage } from './uploaded-image.model';
 import { initExchangeModels } from './exchange.models';
 import { StormReadiness, StormWatch, initStormModels } from './storm.models';
 
@@ -49,6 +50,7 @@ export function initModels(sequelize: Sequelize) {
   initVote(sequelize);
   initReport(sequelize);
   initNotification(sequelize);
+  initUploadedImage(sequelize);
 
   User.hasMany(UserRole, { as: 'roles', foreignKey: 'userId' });
   UserRole.belongsTo(User, { foreignKey: 'userId' });
@@ -103,6 +105,7 @@ export {
   Vote,
   StormWatch,
   StormReadiness,
+  UploadedImage,
 };
 export {
   Listing,

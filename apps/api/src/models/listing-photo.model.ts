@@ -19,6 +19,8 @@ export class ListingPhoto extends Model<
   declare width: number;
   declare height: number;
   declare position: number;
+  /** Bytes stored for the photo and its thumbnail (counts against the seller's image quota; 0 before it was kept). */
+  declare bytes: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -34,6 +36,7 @@ export function initListingPhoto(sequelize: Sequelize) {
       width: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
       height: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
       position: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+      bytes: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

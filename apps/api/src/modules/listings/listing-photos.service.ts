@@ -1,6 +1,7 @@
 import { MAX_LISTING_PHOTOS } from '@app/shared';
 import { AppError, invalid } from '../../errors/app-error';
-import { Listing, ListingPhoto, type User } from '../../models';
+import { Listing, ListingPhoto, User } from '../../models';
+import { assertImageRoom } from '../uploads/image-quota';
 import { processImage, type ProcessedImage } from '../uploads/image';
 import { getStorage, newKey, thumbKey } from '../uploads/storage';
 import { listingChanged } from './listing-index';
@@ -41,6 +42,12 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
     const rows = await sequelize.transaction(async (transaction) => {
       // Counted again under the listing's row lock: concurrent uploads queue here, so the limit holds and
       // positions never repeat.
+      // The member's row first (the order every image upload takes), so the image quota holds too.
+      await User.findByPk(actor.id, {
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+        attributes: ['id'],
+      });
       await Listing.findByPk(listingId, { transaction, lock: transaction.LOCK.UPDATE });
       const now = await ListingPhoto.findAll({
         where: { listingId },
@@ -51,6 +58,13 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
         throw invalid({
           [FIELD]: `A listing can have at most ${MAX_LISTING_PHOTOS} photos (it has ${now.length})`,
         });
+      const bytes = processed.reduce((sum, img) => sum + img.full.length + img.thumb.length, 0);
+      await assertImageRoom(
+        actor.id,
+        bytes,
+        { field: FIELD, forPost: false, count: processed.length },
+        transaction,
+      );
       const next = now.reduce((max, p) => Math.max(max, p.position + 1), 0);
       const out: ListingPhoto[] = [];
       for (const [i, img] of processed.entries()) {
@@ -69,6 +83,7 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
               width: img.width,
               height: img.height,
               position: next + i,
+              bytes: img.full.length + img.thumb.length,
             },
             { transaction },
           ),

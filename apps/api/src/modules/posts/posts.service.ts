@@ -10,6 +10,7 @@ import { renderBody } from './body-render';
 import { editRatio } from './edit-size';
 import { POST_INCLUDE, isModerator, loadOwnPost, publicWhere } from './post-access';
 import { computeSetupCard } from './setup-card';
+import { trackPostImages } from '../uploads/image-quota';
 
 type CreateInput = z.output<typeof createPostSchema>;
 type PatchInput = z.output<typeof postPatchSchema>;
@@ -74,6 +75,7 @@ export async function createPost(actor: User, input: CreateInput): Promise<Post>
     publishedAt: publishNow ? new Date() : null,
   });
   if (publishNow) await selfPublishAudit(actor, post, 'post.self-publish');
+  await trackPostImages(null, html);
   await indexPost(post.id);
   return post;
 }
@@ -155,6 +157,7 @@ export async function updatePost(actor: User, postId: number, input: PatchInput)
   } else {
     await post.update({ revision: next, revisionStatus: 'pending' });
   }
+  if (input.body !== undefined) await trackPostImages(base.bodyHtml, next.bodyHtml);
   await indexPost(post.id);
   return post;
 }
@@ -188,7 +191,9 @@ export async function submitPost(actor: User, postId: number): Promise<Post> {
 /** Deletes one of the actor's posts with its comments and votes. */
 export async function deletePost(actor: User, postId: number) {
   const post = await loadOwnPost(actor, postId);
+  const shown = `${post.bodyHtml}${post.revision?.bodyHtml ?? ''}`;
   await post.destroy();
+  await trackPostImages(shown, null);
   await indexPost(postId);
 }
 

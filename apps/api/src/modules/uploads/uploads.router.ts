@@ -4,7 +4,7 @@ import { AppError } from '../../errors/app-error';
 import { currentUser, requireAuth } from '../../middleware/require-auth';
 import { MAX_IMAGE_BYTES } from './image';
 import { getStorage, isSafeKey } from './storage';
-import { storeImage } from './uploads.service';
+import { imageUsage, storePostImage } from './image-quota';
 
 /**
  * A multipart body the parser cannot read (no boundary, a broken part header, a body cut off before its closing
@@ -37,19 +37,25 @@ export const imageUpload = (maxFiles: number) => {
   };
 };
 
-/** `POST /api/uploads/images` (signed in, multipart field `image`) → `{ data: { url, thumbUrl, width, height } }`. */
+/**
+ * `POST /api/uploads/images` (signed in, multipart field `image`) → `{ data: { url, thumbUrl, width, height } }`,
+ * under the member's image quota (409 naming `image` when full). `GET /api/uploads/usage` → what the member keeps.
+ */
 export function uploadsRouter() {
   const r = Router();
   r.post('/images', requireAuth(), imageUpload(1).single('image'), async (req, res) => {
-    currentUser(req);
+    const user = currentUser(req);
     if (!req.file)
       throw new AppError('VALIDATION_FAILED', 'Attach an image in the field "image"', {
         image: 'Attach an image',
       });
-    const img = await storeImage(req.file.buffer);
+    const img = await storePostImage(user.id, req.file.buffer);
     res.status(201).json({
       data: { url: img.url, thumbUrl: img.thumbUrl, width: img.width, height: img.height },
     });
+  });
+  r.get('/usage', requireAuth(), async (req, res) => {
+    res.json({ data: await imageUsage(currentUser(req).id) });
   });
   return r;
 }

@@ -7,9 +7,27 @@ import { ScopeCalculator } from '../../features/calculators/components/scope-cal
 import { SwingCircleCalculator } from '../../features/calculators/components/swing-circle-calculator';
 import { WeakestLinkBuilder } from '../../features/calculators/components/weakest-link-builder';
 import { UnitToggle } from '../../features/units/components/unit-toggle';
+import { useCurrentUser } from '../../features/auth/api/get-session';
+import { useBoats } from '../../features/boats/api/get-boats';
+import { ConditionsBlock } from '../../features/calculators/components/conditions-block';
+import { ConditionsProvider } from '../../features/calculators/components/conditions-provider';
 import { TackleUnits } from './calculators-units';
 
-/** The ground-tackle calculators, open to everyone; results update as you type. */
+/** The signed-in member's boats for the conditions block (none for a visitor). */
+function MemberConditionsBlock() {
+  const { user } = useCurrentUser();
+  return user ? <WithBoats /> : <ConditionsBlock />;
+}
+
+function WithBoats() {
+  const boats = useBoats();
+  return <ConditionsBlock boats={boats.data ?? []} />;
+}
+
+/**
+ * The ground-tackle calculators, open to everyone; results update as you type. One boat and conditions block at
+ * the top feeds every calculator; each can be given its own figures.
+ */
 export function CalculatorsRoute() {
   return (
     <TackleUnits>
@@ -31,14 +49,17 @@ export function CalculatorsRoute() {
             local regulations; in doubt ask a qualified rigger or surveyor.
           </p>
         </Alert>
-        <div className="grid gap-6">
-          <DesignLoadCalculator />
-          <AnchorCalculator />
-          <RatingsCalculator />
-          <WeakestLinkBuilder />
-          <ScopeCalculator />
-          <SwingCircleCalculator />
-        </div>
+        <ConditionsProvider>
+          <div className="grid gap-6">
+            <MemberConditionsBlock />
+            <DesignLoadCalculator />
+            <AnchorCalculator />
+            <RatingsCalculator />
+            <WeakestLinkBuilder />
+            <ScopeCalculator />
+            <SwingCircleCalculator />
+          </div>
+        </ConditionsProvider>
       </Page>
     </TackleUnits>
   );

@@ -8,6 +8,8 @@ import {
   type BottomType,
 } from '@app/calc';
 import { useState } from 'react';
+import { useConditions, useLinkedState } from '../utils/conditions';
+import { LinkedNote } from './linked-note';
 import { Quantity } from '../../units/components/quantity';
 import { SelectField } from '../../../components/ui/select-field';
 import { ANCHOR_OPTIONS, BOTTOM_OPTIONS, pick } from '../utils/options';
@@ -19,9 +21,20 @@ import { NoResult, ResultList } from './result-list';
 
 /** The anchor mass our holding model gives for a boat, a wind, an anchor type and a seabed. */
 export function AnchorCalculator() {
-  const [boat, setBoat] = useState<BoatWind>(DEFAULT_BOAT_WIND);
+  const { conditions } = useConditions();
+  const linked = useLinkedState<BoatWind & { bottom: BottomType | '' }, keyof BoatWind | 'bottom'>(
+    { ...DEFAULT_BOAT_WIND, bottom: '' },
+    {
+      loaM: conditions.loaM,
+      beamM: conditions.beamM,
+      hull: conditions.hull,
+      windKn: conditions.windKn,
+      bottom: conditions.bottom,
+    },
+  );
+  const { bottom, ...boat } = linked.value;
+  const setBottom = (next: BottomType | '') => linked.set({ bottom: next });
   const [anchorType, setAnchorType] = useState<AnchorType>('plow');
-  const [bottom, setBottom] = useState<BottomType | ''>('');
   const { loaM, beamM, hull, windKn } = boat;
   const outcome = runCalc(() =>
     loaM === undefined || windKn === undefined
@@ -51,7 +64,8 @@ export function AnchorCalculator() {
       ]}
       cautions={r?.cautions ?? STANDARD_CAUTIONS}
     >
-      <BoatWindFields value={boat} onChange={setBoat} outcome={outcome} />
+      <LinkedNote own={linked.own} onFollow={linked.follow} />
+      <BoatWindFields value={boat} onChange={(b) => linked.set(b)} outcome={outcome} />
       <div className="grid gap-3 sm:grid-cols-2">
         <SelectField
           label="Anchor type"

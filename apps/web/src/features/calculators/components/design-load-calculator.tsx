@@ -1,5 +1,7 @@
 import { designLoad, STANDARD_CAUTIONS } from '@app/calc';
 import { useState } from 'react';
+import { useConditions, useLinkedState } from '../utils/conditions';
+import { LinkedNote } from './linked-note';
 import { Quantity } from '../../units/components/quantity';
 import { runCalc } from '../utils/run-calc';
 import { DEFAULT_BOAT_WIND, type BoatWind } from '../utils/boat-wind';
@@ -11,7 +13,14 @@ const MISSING = 'Enter the length overall and the design wind to see the load.';
 
 /** Horizontal load on the rode for a boat and a wind (ABYC H-40 table). */
 export function DesignLoadCalculator() {
-  const [boat, setBoat] = useState<BoatWind>(DEFAULT_BOAT_WIND);
+  const { conditions } = useConditions();
+  const linked = useLinkedState<BoatWind, keyof BoatWind>(DEFAULT_BOAT_WIND, {
+    loaM: conditions.loaM,
+    beamM: conditions.beamM,
+    hull: conditions.hull,
+    windKn: conditions.windKn,
+  });
+  const boat = linked.value;
   const [extrapolate, setExtrapolate] = useState(false);
   const { loaM, beamM, hull, windKn } = boat;
   const outcome = runCalc(() =>
@@ -33,7 +42,8 @@ export function DesignLoadCalculator() {
       ]}
       cautions={result?.cautions ?? STANDARD_CAUTIONS}
     >
-      <BoatWindFields value={boat} onChange={setBoat} outcome={outcome} />
+      <LinkedNote own={linked.own} onFollow={linked.follow} />
+      <BoatWindFields value={boat} onChange={linked.set} outcome={outcome} />
       <label className="flex min-h-11 items-center gap-3 text-sm">
         <input
           type="checkbox"

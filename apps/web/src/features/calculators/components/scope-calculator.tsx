@@ -11,6 +11,8 @@ import {
   UPLIFT_WARN_DEG,
 } from '@app/calc';
 import { useState } from 'react';
+import { useConditions, useLinkedState } from '../utils/conditions';
+import { LinkedNote } from './linked-note';
 import { Quantity } from '../../units/components/quantity';
 import { QuantityField } from '../../units/components/quantity-field';
 import { SelectField } from '../../../components/ui/select-field';
@@ -43,10 +45,18 @@ const kgPerMOf = (tradeSizeIn: number) =>
 
 /** Scope ratio and the chain's catenary under a load, drawn to scale as you type. */
 export function ScopeCalculator() {
-  const [v, setV] = useState<ScopeState>(START);
+  const shared = useConditions();
+  const { conditions: c } = shared;
+  const linked = useLinkedState<ScopeState, 'depthM' | 'bowHeightM' | 'tideM' | 'loadN'>(START, {
+    depthM: c.depthM,
+    bowHeightM: c.bowHeightM,
+    tideM: c.tideM,
+    loadN: shared.loadN,
+  });
+  const v = linked.value;
+  const set = linked.set;
   const [grade, setGrade] = useState<ChainGrade>('G43');
   const [size, setSize] = useState(3 / 8);
-  const set = (patch: Partial<ScopeState>) => setV((old) => ({ ...old, ...patch }));
   const sizes = CHAIN_TRADE_SIZES_IN[grade];
   const tradeSizeIn = sizes.includes(size) ? size : (sizes[0] ?? size);
   const { depthM, bowHeightM, tideM = 0, chainLengthM, ropeLengthM = 0, loadN } = v;
@@ -94,6 +104,7 @@ export function ScopeCalculator() {
       ]}
       cautions={r?.shape.cautions ?? STANDARD_CAUTIONS}
     >
+      <LinkedNote own={linked.own} onFollow={linked.follow} />
       <div className="grid gap-3 sm:grid-cols-3">
         <QuantityField
           label="Depth at the anchor"

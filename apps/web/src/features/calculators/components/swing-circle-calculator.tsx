@@ -1,5 +1,6 @@
 import { STANDARD_CAUTIONS, formatLength, swingRadius } from '@app/calc';
-import { useState } from 'react';
+import { useConditions, useLinkedState } from '../utils/conditions';
+import { LinkedNote } from './linked-note';
 import { cn } from '../../../lib/cn';
 import { Quantity } from '../../units/components/quantity';
 import { QuantityField } from '../../units/components/quantity-field';
@@ -84,8 +85,14 @@ function SwingDrawing({
 
 /** The circle a boat swings through, and the clearance to a neighbour's circle. */
 export function SwingCircleCalculator() {
-  const [v, setV] = useState<SwingState>(START);
-  const set = (patch: Partial<SwingState>) => setV((old) => ({ ...old, ...patch }));
+  const { conditions: c } = useConditions();
+  const linked = useLinkedState<SwingState, 'depthM' | 'bowHeightM' | 'loaM'>(START, {
+    depthM: c.depthM,
+    bowHeightM: c.bowHeightM,
+    loaM: c.loaM,
+  });
+  const v = linked.value;
+  const set = linked.set;
   const { rodeM, depthM, bowHeightM, loaM, neighbourM, neighbourRadiusM } = v;
   const outcome = runCalc(() =>
     rodeM === undefined || depthM === undefined || bowHeightM === undefined || loaM === undefined
@@ -116,6 +123,7 @@ export function SwingCircleCalculator() {
         'Boats on chain, on rope and multihulls swing at different rates and may meet even with clear circles.',
       ]}
     >
+      <LinkedNote own={linked.own} onFollow={linked.follow} />
       <div className="grid gap-3 sm:grid-cols-3">
         <QuantityField
           label="Rode let out"

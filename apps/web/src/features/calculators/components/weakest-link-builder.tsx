@@ -1,5 +1,7 @@
 import { STANDARD_CAUTIONS, weakestLink } from '@app/calc';
 import { useState } from 'react';
+import { useConditions, useLinkedState } from '../utils/conditions';
+import { LinkedNote } from './linked-note';
 import { Button } from '../../../components/ui/button';
 import { QuantityField } from '../../units/components/quantity-field';
 import { SelectField } from '../../../components/ui/select-field';
@@ -29,7 +31,10 @@ const row = (kind: LinkPartKind): Row => ({ id: nextRowId++, part: newPart(kind)
 
 /** Add the parts of a rode, see each one's margins and which breaks first. */
 export function WeakestLinkBuilder() {
-  const [loadN, setLoadN] = useState<number | undefined>(3200);
+  const shared = useConditions();
+  const linked = useLinkedState({ loadN: shared.loadN }, { loadN: shared.loadN });
+  const { loadN } = linked.value;
+  const setLoadN = (next: number | undefined) => linked.set({ loadN: next });
   const [rows, setRows] = useState<Row[]>(() => [row('chain'), row('shackle')]);
   const [addKind, setAddKind] = useState<LinkPartKind>('shackle');
 
@@ -63,9 +68,10 @@ export function WeakestLinkBuilder() {
         kind="force"
         value={loadN}
         onValueChange={setLoadN}
-        hint="The design load from above, e.g. 3.2 kN or 720 lbf"
+        hint="The design load of the boat and wind at the top, or type another, e.g. 3.2 kN or 720 lbf"
         error={fieldError(outcome, 'loadN')}
       />
+      <LinkedNote own={linked.own} onFollow={linked.follow} what="design load" />
       <ol className="flex flex-col gap-3">
         {rows.map((r, i) => {
           const o = rated[i];
