@@ -85,6 +85,7 @@ beforeAll(async () => {
     stopDigest: paths.stopDigest.href('1.not-a-real-stop-token'),
     adminUsers: paths.adminUsers.href(),
     adminTopics: paths.adminTopics.href(),
+    adminClub: paths.adminClub.href(),
     knowledge: paths.knowledge.href(),
     postNew: paths.postNew.href(),
     post: paths.post.href(need('post', posts[0]?.id)),

@@ -1,4 +1,6 @@
-import { existsSync } from 'node:fs';
+import { DEFAULT_CLUB_LOCALE } from '@app/shared';
+import { cachedClub } from './modules/club/club-cache';
+import { existsSync, readFileSync } from 'node:fs';
 import { appendFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import compression from 'compression';
@@ -245,6 +247,9 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   );
   mount(app, '/api/saved-searches', savedSearchesRouter());
   mount(app, '/api/storm-watches', stormRouter({ sequelize, publicUrl: env.PUBLIC_URL }));
+  // The club's region for the mails this process writes (GET /api/club keeps it current).
+  if (env.NODE_ENV !== 'test')
+    cachedClub().catch((err: unknown) => logger.warn({ err }, 'club locale not read yet'));
   // The listing search index is built from MariaDB at start (and lazily on first search if that fails).
   ensureListingIndex().catch((err: unknown) => logger.warn({ err }, 'listing index not built yet'));
   const stopListingSweeper =
@@ -276,9 +281,17 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
       },
     );
     app.use(express.static(webDist, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => {
-      // `root` keeps send's dotfile rule to the part below webDist, so a build under e.g. .data/ is served.
-      res.set('Cache-Control', 'no-cache').sendFile('index.html', { root: webDist });
+    // Every page is index.html with the club's locale in a meta tag, so the first render formats dates and
+    // money the club's way (the values are a listed region, an ISO currency code and a unit system).
+    const indexHtml = readFileSync(join(webDist, 'index.html'), 'utf8');
+    app.get('/{*splat}', async (_req, res) => {
+      const club = await cachedClub().catch(() => null);
+      const l = club?.locale ?? DEFAULT_CLUB_LOCALE;
+      const meta = `<meta name="rw-locale" content="${l.region}|${l.currency}|${l.unitSystem}">`;
+      res
+        .set('Cache-Control', 'no-cache')
+        .type('html')
+        .send(indexHtml.replace('</head>', `${meta}</head>`));
     });
   }
   app.use(errorHandler(logger));

@@ -50,6 +50,7 @@ const MATRIX: Record<string, Row> = {
   'GET /api/admin/users': ADMIN,
   'PUT /api/admin/users/:userId/roles': ADMIN,
   'GET /api/club': PUBLIC,
+  'PUT /api/club/locale': ADMIN,
   'GET /api/boats': SIGNED_IN,
   'POST /api/boats': SIGNED_IN,
   'GET /api/boats/:boatId': SIGNED_IN,

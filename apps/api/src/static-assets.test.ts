@@ -9,7 +9,10 @@ import { createTestApp } from './testing/test-app';
 // A built client with the .br and .gz files the build writes beside each asset (vite.config.ts precompress()).
 const webDist = mkdtempSync(join(tmpdir(), 'rw-static-'));
 mkdirSync(join(webDist, 'assets'));
-writeFileSync(join(webDist, 'index.html'), '<!doctype html><title>Rodewise</title>');
+writeFileSync(
+  join(webDist, 'index.html'),
+  '<!doctype html><html><head><title>Rodewise</title></head></html>',
+);
 const script = `export const n = ${JSON.stringify('x'.repeat(4000))};\n`;
 writeFileSync(join(webDist, 'assets', 'route-abc123.js'), script);
 writeFileSync(join(webDist, 'assets', 'route-abc123.js.br'), brotliCompressSync(script));
@@ -64,5 +67,14 @@ describe('pre-compressed assets', () => {
     const res = await request(built.app).get('/assets/missing-000.js');
     expect(res.status).toBe(404);
     expect(res.headers['content-type']).not.toMatch(/html/);
+  });
+});
+
+describe('pages', () => {
+  it('carry the club’s locale in index.html so the first render formats the club’s way', async () => {
+    const res = await request(built.app).get('/exchange');
+    expect(res.status).toBe(200);
+    expect(res.headers['cache-control']).toBe('no-cache');
+    expect(res.text).toContain('<meta name="rw-locale" content="en-GB|EUR|metric"></head>');
   });
 });

@@ -3,7 +3,10 @@ import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
 import { AppProvider } from './app/provider';
 import { createAppRouter } from './app/router';
+import { readClubLocaleFromPage } from './lib/club-locale';
 import './styles/index.css';
+
+readClubLocaleFromPage();
 
 const rootElement = document.getElementById('root');
 if (!rootElement) throw new Error('index.html has no #root element');

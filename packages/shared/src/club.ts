@@ -1,3 +1,5 @@
+import type { ClubLocale } from './locale';
+
 export interface HarborDto {
   id: number;
   name: string;
@@ -6,4 +8,6 @@ export interface HarborDto {
 export interface ClubDto {
   name: string;
   harbors: HarborDto[];
+  /** How dates, numbers and money read; the currency new prices start in; the default units. */
+  locale: ClubLocale;
 }

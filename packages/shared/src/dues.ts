@@ -1,3 +1,4 @@
+import { currencyDigits } from './locale-format';
 import { z } from 'zod';
 
 /** How a plan's annual amount is cut for a member who joins after the fiscal year began. */
@@ -387,24 +388,8 @@ export interface SummaryDto {
   counts: Record<DuesStatus, number>;
 }
 
-/** Digits after the decimal point for a currency (2 for EUR, 0 for JPY), from the platform's ISO 4217 data. */
-export function currencyDigits(currency: string): number {
-  return (
-    new Intl.NumberFormat('en', { style: 'currency', currency }).resolvedOptions()
-      .maximumFractionDigits ?? 2
-  );
-}
-
 /** Integer minor units as a plain decimal string: 12050 EUR → "120.50", −3000 → "-30.00". */
 export function minorToDecimal(amountMinor: number, currency: string): string {
   const digits = currencyDigits(currency);
   return (amountMinor / 10 ** digits).toFixed(digits);
-}
-
-/** Integer minor units for people: 12050 EUR → "€120.50". */
-export function formatMoney(amountMinor: number, currency: string, locale = 'en'): string {
-  const digits = currencyDigits(currency);
-  return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(
-    amountMinor / 10 ** digits,
-  );
 }

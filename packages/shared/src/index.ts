@@ -7,3 +7,4 @@ export * from './dues';
 export * from './knowledge';
 export * from './exchange';
 export * from './storm';
+export * from './locale';

@@ -49,6 +49,10 @@ export const SCREEN_ROUTES: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/admin-topics')).AdminTopicsRoute }),
   },
   {
+    path: paths.adminClub.path,
+    lazy: async () => ({ Component: (await import('./routes/admin-club')).AdminClubRoute }),
+  },
+  {
     path: paths.calculators.path,
     lazy: async () => ({ Component: (await import('./routes/calculators')).CalculatorsRoute }),
   },

@@ -16,6 +16,7 @@ export const paths = {
   },
   adminUsers: { path: '/admin/users', href: () => '/admin/users' },
   adminTopics: { path: '/admin/topics', href: () => '/admin/topics' },
+  adminClub: { path: '/admin/club', href: () => '/admin/club' },
   knowledge: { path: '/knowledge', href: () => '/knowledge' },
   postNew: { path: '/knowledge/new', href: () => '/knowledge/new' },
   post: { path: '/knowledge/:postId', href: (postId: number | string) => `/knowledge/${postId}` },

@@ -1,3 +1,4 @@
+import { getSetting } from '../club/club.service';
 import { randomBytes } from 'node:crypto';
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import type { ResetConfirmInput, SignupInput } from '@app/shared';
@@ -59,9 +60,17 @@ export async function signup(deps: AuthDeps, input: SignupInput): Promise<void> 
     );
     return;
   }
+  // New members start in the club's units; they can switch on any tackle screen.
+  const { unitSystem } = await getSetting('locale');
   await deps.sequelize.transaction(async (transaction) => {
     const user = await User.create(
-      { email: input.email, displayName: input.displayName, passwordHash, emailVerifiedAt: null },
+      {
+        email: input.email,
+        displayName: input.displayName,
+        passwordHash,
+        emailVerifiedAt: null,
+        unitSystem,
+      },
       { transaction },
     );
     await UserRole.create({ userId: user.id, role: 'member', grantedById: null }, { transaction });

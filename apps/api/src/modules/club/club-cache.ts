@@ -1,6 +1,6 @@
 import { LRUCache } from 'lru-cache';
 import { clearOnWrites } from '../../lib/clear-on-writes';
-import type { ClubDto } from '@app/shared';
+import { setDisplayLocale, type ClubDto } from '@app/shared';
 import { ClubSetting, Harbor } from '../../models';
 import { getSetting, listHarbors } from './club.service';
 
@@ -16,8 +16,14 @@ const cache = new LRUCache<'club', ClubDto>({
 });
 
 async function loadClub(): Promise<ClubDto> {
-  const [name, harbors] = await Promise.all([getSetting('clubName'), listHarbors()]);
-  return { name, harbors: harbors.map((h) => ({ id: h.id, name: h.name, slug: h.slug })) };
+  const [name, harbors, locale] = await Promise.all([
+    getSetting('clubName'),
+    listHarbors(),
+    getSetting('locale'),
+  ]);
+  // Mails and messages this process writes use the club's region from here on.
+  setDisplayLocale(locale.region);
+  return { name, harbors: harbors.map((h) => ({ id: h.id, name: h.name, slug: h.slug })), locale };
 }
 
 /** The club as GET /api/club answers it. */

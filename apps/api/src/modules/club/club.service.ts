@@ -1,5 +1,10 @@
 import { z } from 'zod';
-import { DEFAULT_STORM_CHECKLIST, stormChecklistSchema } from '@app/shared';
+import {
+  DEFAULT_CLUB_LOCALE,
+  DEFAULT_STORM_CHECKLIST,
+  clubLocaleSchema,
+  stormChecklistSchema,
+} from '@app/shared';
 import { ClubSetting, Harbor } from '../../models';
 
 /** Every club setting, with its schema and default. Stored as JSON in club_settings. */
@@ -23,6 +28,8 @@ export const SETTINGS = {
     }),
   /** The storm-watch checklist template; each new watch copies it. */
   stormChecklist: stormChecklistSchema.default({ items: DEFAULT_STORM_CHECKLIST }),
+  /** How dates, numbers and money read, the currency new prices start in, and new members' units. */
+  locale: clubLocaleSchema.default(DEFAULT_CLUB_LOCALE),
 } as const;
 export type SettingKey = keyof typeof SETTINGS;
 export type SettingValue<K extends SettingKey> = z.infer<(typeof SETTINGS)[K]>;

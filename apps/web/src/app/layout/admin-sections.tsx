@@ -5,6 +5,7 @@ import { cn } from '../../lib/cn';
 const SECTIONS = [
   { to: paths.adminUsers.href(), label: 'Users and roles' },
   { to: paths.adminTopics.href(), label: 'Topics' },
+  { to: paths.adminClub.href(), label: 'Club locale' },
 ];
 
 /** The admin area's own sub-navigation, shown at the top of each admin screen. */

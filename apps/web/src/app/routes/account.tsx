@@ -1,3 +1,4 @@
+import { formatDate } from '@app/shared/locale';
 import type { UserDto } from '@app/shared';
 import { Page } from '../../components/ui/page';
 import { useCurrentUser } from '../../features/auth/api/get-session';
@@ -6,17 +7,14 @@ import { ChangePasswordForm } from '../../features/auth/components/change-passwo
 import { RequireAuth } from '../../features/auth/components/require-auth';
 import { DigestSetting } from '../../features/auth/components/digest-setting';
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'long' });
-
 function AccountScreen({ user }: { user: UserDto }) {
-  const since = new Date(user.memberSince);
   return (
     <Page title="Your account" width="narrow">
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="font-bold">E-mail</dt>
         <dd className="break-all">{user.email}</dd>
         <dt className="font-bold">Member since</dt>
-        <dd>{Number.isNaN(since.getTime()) ? user.memberSince : dateFormat.format(since)}</dd>
+        <dd>{formatDate(user.memberSince)}</dd>
         <dt className="font-bold">Roles</dt>
         <dd>{user.roles.length > 0 ? user.roles.join(', ') : 'none yet'}</dd>
       </dl>

@@ -1,3 +1,4 @@
+import { formatDate } from '@app/shared/locale';
 import { Link, useParams } from 'react-router-dom';
 import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
@@ -38,7 +39,7 @@ export function PostRoute() {
           </Link>
         )}
         <span>by {p.author.displayName}</span>
-        {p.publishedAt && <span>· {new Date(p.publishedAt).toLocaleDateString()}</span>}
+        {p.publishedAt && <span>· {formatDate(p.publishedAt)}</span>}
         {p.visibility === 'members' && <span>· members only</span>}
         {p.status !== 'approved' && <PostStatusBadge status={p.status} />}
       </p>

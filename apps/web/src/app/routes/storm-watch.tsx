@@ -1,3 +1,4 @@
+import { formatDateTime } from '@app/shared/locale';
 import type { ReadinessDto, StormWatchDto } from '@app/shared';
 import { Link, useParams } from 'react-router-dom';
 import { Alert } from '../../components/ui/alert';
@@ -17,8 +18,7 @@ import { MarginBadge } from '../../features/storm/components/margin-badge';
 import { StatusBadge } from '../../features/storm/components/status-badge';
 import { StormCautions } from '../../features/storm/components/storm-cautions';
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const when = (iso: string) => formatDateTime(iso);
 
 function BoatList({
   watchId,

@@ -1,3 +1,4 @@
+import { formatDateTime } from '@app/shared/locale';
 import type { StormWatchDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { Alert } from '../../components/ui/alert';
@@ -10,8 +11,7 @@ import { useCurrentUser } from '../../features/auth/api/get-session';
 import { RequireAuth } from '../../features/auth/components/require-auth';
 import { useWatches } from '../../features/storm/api/get-watches';
 
-const day = (iso: string) =>
-  new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const day = (iso: string) => formatDateTime(iso);
 
 function WatchItem({ watch }: { watch: StormWatchDto }) {
   return (

@@ -1,10 +1,15 @@
 import type { ClubDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
+import { applyClubLocale } from '../../../lib/club-locale';
 import { clubKeys } from './keys';
 
-/** GET /api/club: the club's name and harbours. */
-export const getClub = (signal?: AbortSignal) => apiFetch<ClubDto>('/club', { signal });
+/** GET /api/club: the club's name, harbours and locale (which from then on formats dates and money). */
+export const getClub = async (signal?: AbortSignal) => {
+  const club = await apiFetch<ClubDto>('/club', { signal });
+  if (club.locale) applyClubLocale(club.locale);
+  return club;
+};
 
 export const clubQuery = () =>
   queryOptions({

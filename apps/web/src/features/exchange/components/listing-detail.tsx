@@ -1,3 +1,4 @@
+import { displayLocale } from '@app/shared/locale';
 import type { ListingDto } from '@app/shared';
 import { useState } from 'react';
 import { categoryLabel, conditionLabel, formatPrice, specRows } from '../utils/format';
@@ -80,7 +81,7 @@ export function ListingDetail({ listing }: { listing: ListingDto }) {
           <p className="font-bold">{listing.seller.displayName}</p>
           <p>
             Member since{' '}
-            {new Date(listing.seller.memberSince).toLocaleDateString(undefined, {
+            {new Date(listing.seller.memberSince).toLocaleDateString(displayLocale(), {
               year: 'numeric',
               month: 'long',
             })}

@@ -1,3 +1,4 @@
+import { formatDate } from '@app/shared/locale';
 import type { ListingDto } from '@app/shared';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
@@ -28,9 +29,7 @@ export function OwnerActions({ listing, editHref }: { listing: ListingDto; editH
         Your listing
       </h2>
       {listing.expiresAt && listing.status === 'active' && (
-        <p className="text-sm">
-          Shows in search until {new Date(listing.expiresAt).toLocaleDateString()}.
-        </p>
+        <p className="text-sm">Shows in search until {formatDate(listing.expiresAt)}.</p>
       )}
       <div className="flex flex-wrap items-end gap-2">
         {listing.status !== 'sold' && (

@@ -1,3 +1,4 @@
+import { formatMoney } from '@app/shared/locale';
 import {
   LISTING_CATEGORY_LABELS,
   LISTING_CONDITION_LABELS,
@@ -5,10 +6,9 @@ import {
   type ListingCondition,
 } from '@app/shared';
 
-/** Money in minor units as the member's locale shows it. */
-export function formatPrice(priceCents: number, currency: string): string {
-  return new Intl.NumberFormat(undefined, { style: 'currency', currency }).format(priceCents / 100);
-}
+/** Money in minor units as the club's region writes it (and with the currency's own digits). */
+export const formatPrice = (priceCents: number, currency: string): string =>
+  formatMoney(priceCents, currency);
 
 const FRACTIONS: Record<number, string> = {
   0.1875: '3/16',

@@ -1,3 +1,4 @@
+import { formatDate } from '@app/shared/locale';
 import type { CommentDto, PostDetailDto } from '@app/shared';
 import { useState, type FormEvent } from 'react';
 import { Alert } from '../../../components/ui/alert';
@@ -122,7 +123,7 @@ function CommentItem({
       className={`flex flex-col gap-2 rounded-md border p-3 ${c.accepted ? 'border-kelp-700 bg-kelp-50' : 'border-sand-500'}`}
     >
       <p className="text-xs text-ink-600">
-        <strong>{c.author.displayName}</strong> · {new Date(c.createdAt).toLocaleDateString()}
+        <strong>{c.author.displayName}</strong> · {formatDate(c.createdAt)}
         {c.accepted && <strong className="text-kelp-700"> · Accepted answer</strong>}
         {c.status !== 'approved' && (
           <em> · {c.status === 'pending' ? 'waiting for a moderator' : c.status}</em>

@@ -1,3 +1,4 @@
+import { formatTime } from '@app/shared/locale';
 import {
   createPostSchema,
   type CreatePostInput,
@@ -248,7 +249,7 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
           Save draft
         </Button>
         <span role="status" className="text-sm text-ink-600">
-          {savedAt ? `Saved at ${savedAt.toLocaleTimeString()}` : ''}
+          {savedAt ? `Saved at ${formatTime(savedAt)}` : ''}
         </span>
       </div>
       <p className="text-xs text-ink-600">

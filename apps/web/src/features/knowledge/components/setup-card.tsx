@@ -1,5 +1,18 @@
-import { formatForce, formatLength, formatMass, type UnitSystem } from '@app/calc';
+import {
+  ANCHOR_TYPE_LABELS,
+  CHAIN_GRADE_LABELS,
+  CONNECTOR_KIND_LABELS,
+  HULL_TYPE_LABELS,
+  ROPE_CONSTRUCTION_LABELS,
+  ROPE_MATERIAL_LABELS,
+  formatForce,
+  formatLength,
+  formatMass,
+  inchFractionLabel,
+  type UnitSystem,
+} from '@app/calc';
 import type { SetupCardDto } from '@app/shared';
+import { formatQuantity } from '../../units/utils/format-quantity';
 
 const fix = (n: number, d = 1) => n.toFixed(d);
 
@@ -11,6 +24,8 @@ export function SetupCard({ card, units }: { card: SetupCardDto; units: UnitSyst
   const { setup } = card;
   const c = setup.components;
   const len = (m: number) => formatLength(m, units);
+  // Rope and chain sizes as the trade writes them: mm in metric, the inch fraction (5/16 in) in imperial.
+  const dia = (mm: number) => formatQuantity(mm / 1000, 'diameter', units);
   return (
     <section
       aria-labelledby="setup-title"
@@ -20,27 +35,33 @@ export function SetupCard({ card, units }: { card: SetupCardDto; units: UnitSyst
         Tackle setup{setup.boat.label ? `: ${setup.boat.label}` : ''}
       </h2>
       <dl className="grid grid-cols-1 gap-x-6 gap-y-1 text-sm sm:grid-cols-2">
-        <Row term="Boat" value={`${setup.boat.hull}, ${len(setup.boat.loaM)} LOA`} />
+        <Row
+          term="Boat"
+          value={`${HULL_TYPE_LABELS[setup.boat.hull]}, ${len(setup.boat.loaM)} LOA`}
+        />
         <Row term="Design wind" value={`${setup.windKn} kn`} />
         {c.anchor && (
-          <Row term="Anchor" value={`${c.anchor.type}, ${formatMass(c.anchor.massKg, units)}`} />
+          <Row
+            term="Anchor"
+            value={`${ANCHOR_TYPE_LABELS[c.anchor.type]}, ${formatMass(c.anchor.massKg, units)}`}
+          />
         )}
         {c.chain && (
           <Row
             term="Chain"
-            value={`${c.chain.grade}, ${c.chain.tradeSizeIn ? `${c.chain.tradeSizeIn} in` : `${c.chain.nominalMm ?? ''} mm`}, ${len(c.chain.lengthM)}`}
+            value={`${CHAIN_GRADE_LABELS[c.chain.grade]}, ${c.chain.tradeSizeIn ? inchFractionLabel(c.chain.tradeSizeIn) : `${c.chain.nominalMm ?? ''} mm`}, ${len(c.chain.lengthM)}`}
           />
         )}
         {c.rode && (
           <Row
             term="Rode"
-            value={`${c.rode.material} ${c.rode.construction}, ${c.rode.diameterMm} mm, ${len(c.rode.lengthM)}`}
+            value={`${ROPE_MATERIAL_LABELS[c.rode.material]} ${ROPE_CONSTRUCTION_LABELS[c.rode.construction].toLowerCase()}, ${dia(c.rode.diameterMm)}, ${len(c.rode.lengthM)}`}
           />
         )}
         {c.snubber && (
           <Row
             term="Snubber"
-            value={`${c.snubber.material}, ${c.snubber.diameterMm} mm, ${len(c.snubber.lengthM)}`}
+            value={`${ROPE_MATERIAL_LABELS[c.snubber.material]}, ${dia(c.snubber.diameterMm)}, ${len(c.snubber.lengthM)}`}
           />
         )}
         {c.connectors.map((k) => (
@@ -51,8 +72,8 @@ export function SetupCard({ card, units }: { card: SetupCardDto; units: UnitSyst
               k.wllN
                 ? `WLL ${formatForce(k.wllN, units)}`
                 : k.nominalIn
-                  ? `${k.nominalIn} in ${k.kind}`
-                  : `${k.kind}, no rating given`
+                  ? `${inchFractionLabel(k.nominalIn)} ${CONNECTOR_KIND_LABELS[k.kind].toLowerCase()}`
+                  : `${CONNECTOR_KIND_LABELS[k.kind]}, no rating given`
             }
           />
         ))}

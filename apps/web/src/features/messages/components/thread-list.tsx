@@ -1,3 +1,4 @@
+import { formatDateTime } from '@app/shared/locale';
 import type { ThreadSummaryDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 
@@ -30,7 +31,7 @@ export function ThreadList({
           </div>
           <p className="text-sm text-ink-700">
             {t.role === 'buyer' ? 'Seller' : 'Buyer'}: {t.otherParty.displayName} ·{' '}
-            {new Date(t.lastMessageAt).toLocaleString()}
+            {formatDateTime(t.lastMessageAt)}
           </p>
           <p className="truncate text-sm">{t.lastMessage}</p>
         </li>

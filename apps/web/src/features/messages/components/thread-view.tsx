@@ -1,3 +1,4 @@
+import { formatDateTime } from '@app/shared/locale';
 import type { ThreadDto } from '@app/shared';
 import { cn } from '../../../lib/cn';
 
@@ -16,8 +17,7 @@ export function ThreadView({ thread }: { thread: ThreadDto }) {
           )}
         >
           <p className="text-xs font-bold text-ink-600">
-            {m.mine ? 'You' : thread.otherParty.displayName} ·{' '}
-            {new Date(m.createdAt).toLocaleString()}
+            {m.mine ? 'You' : thread.otherParty.displayName} · {formatDateTime(m.createdAt)}
           </p>
           <p className="whitespace-pre-line">{m.body}</p>
         </li>

@@ -1,3 +1,4 @@
+import { formatDate } from '@app/shared/locale';
 import type { ListingReportDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
@@ -45,7 +46,7 @@ export function ListingReports({ reports, listingHref }: ListingReportsProps) {
             className="flex flex-col gap-2 rounded-md border border-flare-700 bg-sand-50 p-3"
           >
             <p className="text-xs text-ink-600">
-              {r.reporterName} reported a listing on {new Date(r.createdAt).toLocaleDateString()}
+              {r.reporterName} reported a listing on {formatDate(r.createdAt)}
             </p>
             <Link to={listingHref(r.listingId)} className="text-lg font-bold underline">
               {r.listingTitle}

@@ -1,3 +1,4 @@
+import { formatDateTime } from '@app/shared/locale';
 import type { AuditEntryDto } from '@app/shared';
 import { ScrollRegion } from '../../../components/ui/scroll-region';
 
@@ -55,7 +56,7 @@ export function ModerationLog({ entries }: { entries: AuditEntryDto[] }) {
         <tbody>
           {entries.map((e) => (
             <tr key={e.id} className="border-b border-sand-500 align-top">
-              <td className="p-2 whitespace-nowrap">{new Date(e.createdAt).toLocaleString()}</td>
+              <td className="p-2 whitespace-nowrap">{formatDateTime(e.createdAt)}</td>
               <td className="p-2">{e.actor?.displayName ?? 'system'}</td>
               <td className="p-2">
                 {WORDS[e.action] ?? e.action}{' '}

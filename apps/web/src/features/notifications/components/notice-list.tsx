@@ -1,3 +1,4 @@
+import { formatDateTime } from '@app/shared/locale';
 import type { NotificationDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { cn } from '../../../lib/cn';
@@ -8,8 +9,6 @@ const KIND_LABELS: Record<string, string> = {
   moderation: 'Moderation',
   report: 'Your report',
 };
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 export interface NoticeListProps {
   notices: NotificationDto[];
@@ -36,7 +35,7 @@ export function NoticeList({ notices, onOpen }: NoticeListProps) {
               )}
               <span className="font-bold">{KIND_LABELS[n.kind] ?? 'Notice'}</span>
               <span aria-hidden="true">·</span>
-              <time dateTime={n.createdAt}>{when.format(new Date(n.createdAt))}</time>
+              <time dateTime={n.createdAt}>{formatDateTime(n.createdAt)}</time>
             </div>
             {n.link ? (
               <Link

@@ -2,6 +2,7 @@ import type { UnitSystem } from '@app/calc';
 import { useMemo, useState, type ReactNode } from 'react';
 import { UnitSystemContext } from '../utils/unit-system-context';
 import { readStoredUnitSystem, storeUnitSystem } from '../utils/unit-preference';
+import { clubLocale } from '../../../lib/club-locale';
 
 export interface UnitSystemProviderProps {
   /** The signed-in member's stored choice; undefined for a visitor. */
@@ -12,7 +13,7 @@ export interface UnitSystemProviderProps {
 }
 
 /**
- * Supplies the display system: a member's stored choice, else this browser's, else metric. A change
+ * Supplies the display system: a member's stored choice, else this browser's, else the club's default. A change
  * applies at once, is remembered in this browser and, for a member, saved through `onMemberChange`.
  */
 export function UnitSystemProvider({
@@ -21,7 +22,7 @@ export function UnitSystemProvider({
   children,
 }: UnitSystemProviderProps) {
   const [chosen, setChosen] = useState<UnitSystem | undefined>(undefined);
-  const system = chosen ?? memberSystem ?? readStoredUnitSystem() ?? 'metric';
+  const system = chosen ?? memberSystem ?? readStoredUnitSystem() ?? clubLocale().unitSystem;
   const value = useMemo(
     () => ({
       system,
