@@ -1,8 +1,8 @@
-import MiniSearch from 'minisearch';
 import SearchableMap from 'minisearch/SearchableMap';
+import { termsOf } from './search-terms';
 
 /**
- * The listing full-text index: MiniSearch's tokenizer and its radix tree (`SearchableMap`, which does the prefix
+ * The listing full-text index: the exchange's tokenizer (`search-terms.ts`) and MiniSearch's radix tree (`SearchableMap`, which does the prefix
  * and fuzzy term lookups) over flat posting arrays, scored with MiniSearch's own BM25 and match weights.
  *
  * Why not `MiniSearch#search` itself: it builds a result object, a match map and a terms list for every posting
@@ -25,21 +25,12 @@ export interface EngineHit<D> {
   score: number;
 }
 
-const tokenize = MiniSearch.getDefault('tokenize') as (text: string) => string[];
-const processTerm = MiniSearch.getDefault('processTerm') as (term: string) => string | null;
 // MiniSearch's defaults (minisearch/dist/es/index.js: defaultBM25params, defaultSearchOptions.weights).
 const BM25 = { k: 1.2, b: 0.7, d: 0.5 };
 const WEIGHT = { fuzzy: 0.45, prefix: 0.375 };
 
-/** The words of a text, as MiniSearch indexes and queries them. */
-export function termsOf(text: string): string[] {
-  const out: string[] = [];
-  for (const t of tokenize(text)) {
-    const p = processTerm(t);
-    if (p) out.push(p);
-  }
-  return out;
-}
+/** The terms of a text as the exchange indexes and queries them (one tokenizer for both: `search-terms.ts`). */
+export { termsOf };
 
 interface Posting {
   slots: number[];
