@@ -11,7 +11,7 @@ import { Listing } from '../../models';
 import { getStorage } from '../uploads/storage';
 import { fitOf, type BoatNeeds } from './fit';
 import { ListingSearchEngine } from './listing-search-engine';
-import { parseQuery } from './search-terms';
+import { parseQuery, termsOf } from './search-terms';
 import { ratingOf, specsText, type ListingRating } from './listing-specs';
 
 /** One searchable (active, visible) listing as the index keeps it, with what the result card shows. */
@@ -99,6 +99,8 @@ const newIndex = () =>
     // Sizes and lengths match exactly; words get prefix and (from 5 letters) one-typo matching.
     prefix: (term) => term.length > 2 && !/\d/.test(term),
     fuzzy: (term) => (term.length < 5 || /\d/.test(term) ? 0 : 1),
+    // The exchange's tokenizer, which reads the queries too (sizes, fractions, grades, lengths).
+    terms: termsOf,
   });
 
 let index = newIndex();

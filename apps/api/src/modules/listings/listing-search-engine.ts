@@ -1,8 +1,8 @@
+import MiniSearch from 'minisearch';
 import SearchableMap from 'minisearch/SearchableMap';
-import { termsOf } from './search-terms';
 
 /**
- * The listing full-text index: the exchange's tokenizer (`search-terms.ts`) and MiniSearch's radix tree (`SearchableMap`, which does the prefix
+ * The listing full-text index: MiniSearch's tokenizer and its radix tree (`SearchableMap`, which does the prefix
  * and fuzzy term lookups) over flat posting arrays, scored with MiniSearch's own BM25 and match weights.
  *
  * Why not `MiniSearch#search` itself: it builds a result object, a match map and a terms list for every posting
@@ -18,6 +18,11 @@ export interface EngineOptions<D> {
   prefix: (term: string) => boolean;
   /** Largest edit distance for a query word, 0 for none (MiniSearch `fuzzy`). */
   fuzzy: (term: string) => number;
+  /**
+   * The terms of a field's text (default: MiniSearch's tokenizer, `termsOf`). Queries arrive as term groups, so
+   * the caller reads them with the same function.
+   */
+  terms?: (text: string) => string[];
 }
 
 export interface EngineHit<D> {
@@ -25,12 +30,21 @@ export interface EngineHit<D> {
   score: number;
 }
 
+const tokenize = MiniSearch.getDefault('tokenize') as (text: string) => string[];
+const processTerm = MiniSearch.getDefault('processTerm') as (term: string) => string | null;
 // MiniSearch's defaults (minisearch/dist/es/index.js: defaultBM25params, defaultSearchOptions.weights).
 const BM25 = { k: 1.2, b: 0.7, d: 0.5 };
 const WEIGHT = { fuzzy: 0.45, prefix: 0.375 };
 
-/** The terms of a text as the exchange indexes and queries them (one tokenizer for both: `search-terms.ts`). */
-export { termsOf };
+/** The words of a text, as MiniSearch indexes and queries them (the default `terms`). */
+export function termsOf(text: string): string[] {
+  const out: string[] = [];
+  for (const t of tokenize(text)) {
+    const p = processTerm(t);
+    if (p) out.push(p);
+  }
+  return out;
+}
 
 interface Posting {
   slots: number[];
@@ -91,7 +105,7 @@ export class ListingSearchEngine<D extends { id: number }> {
     const lengths: number[] = [];
     const held: number[] = [];
     this.fieldNames.forEach((field, f) => {
-      const words = termsOf(this.opts.text(doc, field));
+      const words = (this.opts.terms ?? termsOf)(this.opts.text(doc, field));
       const counts = new Map<string, number>();
       for (const w of words) counts.set(w, (counts.get(w) ?? 0) + 1);
       lengths.push(counts.size); // MiniSearch's field length: distinct words

@@ -41,8 +41,8 @@ async function listingWithAskers() {
   const buyerThread = (
     await buyer.c.post('/api/threads', { listingId, body: 'I would take it on Saturday.' })
   ).body.data.id as number;
-  const askerThread = (await asker.c.post('/api/threads', { listingId, body: 'Still there?' }))
-    .body.data.id as number;
+  const askerThread = (await asker.c.post('/api/threads', { listingId, body: 'Still there?' })).body
+    .data.id as number;
   return { seller, buyer, asker, listingId, buyerThread, askerThread };
 }
 
@@ -113,8 +113,7 @@ describe('marking a listing sold', () => {
   });
 
   it('two concurrent "sold" requests: one wins, the loser gets 409 and its buyer hears nothing', async () => {
-    const { seller, buyer, asker, listingId, buyerThread, askerThread } =
-      await listingWithAskers();
+    const { seller, buyer, asker, listingId, buyerThread, askerThread } = await listingWithAskers();
     const before = await OutboxEmail.count();
     const results = await Promise.all([
       seller.c.post(`/api/listings/${listingId}/sold`, { threadId: buyerThread }),
@@ -123,7 +122,8 @@ describe('marking a listing sold', () => {
     const statuses = results.map((r) => r.status).sort();
     expect(statuses).toEqual([200, 409]);
     const winner = results.find((r) => r.status === 200);
-    const winningThread = winner?.body.data.soldTo?.displayName === 'Ilka Buyer' ? 'buyer' : 'asker';
+    const winningThread =
+      winner?.body.data.soldTo?.displayName === 'Ilka Buyer' ? 'buyer' : 'asker';
     const toYou = [
       ...(await noticesOf(buyer)).filter((n) => n.kind === 'listing-sold-to-you'),
       ...(await noticesOf(asker)).filter((n) => n.kind === 'listing-sold-to-you'),

@@ -128,9 +128,9 @@ describe('GET /api/listings search', () => {
       })
     ).body.data.id as number;
     // The same chain in good condition fits this boat (see the fits-my-boat tests below).
-    expect((await c.get(`/api/listings/${ids.chain38}?fitsBoat=${boat}`)).body.data.fit.status).toBe(
-      'fits',
-    );
+    expect(
+      (await c.get(`/api/listings/${ids.chain38}?fitsBoat=${boat}`)).body.data.fit.status,
+    ).toBe('fits');
     const detail = await c.get(`/api/listings/${parts}?fitsBoat=${boat}`);
     expect(detail.body.data.fit.status).toBe('not-rated');
     expect(detail.body.data.fit.reason).toMatch(/parts or repair/);
