@@ -7,6 +7,9 @@ const KIND_LABELS: Record<string, string> = {
   accepted: 'Answer accepted',
   moderation: 'Moderation',
   report: 'Your report',
+  'listing-sold-to-you': 'Exchange: sold to you',
+  'listing-sold': 'Exchange: sold',
+  'listing-sale-undone': 'Exchange: sale undone',
 };
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
