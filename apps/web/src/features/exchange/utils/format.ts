@@ -11,8 +11,9 @@ export function formatPrice(priceCents: number, currency: string): string {
   return new Intl.NumberFormat(undefined, { style: 'currency', currency }).format(priceCents / 100);
 }
 
-/** Trade sizes as fractions to the nearest 1/16 in (5/16 in, never 0.3125 in). */
-const inch = (v: number) => inchFractionLabel(v);
+/** Trade sizes as fractions (5/16 in, never 0.3125 in); a size that is no 16th of an inch stays decimal. */
+const inch = (v: number) =>
+  Math.abs(v * 16 - Math.round(v * 16)) < 1e-6 ? inchFractionLabel(v) : `${v} in`;
 const num = (v: unknown) => (typeof v === 'number' ? v : undefined);
 const str = (v: unknown) => (typeof v === 'string' ? v.replace(/-/g, ' ') : undefined);
 /** "G43" → "43 (high test)": the row is already labelled "Grade". */

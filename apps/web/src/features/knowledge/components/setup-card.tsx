@@ -1,4 +1,10 @@
-import { formatForce, formatLength, formatMass, type UnitSystem } from '@app/calc';
+import {
+  formatForce,
+  formatLength,
+  formatMass,
+  inchFractionLabel,
+  type UnitSystem,
+} from '@app/calc';
 import type { SetupCardDto } from '@app/shared';
 
 const fix = (n: number, d = 1) => n.toFixed(d);
@@ -28,7 +34,7 @@ export function SetupCard({ card, units }: { card: SetupCardDto; units: UnitSyst
         {c.chain && (
           <Row
             term="Chain"
-            value={`${c.chain.grade}, ${c.chain.tradeSizeIn ? `${c.chain.tradeSizeIn} in` : `${c.chain.nominalMm ?? ''} mm`}, ${len(c.chain.lengthM)}`}
+            value={`${c.chain.grade}, ${c.chain.tradeSizeIn ? inchFractionLabel(c.chain.tradeSizeIn) : `${c.chain.nominalMm ?? ''} mm`}, ${len(c.chain.lengthM)}`}
           />
         )}
         {c.rode && (
@@ -51,7 +57,7 @@ export function SetupCard({ card, units }: { card: SetupCardDto; units: UnitSyst
               k.wllN
                 ? `WLL ${formatForce(k.wllN, units)}`
                 : k.nominalIn
-                  ? `${k.nominalIn} in ${k.kind}`
+                  ? `${inchFractionLabel(k.nominalIn)} ${k.kind}`
                   : `${k.kind}, no rating given`
             }
           />
