@@ -50,6 +50,13 @@ export {
   type FormatOptions,
   type UnitSystem,
 } from './units/format';
+export {
+  SIZE_TEXT_HINT,
+  parseInchText,
+  parseSizeText,
+  sizeTextOf,
+  type ParsedSize,
+} from './units/size-text';
 export { units } from './units/unit-group';
 
 export {

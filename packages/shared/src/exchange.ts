@@ -296,6 +296,8 @@ export interface ListingDto extends Omit<ListingSummaryDto, 'sellerName'> {
   photos: ListingPhotoDto[];
   seller: SellerDto;
   isMine: boolean;
+  /** Who a sold listing went to, when the seller chose a member: shown to that seller and that buyer only. */
+  soldTo?: { displayName: string; isMe: boolean };
   createdAt: string;
   updatedAt: string;
 }

@@ -10,7 +10,8 @@ import type {
 import { Listing } from '../../models';
 import { getStorage } from '../uploads/storage';
 import { fitOf, type BoatNeeds } from './fit';
-import { ListingSearchEngine, termsOf } from './listing-search-engine';
+import { ListingSearchEngine } from './listing-search-engine';
+import { parseQuery, termsOf } from './search-terms';
 import { ratingOf, specsText, type ListingRating } from './listing-specs';
 
 /** One searchable (active, visible) listing as the index keeps it, with what the result card shows. */
@@ -27,6 +28,8 @@ export interface IndexedListing {
   harborId: number;
   harborName: string;
   sizeMm: number | null;
+  /** The stated length (chain, rope, snubber), m, or null. */
+  lengthM: number | null;
   thumbUrl: string | null;
   sellerName: string;
   publishedAtMs: number;
@@ -79,11 +82,12 @@ function toDoc(r: Row): IndexedListing {
     harborId: r.harbor_id,
     harborName: r.harbor_name,
     sizeMm: r.size_mm === null ? null : Number(r.size_mm),
+    lengthM: typeof specs.lengthM === 'number' ? specs.lengthM : null,
     thumbUrl: r.thumb_key ? getStorage().url(r.thumb_key) : null,
     sellerName: r.seller_name,
     publishedAtMs: new Date(r.published_at).getTime(),
     expiresAtMs: new Date(r.expires_at).getTime(),
-    rating: ratingOf(r.category, specs),
+    rating: ratingOf(r.category, specs, r.condition),
   };
 }
 
@@ -95,6 +99,8 @@ const newIndex = () =>
     // Sizes and lengths match exactly; words get prefix and (from 5 letters) one-typo matching.
     prefix: (term) => term.length > 2 && !/\d/.test(term),
     fuzzy: (term) => (term.length < 5 || /\d/.test(term) ? 0 : 1),
+    // The exchange's tokenizer, which reads the queries too (sizes, fractions, grades, lengths).
+    terms: termsOf,
   });
 
 let index = newIndex();
@@ -252,9 +258,31 @@ function swaps(term: string): string[] {
   return out;
 }
 
-/** The query's word groups: each word alone, or (`withSwaps`) with its swapped-letter spellings. */
-function groupsOf(q: string, withSwaps: boolean): string[][] {
-  return termsOf(q).map((w) => (withSwaps && w.length >= 4 ? [w, ...swaps(w)] : [w]));
+interface QueryPlan {
+  /** One group per query term: the term, or (`withSwaps`) a word with its swapped-letter spellings. */
+  groups: string[][];
+  minLengthM?: number;
+}
+
+/** The query's term groups and its minimum length (`parseQuery`: a length in the query is a minimum). */
+function planOf(q: string, withSwaps: boolean): QueryPlan {
+  const { terms, minLengthM } = parseQuery(q);
+  const groups = terms.map((t) =>
+    withSwaps && t.kind === 'word' && t.text.length >= 4 ? [t.text, ...swaps(t.text)] : [t.text],
+  );
+  return minLengthM === undefined ? { groups } : { groups, minLengthM };
+}
+
+const longEnough = (d: IndexedListing, minLengthM: number | undefined) =>
+  minLengthM === undefined || (d.lengthM !== null && d.lengthM >= minLengthM - 0.005);
+
+/** Hits of a planned query over the index (every document passing `keep` when it has no terms). */
+function searchPlan(plan: QueryPlan, keep: (d: IndexedListing) => boolean): Scored[] {
+  const ok = (d: IndexedListing) => longEnough(d, plan.minLengthM) && keep(d);
+  if (plan.groups.length > 0) return index.search(plan.groups, ok);
+  const out: Scored[] = [];
+  for (const doc of index.all()) if (ok(doc)) out.push({ doc, score: 0 });
+  return out;
 }
 
 type Order = (a: IndexedListing, b: IndexedListing) => number;
@@ -307,9 +335,9 @@ function runSearch(
   };
   let matched: Scored[];
   if (q) {
-    matched = index.search(groupsOf(q, false), keep);
+    matched = searchPlan(planOf(q, false), keep);
     // Nothing with one typo per word: also try each word with two neighbouring letters swapped ("chian").
-    if (matched.length === 0) matched = index.search(groupsOf(q, true), keep);
+    if (matched.length === 0) matched = searchPlan(planOf(q, true), keep);
   } else {
     matched = [];
     for (const doc of index.all()) if (keep(doc)) matched.push({ doc, score: 0 });
@@ -336,8 +364,7 @@ export function matchesCriteria(id: number, c: SavedSearchCriteria, nowMs = Date
   if (!q) return true;
   const only = (x: IndexedListing) => x.id === id;
   return (
-    index.search(groupsOf(q, false), only).length > 0 ||
-    index.search(groupsOf(q, true), only).length > 0
+    searchPlan(planOf(q, false), only).length > 0 || searchPlan(planOf(q, true), only).length > 0
   );
 }
 

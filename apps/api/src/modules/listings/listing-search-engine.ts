@@ -18,6 +18,11 @@ export interface EngineOptions<D> {
   prefix: (term: string) => boolean;
   /** Largest edit distance for a query word, 0 for none (MiniSearch `fuzzy`). */
   fuzzy: (term: string) => number;
+  /**
+   * The terms of a field's text (default: MiniSearch's tokenizer, `termsOf`). Queries arrive as term groups, so
+   * the caller reads them with the same function.
+   */
+  terms?: (text: string) => string[];
 }
 
 export interface EngineHit<D> {
@@ -31,7 +36,7 @@ const processTerm = MiniSearch.getDefault('processTerm') as (term: string) => st
 const BM25 = { k: 1.2, b: 0.7, d: 0.5 };
 const WEIGHT = { fuzzy: 0.45, prefix: 0.375 };
 
-/** The words of a text, as MiniSearch indexes and queries them. */
+/** The words of a text, as MiniSearch indexes and queries them (the default `terms`). */
 export function termsOf(text: string): string[] {
   const out: string[] = [];
   for (const t of tokenize(text)) {
@@ -100,7 +105,7 @@ export class ListingSearchEngine<D extends { id: number }> {
     const lengths: number[] = [];
     const held: number[] = [];
     this.fieldNames.forEach((field, f) => {
-      const words = termsOf(this.opts.text(doc, field));
+      const words = (this.opts.terms ?? termsOf)(this.opts.text(doc, field));
       const counts = new Map<string, number>();
       for (const w of words) counts.set(w, (counts.get(w) ?? 0) + 1);
       lengths.push(counts.size); // MiniSearch's field length: distinct words

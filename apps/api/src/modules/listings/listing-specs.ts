@@ -14,6 +14,7 @@ import {
   LISTING_CATEGORY_LABELS,
   LISTING_CONDITION_LABELS,
   type ListingCategory,
+  type ListingCondition,
   type listingInputSchema,
 } from '@app/shared';
 import { invalid } from '../../errors/app-error';
@@ -102,8 +103,20 @@ export function sizeMmOf(category: ListingCategory, specs: Specs): number | null
   }
 }
 
-/** The rating "fits my boat" compares, from @app/calc's tables (or the seller's stated WLL for other connectors). */
-export function ratingOf(category: ListingCategory, specs: Specs): ListingRating {
+/** Why gear sold for parts or repair is never flagged as fitting a boat. */
+export const FOR_PARTS_BASIS =
+  'Sold for parts or repair: not rated for use, so it is never shown as fitting a boat.';
+
+/**
+ * The rating "fits my boat" compares, from @app/calc's tables (or the seller's stated WLL for other connectors).
+ * Gear sold for parts or repair has none: its strength is unknown whatever its size.
+ */
+export function ratingOf(
+  category: ListingCategory,
+  specs: Specs,
+  condition: ListingCondition,
+): ListingRating {
+  if (condition === 'for-parts') return { kind: 'none', basis: FOR_PARTS_BASIS };
   try {
     if (category === 'chain') {
       const grade = s(specs.grade) as keyof typeof CHAIN_GRADE_LABELS;

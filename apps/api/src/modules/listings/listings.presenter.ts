@@ -46,7 +46,7 @@ export function toListingSummaryDto({ doc, fit }: SearchHit): ListingSummaryDto 
 export function toListingDto(
   listing: Listing,
   seller: SellerDto,
-  opts: { isMine: boolean; fit?: FitDto },
+  opts: { isMine: boolean; fit?: FitDto; soldTo?: ListingDto['soldTo'] },
 ): ListingDto {
   const photos = [...(listing.photos ?? [])].sort((a, b) => a.position - b.position || a.id - b.id);
   const first = photos[0];
@@ -74,5 +74,6 @@ export function toListingDto(
     createdAt: listing.createdAt.toISOString(),
     updatedAt: listing.updatedAt.toISOString(),
     ...(opts.fit ? { fit: opts.fit } : {}),
+    ...(opts.soldTo ? { soldTo: opts.soldTo } : {}),
   };
 }

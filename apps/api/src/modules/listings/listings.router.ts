@@ -53,13 +53,15 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
     const fit =
       fitsBoat && viewer
         ? fitOf(
-            ratingOf(listing.category, listing.specs),
+            ratingOf(listing.category, listing.specs, listing.condition),
             boatNeeds(await getOwnBoat(viewer, fitsBoat), windKn ?? DEFAULT_FIT_WIND_KN),
           )
         : undefined;
+    const soldTo = await listings.soldToFor(viewer, listing);
     return toListingDto(listing, seller, {
       isMine: viewer?.id === listing.sellerId,
       fit,
+      ...(soldTo ? { soldTo } : {}),
     });
   };
 

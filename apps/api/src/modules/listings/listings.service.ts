@@ -16,6 +16,7 @@ import { getSetting } from '../club/club.service';
 import { isPaidUp, membershipPaidUp } from '../dues/paid-up';
 import { actionEmail } from '../mail/templates';
 import { enqueueEmail } from '../mail/outbox.service';
+import { notify } from '../posts/notifications.service';
 import { notifySavedSearches } from '../saved-searches/saved-searches.service';
 import { refreshListing } from './listing-index';
 import { checkSpecs, sizeMmOf, type ParsedListing } from './listing-specs';
@@ -103,6 +104,25 @@ export async function getVisibleListing(viewer: User | null, id: number): Promis
   if (!listing) throw notFound('Listing');
   assertVisible(viewer, listing);
   return listing;
+}
+
+/**
+ * The member a sold listing went to, for the seller and that buyer only (undefined for everyone else, and when
+ * it was sold outside the club's conversations).
+ */
+export async function soldToFor(
+  viewer: User | null,
+  listing: Listing,
+): Promise<{ displayName: string; isMe: boolean } | undefined> {
+  if (!viewer || listing.status !== 'sold' || listing.soldThreadId === null) return undefined;
+  const thread = await ListingThread.findByPk(listing.soldThreadId, {
+    include: [{ model: User, as: 'buyer' }],
+  });
+  if (!thread || (viewer.id !== listing.sellerId && viewer.id !== thread.buyerId)) return undefined;
+  return {
+    displayName: thread.buyer?.displayName ?? 'Former member',
+    isMe: viewer.id === thread.buyerId,
+  };
 }
 
 /** Seller card: display name, member since (membership join date, else sign-up) and the paid-up badge. */
@@ -259,6 +279,7 @@ export async function relistListing(
   if (!['sold', 'expired', 'withdrawn'].includes(listing.status))
     throw new AppError('CONFLICT', 'Only a sold, expired or withdrawn listing can be relisted');
   await assertMayList(actor, at);
+  const soldThreadId = listing.status === 'sold' ? listing.soldThreadId : null;
   await transition(
     listing,
     ['sold', 'expired', 'withdrawn'],
@@ -271,6 +292,14 @@ export async function relistListing(
     },
     'Only a sold, expired or withdrawn listing can be relisted',
   );
+  const soldThread = soldThreadId === null ? null : await ListingThread.findByPk(soldThreadId);
+  if (soldThread)
+    await notify(
+      soldThread.buyerId,
+      'listing-sale-undone',
+      `${actor.displayName} put “${listing.title}” back on the exchange: it is no longer marked sold to you.`,
+      listingPath(id),
+    );
   await afterActivated(ctx, listing);
   return listing;
 }
@@ -290,7 +319,16 @@ export async function withdrawListing(actor: User, id: number) {
   return listing;
 }
 
-/** Active → sold, optionally to the buyer of one of the listing's threads (who is told by e-mail). */
+/** A listing's page inside the client, for in-app notices. */
+const listingPath = (id: number) => `/exchange/listings/${id}`;
+
+/**
+ * Active → sold, to the buyer of one of the listing's conversations (`threadId`) or to someone else (none). One
+ * transaction holds the conditional UPDATE (the loser of a race gets CONFLICT and nobody is told anything) and
+ * the notices: the buyer gets an in-app notice and an e-mail through the outbox, every other member who wrote
+ * about the listing an in-app notice that it is sold (their conversations close; the buyer's stays open for the
+ * hand-over).
+ */
 export async function markSold(
   ctx: ExchangeContext,
   actor: User,
@@ -301,35 +339,59 @@ export async function markSold(
   const listing = await getOwnListing(actor, id);
   if (listing.status !== 'active')
     throw new AppError('CONFLICT', 'Only an active listing can be marked sold');
+  const threads = await ListingThread.findAll({ where: { listingId: id } });
   let buyer: User | null = null;
   if (threadId !== undefined) {
-    const thread = await ListingThread.findByPk(threadId);
-    if (!thread || thread.listingId !== id)
-      throw invalid({ threadId: 'Choose one of this listing’s conversations' });
+    const thread = threads.find((t) => t.id === threadId);
+    if (!thread) throw invalid({ threadId: 'Choose one of this listing’s conversations' });
     buyer = await User.findByPk(thread.buyerId);
   }
-  await transition(
-    listing,
-    ['active'],
-    { status: 'sold', soldAt: at, soldThreadId: threadId ?? null },
-    'Only an active listing can be marked sold',
-  );
-  await refreshListing(id);
-  if (buyer)
-    await enqueueEmail(
-      actionEmail({
-        to: buyer.email,
-        kind: 'listing-sold-to-you',
-        subject: `Sold to you: ${listing.title}`,
-        greeting: `Hello ${buyer.displayName},`,
-        lines: [
-          `${actor.displayName} has marked “${listing.title}” as sold to you.`,
-          'Arrange hand-over in your conversation. Inspect used gear before you rely on it.',
-        ],
-        actionLabel: 'Open the listing',
-        actionUrl: listingUrl(ctx, id),
-      }),
+  const sequelize = Listing.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised');
+  const message = 'Only an active listing can be marked sold';
+  await sequelize.transaction(async (transaction) => {
+    const [affected] = await Listing.update(
+      { status: 'sold', soldAt: at, soldThreadId: threadId ?? null },
+      { where: { id, status: 'active' }, transaction },
     );
+    if (affected === 0) throw new AppError('CONFLICT', message);
+    if (buyer) {
+      await notify(
+        buyer.id,
+        'listing-sold-to-you',
+        `${actor.displayName} marked “${listing.title}” as sold to you. Arrange the hand-over in your conversation.`,
+        listingPath(id),
+        transaction,
+      );
+      await enqueueEmail(
+        actionEmail({
+          to: buyer.email,
+          kind: 'listing-sold-to-you',
+          subject: `Sold to you: ${listing.title}`,
+          greeting: `Hello ${buyer.displayName},`,
+          lines: [
+            `${actor.displayName} has marked “${listing.title}” as sold to you.`,
+            'Arrange hand-over in your conversation. Inspect used gear before you rely on it.',
+            'If this is a mistake, write to the seller: they can put the listing back on the exchange.',
+          ],
+          actionLabel: 'Open the listing',
+          actionUrl: listingUrl(ctx, id),
+        }),
+        transaction,
+      );
+    }
+    const others = [...new Set(threads.map((t) => t.buyerId))].filter((b) => b !== buyer?.id);
+    for (const other of others)
+      await notify(
+        other,
+        'listing-sold',
+        `“${listing.title}”, which you asked about, has been sold.`,
+        listingPath(id),
+        transaction,
+      );
+  });
+  await listing.reload();
+  await refreshListing(id);
   return listing;
 }
 

@@ -86,6 +86,62 @@ describe('GET /api/listings search', () => {
     );
   });
 
+  it('reads sizes, grades and lengths however they are written; a length in the query is a minimum', async () => {
+    const metric = await c.post('/api/listings', {
+      ...base({
+        title: 'Metric chain 8 mm, 50 m',
+        description: 'Long-link, galvanised, marked every 5 m.',
+        specs: { grade: 'G30', nominalMm: 8, lengthM: 50, galvanizing: 'good' },
+      }),
+      publish: true,
+    });
+    expect(metric.status).toBe(201);
+    const m8 = metric.body.data.id as number;
+    const q = async (text: string) =>
+      found(await c.get(`/api/listings?q=${encodeURIComponent(text)}`)).sort();
+    expect(await q('8mm chain')).toEqual([m8]);
+    expect(await q('8 mm chain')).toEqual([m8]);
+    expect(await q('chain 50m')).toEqual([m8]);
+    // chain38 is grade 43, 30 m; chain516 is grade 43, 15 m: "30m" asks for at least 30 m.
+    expect(await q('g43 chain 30m')).toEqual([ids.chain38]);
+    expect(await q('grade 43 chain 30 m')).toEqual([ids.chain38]);
+    expect(await q('G4 chain')).toEqual([ids.chain38, ids.chain516].sort());
+    expect(await q('g43 chain 100 ft')).toEqual([]); // 30.48 m: just over 30 m
+    expect(await q('chain 90 ft')).toEqual([ids.chain38, m8].sort());
+    expect(await q('5/16')).toEqual([ids.chain516]);
+    expect(await q('5/16"')).toEqual([ids.chain516]);
+    expect(await q('3/8 in')).toEqual([ids.chain38]);
+    expect(await q('0.375 in chain')).toEqual([ids.chain38]);
+    expect(await q('16mm nylon')).toEqual([ids.rode16]);
+    // A length alone browses everything at least that long (chain, rope and snubbers state one).
+    expect(await q('45 m')).toEqual([ids.rode16, m8].sort());
+  });
+
+  it('never says gear for parts or repair fits a boat', async () => {
+    const boat = (
+      await c.post('/api/boats', { name: 'Parts Test', hull: 'sail', loaM: 9.1, bowHeightM: 1.1 })
+    ).body.data.id as number;
+    const parts = (
+      await c.post('/api/listings', {
+        ...base({ title: 'Heavy chain for parts', condition: 'for-parts' }),
+        publish: true,
+      })
+    ).body.data.id as number;
+    // The same chain in good condition fits this boat (see the fits-my-boat tests below).
+    expect(
+      (await c.get(`/api/listings/${ids.chain38}?fitsBoat=${boat}`)).body.data.fit.status,
+    ).toBe('fits');
+    const detail = await c.get(`/api/listings/${parts}?fitsBoat=${boat}`);
+    expect(detail.body.data.fit.status).toBe('not-rated');
+    expect(detail.body.data.fit.reason).toMatch(/parts or repair/);
+    const list = await c.get(`/api/listings?fitsBoat=${boat}&pageSize=50`);
+    const card = (list.body.data as Array<{ id: number; fit: { status: string } }>).find(
+      (l) => l.id === parts,
+    );
+    expect(card?.fit.status).toBe('not-rated');
+    expect(found(await c.get(`/api/listings?fitsBoat=${boat}&fitsOnly=true`))).not.toContain(parts);
+  });
+
   it('filters by category, harbour, price range, size range and condition, and sorts', async () => {
     expect(found(await c.get('/api/listings?category=anchor')).sort()).toEqual(
       [ids.plow60, ids.plow5].sort(),

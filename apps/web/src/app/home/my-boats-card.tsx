@@ -1,3 +1,4 @@
+import { inchFractionLabel } from '@app/calc';
 import type { BoatDto, TacklePlanDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { paths } from '../../config/paths';
@@ -9,7 +10,12 @@ import { HomeCard, HomeEmpty } from './home-card';
 const ANCHOR_WORDS: Record<string, string> = { scoop: 'scoop / roll-bar' };
 
 function chainSize(chain: NonNullable<TacklePlanDto['components']['chain']>): string {
-  const size = chain.nominalMm !== undefined ? `${chain.nominalMm} mm` : `${chain.tradeSizeIn} in`;
+  const size =
+    chain.nominalMm !== undefined
+      ? `${chain.nominalMm} mm`
+      : chain.tradeSizeIn !== undefined
+        ? inchFractionLabel(chain.tradeSizeIn)
+        : '?';
   return `${size} ${chain.grade}`;
 }
 

@@ -47,10 +47,11 @@ export function ExchangeRoute() {
   const page = Number(filters.page ?? '1');
   const meta = search.data?.meta;
   const pages = meta ? Math.max(1, Math.ceil(meta.total / meta.pageSize)) : 1;
-  const apply = (next: Record<string, string | number | undefined>) => {
+  // Typing replaces the address instead of adding a history entry per pause; lists and pages push one.
+  const apply = (next: Record<string, string | number | undefined>, replace = false) => {
     const p = new URLSearchParams();
     for (const [k, v] of Object.entries(next)) if (v !== undefined && v !== '') p.set(k, String(v));
-    setParams(p);
+    setParams(p, { replace });
   };
   return (
     <Page
@@ -81,12 +82,11 @@ export function ExchangeRoute() {
         )}
       </div>
       <SearchFilters
-        key={params.toString()}
         value={filters}
         harbors={club.data?.harbors ?? []}
         boats={user ? (boats.data ?? []) : []}
         errors={fieldErrors}
-        onChange={(next) => apply(next)}
+        onChange={(next, { typing }) => apply(next, typing)}
       />
       {meta?.fitBasis && (
         <Alert

@@ -1,4 +1,4 @@
-import { Link, useParams } from 'react-router-dom';
+import { Link, useLocation, useParams } from 'react-router-dom';
 import { Alert } from '../../components/ui/alert';
 import { Page } from '../../components/ui/page';
 import { Spinner } from '../../components/ui/spinner';
@@ -13,11 +13,13 @@ import { ListingForm } from '../../features/exchange/components/listing-form';
 import { listingFormValues } from '../../features/exchange/utils/listing-form-values';
 import { OwnerActions } from '../../features/exchange/components/owner-actions';
 import { PhotoManager } from '../../features/exchange/components/photo-manager';
+import type { ListingEditorNotice } from '../../features/exchange/utils/editor-notice';
 
 function EditListingScreen({ id }: { id: number }) {
   const listing = useListing(id);
   const club = useClub();
   const save = useSaveListing();
+  const { notice, problem } = (useLocation().state ?? {}) as ListingEditorNotice;
   if (listing.isPending) return <Spinner label="Loading the listing…" />;
   if (listing.isError) return <Alert tone="error">{errorMessage(listing.error)}</Alert>;
   const l = listing.data;
@@ -30,6 +32,8 @@ function EditListingScreen({ id }: { id: number }) {
       <Link to={paths.listing.href(l.id)} className="text-sm">
         See the listing page
       </Link>
+      {problem && <Alert tone="error">{problem}</Alert>}
+      {notice && !problem && l.status === 'draft' && <Alert tone="success">{notice}</Alert>}
       <OwnerActions listing={l} editHref={paths.listingEdit.href(l.id)} />
       <PhotoManager listingId={l.id} photos={l.photos} />
       <section aria-labelledby="details-heading" className="flex max-w-xl flex-col gap-3">

@@ -1,42 +1,76 @@
+import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { Page } from '../../components/ui/page';
 import { paths } from '../../config/paths';
 import { ApiError } from '../../lib/api-client';
 import { RequireAuth } from '../../features/auth/components/require-auth';
 import { useClub } from '../../features/club/api/get-club';
-import { useSaveListing } from '../../features/exchange/api/save-listing';
+import { useCreateListing } from '../../features/exchange/api/create-listing';
 import { ListingForm } from '../../features/exchange/components/listing-form';
+import { PendingPhotos } from '../../features/exchange/components/pending-photos';
+import type { ListingEditorNotice } from '../../features/exchange/utils/editor-notice';
 import { listingFormValues } from '../../features/exchange/utils/listing-form-values';
 
 function NewListingScreen() {
   const club = useClub();
-  const save = useSaveListing();
+  const create = useCreateListing();
   const navigate = useNavigate();
+  const [photos, setPhotos] = useState<File[]>([]);
+  const [progress, setProgress] = useState<number | null>(null);
   const serverError =
-    save.error instanceof ApiError
-      ? { message: save.error.message, fields: save.error.fields }
+    create.error instanceof ApiError
+      ? { message: create.error.message, fields: create.error.fields }
       : null;
   return (
     <Page
       title="List gear"
       width="narrow"
-      intro={<p>Save a draft first; then add photos and publish it.</p>}
+      intro={<p>Describe the gear, add photos, then publish it or keep it as a draft.</p>}
     >
       <ListingForm
         initial={listingFormValues()}
         harbors={club.data?.harbors ?? []}
-        submitLabel="Save draft and add photos"
-        isPending={save.isPending}
+        actions={[
+          { intent: 'draft', label: 'Save draft', variant: 'secondary' },
+          { intent: 'publish', label: 'Publish' },
+        ]}
+        isPending={create.isPending}
         serverError={serverError}
-        onSubmit={(input) =>
-          save.mutate({ input }, { onSuccess: (l) => void navigate(paths.listingEdit.href(l.id)) })
-        }
-      />
+        onSubmit={(input, intent) => {
+          const publish = intent === 'publish';
+          create.mutate(
+            { input, photos, publish, onProgress: setProgress },
+            {
+              onSettled: () => setProgress(null),
+              onSuccess: ({ listing, problem }) => {
+                if (publish && !problem) {
+                  void navigate(paths.listing.href(listing.id));
+                  return;
+                }
+                const state: ListingEditorNotice = problem
+                  ? { problem }
+                  : { notice: 'Draft saved. Publish it when you are ready.' };
+                void navigate(paths.listingEdit.href(listing.id), { state });
+              },
+            },
+          );
+        }}
+      >
+        <PendingPhotos files={photos} onChange={setPhotos} disabled={create.isPending} />
+        {progress !== null && (
+          <div className="w-full max-w-xs">
+            <progress value={progress} max={1} className="w-full" aria-label="Upload progress" />
+            <p className="text-xs" role="status">
+              Uploading photos… {Math.round(progress * 100)} %
+            </p>
+          </div>
+        )}
+      </ListingForm>
     </Page>
   );
 }
 
-/** A new listing (signed-in members). */
+/** A new listing (signed-in members): details and photos in one step, saved as a draft or published. */
 export function ListingNewRoute() {
   return (
     <RequireAuth>

@@ -1,4 +1,5 @@
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Alert } from '../../components/ui/alert';
 import { Page } from '../../components/ui/page';
 import { UnavailablePage } from '../../components/ui/unavailable-page';
 import { Spinner } from '../../components/ui/spinner';
@@ -36,6 +37,15 @@ export function ListingRoute() {
       <Link to={paths.exchange.href()} className="text-sm">
         ← Back to the exchange
       </Link>
+      {l.soldTo?.isMe && (
+        <Alert tone="success" title="Sold to you">
+          <p>
+            {l.seller.displayName} marked this as sold to you. Arrange the hand-over in your{' '}
+            <Link to={paths.messages.href()}>messages</Link>, and inspect the gear before you rely
+            on it.
+          </p>
+        </Alert>
+      )}
       <ListingDetail listing={l} />
       {l.isMine && <OwnerActions listing={l} editHref={paths.listingEdit.href(l.id)} />}
       {!l.isMine && l.status === 'active' && user && (

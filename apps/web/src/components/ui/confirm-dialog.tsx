@@ -10,6 +10,8 @@ export interface ConfirmDialogProps {
   /** Use the red button for something that takes a right away or deletes. */
   isDestructive?: boolean;
   isPending?: boolean;
+  /** Keeps the confirm button off until the question inside is answered. */
+  confirmDisabled?: boolean;
   onConfirm: () => void;
   onCancel: () => void;
 }
@@ -26,6 +28,7 @@ export function ConfirmDialog({
   cancelLabel = 'Cancel',
   isDestructive = false,
   isPending = false,
+  confirmDisabled = false,
   onConfirm,
   onCancel,
 }: ConfirmDialogProps) {
@@ -79,6 +82,7 @@ export function ConfirmDialog({
             variant={isDestructive ? 'danger' : 'primary'}
             onClick={onConfirm}
             isPending={isPending}
+            disabled={confirmDisabled}
           >
             {confirmLabel}
           </Button>

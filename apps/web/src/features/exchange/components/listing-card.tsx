@@ -1,6 +1,6 @@
 import type { ListingSummaryDto } from '@app/shared';
 import { Link } from 'react-router-dom';
-import { categoryLabel, conditionLabel, formatPrice, specRows } from '../utils/format';
+import { categoryLabel, conditionLabel, formatPrice, specDetails } from '../utils/format';
 import { FitBadge } from './fit-badge';
 
 export interface ListingCardProps {
@@ -10,7 +10,7 @@ export interface ListingCardProps {
 
 /** One search result: photo, title, price, harbour, key specs and the fit flag. */
 export function ListingCard({ listing, href }: ListingCardProps) {
-  const specs = specRows(listing.category, listing.specs).slice(0, 3);
+  const specs = specDetails(listing.category, listing.specs).slice(0, 3);
   return (
     <li className="flex flex-col overflow-hidden rounded-lg border border-sand-300 bg-sand-50 shadow-card">
       {listing.thumbUrl ? (
@@ -37,7 +37,7 @@ export function ListingCard({ listing, href }: ListingCardProps) {
         </p>
         <p className="text-xs text-ink-700">
           {conditionLabel(listing.condition)}
-          {specs.map(([k, v]) => ` · ${k.toLowerCase()} ${v}`).join('')}
+          {specs.map((s) => ` · ${s.short}`).join('')}
         </p>
         {listing.fit && <FitBadge fit={listing.fit} />}
       </div>

@@ -15,9 +15,10 @@ import {
   WINDLASS_PARTS,
   type ListingInput,
 } from '@app/shared';
+import { useRef, type ReactNode } from 'react';
 import { useForm, useWatch, type FieldErrors } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
+import { Button, type ButtonVariant } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
 import { formSchema, type ListingFormValues } from '../utils/listing-form-values';
 import { ExchangeSelect } from './select';
@@ -26,13 +27,24 @@ const opts = (values: readonly string[], labels?: Record<string, string>) =>
   values.map((v) => ({ value: v, label: labels?.[v] ?? v.replace(/-/g, ' ') }));
 const BLANK = { value: '', label: '—' };
 
+export interface ListingFormAction {
+  /** Passed to onSubmit, so one form can save a draft or publish. */
+  intent: string;
+  label: string;
+  variant?: ButtonVariant;
+}
+
 export interface ListingFormProps {
   initial: ListingFormValues;
   harbors: ReadonlyArray<{ id: number; name: string }>;
-  submitLabel: string;
+  /** One submit button (intent "save"), unless `actions` names several. */
+  submitLabel?: string;
+  actions?: readonly ListingFormAction[];
   isPending: boolean;
   serverError?: { message: string; fields: Record<string, string> } | null;
-  onSubmit: (input: ListingInput) => void;
+  onSubmit: (input: ListingInput, intent: string) => void;
+  /** Shown above the buttons (the new-listing form's photo picker). */
+  children?: ReactNode;
 }
 
 function errorAt(
@@ -50,17 +62,30 @@ function errorAt(
 export function ListingForm({
   initial,
   harbors,
-  submitLabel,
+  submitLabel = 'Save',
+  actions,
   isPending,
   serverError,
   onSubmit,
+  children,
 }: ListingFormProps) {
+  const intent = useRef('save');
+  const buttons = actions ?? [{ intent: 'save', label: submitLabel }];
   const form = useForm({ resolver: zodResolver(formSchema), defaultValues: initial });
   const { register, handleSubmit, control, formState } = form;
   const category = useWatch({ control, name: 'category' });
   const server = serverError?.fields ?? {};
   const err = (p: string) => errorAt(formState.errors, p, server);
   const spec = (key: string) => register(`specs.${key}`);
+  const inchField = (key: string, label: string, hint: string) => (
+    <TextField
+      label={label}
+      autoComplete="off"
+      hint={hint}
+      error={err(`specs.${key}`)}
+      {...spec(key)}
+    />
+  );
   const numField = (key: string, label: string, step = 'any', hint?: string) => (
     <TextField
       label={label}
@@ -75,7 +100,7 @@ export function ListingForm({
   return (
     <form
       noValidate
-      onSubmit={(e) => void handleSubmit((v) => onSubmit(v as ListingInput))(e)}
+      onSubmit={(e) => void handleSubmit((v) => onSubmit(v as ListingInput, intent.current))(e)}
       className="flex flex-col gap-4"
     >
       {serverError && Object.keys(server).length === 0 && (
@@ -135,11 +160,10 @@ export function ListingForm({
               options={[BLANK, ...opts(CHAIN_GRADE_IDS)]}
               {...spec('grade')}
             />
-            {numField(
+            {inchField(
               'tradeSizeIn',
               'Trade size (in)',
-              'any',
-              'Decimal inches, e.g. 0.375 for 3/8. Leave empty for metric.',
+              'A fraction such as 5/16 or 3/8 (decimals work too). Leave empty for metric.',
             )}
             {numField('nominalMm', 'Metric size (mm)', 'any', 'Leave empty for a trade size.')}
             {category === 'chain' && numField('lengthM', 'Length (m)')}
@@ -191,12 +215,7 @@ export function ListingForm({
               options={[BLANK, ...opts(LISTING_CONNECTOR_KINDS)]}
               {...spec('kind')}
             />
-            {numField(
-              'nominalIn',
-              'Size (in)',
-              'any',
-              'Shackle size in decimal inches, e.g. 0.375.',
-            )}
+            {inchField('nominalIn', 'Size (in)', 'Shackle size as a fraction, e.g. 3/8 or 1/2.')}
             {numField('wllN', 'Marked working load (N)', 'any', 'Only what is marked on the part.')}
           </>
         )}
@@ -248,10 +267,22 @@ export function ListingForm({
         Describe wear honestly. Buyers rely on markings and their own inspection; ratings shown on
         Rodewise are for new gear.
       </p>
-      <div>
-        <Button type="submit" isPending={isPending} pendingLabel="Saving…">
-          {submitLabel}
-        </Button>
+      {children}
+      <div className="flex flex-wrap gap-2">
+        {buttons.map((b) => (
+          <Button
+            key={b.intent}
+            type="submit"
+            variant={b.variant ?? 'primary'}
+            isPending={isPending}
+            pendingLabel="Saving…"
+            onClick={() => {
+              intent.current = b.intent;
+            }}
+          >
+            {b.label}
+          </Button>
+        ))}
       </div>
     </form>
   );

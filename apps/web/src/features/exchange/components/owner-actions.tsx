@@ -7,19 +7,32 @@ import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/form-errors';
 import { useChangeListingStatus } from '../api/change-listing-status';
 import { useListingThreads } from '../api/get-listing-threads';
-import { ExchangeSelect } from './select';
+import { MarkSoldDialog } from './mark-sold-dialog';
 
-/** The seller's controls: publish, edit, mark sold (to a buyer who wrote), relist, withdraw. */
+/** The seller's controls: publish, edit, mark sold (asked in a dialog, to a buyer who wrote), relist, withdraw. */
 export function OwnerActions({ listing, editHref }: { listing: ListingDto; editHref: string }) {
   const change = useChangeListingStatus();
   const threads = useListingThreads(listing.id, listing.status === 'active');
-  const [buyer, setBuyer] = useState('');
-  const act = (action: 'publish' | 'relist' | 'withdraw' | 'sold') =>
-    change.mutate({
-      id: listing.id,
-      action,
-      threadId: action === 'sold' && buyer ? Number(buyer) : undefined,
-    });
+  const [asking, setAsking] = useState(false);
+  const [soldNote, setSoldNote] = useState<string | null>(null);
+  const act = (action: 'publish' | 'relist' | 'withdraw') => {
+    setSoldNote(null);
+    change.mutate({ id: listing.id, action });
+  };
+  const sell = (threadId: number | undefined) =>
+    change.mutate(
+      { id: listing.id, action: 'sold', threadId },
+      {
+        onSuccess: (l) => {
+          setAsking(false);
+          setSoldNote(
+            l.soldTo
+              ? `Marked sold to ${l.soldTo.displayName}, who has been told in Rodewise and by e-mail.`
+              : 'Marked sold.',
+          );
+        },
+      },
+    );
   return (
     <section
       aria-labelledby="owner-heading"
@@ -46,25 +59,16 @@ export function OwnerActions({ listing, editHref }: { listing: ListingDto; editH
           </Button>
         )}
         {listing.status === 'active' && (
-          <>
-            {threads.data && threads.data.length > 0 && (
-              <ExchangeSelect
-                label="Sold to"
-                value={buyer}
-                onChange={(e) => setBuyer(e.currentTarget.value)}
-                options={[
-                  { value: '', label: 'Someone else' },
-                  ...threads.data.map((t) => ({
-                    value: String(t.id),
-                    label: t.otherParty.displayName,
-                  })),
-                ]}
-              />
-            )}
-            <Button isPending={change.isPending} onClick={() => act('sold')}>
-              Mark sold
-            </Button>
-          </>
+          <Button
+            isPending={change.isPending && !asking}
+            disabled={threads.isPending}
+            onClick={() => {
+              change.reset();
+              setAsking(true);
+            }}
+          >
+            Mark sold…
+          </Button>
         )}
         {['sold', 'expired', 'withdrawn'].includes(listing.status) && (
           <Button isPending={change.isPending} onClick={() => act('relist')}>
@@ -77,7 +81,26 @@ export function OwnerActions({ listing, editHref }: { listing: ListingDto; editH
           </Button>
         )}
       </div>
-      {change.isError && <Alert tone="error">{errorMessage(change.error)}</Alert>}
+      {listing.status === 'sold' && listing.soldTo && !soldNote && (
+        <p className="text-sm">Sold to {listing.soldTo.displayName}.</p>
+      )}
+      {soldNote && (
+        <Alert tone="success">
+          {soldNote} If the sale falls through, relist it: the buyer is told.
+        </Alert>
+      )}
+      {change.isError && !asking && <Alert tone="error">{errorMessage(change.error)}</Alert>}
+      {asking && (
+        <MarkSoldDialog
+          isOpen
+          title={listing.title}
+          threads={threads.data ?? []}
+          isPending={change.isPending}
+          error={change.isError ? errorMessage(change.error) : null}
+          onConfirm={sell}
+          onCancel={() => setAsking(false)}
+        />
+      )}
     </section>
   );
 }

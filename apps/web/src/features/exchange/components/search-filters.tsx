@@ -1,13 +1,18 @@
+import { parseSizeText, sizeTextOf } from '@app/calc';
 import {
   LISTING_CATEGORIES,
   LISTING_CATEGORY_LABELS,
   LISTING_CONDITIONS,
   LISTING_CONDITION_LABELS,
 } from '@app/shared';
-import type { FormEvent } from 'react';
+import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
+import { cn } from '../../../lib/cn';
+import { activeFilterCount } from '../utils/filters';
 import { ExchangeSelect } from './select';
+
+export type FilterParams = Record<string, string | number | undefined>;
 
 export interface SearchFiltersProps {
   /** Current filters as they stand in the address bar. */
@@ -16,45 +21,161 @@ export interface SearchFiltersProps {
   /** The member's boats; empty for visitors. */
   boats: ReadonlyArray<{ id: number; name: string }>;
   errors?: Record<string, string>;
-  onChange: (next: Record<string, string | number | undefined>) => void;
+  /** Called with every filter as it should stand; `typing` when a text box changed (replace, not push). */
+  onChange: (next: FilterParams, opts: { typing: boolean }) => void;
+  /** How long typing must pause before text filters apply, ms. */
+  debounceMs?: number;
+}
+
+interface Draft {
+  q: string;
+  category: string;
+  harborId: string;
+  condition: string;
+  sort: string;
+  priceMin: string;
+  priceMax: string;
+  sizeMin: string;
+  sizeMax: string;
+  fitsBoat: string;
+  windKn: string;
+  fitsOnly: boolean;
 }
 
 const ANY = { value: '', label: 'Any' };
-const text = (f: FormData, k: string) => {
-  const v = f.get(k);
-  return typeof v === 'string' && v.trim() !== '' ? v.trim() : undefined;
-};
-const cents = (v: string | undefined) =>
-  v === undefined ? undefined : Math.round(Number(v) * 100);
+const price = (v: string | undefined) => (v ? String(Number(v) / 100) : '');
+const size = (v: string | undefined) => (v && Number(v) > 0 ? sizeTextOf(Number(v)) : (v ?? ''));
 
-/** The search box and facet filters; applies on submit so typing does not fire a request per key. */
+function draftOf(value: Record<string, string>): Draft {
+  return {
+    q: value.q ?? '',
+    category: value.category ?? '',
+    harborId: value.harborId ?? '',
+    condition: value.condition ?? '',
+    sort: value.sort ?? '',
+    priceMin: price(value.priceMin),
+    priceMax: price(value.priceMax),
+    sizeMin: size(value.sizeMinMm),
+    sizeMax: size(value.sizeMaxMm),
+    fitsBoat: value.fitsBoat ?? '',
+    windKn: value.windKn ?? '30',
+    fitsOnly: value.fitsOnly === 'true',
+  };
+}
+
+const blank = (v: string) => (v.trim() === '' ? undefined : v.trim());
+const cents = (v: string) => {
+  const t = blank(v);
+  return t === undefined || !Number.isFinite(Number(t)) ? t : Math.round(Number(t) * 100);
+};
+
+/** A typed size as the API's millimetres, or the message to show under the field. */
+function sizeParam(text: string): { mm?: string; error?: string } {
+  if (text.trim() === '') return {};
+  const parsed = parseSizeText(text);
+  if (!parsed.ok) return { error: parsed.message };
+  return { mm: String(Math.round(parsed.mm * 10_000) / 10_000) };
+}
+
+function paramsOf(d: Draft): { params: FilterParams; errors: Record<string, string> } {
+  const min = sizeParam(d.sizeMin);
+  const max = sizeParam(d.sizeMax);
+  const errors: Record<string, string> = {};
+  if (min.error) errors.sizeMinMm = min.error;
+  if (max.error) errors.sizeMaxMm = max.error;
+  const fitsBoat = blank(d.fitsBoat);
+  return {
+    errors,
+    params: {
+      q: blank(d.q),
+      category: blank(d.category),
+      harborId: blank(d.harborId),
+      condition: blank(d.condition),
+      priceMin: cents(d.priceMin),
+      priceMax: cents(d.priceMax),
+      sizeMinMm: min.mm,
+      sizeMaxMm: max.mm,
+      sort: blank(d.sort),
+      fitsBoat,
+      windKn: fitsBoat ? blank(d.windKn) : undefined,
+      fitsOnly: fitsBoat && d.fitsOnly ? 'true' : undefined,
+    },
+  };
+}
+
+const keyOf = (p: FilterParams) =>
+  JSON.stringify(
+    Object.entries(p)
+      .filter(([k, v]) => v !== undefined && v !== '' && k !== 'page')
+      .map(([k, v]) => [k, String(v)])
+      .sort(([a], [b]) => (a ?? '').localeCompare(b ?? '')),
+  );
+
+/**
+ * The search box and facet filters. Lists, the checkbox and the boat apply at once; the search text, prices and
+ * sizes apply when typing pauses (or on Enter / Search). Sizes take millimetres or inches ("8 mm", "5/16",
+ * "3/8 in"). On a phone the filters fold behind a "Filters" button that counts the ones in use.
+ */
 export function SearchFilters({
   value,
   harbors,
   boats,
   errors = {},
   onChange,
+  debounceMs = 400,
 }: SearchFiltersProps) {
+  const [draft, setDraft] = useState<Draft>(() => draftOf(value));
+  const [localErrors, setLocalErrors] = useState<Record<string, string>>({});
+  const [open, setOpen] = useState(false);
+  const panelId = useId();
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const emitted = useRef(keyOf(value));
+
+  // The address bar changed by itself (back, a link, paging): show what it says.
+  const incoming = keyOf(value);
+  useEffect(() => {
+    if (incoming !== emitted.current) {
+      emitted.current = incoming;
+      setDraft(draftOf(value));
+      setLocalErrors({});
+    }
+    // `value` is read only when its key changes.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [incoming]);
+  useEffect(
+    () => () => {
+      if (timer.current) clearTimeout(timer.current);
+    },
+    [],
+  );
+
+  const apply = (d: Draft, typing: boolean) => {
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
+    const { params, errors: found } = paramsOf(d);
+    setLocalErrors(found);
+    if (Object.keys(found).length > 0) return;
+    const key = keyOf(params);
+    if (key === emitted.current) return;
+    emitted.current = key;
+    onChange(params, { typing });
+  };
+  const set = (patch: Partial<Draft>, mode: 'now' | 'typing') => {
+    const next = { ...draft, ...patch };
+    setDraft(next);
+    if (mode === 'now') apply(next, false);
+    else {
+      if (timer.current) clearTimeout(timer.current);
+      timer.current = setTimeout(() => apply(next, true), debounceMs);
+    }
+  };
   const handleSubmit = (e: FormEvent<HTMLFormElement>) => {
     e.preventDefault();
-    const f = new FormData(e.currentTarget);
-    const fitsBoat = text(f, 'fitsBoat');
-    onChange({
-      q: text(f, 'q'),
-      category: text(f, 'category'),
-      harborId: text(f, 'harborId'),
-      condition: text(f, 'condition'),
-      priceMin: cents(text(f, 'priceMin')),
-      priceMax: cents(text(f, 'priceMax')),
-      sizeMinMm: text(f, 'sizeMinMm'),
-      sizeMaxMm: text(f, 'sizeMaxMm'),
-      sort: text(f, 'sort'),
-      fitsBoat: fitsBoat,
-      windKn: fitsBoat ? text(f, 'windKn') : undefined,
-      fitsOnly: fitsBoat && f.get('fitsOnly') === 'on' ? 'true' : undefined,
-    });
+    apply(draft, false);
   };
-  const price = (v: string | undefined) => (v ? String(Number(v) / 100) : '');
+  const err = (k: string) => localErrors[k] ?? errors[k];
+  const count = activeFilterCount(value);
+
   return (
     <form
       role="search"
@@ -67,125 +188,155 @@ export function SearchFilters({
           label="Search gear"
           name="q"
           type="search"
-          defaultValue={value.q ?? ''}
-          placeholder="e.g. 3/8 grade 43 chain"
-          error={errors.q}
+          value={draft.q}
+          onChange={(e) => set({ q: e.currentTarget.value }, 'typing')}
+          placeholder="e.g. 3/8 grade 43 chain, 30 m"
+          error={err('q')}
           className="flex-1"
         />
-        <Button type="submit">Search</Button>
+        <div className="flex gap-2">
+          <Button type="submit" className="flex-1 sm:flex-none">
+            Search
+          </Button>
+          <Button
+            type="button"
+            variant="secondary"
+            className="flex-1 md:hidden"
+            aria-expanded={open}
+            aria-controls={panelId}
+            aria-label={count > 0 ? `Filters, ${count} in use` : 'Filters'}
+            onClick={() => setOpen((o) => !o)}
+          >
+            Filters
+            {count > 0 && (
+              <span aria-hidden="true" className="rounded-pill bg-ink-900 px-2 text-xs text-white">
+                {count}
+              </span>
+            )}
+          </Button>
+        </div>
       </div>
-      <div className="grid grid-cols-2 gap-3 md:grid-cols-4">
-        <ExchangeSelect
-          label="Category"
-          name="category"
-          defaultValue={value.category ?? ''}
-          error={errors.category}
-          options={[
-            ANY,
-            ...LISTING_CATEGORIES.map((c) => ({ value: c, label: LISTING_CATEGORY_LABELS[c] })),
-          ]}
-        />
-        <ExchangeSelect
-          label="Harbour"
-          name="harborId"
-          defaultValue={value.harborId ?? ''}
-          options={[ANY, ...harbors.map((h) => ({ value: String(h.id), label: h.name }))]}
-        />
-        <ExchangeSelect
-          label="Condition"
-          name="condition"
-          defaultValue={value.condition ?? ''}
-          options={[
-            ANY,
-            ...LISTING_CONDITIONS.map((c) => ({ value: c, label: LISTING_CONDITION_LABELS[c] })),
-          ]}
-        />
-        <ExchangeSelect
-          label="Sort by"
-          name="sort"
-          defaultValue={value.sort ?? ''}
-          options={[
-            { value: '', label: 'Best match / newest' },
-            { value: 'newest', label: 'Newest' },
-            { value: 'price-asc', label: 'Price, low to high' },
-            { value: 'price-desc', label: 'Price, high to low' },
-          ]}
-        />
-        <TextField
-          label="Lowest price"
-          name="priceMin"
-          type="number"
-          min="0"
-          step="0.01"
-          inputMode="decimal"
-          defaultValue={price(value.priceMin)}
-          error={errors.priceMin}
-        />
-        <TextField
-          label="Highest price"
-          name="priceMax"
-          type="number"
-          min="0"
-          step="0.01"
-          inputMode="decimal"
-          defaultValue={price(value.priceMax)}
-          error={errors.priceMax}
-        />
-        <TextField
-          label="Smallest size (mm)"
-          name="sizeMinMm"
-          type="number"
-          min="0"
-          step="0.1"
-          inputMode="decimal"
-          defaultValue={value.sizeMinMm ?? ''}
-          error={errors.sizeMinMm}
-        />
-        <TextField
-          label="Largest size (mm)"
-          name="sizeMaxMm"
-          type="number"
-          min="0"
-          step="0.1"
-          inputMode="decimal"
-          defaultValue={value.sizeMaxMm ?? ''}
-          error={errors.sizeMaxMm}
-        />
-      </div>
-      {boats.length > 0 && (
-        <fieldset className="grid grid-cols-1 gap-3 rounded-md border border-sand-300 p-3 sm:grid-cols-3">
-          <legend className="px-1 text-sm font-bold">Fits my boat</legend>
+      <div id={panelId} className={cn('flex-col gap-4', open ? 'flex' : 'hidden', 'md:flex')}>
+        <div className="grid grid-cols-2 gap-3 md:grid-cols-4">
           <ExchangeSelect
-            label="Boat"
-            name="fitsBoat"
-            defaultValue={value.fitsBoat ?? ''}
+            label="Category"
+            name="category"
+            value={draft.category}
+            onChange={(e) => set({ category: e.currentTarget.value }, 'now')}
+            error={err('category')}
             options={[
-              { value: '', label: 'No boat' },
-              ...boats.map((b) => ({ value: String(b.id), label: b.name })),
+              ANY,
+              ...LISTING_CATEGORIES.map((c) => ({ value: c, label: LISTING_CATEGORY_LABELS[c] })),
             ]}
           />
           <ExchangeSelect
-            label="Design wind"
-            name="windKn"
-            defaultValue={value.windKn ?? '30'}
+            label="Harbour"
+            name="harborId"
+            value={draft.harborId}
+            onChange={(e) => set({ harborId: e.currentTarget.value }, 'now')}
+            options={[ANY, ...harbors.map((h) => ({ value: String(h.id), label: h.name }))]}
+          />
+          <ExchangeSelect
+            label="Condition"
+            name="condition"
+            value={draft.condition}
+            onChange={(e) => set({ condition: e.currentTarget.value }, 'now')}
             options={[
-              { value: '15', label: '15 kn (light)' },
-              { value: '30', label: '30 kn (working)' },
-              { value: '42', label: '42 kn (storm)' },
-              { value: '50', label: '50 kn (beyond the table)' },
+              ANY,
+              ...LISTING_CONDITIONS.map((c) => ({ value: c, label: LISTING_CONDITION_LABELS[c] })),
             ]}
           />
-          <label className="flex min-h-11 items-center gap-2 self-end text-sm font-bold">
-            <input
-              type="checkbox"
-              name="fitsOnly"
-              defaultChecked={value.fitsOnly === 'true'}
-              className="size-5"
+          <ExchangeSelect
+            label="Sort by"
+            name="sort"
+            value={draft.sort}
+            onChange={(e) => set({ sort: e.currentTarget.value }, 'now')}
+            options={[
+              { value: '', label: 'Best match / newest' },
+              { value: 'newest', label: 'Newest' },
+              { value: 'price-asc', label: 'Price, low to high' },
+              { value: 'price-desc', label: 'Price, high to low' },
+            ]}
+          />
+          <TextField
+            label="Lowest price"
+            name="priceMin"
+            type="number"
+            min="0"
+            step="0.01"
+            inputMode="decimal"
+            value={draft.priceMin}
+            onChange={(e) => set({ priceMin: e.currentTarget.value }, 'typing')}
+            error={err('priceMin')}
+          />
+          <TextField
+            label="Highest price"
+            name="priceMax"
+            type="number"
+            min="0"
+            step="0.01"
+            inputMode="decimal"
+            value={draft.priceMax}
+            onChange={(e) => set({ priceMax: e.currentTarget.value }, 'typing')}
+            error={err('priceMax')}
+          />
+          <TextField
+            label="Smallest size"
+            name="sizeMin"
+            hint="mm or in: 8 mm, 5/16"
+            autoComplete="off"
+            value={draft.sizeMin}
+            onChange={(e) => set({ sizeMin: e.currentTarget.value }, 'typing')}
+            error={err('sizeMinMm')}
+          />
+          <TextField
+            label="Largest size"
+            name="sizeMax"
+            hint="mm or in: 12 mm, 1/2 in"
+            autoComplete="off"
+            value={draft.sizeMax}
+            onChange={(e) => set({ sizeMax: e.currentTarget.value }, 'typing')}
+            error={err('sizeMaxMm')}
+          />
+        </div>
+        {boats.length > 0 && (
+          <fieldset className="grid grid-cols-1 gap-3 rounded-md border border-sand-300 p-3 sm:grid-cols-3">
+            <legend className="px-1 text-sm font-bold">Fits my boat</legend>
+            <ExchangeSelect
+              label="Boat"
+              name="fitsBoat"
+              value={draft.fitsBoat}
+              onChange={(e) => set({ fitsBoat: e.currentTarget.value }, 'now')}
+              options={[
+                { value: '', label: 'No boat' },
+                ...boats.map((b) => ({ value: String(b.id), label: b.name })),
+              ]}
             />
-            Only what fits
-          </label>
-        </fieldset>
-      )}
+            <ExchangeSelect
+              label="Design wind"
+              name="windKn"
+              value={draft.windKn}
+              onChange={(e) => set({ windKn: e.currentTarget.value }, 'now')}
+              options={[
+                { value: '15', label: '15 kn (light)' },
+                { value: '30', label: '30 kn (working)' },
+                { value: '42', label: '42 kn (storm)' },
+                { value: '50', label: '50 kn (beyond the table)' },
+              ]}
+            />
+            <label className="flex min-h-11 items-center gap-2 self-end text-sm font-bold">
+              <input
+                type="checkbox"
+                name="fitsOnly"
+                checked={draft.fitsOnly}
+                onChange={(e) => set({ fitsOnly: e.currentTarget.checked }, 'now')}
+                className="size-5"
+              />
+              Only what fits
+            </label>
+          </fieldset>
+        )}
+      </div>
     </form>
   );
 }

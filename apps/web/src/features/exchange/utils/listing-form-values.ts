@@ -1,3 +1,4 @@
+import { inchFractionLabel, parseInchText } from '@app/calc';
 import { listingInputSchema, type ListingDto } from '@app/shared';
 import { z } from 'zod';
 
@@ -13,14 +14,15 @@ export interface ListingFormValues {
   specs: Record<string, string>;
 }
 
-const SPEC_KEYS: Record<string, Array<[key: string, kind: 'num' | 'str' | 'bool']>> = {
+type SpecKind = 'num' | 'inch' | 'str' | 'bool';
+const SPEC_KEYS: Record<string, Array<[key: string, kind: SpecKind]>> = {
   anchor: [
     ['anchorType', 'str'],
     ['massKg', 'num'],
   ],
   chain: [
     ['grade', 'str'],
-    ['tradeSizeIn', 'num'],
+    ['tradeSizeIn', 'inch'],
     ['nominalMm', 'num'],
     ['lengthM', 'num'],
     ['galvanizing', 'str'],
@@ -33,7 +35,7 @@ const SPEC_KEYS: Record<string, Array<[key: string, kind: 'num' | 'str' | 'bool'
   ],
   connector: [
     ['kind', 'str'],
-    ['nominalIn', 'num'],
+    ['nominalIn', 'inch'],
     ['wllN', 'num'],
   ],
   snubber: [
@@ -45,7 +47,7 @@ const SPEC_KEYS: Record<string, Array<[key: string, kind: 'num' | 'str' | 'bool'
   windlass: [
     ['part', 'str'],
     ['grade', 'str'],
-    ['tradeSizeIn', 'num'],
+    ['tradeSizeIn', 'inch'],
     ['nominalMm', 'num'],
   ],
   mooring: [
@@ -64,7 +66,14 @@ export function toListingInput(v: ListingFormValues): Record<string, unknown> {
   for (const [key, kind] of SPEC_KEYS[v.category] ?? []) {
     const raw = v.specs[key];
     if (raw === undefined || raw === '') continue;
-    specs[key] = kind === 'num' ? Number(raw) : kind === 'bool' ? raw === 'true' : raw;
+    specs[key] =
+      kind === 'num'
+        ? Number(raw)
+        : kind === 'inch'
+          ? (parseInchText(raw) ?? Number.NaN)
+          : kind === 'bool'
+            ? raw === 'true'
+            : raw;
   }
   const price = toNumber(v.price);
   return {
@@ -85,12 +94,20 @@ export const formSchema = z
   .transform(toListingInput)
   .pipe(listingInputSchema);
 
+/** An inch size as the seller would type it: "5/16", "1 1/8", or the decimal when it is not a 16th. */
+const inchText = (v: number) =>
+  Number.isInteger(v * 16) ? inchFractionLabel(v).replace(/ in$/, '') : String(v);
+
 /** Form values for an existing listing (or blanks). */
 export function listingFormValues(l?: ListingDto): ListingFormValues {
   const specs: Record<string, string> = {};
   for (const [k, v] of Object.entries(l?.specs ?? {}))
     specs[k] =
-      typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean' ? String(v) : '';
+      (k === 'tradeSizeIn' || k === 'nominalIn') && typeof v === 'number'
+        ? inchText(v)
+        : typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean'
+          ? String(v)
+          : '';
   return {
     category: l?.category ?? 'chain',
     title: l?.title ?? '',

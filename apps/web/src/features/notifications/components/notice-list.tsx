@@ -8,6 +8,9 @@ const KIND_LABELS: Record<string, string> = {
   accepted: 'Answer accepted',
   moderation: 'Moderation',
   report: 'Your report',
+  'listing-sold-to-you': 'Exchange: sold to you',
+  'listing-sold': 'Exchange: sold',
+  'listing-sale-undone': 'Exchange: sale undone',
 };
 
 export interface NoticeListProps {
