@@ -49,5 +49,10 @@ export default defineConfig({
     outDir: fileURLToPath(new URL('./dist/web', import.meta.url)),
     emptyOutDir: true,
     sourcemap: false,
+    rolldownOptions: {
+      // Building a zod schema has no side effects: a screen that imports only a label list or formatMoney from
+      // @app/shared then leaves the schemas (and zod) out of its chunk.
+      treeshake: { manualPureFunctions: ['z'] },
+    },
   },
 });

@@ -1,9 +1,5 @@
-// The entry chunk carries no schema library: only zod's core config, so that every later zod parse runs
-// without JIT (zod would otherwise probe `new Function`, which our Content-Security-Policy, script-src 'self',
-// forbids). The full zod loads with the screens that need forms.
-import { config } from 'zod/v4/core';
-
-config({ jitless: true });
+// The entry chunk carries no schema library: zod loads with the first form check (lib/schemas.ts, which also
+// turns zod's JIT off for our Content-Security-Policy).
 
 const API_BASE = /^(\/|https?:\/\/)/;
 

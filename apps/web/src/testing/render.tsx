@@ -1,9 +1,15 @@
 import type { SessionDto } from '@app/shared';
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
-import { createMemoryRouter, RouterProvider, type RouteObject } from 'react-router-dom';
+import {
+  MemoryRouter,
+  useLocation,
+  useRoutes,
+  type Location,
+  type RouteObject,
+} from 'react-router-dom';
 import { AppProvider } from '../app/provider';
-import { APP_ROUTES } from '../app/router';
+import { AppRoutes } from '../app/router';
 import { authKeys } from '../features/auth/api/keys';
 import { setCsrfToken } from '../lib/api-client';
 import { createQueryClient } from '../lib/query-client';
@@ -15,20 +21,38 @@ export interface RenderOptions {
   session?: SessionDto;
 }
 
-function setup(routes: RouteObject[], { route = '/', session }: RenderOptions) {
+/** Records where the memory router is, for tests that follow a redirect. */
+function LocationProbe({ into }: { into: { current?: Location } }) {
+  into.current = useLocation();
+  return null;
+}
+
+function Screens({ routes }: { routes: RouteObject[] }) {
+  return useRoutes(routes);
+}
+
+function setup(routes: RouteObject[] | 'app', { route = '/', session }: RenderOptions) {
   const queryClient = createQueryClient();
   queryClient.setDefaultOptions({ queries: { retry: false, staleTime: Infinity } });
   if (session) {
     queryClient.setQueryData(authKeys.session(), session);
     setCsrfToken(session.csrfToken);
   }
-  const router = createMemoryRouter(routes, { initialEntries: [route] });
+  const where: { current?: Location } = {};
   const view = render(
     <AppProvider queryClient={queryClient}>
-      <RouterProvider router={router} />
+      <MemoryRouter initialEntries={[route]}>
+        <LocationProbe into={where} />
+        {routes === 'app' ? <AppRoutes /> : <Screens routes={routes} />}
+      </MemoryRouter>
     </AppProvider>,
   );
-  return { ...view, router, queryClient };
+  /** The memory router's current location. */
+  const location = () => {
+    if (!where.current) throw new Error('the router has not rendered');
+    return where.current;
+  };
+  return { ...view, location, queryClient };
 }
 
 /** Renders `ui` as the only screen of a memory router, with a fresh query cache. */
@@ -38,5 +62,5 @@ export function renderWithProviders(ui: ReactNode, options: RenderOptions = {}) 
 
 /** Renders the whole app (layout, navigation, lazy screens) at `options.route`. */
 export function renderApp(options: RenderOptions = {}) {
-  return setup(APP_ROUTES, options);
+  return setup('app', options);
 }

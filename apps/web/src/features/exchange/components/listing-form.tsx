@@ -1,4 +1,3 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import {
   ANCHOR_KINDS,
   CHAIN_GRADE_IDS,
@@ -19,7 +18,8 @@ import { useForm, useWatch, type FieldErrors } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
-import { formSchema, type ListingFormValues } from '../utils/listing-form-values';
+import { lazyZodResolver } from '../../../lib/lazy-schema';
+import type { ListingFormValues } from '../utils/listing-form-values';
 import { ExchangeSelect } from './select';
 
 const opts = (values: readonly string[], labels?: Record<string, string>) =>
@@ -55,7 +55,12 @@ export function ListingForm({
   serverError,
   onSubmit,
 }: ListingFormProps) {
-  const form = useForm({ resolver: zodResolver(formSchema), defaultValues: initial });
+  const form = useForm({
+    resolver: lazyZodResolver(() =>
+      import('../utils/listing-form.schema').then((m) => m.formSchema),
+    ),
+    defaultValues: initial,
+  });
   const { register, handleSubmit, control, formState } = form;
   const category = useWatch({ control, name: 'category' });
   const server = serverError?.fields ?? {};

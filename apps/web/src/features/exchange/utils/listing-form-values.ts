@@ -1,5 +1,4 @@
-import { listingInputSchema, type ListingDto } from '@app/shared';
-import { z } from 'zod';
+import type { ListingDto } from '@app/shared';
 
 /** What the form holds: strings as typed; converted to the shared listing schema on submit. */
 export interface ListingFormValues {
@@ -78,12 +77,6 @@ export function toListingInput(v: ListingFormValues): Record<string, unknown> {
     specs,
   };
 }
-
-/** The shared listing schema behind a converter from typed strings. */
-export const formSchema = z
-  .custom<ListingFormValues>((v) => typeof v === 'object' && v !== null)
-  .transform(toListingInput)
-  .pipe(listingInputSchema);
 
 /** Form values for an existing listing (or blanks). */
 export function listingFormValues(l?: ListingDto): ListingFormValues {
