@@ -8,6 +8,7 @@
 //   BENCH_API_ROUTES=1 (also load each route of the mix alone, 5 s at 50 connections, to find a slow one)
 //   BENCH_API_SIGNINS=10 (connections signing in during the "reads + sign-ins" run at 50 read connections; 0 skips it)
 //   BENCH_LIGHTHOUSE=0 (skip the Lighthouse audits that run against the same server after the load)
+//   BENCH_API_PROFILE=1 (the API runs with node --cpu-prof; profiles land in .data/bench/prof, open them in Chrome DevTools)
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, openSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -81,6 +82,9 @@ const server = spawn(TSX, ['apps/api/src/server.ts'], {
     WEB_DIST,
     SMTP_PORT: String(PORT + 15),
     OUTBOX_INTERVAL_MS: '60000',
+    ...(process.env.BENCH_API_PROFILE === '1'
+      ? { NODE_OPTIONS: `--cpu-prof --cpu-prof-dir=${join(OUT_DIR, 'prof')}` }
+      : {}),
   },
   stdio: ['ignore', openSync(apiLog, 'w'), openSync(apiLog, 'a')],
 });

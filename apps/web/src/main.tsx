@@ -2,7 +2,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { BrowserRouter } from 'react-router-dom';
 import { AppProvider } from './app/provider';
-import { AppRoutes } from './app/router';
+import { AppRoutes } from './app/app-routes';
 import './styles/index.css';
 
 const rootElement = document.getElementById('root');

@@ -1,8 +1,7 @@
 import { createElement, lazy, type ComponentType, type ReactElement } from 'react';
-import { useRoutes, type RouteObject } from 'react-router-dom';
+import type { RouteObject } from 'react-router-dom';
 import { paths } from '../config/paths';
 import { AppLayout } from './layout/app-layout';
-import { ErrorCatcher } from './layout/screen-boundary';
 
 /** A screen as a lazily loaded element: its module becomes its own chunk, fetched when the route first renders. */
 function screen<K extends string>(
@@ -177,11 +176,3 @@ export const SCREEN_ROUTES: RouteObject[] = [
 export const APP_ROUTES: RouteObject[] = [
   { path: '/', element: createElement(AppLayout), children: SCREEN_ROUTES },
 ];
-
-/**
- * The app's routes for a `<BrowserRouter>` (or a `<MemoryRouter>` in tests). Declarative routing keeps the data
- * router (loaders, actions, fetchers: about 17 KB gzipped) out of the entry chunk; the app uses none of it.
- */
-export function AppRoutes() {
-  return <ErrorCatcher>{useRoutes(APP_ROUTES)}</ErrorCatcher>;
-}

@@ -1,15 +1,10 @@
 import type { SessionDto } from '@app/shared';
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
-import {
-  MemoryRouter,
-  useLocation,
-  useRoutes,
-  type Location,
-  type RouteObject,
-} from 'react-router-dom';
+import { MemoryRouter, type Location, type RouteObject } from 'react-router-dom';
 import { AppProvider } from '../app/provider';
-import { AppRoutes } from '../app/router';
+import { AppRoutes } from '../app/app-routes';
+import { LocationProbe, Screens } from './router-probes';
 import { authKeys } from '../features/auth/api/keys';
 import { setCsrfToken } from '../lib/api-client';
 import { createQueryClient } from '../lib/query-client';
@@ -21,16 +16,6 @@ export interface RenderOptions {
   session?: SessionDto;
 }
 
-/** Records where the memory router is, for tests that follow a redirect. */
-function LocationProbe({ into }: { into: { current?: Location } }) {
-  into.current = useLocation();
-  return null;
-}
-
-function Screens({ routes }: { routes: RouteObject[] }) {
-  return useRoutes(routes);
-}
-
 function setup(routes: RouteObject[] | 'app', { route = '/', session }: RenderOptions) {
   const queryClient = createQueryClient();
   queryClient.setDefaultOptions({ queries: { retry: false, staleTime: Infinity } });
@@ -38,19 +23,19 @@ function setup(routes: RouteObject[] | 'app', { route = '/', session }: RenderOp
     queryClient.setQueryData(authKeys.session(), session);
     setCsrfToken(session.csrfToken);
   }
-  const where: { current?: Location } = {};
+  const whereRef: { current?: Location } = {};
   const view = render(
     <AppProvider queryClient={queryClient}>
       <MemoryRouter initialEntries={[route]}>
-        <LocationProbe into={where} />
+        <LocationProbe intoRef={whereRef} />
         {routes === 'app' ? <AppRoutes /> : <Screens routes={routes} />}
       </MemoryRouter>
     </AppProvider>,
   );
   /** The memory router's current location. */
   const location = () => {
-    if (!where.current) throw new Error('the router has not rendered');
-    return where.current;
+    if (!whereRef.current) throw new Error('the router has not rendered');
+    return whereRef.current;
   };
   return { ...view, location, queryClient };
 }
