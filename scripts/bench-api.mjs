@@ -69,7 +69,21 @@ if (!existsSync(join(WEB_DIST, 'index.html'))) {
 }
 
 const apiLog = join(OUT_DIR, 'api-server.log');
-const server = spawn(TSX, ['apps/api/src/server.ts'], {
+// node refuses --cpu-prof in NODE_OPTIONS, so a profiled API runs as `node --cpu-prof --import tsx`.
+const profile = process.env.BENCH_API_PROFILE === '1';
+const [serverCmd, serverArgs] = profile
+  ? [
+      process.execPath,
+      [
+        '--cpu-prof',
+        `--cpu-prof-dir=${join(OUT_DIR, 'prof')}`,
+        '--import',
+        'tsx',
+        'apps/api/src/server.ts',
+      ],
+    ]
+  : [TSX, ['apps/api/src/server.ts']];
+const server = spawn(serverCmd, serverArgs, {
   cwd: ROOT,
   env: {
     ...process.env,
@@ -82,9 +96,6 @@ const server = spawn(TSX, ['apps/api/src/server.ts'], {
     WEB_DIST,
     SMTP_PORT: String(PORT + 15),
     OUTBOX_INTERVAL_MS: '60000',
-    ...(process.env.BENCH_API_PROFILE === '1'
-      ? { NODE_OPTIONS: `--cpu-prof --cpu-prof-dir=${join(OUT_DIR, 'prof')}` }
-      : {}),
   },
   stdio: ['ignore', openSync(apiLog, 'w'), openSync(apiLog, 'a')],
 });
@@ -295,9 +306,9 @@ try {
     if (!ceil || !mixed) continue;
     const share = (100 * mixed.rps) / ceil.rps;
     targets.push({
-      target: `mixed ≥ 40 % of ceiling throughput (${connections} connections)`,
+      target: `mixed ≥ 50 % of ceiling throughput (${connections} connections)`,
       measured: `${fmt(share)} % (${fmt(mixed.rps)} of ${fmt(ceil.rps)} req/s)`,
-      pass: share >= 40,
+      pass: share >= 50,
     });
     if (connections === 50)
       targets.push({
