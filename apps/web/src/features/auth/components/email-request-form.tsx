@@ -1,5 +1,4 @@
-import { resetRequestSchema } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
@@ -35,7 +34,7 @@ export function EmailRequestForm({
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(resetRequestSchema),
+    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.resetRequestSchema)),
     defaultValues: { email: defaultEmail },
   });
 

@@ -1,8 +1,5 @@
-import { passwordSchema } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
-import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -10,14 +7,8 @@ import { TextField } from '../../../components/ui/text-field';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { lazyZodResolver } from '../../../lib/lazy-schema';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
-
-const newPasswordFormSchema = z
-  .object({ password: passwordSchema, confirmPassword: z.string() })
-  .refine((values) => values.password === values.confirmPassword, {
-    path: ['confirmPassword'],
-    message: "The two passwords don't match",
-  });
 
 export interface ResetPasswordFormProps {
   token: string;
@@ -39,7 +30,9 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(newPasswordFormSchema),
+    resolver: lazyZodResolver(() =>
+      import('./reset-password-form.schema').then((m) => m.newPasswordFormSchema),
+    ),
     defaultValues: { password: '', confirmPassword: '' },
   });
 

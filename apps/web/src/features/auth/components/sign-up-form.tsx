@@ -1,5 +1,4 @@
-import { signupSchema } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '../../../components/ui/alert';
@@ -21,7 +20,7 @@ export function SignUpForm() {
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(signupSchema),
+    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.signupSchema)),
     defaultValues: { email: '', password: '', displayName: '' },
   });
 

@@ -1,13 +1,6 @@
 import { CHAIN_TRADE_SIZES_IN, inchFractionLabel } from '@app/calc';
-import {
-  boatInputSchema,
-  CHAIN_GRADE_IDS,
-  HULLS,
-  type BoatDto,
-  type BoatInput,
-  type HarborDto,
-} from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { CHAIN_GRADE_IDS, HULLS, type BoatDto, type BoatInput, type HarborDto } from '@app/shared';
+import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
 import { Controller, useForm, useWatch, type Control, type FieldPath } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -113,7 +106,7 @@ export function BoatForm({ boat, harbors, submitLabel, isPending, onSubmit }: Bo
     setValue,
     formState: { errors },
   } = useForm<FormValues>({
-    resolver: zodResolver(boatInputSchema),
+    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.boatInputSchema)),
     defaultValues: defaults(boat),
   });
   const gypsy = useWatch({ control, name: 'gypsy' });

@@ -1,10 +1,6 @@
 import { formatTime } from '@app/shared/locale';
-import {
-  createPostSchema,
-  type CreatePostInput,
-  type PostDetailDto,
-  type TopicDto,
-} from '@app/shared';
+import { type CreatePostInput, type PostDetailDto, type TopicDto } from '@app/shared';
+import { loadSchemas } from '../../../lib/lazy-schema';
 import type { JSONContent } from '@tiptap/react';
 import { useEffect, useId, useRef, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
@@ -75,7 +71,7 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
 
   const persist = async (submit: boolean) => {
     const value = input();
-    const parsed = createPostSchema.safeParse(value);
+    const parsed = (await loadSchemas()).createPostSchema.safeParse(value);
     if (!parsed.success) {
       const f: Record<string, string> = {};
       for (const i of parsed.error.issues) f[i.path.join('.') || '_'] ??= i.message;

@@ -1,5 +1,4 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { messageInputSchema } from '@app/shared';
+import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
@@ -20,7 +19,7 @@ export interface MessageFormProps {
 export function MessageForm({ threadId, listingId, label, submitLabel, onSent }: MessageFormProps) {
   const send = useSendMessage();
   const { register, handleSubmit, reset, setError, formState } = useForm({
-    resolver: zodResolver(messageInputSchema),
+    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.messageInputSchema)),
     defaultValues: { body: '' },
   });
   const onSubmit = handleSubmit((v) =>

@@ -1,4 +1,5 @@
-import { stormChecklistSchema, type StormChecklistItem } from '@app/shared';
+import { type StormChecklistItem } from '@app/shared';
+import { loadSchemas } from '../../../lib/lazy-schema';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -43,7 +44,7 @@ export function ChecklistEditor({ items: initial, isPending, onSave }: Checklist
     setAdded('');
   };
   const save = async () => {
-    const parsed = stormChecklistSchema.safeParse({ items });
+    const parsed = (await loadSchemas()).stormChecklistSchema.safeParse({ items });
     if (!parsed.success) {
       setError(parsed.error.issues[0]?.message);
       return;

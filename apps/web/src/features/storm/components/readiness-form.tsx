@@ -1,5 +1,4 @@
 import {
-  readinessInputSchema,
   STORM_LOCATION_LABELS,
   STORM_LOCATIONS,
   type ReadinessDto,
@@ -7,6 +6,7 @@ import {
   type StormChecklistItem,
   type StormLocation,
 } from '@app/shared';
+import { loadSchemas } from '../../../lib/lazy-schema';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -63,7 +63,7 @@ export function ReadinessForm({
       helpWanted: v.helpWanted,
       helpNote: v.helpNote,
     };
-    const parsed = readinessInputSchema.safeParse(input);
+    const parsed = (await loadSchemas()).readinessInputSchema.safeParse(input);
     if (!parsed.success) {
       for (const issue of parsed.error.issues) {
         const field = FIELDS.find((f) => f === issue.path[0]);

@@ -1,11 +1,10 @@
 import {
-  duesCalendarSchema,
   formatMoney,
   PRORATION_LABELS,
   type DuesCalendarDto,
   type DuesCalendarInput,
 } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -121,7 +120,7 @@ export function CalendarForm({
     control,
     formState: { errors },
   } = useForm<DuesCalendarInput>({
-    resolver: zodResolver(duesCalendarSchema),
+    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.duesCalendarSchema)),
     defaultValues: saved.calendar,
   });
   const month = Number(useWatch({ control, name: 'fiscalYearStartMonth' }));
