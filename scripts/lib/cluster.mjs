@@ -14,6 +14,7 @@ import {
 import { join } from 'node:path';
 import { ensureDebianPackages } from './apt.mjs';
 import { isRunning, provision, ROOT, rootSql } from './mariadb.mjs';
+import { ensureSecrets } from './secrets.mjs';
 import { TSX, waitForHttp, waitForPort } from './setup.mjs';
 
 export const CLUSTER_DIR = join(ROOT, '.data', 'cluster');
@@ -310,10 +311,17 @@ export async function stopDetached(name) {
   return true;
 }
 
+/**
+ * The cluster's own SESSION_SECRET and STRIPE_WEBHOOK_SECRET (production refuses the built-in ones): generated once
+ * into .data/cluster/secrets.json (mode 0600) and shared by every API process and the payment stand-in.
+ */
+export const clusterSecrets = () => ensureSecrets(join(CLUSTER_DIR, 'secrets.json'), {});
+
 /** The environment every API process of the cluster gets. */
 export function apiEnv(ports) {
   return {
     NODE_ENV: 'production',
+    ...clusterSecrets(),
     DB_HOST: '127.0.0.1',
     DB_PORT: String(ports.sql),
     DB_NAME: DB.database,
@@ -357,6 +365,7 @@ export async function startStandIns(ports) {
     FAKE_PAYMENTS_DIR: join(CLUSTER_DIR, 'fake-payments'),
     FAKE_PAYMENTS_WEBHOOK_URL: `http://127.0.0.1:${ports.http}/api/payments/webhook`,
     FAKE_PAYMENTS_PUBLIC_URL: `http://127.0.0.1:${ports.payments}`,
+    STRIPE_WEBHOOK_SECRET: clusterSecrets().STRIPE_WEBHOOK_SECRET,
   });
   startDetached('s3', process.execPath, [join(ROOT, 'scripts', 'lib', 's3-standin.mjs')], {
     S3_PORT: String(ports.s3),
