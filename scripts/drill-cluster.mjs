@@ -397,7 +397,12 @@ async function main() {
     }
     open.paid = true;
     stats.checkouts.acked += 1;
-    ack.checkouts.push({ sessionId: open.sessionId, email: me.email, reused: open.reused });
+    ack.checkouts.push({
+      sessionId: open.sessionId,
+      email: me.email,
+      reused: open.reused,
+      at: Date.now() - t0,
+    });
     return true;
   };
 
@@ -658,7 +663,7 @@ async function main() {
       return `| ${n.name} | ${n.state} | ${n.size} | ${c(n.kinds.posts)} | ${c(n.kinds.listings)} | ${c(n.kinds.photos)} | ${c(n.kinds.messages)} | ${c(n.kinds.checkouts)} | ${c(n.payments.events)} | ${c(n.payments.receipts)} | ${n.payments.creditedTwice} | ${n.payments.notCovered} |`;
     }),
     '',
-    `Cells read stored/acknowledged. Photos fetched back through HAProxy: ${ack.photos.length - photosMissing}/${ack.photos.length}. Checkout pages showing "succeeded" to the member: ${confirmed}/${ack.checkouts.length}; second start returned the same checkout: ${ack.checkouts.filter((c) => c.reused).length}/${ack.checkouts.length}. Webhook delivery attempts before the resend: ${attempts.length ? `${Math.min(...attempts)}–${Math.max(...attempts)}` : 'none'}.`,
+    `Cells read stored/acknowledged. A stored count above the acknowledged one is a write that landed although its answer was an error (a commit whose reply was cut off); the writer sees the 503 and may send again. Checkouts paid while node1 or api1 was down: ${ack.checkouts.filter((c) => c.at >= stopAt && c.at <= (events.find((e) => e.what === 'api1 answering')?.at ?? backAt)).length}. Photos fetched back through HAProxy: ${ack.photos.length - photosMissing}/${ack.photos.length}. Checkout pages showing "succeeded" to the member: ${confirmed}/${ack.checkouts.length}; second start returned the same checkout: ${ack.checkouts.filter((c) => c.reused).length}/${ack.checkouts.length}. Webhook delivery attempts before the resend: ${attempts.length ? `${Math.min(...attempts)}–${Math.max(...attempts)}` : 'none'}.`,
     '',
     `CHECKSUM TABLE (${TABLES.join(', ')}) per node:`,
     '',
