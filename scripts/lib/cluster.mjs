@@ -14,6 +14,7 @@ import {
 import { join } from 'node:path';
 import { ensureDebianPackages } from './apt.mjs';
 import { isRunning, provision, ROOT, rootSql } from './mariadb.mjs';
+import { ensureSecrets } from './secrets.mjs';
 import { TSX, waitForHttp, waitForPort } from './setup.mjs';
 
 export const CLUSTER_DIR = join(ROOT, '.data', 'cluster');
@@ -310,10 +311,17 @@ export async function stopDetached(name) {
   return true;
 }
 
+/**
+ * The cluster's own SESSION_SECRET and STRIPE_WEBHOOK_SECRET (production refuses the built-in ones): generated once
+ * into .data/cluster/secrets.json (mode 0600) and shared by every API process and the payment stand-in.
+ */
+export const clusterSecrets = () => ensureSecrets(join(CLUSTER_DIR, 'secrets.json'), {});
+
 /** The environment every API process of the cluster gets. */
 export function apiEnv(ports) {
   return {
     NODE_ENV: 'production',
+    ...clusterSecrets(),
     DB_HOST: '127.0.0.1',
     DB_PORT: String(ports.sql),
     DB_NAME: DB.database,
@@ -336,13 +344,34 @@ export function apiEnv(ports) {
   };
 }
 
-/** Starts API process `i` (0-based) and waits until it answers. */
+/** The state HAProxy's health checks give each server of a section (`http` or `sql`), from its statistics CSV. */
+export async function haproxyStates(ports, section) {
+  const csv = await fetch(`http://127.0.0.1:${ports.stats}/;csv`).then((r) => r.text());
+  const [head, ...lines] = csv.replace(/^# /, '').trim().split('\n');
+  const col = head.split(',').indexOf('status');
+  return Object.fromEntries(
+    lines
+      .map((l) => l.split(','))
+      .filter((c) => c[0] === section && c[1] !== 'FRONTEND' && c[1] !== 'BACKEND')
+      .map((c) => [c[1], c[col]]),
+  );
+}
+
+/** Starts API process `i` (0-based) and waits until it answers and HAProxy sends it requests again. */
 export async function startApi(ports, i) {
   startDetached(`api${i + 1}`, TSX, ['apps/api/src/server.ts'], {
     ...apiEnv(ports),
     PORT: String(ports.apis[i]),
   });
   await waitForHttp(`http://127.0.0.1:${ports.apis[i]}/api/health/ping`, 90_000);
+  // HAProxy takes a server back after `rise 2` passed checks (1 s apart); until then it is not in the rotation,
+  // and with none in it HAProxy itself answers 503.
+  for (let n = 0; n < 100; n += 1) {
+    const state = await haproxyStates(ports, 'http').catch(() => ({}));
+    if (state[`api${i + 1}`] === 'UP') return;
+    await sleep(100);
+  }
+  throw new Error(`HAProxy did not take api${i + 1} back within 10 s`);
 }
 
 /** Starts the mail, payment and S3 stand-ins. */
@@ -357,6 +386,7 @@ export async function startStandIns(ports) {
     FAKE_PAYMENTS_DIR: join(CLUSTER_DIR, 'fake-payments'),
     FAKE_PAYMENTS_WEBHOOK_URL: `http://127.0.0.1:${ports.http}/api/payments/webhook`,
     FAKE_PAYMENTS_PUBLIC_URL: `http://127.0.0.1:${ports.payments}`,
+    STRIPE_WEBHOOK_SECRET: clusterSecrets().STRIPE_WEBHOOK_SECRET,
   });
   startDetached('s3', process.execPath, [join(ROOT, 'scripts', 'lib', 's3-standin.mjs')], {
     S3_PORT: String(ports.s3),

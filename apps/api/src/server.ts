@@ -19,22 +19,30 @@ if (applied.length) logger.info({ applied }, 'migrations applied');
 
 const { app, close } = createApp({ env, sequelize, logger });
 const stopOutbox = startOutboxWorker(sequelize, createTransport(env), env, logger);
-const server = createServer(app);
+let closing = false;
+// While shutting down, every answer closes its connection, so a keep-alive client sends its next request to the
+// load balancer (and so to another process) instead of to this one.
+const server = createServer((req, res) => {
+  if (closing) res.setHeader('Connection', 'close');
+  app(req, res);
+});
 server.keepAliveTimeout = 65_000;
 server.listen(env.PORT, '127.0.0.1', () =>
   logger.info(`Rodewise API listening on http://127.0.0.1:${env.PORT}`),
 );
 
-let closing = false;
+const DRAIN_MS = 3500; // under the 5 s a supervisor (scripts/lib/cluster.mjs) waits before SIGKILL
 async function shutdown(signal: string) {
   if (closing) return;
   closing = true;
   logger.info({ signal }, 'shutting down');
   stopOutbox();
   close();
-  server.close();
+  // No new connections; requests under way finish before the pool closes (closing it first answered them 500).
+  const drained = new Promise<void>((resolve) => server.close(() => resolve()));
   server.closeIdleConnections();
-  setTimeout(() => process.exit(0), 3000).unref();
+  setTimeout(() => process.exit(0), DRAIN_MS + 1000).unref();
+  await Promise.race([drained, new Promise((r) => setTimeout(r, DRAIN_MS).unref())]);
   await Promise.all([sequelize.close(), closePasswordPool()]).catch(() => undefined);
   process.exit(0);
 }

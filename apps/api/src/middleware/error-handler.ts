@@ -34,11 +34,14 @@ export function isDbDown(err: unknown): boolean {
   const code =
     (err as { code?: unknown; parent?: { code?: unknown } } | null)?.parent?.code ??
     (err as { code?: unknown } | null)?.code;
-  // 1047: a Galera node that is leaving or rejoining the cluster ("WSREP has not yet prepared node").
+  // 1047: a Galera node that is leaving or rejoining the cluster ("WSREP has not yet prepared node"); 1053: the
+  // server is shutting down; 1927: the server killed the connection (a node stopping ends its sessions).
   const errno =
     (err as { parent?: { errno?: unknown } } | null)?.parent?.errno ??
     (err as { errno?: unknown } | null)?.errno;
-  if (errno === 1047) return true;
+  if (errno === 1047 || errno === 1053 || errno === 1927) return true;
+  // This process is shutting down and has closed its pool: another process (or a retry) can serve the request.
+  if (err instanceof Error && err.message.includes('connection manager was closed')) return true;
   return (
     typeof code === 'string' &&
     [

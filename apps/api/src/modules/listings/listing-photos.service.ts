@@ -39,6 +39,18 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
   const sequelize = ListingPhoto.sequelize;
   if (!sequelize) throw new Error('Models are not initialised');
   try {
+    // Files first, outside the transaction: a managed transaction runs again after a deadlock or a certification
+    // conflict, and that must not write the files twice. A failure below removes them again.
+    const stored: { img: ProcessedImage; key: string; tKey: string }[] = [];
+    for (const img of processed) {
+      const key = newKey('listings');
+      const tKey = thumbKey(key);
+      await storage.put(key, img.full, img.mime);
+      written.push(key);
+      await storage.put(tKey, img.thumb, img.mime);
+      written.push(tKey);
+      stored.push({ img, key, tKey });
+    }
     const rows = await sequelize.transaction(async (transaction) => {
       // Counted again under the listing's row lock: concurrent uploads queue here, so the limit holds and
       // positions never repeat.
@@ -54,7 +66,7 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
         attributes: ['position'],
         transaction,
       });
-      if (now.length + processed.length > MAX_LISTING_PHOTOS)
+      if (now.length + stored.length > MAX_LISTING_PHOTOS)
         throw invalid({
           [FIELD]: `A listing can have at most ${MAX_LISTING_PHOTOS} photos (it has ${now.length})`,
         });
@@ -67,13 +79,7 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
       );
       const next = now.reduce((max, p) => Math.max(max, p.position + 1), 0);
       const out: ListingPhoto[] = [];
-      for (const [i, img] of processed.entries()) {
-        const key = newKey('listings');
-        const tKey = thumbKey(key);
-        await storage.put(key, img.full, img.mime);
-        written.push(key);
-        await storage.put(tKey, img.thumb, img.mime);
-        written.push(tKey);
+      for (const [i, { img, key, tKey }] of stored.entries()) {
         out.push(
           await ListingPhoto.create(
             {

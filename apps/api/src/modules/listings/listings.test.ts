@@ -2,7 +2,7 @@ import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import sharp from 'sharp';
-import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { AuditEvent, Listing, ListingPhoto } from '../../models';
 import { setSetting } from '../club/club.service';
 import {
@@ -291,6 +291,27 @@ describe('listing photos', () => {
     expect(over.body.error.fields.photos).toMatch(/at most 8/);
     expect(await ListingPhoto.count()).toBe(6);
     expect(storedFiles() - before).toBe(12);
+  });
+
+  describe('when the transaction meets a deadlock (or a Galera certification conflict) and runs again', () => {
+    afterEach(() => vi.restoreAllMocks());
+
+    it('writes each file once: no orphan files from the first attempt', async () => {
+      const { c } = await seller();
+      const id = (await c.post('/api/listings', chainListing(harborId))).body.data.id as number;
+      const before = storedFiles();
+      // MariaDB's deadlock error as Sequelize wraps it; lib/tx-retry.ts runs the transaction again.
+      const deadlock = Object.assign(new Error('Deadlock found when trying to get lock'), {
+        parent: { errno: 1213 },
+      });
+      const create = vi.spyOn(ListingPhoto, 'create').mockRejectedValueOnce(deadlock);
+      const res = await postPhotos(c, id, [[await testJpeg('#336699'), 'a.jpg']]);
+      expect(res.status).toBe(201);
+      expect(create).toHaveBeenCalledTimes(2);
+      expect(await ListingPhoto.count({ where: { listingId: id } })).toBe(1);
+      // One photo and its thumbnail, not two of each.
+      expect(storedFiles() - before).toBe(2);
+    });
   });
 });
 

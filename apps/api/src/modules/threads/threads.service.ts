@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { MessageDto, ThreadDto, ThreadSummaryDto } from '@app/shared';
 import { AppError, notFound } from '../../errors/app-error';
 import { Listing, ListingMessage, ListingThread, User } from '../../models';
@@ -14,9 +14,10 @@ async function emailOtherParty(
   listing: Listing,
   sender: User,
   body: string,
+  transaction: Transaction,
 ) {
   const toId = sender.id === thread.buyerId ? thread.sellerId : thread.buyerId;
-  const to = await User.findByPk(toId);
+  const to = await User.findByPk(toId, { transaction });
   if (!to) return;
   await enqueueEmail(
     actionEmail({
@@ -30,7 +31,15 @@ async function emailOtherParty(
       footer:
         'Meet in the harbour or pay through a method you trust; never send money to someone you have not met.',
     }),
+    transaction,
   );
+}
+
+/** Runs the writes of one message (thread, message row, outbox mail) as one transaction: all land or none. */
+function inTransaction<T>(work: (t: Transaction) => Promise<T>): Promise<T> {
+  const sequelize = ListingMessage.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised');
+  return sequelize.transaction(work);
 }
 
 /**
@@ -46,21 +55,24 @@ export async function openThread(publicUrl: string, buyer: User, listingId: numb
     throw new AppError('CONFLICT', 'This is your own listing: buyers start the conversation');
   await assertMayTrade(buyer, 'message');
   const now = new Date();
-  const [thread] = await ListingThread.findOrCreate({
-    where: { listingId, buyerId: buyer.id },
-    defaults: {
-      listingId,
-      buyerId: buyer.id,
-      sellerId: listing.sellerId,
-      lastMessageAt: now,
-      buyerReadAt: now,
-      sellerReadAt: null,
-    },
+  return inTransaction(async (transaction) => {
+    const [thread] = await ListingThread.findOrCreate({
+      where: { listingId, buyerId: buyer.id },
+      defaults: {
+        listingId,
+        buyerId: buyer.id,
+        sellerId: listing.sellerId,
+        lastMessageAt: now,
+        buyerReadAt: now,
+        sellerReadAt: null,
+      },
+      transaction,
+    });
+    await ListingMessage.create({ threadId: thread.id, senderId: buyer.id, body }, { transaction });
+    await thread.update({ lastMessageAt: now, buyerReadAt: now }, { transaction });
+    await emailOtherParty(publicUrl, thread, listing, buyer, body, transaction);
+    return thread;
   });
-  await ListingMessage.create({ threadId: thread.id, senderId: buyer.id, body });
-  await thread.update({ lastMessageAt: now, buyerReadAt: now });
-  await emailOtherParty(publicUrl, thread, listing, buyer, body);
-  return thread;
 }
 
 /** One thread the actor takes part in; anyone else's is not found. */
@@ -100,13 +112,21 @@ export async function reply(publicUrl: string, actor: User, id: number, body: st
     );
   await assertMayTrade(actor, 'message');
   const now = new Date();
-  const message = await ListingMessage.create({ threadId: id, senderId: actor.id, body });
-  await thread.update({
-    lastMessageAt: now,
-    ...(actor.id === thread.buyerId ? { buyerReadAt: now } : { sellerReadAt: now }),
+  return inTransaction(async (transaction) => {
+    const message = await ListingMessage.create(
+      { threadId: id, senderId: actor.id, body },
+      { transaction },
+    );
+    await thread.update(
+      {
+        lastMessageAt: now,
+        ...(actor.id === thread.buyerId ? { buyerReadAt: now } : { sellerReadAt: now }),
+      },
+      { transaction },
+    );
+    await emailOtherParty(publicUrl, thread, listing, actor, body, transaction);
+    return message;
   });
-  await emailOtherParty(publicUrl, thread, listing, actor, body);
-  return message;
 }
 
 async function unreadCounts(actor: User, threads: ListingThread[]) {

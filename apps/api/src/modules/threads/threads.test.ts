@@ -1,5 +1,5 @@
-import { afterAll, beforeEach, describe, expect, it } from 'vitest';
-import { ListingMessage, ListingThread } from '../../models';
+import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { ListingMessage, ListingThread, OutboxEmail } from '../../models';
 import { setSetting } from '../club/club.service';
 import {
   buildUser,
@@ -128,5 +128,33 @@ describe('buyer–seller messages', () => {
     const unpaid = await signedIn();
     expect((await unpaid.c.post('/api/threads', { listingId, body: 'Hello' })).status).toBe(201);
     expect(await ListingThread.count()).toBe(2);
+  });
+
+  describe('when a write of the message fails part-way (a database node lost mid-request)', () => {
+    afterEach(() => vi.restoreAllMocks());
+
+    it('stores neither the thread, the message nor the mail, so the writer can simply send again', async () => {
+      const seller = await signedIn(true);
+      const buyer = await signedIn(true);
+      const listingId = (
+        await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
+      ).body.data.id as number;
+      const mails = await OutboxEmail.count();
+      // The outbox row is the last write of a message.
+      vi.spyOn(OutboxEmail, 'create').mockRejectedValueOnce(new Error('lost the connection'));
+      const failed = await buyer.c.post('/api/threads', { listingId, body: 'Still for sale?' });
+      expect(failed.status).toBe(500);
+      expect(await ListingThread.count({ where: { listingId } })).toBe(0);
+      expect(await ListingMessage.count()).toBe(0);
+
+      const opened = await buyer.c.post('/api/threads', { listingId, body: 'Still for sale?' });
+      expect(opened.status).toBe(201);
+      const threadId = opened.body.data.id as number;
+      vi.spyOn(OutboxEmail, 'create').mockRejectedValueOnce(new Error('lost the connection'));
+      const reply = await seller.c.post(`/api/threads/${threadId}/messages`, { body: 'Yes.' });
+      expect(reply.status).toBe(500);
+      expect(await ListingMessage.count({ where: { threadId } })).toBe(1);
+      expect(await OutboxEmail.count()).toBe(mails + 1);
+    });
   });
 });
