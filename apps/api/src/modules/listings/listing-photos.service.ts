@@ -52,9 +52,9 @@ export async function addPhotos(actor: User, listingId: number, buffers: Buffer[
       stored.push({ img, key, tKey });
     }
     const rows = await sequelize.transaction(async (transaction) => {
-      // Counted again under the listing's row lock: concurrent uploads queue here, so the limit holds and
+      // The member's row first (the order every image upload takes), so the image quota holds too; then
+      // counted again under the listing's row lock: concurrent uploads queue here, so the limit holds and
       // positions never repeat.
-      // The member's row first (the order every image upload takes), so the image quota holds too.
       await User.findByPk(actor.id, {
         transaction,
         lock: transaction.LOCK.UPDATE,
