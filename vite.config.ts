@@ -1,7 +1,7 @@
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
 import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 import { defineConfig, type Plugin } from 'vite';
@@ -13,8 +13,7 @@ export function precompress(): Plugin {
     name: 'rodewise-precompress',
     apply: 'build',
     configResolved(config) {
-      // A relative --outDir is relative to the Vite root (apps/web), as Vite itself resolves it.
-      outDir = resolve(config.root, config.build.outDir);
+      outDir = config.build.outDir;
     },
     closeBundle() {
       const dir = join(outDir, 'assets');
@@ -50,10 +49,5 @@ export default defineConfig({
     outDir: fileURLToPath(new URL('./dist/web', import.meta.url)),
     emptyOutDir: true,
     sourcemap: false,
-    rolldownOptions: {
-      // Building a zod schema has no side effects: a screen that imports only a label list or formatMoney from
-      // @app/shared then leaves the schemas (and zod) out of its chunk.
-      treeshake: { manualPureFunctions: ['z'] },
-    },
   },
 });

@@ -11,10 +11,6 @@ import { gzipSync } from 'node:zlib';
 import { ROOT } from './lib/mariadb.mjs';
 
 const HOME_BUDGET_KB = 150;
-/** First load per route; the rich-text editor's screen gets its own, larger budget. */
-const ROUTE_BUDGET_KB = 120;
-const EDITOR_BUDGET_KB = 200;
-const EDITOR_FILES = new Set(['post-edit']);
 /** Heavy parts that must stay on their own routes, recognised by the modules a chunk holds. */
 const HEAVY = [
   { name: 'rich-text editor (Tiptap/ProseMirror)', test: /node_modules\/(@tiptap|prosemirror-)/ },
@@ -108,30 +104,6 @@ const targets = [
     pass: Boolean(home && home.jsKb < HOME_BUDGET_KB),
   },
 ];
-const seen = new Set();
-const over = [];
-for (const r of rows) {
-  if (seen.has(r.file)) continue;
-  seen.add(r.file);
-  const budget = EDITOR_FILES.has(r.file) ? EDITOR_BUDGET_KB : ROUTE_BUDGET_KB;
-  if (EDITOR_FILES.has(r.file))
-    targets.push({
-      target: `${r.file} (rich-text editor) first load ≤ ${EDITOR_BUDGET_KB} KB JS gz`,
-      measured: `${r.jsKb.toFixed(1)} KB`,
-      pass: r.jsKb <= budget,
-    });
-  else if (r.jsKb > budget) over.push(`${r.file} ${r.jsKb.toFixed(1)}`);
-}
-const largest = rows
-  .filter((r) => !EDITOR_FILES.has(r.file))
-  .reduce((a, b) => (b.jsKb > a.jsKb ? b : a), rows[0]);
-targets.push({
-  target: `every other route's first load ≤ ${ROUTE_BUDGET_KB} KB JS gz`,
-  measured: over.length
-    ? `over: ${over.join(', ')} KB`
-    : `largest ${largest.file} ${largest.jsKb.toFixed(1)} KB`,
-  pass: over.length === 0,
-});
 const OWNERS = {
   'rich-text editor (Tiptap/ProseMirror)': ['post-edit'],
   'summary chart': ['treasury'],

@@ -263,18 +263,6 @@ export function writeBenchmarksDoc({ startedAt, machine, texts = {} }) {
     ),
   );
   out.push('');
-  // Before/after figures of each speed change, kept by hand beside the machine's load average at the time.
-  const history = join(ROOT, 'docs', 'benchmark-history.md');
-  if (existsSync(history)) {
-    out.push('## Before and after (kept by hand in docs/benchmark-history.md)');
-    out.push('');
-    out.push(
-      readFileSync(history, 'utf8')
-        .replace(/^# .*\n+/, '')
-        .trim(),
-    );
-    out.push('');
-  }
   mkdirSync(join(ROOT, 'docs'), { recursive: true });
   writeFileSync(join(ROOT, 'docs', 'benchmarks.md'), out.join('\n'));
   return targets;

@@ -15,7 +15,6 @@ import type { Sequelize } from 'sequelize';
 import type { Env } from './config/env';
 import { AppError } from './errors/app-error';
 import { mount } from './lib/routes';
-import { failedRequestLog } from './lib/failed-request-log';
 import { throttleSessionTouch } from './lib/session-touch';
 import { visitorCsrf } from './lib/visitor-csrf';
 import type { Logger } from './logger';
@@ -111,19 +110,14 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
       strictTransportSecurity: env.COOKIE_SECURE,
     }),
   );
-  // Per-request logging: pino-http builds a child logger and serialises the request for every request, which
-  // costs a few per cent of a loaded API's time even when the level drops the lines (LOG_LEVEL=warn and above
-  // keep only 5xx answers). Those levels get a plain hook that logs the failed requests alone.
-  if (logger.isLevelEnabled('info'))
-    app.use(
-      pinoHttp({
-        logger,
-        autoLogging: { ignore: (req) => req.url === '/api/health/ping' },
-        customLogLevel: (_req, res, err) =>
-          err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug',
-      }),
-    );
-  else app.use(failedRequestLog(logger));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health/ping' },
+      customLogLevel: (_req, res, err) =>
+        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug',
+    }),
+  );
 
   const SequelizeStore = connectSessionSequelize(session.Store);
   const store = new SequelizeStore({

@@ -1,8 +1,8 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { BrowserRouter } from 'react-router-dom';
+import { RouterProvider } from 'react-router-dom';
 import { AppProvider } from './app/provider';
-import { AppRoutes } from './app/app-routes';
+import { createAppRouter } from './app/router';
 import { readClubLocaleFromPage } from './lib/club-locale';
 import './styles/index.css';
 
@@ -14,9 +14,7 @@ if (!rootElement) throw new Error('index.html has no #root element');
 createRoot(rootElement).render(
   <StrictMode>
     <AppProvider>
-      <BrowserRouter>
-        <AppRoutes />
-      </BrowserRouter>
+      <RouterProvider router={createAppRouter()} />
     </AppProvider>
   </StrictMode>,
 );

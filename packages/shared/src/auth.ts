@@ -1,10 +1,11 @@
 import { z } from 'zod';
-import { ROLES, UNIT_SYSTEMS, type Role, type UnitSystem } from './values/auth';
-// Plain values (lists, labels, helpers) live in values/auth.ts, apart from the schemas, so a screen that needs
-// only a label list or a formatter never pulls zod into its bundle.
-export * from './values/auth';
 
+export const ROLES = ['member', 'moderator', 'treasurer', 'admin'] as const;
+export type Role = (typeof ROLES)[number];
 export const roleSchema = z.enum(ROLES);
+
+export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
 const email = z
   .string({ error: 'E-mail is required' })

@@ -1,18 +1,14 @@
 import { z } from 'zod';
 import { nonEmptyPatchOf, patchOf } from './patch';
-import {
-  HULLS,
-  CHAIN_GRADE_IDS,
-  ANCHOR_KINDS,
-  BOTTOMS,
-  CONNECTOR_KINDS,
-  PLAN_CONDITIONS,
-  type Hull,
-  type PlanCondition,
-} from './values/boats';
-// Plain values (lists, labels, helpers) live in values/boats.ts, apart from the schemas, so a screen that needs
-// only a label list or a formatter never pulls zod into its bundle.
-export * from './values/boats';
+
+export const HULLS = ['sail', 'power', 'multihull'] as const;
+export type Hull = (typeof HULLS)[number];
+export const CHAIN_GRADE_IDS = ['G30', 'G43', 'G70', 'G80', 'G100'] as const;
+export const ANCHOR_KINDS = ['plow', 'claw', 'fluke', 'scoop', 'grapnel', 'fisherman'] as const;
+export const BOTTOMS = ['sand', 'mixed', 'mud', 'clay', 'weed', 'rock'] as const;
+export const CONNECTOR_KINDS = ['shackle', 'swivel', 'link', 'splice', 'other'] as const;
+export const PLAN_CONDITIONS = ['everyday', 'storm', 'hurricane-hole', 'custom'] as const;
+export type PlanCondition = (typeof PLAN_CONDITIONS)[number];
 
 const num = (label: string, min: number, max: number, unit: string) =>
   z

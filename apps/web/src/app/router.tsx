@@ -1,58 +1,52 @@
-import { createElement, lazy, type ComponentType, type ReactElement } from 'react';
-import type { RouteObject } from 'react-router-dom';
+import { createBrowserRouter, type RouteObject } from 'react-router-dom';
 import { paths } from '../config/paths';
 import { AppLayout } from './layout/app-layout';
-
-/** A screen as a lazily loaded element: its module becomes its own chunk, fetched when the route first renders. */
-function screen<K extends string>(
-  load: () => Promise<Record<K, ComponentType>>,
-  name: K,
-): ReactElement {
-  return createElement(lazy(async () => ({ default: (await load())[name] })));
-}
+import { PageFallback } from './layout/page-fallback';
+import { RouteErrorBoundary } from './routes/route-error';
 
 /**
- * Every screen, lazy-loaded so each becomes its own chunk (React.lazy; the layout holds the Suspense boundary and
- * the error boundary). To add one: a path in `config/paths.ts`, a file in `app/routes/`, and one entry here (and a
- * nav item in `config/nav.ts` if it belongs there).
+ * Every screen, lazy-loaded so each becomes its own chunk. To add one: a path in `config/paths.ts`,
+ * a file in `app/routes/`, and one entry here (and a nav item in `config/nav.ts` if it belongs there).
  */
 export const SCREEN_ROUTES: RouteObject[] = [
-  { index: true, element: screen(() => import('./routes/home'), 'HomeRoute') },
+  { index: true, lazy: async () => ({ Component: (await import('./routes/home')).HomeRoute }) },
   {
     path: paths.signIn.path,
-    element: screen(() => import('./routes/sign-in'), 'SignInRoute'),
+    lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }),
   },
   {
     path: paths.signUp.path,
-    element: screen(() => import('./routes/sign-up'), 'SignUpRoute'),
+    lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }),
   },
   {
     path: paths.verifyEmail.path,
-    element: screen(() => import('./routes/verify-email'), 'VerifyEmailRoute'),
+    lazy: async () => ({ Component: (await import('./routes/verify-email')).VerifyEmailRoute }),
   },
   {
     path: paths.resetPassword.path,
-    element: screen(() => import('./routes/reset-password'), 'ResetPasswordRoute'),
+    lazy: async () => ({ Component: (await import('./routes/reset-password')).ResetPasswordRoute }),
   },
   {
     path: paths.account.path,
-    element: screen(() => import('./routes/account'), 'AccountRoute'),
+    lazy: async () => ({ Component: (await import('./routes/account')).AccountRoute }),
   },
   {
     path: paths.notifications.path,
-    element: screen(() => import('./routes/notifications'), 'NotificationsRoute'),
+    lazy: async () => ({
+      Component: (await import('./routes/notifications')).NotificationsRoute,
+    }),
   },
   {
     path: paths.stopDigest.path,
-    element: screen(() => import('./routes/stop-digest'), 'StopDigestRoute'),
+    lazy: async () => ({ Component: (await import('./routes/stop-digest')).StopDigestRoute }),
   },
   {
     path: paths.adminUsers.path,
-    element: screen(() => import('./routes/admin-users'), 'AdminUsersRoute'),
+    lazy: async () => ({ Component: (await import('./routes/admin-users')).AdminUsersRoute }),
   },
   {
     path: paths.adminTopics.path,
-    element: screen(() => import('./routes/admin-topics'), 'AdminTopicsRoute'),
+    lazy: async () => ({ Component: (await import('./routes/admin-topics')).AdminTopicsRoute }),
   },
   {
     path: paths.adminClub.path,
@@ -60,123 +54,140 @@ export const SCREEN_ROUTES: RouteObject[] = [
   },
   {
     path: paths.calculators.path,
-    element: screen(() => import('./routes/calculators'), 'CalculatorsRoute'),
+    lazy: async () => ({ Component: (await import('./routes/calculators')).CalculatorsRoute }),
   },
   {
     path: paths.boats.path,
-    element: screen(() => import('./routes/boats'), 'BoatsRoute'),
+    lazy: async () => ({ Component: (await import('./routes/boats')).BoatsRoute }),
   },
   {
     path: paths.boat.path,
-    element: screen(() => import('./routes/boat'), 'BoatRoute'),
+    lazy: async () => ({ Component: (await import('./routes/boat')).BoatRoute }),
   },
   {
     path: paths.plan.path,
-    element: screen(() => import('./routes/plan'), 'PlanRoute'),
+    lazy: async () => ({ Component: (await import('./routes/plan')).PlanRoute }),
   },
   {
     path: paths.storm.path,
-    element: screen(() => import('./routes/storm'), 'StormRoute'),
+    lazy: async () => ({ Component: (await import('./routes/storm')).StormRoute }),
   },
   {
     path: paths.stormNew.path,
-    element: screen(() => import('./routes/storm-new'), 'StormNewRoute'),
+    lazy: async () => ({ Component: (await import('./routes/storm-new')).StormNewRoute }),
   },
   {
     path: paths.stormChecklist.path,
-    element: screen(() => import('./routes/storm-checklist'), 'StormChecklistRoute'),
+    lazy: async () => ({
+      Component: (await import('./routes/storm-checklist')).StormChecklistRoute,
+    }),
   },
   {
     path: paths.stormWatch.path,
-    element: screen(() => import('./routes/storm-watch'), 'StormWatchRoute'),
+    lazy: async () => ({ Component: (await import('./routes/storm-watch')).StormWatchRoute }),
   },
   {
     path: paths.stormBoard.path,
-    element: screen(() => import('./routes/storm-board'), 'StormBoardRoute'),
+    lazy: async () => ({ Component: (await import('./routes/storm-board')).StormBoardRoute }),
   },
   {
     path: paths.stormBoat.path,
-    element: screen(() => import('./routes/storm-boat'), 'StormBoatRoute'),
+    lazy: async () => ({ Component: (await import('./routes/storm-boat')).StormBoatRoute }),
   },
   {
     path: paths.dues.path,
-    element: screen(() => import('./routes/dues'), 'DuesRoute'),
+    lazy: async () => ({ Component: (await import('./routes/dues')).DuesRoute }),
   },
   {
     path: paths.duesPaid.path,
-    element: screen(() => import('./routes/dues-paid'), 'DuesPaidRoute'),
+    lazy: async () => ({ Component: (await import('./routes/dues-paid')).DuesPaidRoute }),
   },
   {
     path: paths.treasury.path,
-    element: screen(() => import('./routes/treasury'), 'TreasuryRoute'),
+    lazy: async () => ({ Component: (await import('./routes/treasury')).TreasuryRoute }),
   },
   {
     path: paths.treasuryRoster.path,
-    element: screen(() => import('./routes/treasury-roster'), 'TreasuryRosterRoute'),
+    lazy: async () => ({
+      Component: (await import('./routes/treasury-roster')).TreasuryRosterRoute,
+    }),
   },
   {
     path: paths.treasuryPlans.path,
-    element: screen(() => import('./routes/treasury-plans'), 'TreasuryPlansRoute'),
+    lazy: async () => ({
+      Component: (await import('./routes/treasury-plans')).TreasuryPlansRoute,
+    }),
   },
   {
     path: paths.knowledge.path,
-    element: screen(() => import('./routes/knowledge'), 'KnowledgeRoute'),
+    lazy: async () => ({ Component: (await import('./routes/knowledge')).KnowledgeRoute }),
   },
   {
     path: paths.postNew.path,
-    element: screen(() => import('./routes/post-edit'), 'PostEditRoute'),
+    lazy: async () => ({ Component: (await import('./routes/post-edit')).PostEditRoute }),
   },
   {
     path: paths.post.path,
-    element: screen(() => import('./routes/post'), 'PostRoute'),
+    lazy: async () => ({ Component: (await import('./routes/post')).PostRoute }),
   },
   {
     path: paths.postEdit.path,
-    element: screen(() => import('./routes/post-edit'), 'PostEditRoute'),
+    lazy: async () => ({ Component: (await import('./routes/post-edit')).PostEditRoute }),
   },
   {
     path: paths.moderation.path,
-    element: screen(() => import('./routes/moderation'), 'ModerationRoute'),
+    lazy: async () => ({ Component: (await import('./routes/moderation')).ModerationRoute }),
   },
   {
     path: paths.moderationLog.path,
-    element: screen(() => import('./routes/moderation-log'), 'ModerationLogRoute'),
+    lazy: async () => ({
+      Component: (await import('./routes/moderation-log')).ModerationLogRoute,
+    }),
   },
   {
     path: paths.exchange.path,
-    element: screen(() => import('./routes/exchange'), 'ExchangeRoute'),
+    lazy: async () => ({ Component: (await import('./routes/exchange')).ExchangeRoute }),
   },
   {
     path: paths.exchangeMine.path,
-    element: screen(() => import('./routes/exchange-mine'), 'ExchangeMineRoute'),
+    lazy: async () => ({ Component: (await import('./routes/exchange-mine')).ExchangeMineRoute }),
   },
   {
     path: paths.listingNew.path,
-    element: screen(() => import('./routes/listing-new'), 'ListingNewRoute'),
+    lazy: async () => ({ Component: (await import('./routes/listing-new')).ListingNewRoute }),
   },
   {
     path: paths.listing.path,
-    element: screen(() => import('./routes/listing'), 'ListingRoute'),
+    lazy: async () => ({ Component: (await import('./routes/listing')).ListingRoute }),
   },
   {
     path: paths.listingEdit.path,
-    element: screen(() => import('./routes/listing-edit'), 'ListingEditRoute'),
+    lazy: async () => ({ Component: (await import('./routes/listing-edit')).ListingEditRoute }),
   },
   {
     path: paths.messages.path,
-    element: screen(() => import('./routes/inbox'), 'InboxRoute'),
+    lazy: async () => ({ Component: (await import('./routes/inbox')).InboxRoute }),
   },
   {
     path: paths.thread.path,
-    element: screen(() => import('./routes/inbox-thread'), 'InboxThreadRoute'),
+    lazy: async () => ({ Component: (await import('./routes/inbox-thread')).InboxThreadRoute }),
   },
   {
     path: '*',
-    element: screen(() => import('./routes/not-found'), 'NotFoundRoute'),
+    lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),
   },
 ];
 
-/** The whole route tree: the layout around every screen; the layout catches a screen's errors and loading. */
+/** The whole route tree: the layout around every screen, with an error boundary inside the layout. */
 export const APP_ROUTES: RouteObject[] = [
-  { path: '/', element: createElement(AppLayout), children: SCREEN_ROUTES },
+  {
+    path: '/',
+    Component: AppLayout,
+    HydrateFallback: PageFallback,
+    ErrorBoundary: RouteErrorBoundary,
+    children: [{ ErrorBoundary: RouteErrorBoundary, children: SCREEN_ROUTES }],
+  },
 ];
+
+/** Creates the browser router for the app. */
+export const createAppRouter = () => createBrowserRouter(APP_ROUTES);

@@ -1,9 +1,9 @@
-// The entry chunk carries no schema library: zod loads with the first form check (lib/schemas.ts). Its JIT must
-// be off before the first schema is built (zod probes `new Function`, which our Content-Security-Policy,
-// script-src 'self', forbids), and the bundler may place the schema chunk's own config call after the schemas,
-// so the entry seeds zod's global config object, which every copy of zod reads (zod/v4/core/core.js).
-const zodGlobal = globalThis as { __zod_globalConfig?: { jitless?: boolean } };
-zodGlobal.__zod_globalConfig = { ...zodGlobal.__zod_globalConfig, jitless: true };
+// The entry chunk carries no schema library: only zod's core config, so that every later zod parse runs
+// without JIT (zod would otherwise probe `new Function`, which our Content-Security-Policy, script-src 'self',
+// forbids). The full zod loads with the screens that need forms.
+import { config } from 'zod/v4/core';
+
+config({ jitless: true });
 
 const API_BASE = /^(\/|https?:\/\/)/;
 

@@ -9,27 +9,14 @@ declare module 'autocannon' {
     requests: Histogram;
     latency: Histogram;
     errors: number;
-    timeouts: number;
     non2xx: number;
-  }
-  interface RequestParams {
-    method?: string;
-    path?: string;
-    headers?: Record<string, string>;
   }
   interface Options {
     url: string;
     connections?: number;
     duration?: number;
-    requests?: Array<RequestParams & { setupRequest?: (req: RequestParams) => RequestParams }>;
   }
-  interface Instance extends Promise<Result> {
-    on(
-      event: 'response',
-      listener: (client: unknown, status: number, bytes: number, ms: number) => void,
-    ): Instance;
-  }
-  function autocannon(options: Options): Instance;
+  function autocannon(options: Options): Promise<Result>;
   namespace autocannon {
     export type { Result };
   }

@@ -85,10 +85,10 @@ describe('app shell', () => {
 
   it('sends a visitor from a members-only page to sign in, with the way back', async () => {
     api();
-    const { location } = renderApp({ route: '/account' });
+    const { router } = renderApp({ route: '/account' });
     expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeInTheDocument();
-    expect(location().pathname).toBe('/sign-in');
-    expect(location().search).toBe('?next=%2Faccount');
+    expect(router.state.location.pathname).toBe('/sign-in');
+    expect(router.state.location.search).toBe('?next=%2Faccount');
   });
 
   it('tells a member without the admin role that the admin page is not for them', async () => {

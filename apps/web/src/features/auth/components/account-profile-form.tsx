@@ -1,5 +1,5 @@
-import { type UserDto } from '@app/shared';
-import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
+import { updateAccountSchema, type UserDto } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
@@ -29,7 +29,7 @@ export function AccountProfileForm({ user }: AccountProfileFormProps) {
     formState: { errors, isDirty },
     reset,
   } = useForm({
-    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.updateAccountSchema)),
+    resolver: zodResolver(updateAccountSchema),
     defaultValues: { displayName: user.displayName, unitSystem: user.unitSystem },
   });
 

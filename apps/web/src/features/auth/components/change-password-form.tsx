@@ -1,11 +1,20 @@
+import { changePasswordSchema } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
+import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { lazyZodResolver } from '../../../lib/lazy-schema';
 import { useChangePassword } from '../api/change-password';
+
+const changePasswordFormSchema = changePasswordSchema
+  .extend({ confirmNewPassword: z.string() })
+  .refine((values) => values.newPassword === values.confirmNewPassword, {
+    path: ['confirmNewPassword'],
+    message: "The two new passwords don't match",
+  });
 
 const EMPTY = { currentPassword: '', newPassword: '', confirmNewPassword: '' };
 
@@ -18,12 +27,7 @@ export function ChangePasswordForm() {
     setError,
     reset,
     formState: { errors },
-  } = useForm({
-    resolver: lazyZodResolver(() =>
-      import('./change-password-form.schema').then((m) => m.changePasswordFormSchema),
-    ),
-    defaultValues: EMPTY,
-  });
+  } = useForm({ resolver: zodResolver(changePasswordFormSchema), defaultValues: EMPTY });
 
   const onSubmit = handleSubmit(async ({ currentPassword, newPassword }) => {
     try {

@@ -1,4 +1,5 @@
-import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
+import { resetRequestSchema } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
@@ -34,7 +35,7 @@ export function EmailRequestForm({
     setError,
     formState: { errors },
   } = useForm({
-    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.resetRequestSchema)),
+    resolver: zodResolver(resetRequestSchema),
     defaultValues: { email: defaultEmail },
   });
 

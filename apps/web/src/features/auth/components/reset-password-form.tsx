@@ -1,5 +1,8 @@
+import { passwordSchema } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
+import { z } from 'zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -7,8 +10,14 @@ import { TextField } from '../../../components/ui/text-field';
 import { paths } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { lazyZodResolver } from '../../../lib/lazy-schema';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
+
+const newPasswordFormSchema = z
+  .object({ password: passwordSchema, confirmPassword: z.string() })
+  .refine((values) => values.password === values.confirmPassword, {
+    path: ['confirmPassword'],
+    message: "The two passwords don't match",
+  });
 
 export interface ResetPasswordFormProps {
   token: string;
@@ -30,9 +39,7 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
     setError,
     formState: { errors },
   } = useForm({
-    resolver: lazyZodResolver(() =>
-      import('./reset-password-form.schema').then((m) => m.newPasswordFormSchema),
-    ),
+    resolver: zodResolver(newPasswordFormSchema),
     defaultValues: { password: '', confirmPassword: '' },
   });
 

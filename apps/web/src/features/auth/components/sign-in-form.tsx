@@ -1,5 +1,5 @@
-import { type SessionDto } from '@app/shared';
-import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
+import { loginSchema, type SessionDto } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
@@ -29,10 +29,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
     handleSubmit,
     setError,
     formState: { errors },
-  } = useForm({
-    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.loginSchema)),
-    defaultValues: { email: '', password: '' },
-  });
+  } = useForm({ resolver: zodResolver(loginSchema), defaultValues: { email: '', password: '' } });
 
   const onSubmit = handleSubmit(async (input) => {
     setUnverifiedEmail(null);

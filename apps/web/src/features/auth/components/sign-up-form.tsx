@@ -1,4 +1,5 @@
-import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
+import { signupSchema } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '../../../components/ui/alert';
@@ -20,7 +21,7 @@ export function SignUpForm() {
     setError,
     formState: { errors },
   } = useForm({
-    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.signupSchema)),
+    resolver: zodResolver(signupSchema),
     defaultValues: { email: '', password: '', displayName: '' },
   });
 

@@ -1,6 +1,13 @@
 import { CHAIN_TRADE_SIZES_IN, inchFractionLabel } from '@app/calc';
-import { CHAIN_GRADE_IDS, HULLS, type BoatDto, type BoatInput, type HarborDto } from '@app/shared';
-import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
+import {
+  boatInputSchema,
+  CHAIN_GRADE_IDS,
+  HULLS,
+  type BoatDto,
+  type BoatInput,
+  type HarborDto,
+} from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { Controller, useForm, useWatch, type Control, type FieldPath } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -106,7 +113,7 @@ export function BoatForm({ boat, harbors, submitLabel, isPending, onSubmit }: Bo
     setValue,
     formState: { errors },
   } = useForm<FormValues>({
-    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.boatInputSchema)),
+    resolver: zodResolver(boatInputSchema),
     defaultValues: defaults(boat),
   });
   const gypsy = useWatch({ control, name: 'gypsy' });

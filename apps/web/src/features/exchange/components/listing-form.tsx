@@ -1,3 +1,4 @@
+import { zodResolver } from '@hookform/resolvers/zod';
 import {
   ANCHOR_KINDS,
   CHAIN_GRADE_IDS,
@@ -19,8 +20,7 @@ import { useForm, useWatch, type FieldErrors } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button, type ButtonVariant } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/text-field';
-import { lazyZodResolver } from '../../../lib/lazy-schema';
-import type { ListingFormValues } from '../utils/listing-form-values';
+import { formSchema, type ListingFormValues } from '../utils/listing-form-values';
 import { ExchangeSelect } from './select';
 
 const opts = (values: readonly string[], labels?: Record<string, string>) =>
@@ -71,12 +71,7 @@ export function ListingForm({
 }: ListingFormProps) {
   const intent = useRef('save');
   const buttons = actions ?? [{ intent: 'save', label: submitLabel }];
-  const form = useForm({
-    resolver: lazyZodResolver(() =>
-      import('../utils/listing-form.schema').then((m) => m.formSchema),
-    ),
-    defaultValues: initial,
-  });
+  const form = useForm({ resolver: zodResolver(formSchema), defaultValues: initial });
   const { register, handleSubmit, control, formState } = form;
   const category = useWatch({ control, name: 'category' });
   const server = serverError?.fields ?? {};

@@ -1,6 +1,10 @@
 import { formatTime } from '@app/shared/locale';
-import { type CreatePostInput, type PostDetailDto, type TopicDto } from '@app/shared';
-import { loadSchemas } from '../../../lib/lazy-schema';
+import {
+  createPostSchema,
+  type CreatePostInput,
+  type PostDetailDto,
+  type TopicDto,
+} from '@app/shared';
 import type { JSONContent } from '@tiptap/react';
 import { useEffect, useId, useRef, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
@@ -71,7 +75,7 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
 
   const persist = async (submit: boolean) => {
     const value = input();
-    const parsed = (await loadSchemas()).createPostSchema.safeParse(value);
+    const parsed = createPostSchema.safeParse(value);
     if (!parsed.success) {
       const f: Record<string, string> = {};
       for (const i of parsed.error.issues) f[i.path.join('.') || '_'] ??= i.message;

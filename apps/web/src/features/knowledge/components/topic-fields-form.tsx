@@ -1,12 +1,13 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { topicInputSchema } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import type { fieldsSchema } from './topic-fields-form.schema';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { lazyZodResolver } from '../../../lib/lazy-schema';
 
+const fieldsSchema = topicInputSchema.pick({ name: true, description: true });
 type FieldsInput = z.input<typeof fieldsSchema>;
 type FieldsOutput = z.output<typeof fieldsSchema>;
 const FIELD_NAMES = ['name', 'description'] as const;
@@ -33,9 +34,7 @@ export function TopicFieldsForm({
     reset,
     formState: { errors, isSubmitting },
   } = useForm<FieldsInput, unknown, FieldsOutput>({
-    resolver: lazyZodResolver(() =>
-      import('./topic-fields-form.schema').then((m) => m.fieldsSchema),
-    ),
+    resolver: zodResolver(fieldsSchema),
     defaultValues: initial ?? { name: '', description: '' },
   });
   const submit = handleSubmit(async (values) => {

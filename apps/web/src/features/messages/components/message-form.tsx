@@ -1,4 +1,5 @@
-import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { messageInputSchema } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
@@ -19,7 +20,7 @@ export interface MessageFormProps {
 export function MessageForm({ threadId, listingId, label, submitLabel, onSent }: MessageFormProps) {
   const send = useSendMessage();
   const { register, handleSubmit, reset, setError, formState } = useForm({
-    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.messageInputSchema)),
+    resolver: zodResolver(messageInputSchema),
     defaultValues: { body: '' },
   });
   const onSubmit = handleSubmit((v) =>

@@ -1,5 +1,4 @@
-import { type StormChecklistItem } from '@app/shared';
-import { loadSchemas } from '../../../lib/lazy-schema';
+import { stormChecklistSchema, type StormChecklistItem } from '@app/shared';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -44,7 +43,7 @@ export function ChecklistEditor({ items: initial, isPending, onSave }: Checklist
     setAdded('');
   };
   const save = async () => {
-    const parsed = (await loadSchemas()).stormChecklistSchema.safeParse({ items });
+    const parsed = stormChecklistSchema.safeParse({ items });
     if (!parsed.success) {
       setError(parsed.error.issues[0]?.message);
       return;

@@ -1,5 +1,5 @@
-import { type StormCloseInput } from '@app/shared';
-import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
+import { stormCloseSchema, type StormCloseInput } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -13,7 +13,7 @@ export interface CloseFormProps {
 /** Closing a watch with a short lessons note, optionally started as a draft knowledge post. */
 export function CloseForm({ isPending, onSubmit }: CloseFormProps) {
   const { register, handleSubmit, setError, formState } = useForm<StormCloseInput>({
-    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.stormCloseSchema)),
+    resolver: zodResolver(stormCloseSchema),
     defaultValues: { lessons: '', makePost: true },
   });
   const submit = handleSubmit(async (v) => {

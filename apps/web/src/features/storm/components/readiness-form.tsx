@@ -1,4 +1,5 @@
 import {
+  readinessInputSchema,
   STORM_LOCATION_LABELS,
   STORM_LOCATIONS,
   type ReadinessDto,
@@ -6,7 +7,6 @@ import {
   type StormChecklistItem,
   type StormLocation,
 } from '@app/shared';
-import { loadSchemas } from '../../../lib/lazy-schema';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -63,7 +63,7 @@ export function ReadinessForm({
       helpWanted: v.helpWanted,
       helpNote: v.helpNote,
     };
-    const parsed = (await loadSchemas()).readinessInputSchema.safeParse(input);
+    const parsed = readinessInputSchema.safeParse(input);
     if (!parsed.success) {
       for (const issue of parsed.error.issues) {
         const field = FIELDS.find((f) => f === issue.path[0]);

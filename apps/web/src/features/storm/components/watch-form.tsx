@@ -1,5 +1,4 @@
-import { type HarborDto, type StormWatchInput } from '@app/shared';
-import { loadSchemas } from '../../../lib/lazy-schema';
+import { stormWatchInputSchema, type HarborDto, type StormWatchInput } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -72,7 +71,7 @@ export function WatchForm({ harbors, isPending, onSubmit }: WatchFormProps) {
       shareDetails: v.shareDetails,
     };
     // The same schema the server uses, so the messages match.
-    const parsed = (await loadSchemas()).stormWatchInputSchema.safeParse(input);
+    const parsed = stormWatchInputSchema.safeParse(input);
     if (!parsed.success) {
       let first = true;
       for (const issue of parsed.error.issues) {

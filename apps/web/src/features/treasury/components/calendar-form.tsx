@@ -1,10 +1,11 @@
 import {
+  duesCalendarSchema,
   formatMoney,
   PRORATION_LABELS,
   type DuesCalendarDto,
   type DuesCalendarInput,
 } from '@app/shared';
-import { lazyZodResolver, loadSchemas } from '../../../lib/lazy-schema';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
@@ -120,7 +121,7 @@ export function CalendarForm({
     control,
     formState: { errors },
   } = useForm<DuesCalendarInput>({
-    resolver: lazyZodResolver(() => loadSchemas().then((m) => m.duesCalendarSchema)),
+    resolver: zodResolver(duesCalendarSchema),
     defaultValues: saved.calendar,
   });
   const month = Number(useWatch({ control, name: 'fiscalYearStartMonth' }));

@@ -2,20 +2,27 @@ import {
   currencyDigits,
   METHOD_LABELS,
   OFFLINE_METHODS,
+  offlinePaymentSchema,
   type OfflinePaymentInput,
   type PlanDto,
   type RosterRowDto,
 } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
+import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { ApiError } from '../../../lib/api-client';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { lazyZodResolver } from '../../../lib/lazy-schema';
-import type { formSchema } from './offline-payment-form.schema';
 
+// The shared schema, with the amount typed as a decimal (120.50) instead of minor units.
+const formSchema = offlinePaymentSchema.omit({ amountMinor: true }).extend({
+  amount: z
+    .string()
+    .trim()
+    .regex(/^\d+([.,]\d{1,2})?$/, 'Give an amount such as 120 or 120.50 (no minus sign)'),
+});
 type FormValues = z.input<typeof formSchema>;
 const FIELDS = [
   'userId',
@@ -49,9 +56,7 @@ export function OfflinePaymentForm({
     reset,
     formState: { errors },
   } = useForm<FormValues>({
-    resolver: lazyZodResolver(() =>
-      import('./offline-payment-form.schema').then((m) => m.formSchema),
-    ),
+    resolver: zodResolver(formSchema),
     defaultValues: {
       method: 'cheque',
       currency: plans[0]?.currency ?? 'EUR',

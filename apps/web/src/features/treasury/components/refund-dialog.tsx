@@ -1,15 +1,29 @@
-import { formatMoney, type PaymentDto, type RefundInput } from '@app/shared';
+import { formatMoney, refundInputSchema, type PaymentDto, type RefundInput } from '@app/shared';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useId, useRef } from 'react';
 import { useForm } from 'react-hook-form';
+import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
 import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { ApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/form-errors';
-import { lazyZodResolver } from '../../../lib/lazy-schema';
-import { minorToInput, parseMoney } from '../utils/money';
+import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
 import { refundableMinor } from '../utils/refundable';
 
+function schemaFor(payment: PaymentDto, left: number) {
+  return z
+    .object({ amount: z.string(), reason: refundInputSchema.shape.reason })
+    .superRefine((v, ctx) => {
+      const minor = parseMoney(v.amount, payment.currency);
+      let message: string | null = null;
+      if (minor === null) message = moneyMessage('Amount', payment.currency);
+      else if (minor <= 0) message = 'The amount must be more than zero';
+      else if (minor > left)
+        message = `At most ${formatMoney(left, payment.currency)} is left to refund`;
+      if (message) ctx.addIssue({ code: 'custom', path: ['amount'], message });
+    });
+}
 type FormValues = { amount: string; reason: string };
 
 export interface RefundDialogProps {
@@ -34,9 +48,7 @@ export function RefundDialog({ payment, onSubmit, onClose }: RefundDialogProps) 
     setFocus,
     formState: { errors, isSubmitting },
   } = useForm<FormValues>({
-    resolver: lazyZodResolver(() =>
-      import('./refund-dialog.schema').then((m) => m.schemaFor(payment, left)),
-    ),
+    resolver: zodResolver(schemaFor(payment, left)),
     defaultValues: { amount: minorToInput(left, payment.currency), reason: '' },
   });
 
