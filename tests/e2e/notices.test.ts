@@ -60,6 +60,11 @@ describe('notices and the daily digest in Chromium', () => {
     const box = page.getByRole('checkbox', { name: /daily digest of unread notices/ });
     await box.waitFor();
     expect(await box.isChecked()).toBe(false);
+    // The box keeps its place while the web font swaps in (flex-shrink: 0 in the base styles); wait for the
+    // font anyway so the click lands where a person would tap.
+    await page.evaluate(async () => {
+      await document.fonts.ready;
+    });
     await box.check();
     await page.getByText('The daily digest is on.').waitFor();
     await page.reload();
