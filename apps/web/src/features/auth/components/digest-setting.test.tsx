@@ -1,5 +1,5 @@
 import '../../../testing/setup';
-import { screen } from '@testing-library/react';
+import { fireEvent, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
 import { buildSession, buildUser } from '../../../testing/builders';
@@ -25,6 +25,20 @@ describe('DigestSetting', () => {
       method: 'PATCH',
       body: { notificationDigest: true },
     });
+  });
+
+  it('shows the tick the moment the box is clicked, while the request runs', () => {
+    const member = buildUser();
+    mockApi({
+      'PATCH /api/account': () => ({
+        body: { data: { user: { ...member, notificationDigest: true } } },
+      }),
+    });
+    renderWithProviders(<DigestSetting user={member} />, { session: buildSession(member) });
+    const box = screen.getByRole('checkbox', { name: /daily digest/ });
+    fireEvent.click(box);
+    // No await: a box that waits for the mutation's pending state springs back unticked here.
+    expect(box).toBeChecked();
   });
 
   it('shows the server’s refusal and leaves the box as it was', async () => {

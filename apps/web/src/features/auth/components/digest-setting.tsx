@@ -1,5 +1,5 @@
 import type { UserDto } from '@app/shared';
-import { useId } from 'react';
+import { useId, useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { errorMessage } from '../../../lib/form-errors';
 import { useUpdateAccount } from '../api/update-account';
@@ -12,9 +12,10 @@ export function DigestSetting({ user }: { user: UserDto }) {
   const update = useUpdateAccount();
   const hintId = useId();
   const statusId = useId();
-  const isOn = update.isPending
-    ? (update.variables.notificationDigest ?? user.notificationDigest)
-    : user.notificationDigest;
+  // The wanted state is React state set in the click itself: the mutation's own pending state reaches the
+  // component a moment later, and a controlled box would spring back unticked in between.
+  const [wanted, setWanted] = useState<boolean | null>(null);
+  const isOn = wanted ?? user.notificationDigest;
   return (
     <div className="flex flex-col gap-3">
       <label className="flex min-h-11 items-start gap-3 text-base">
@@ -24,7 +25,13 @@ export function DigestSetting({ user }: { user: UserDto }) {
           checked={isOn}
           disabled={update.isPending}
           aria-describedby={`${hintId} ${statusId}`}
-          onChange={(event) => update.mutate({ notificationDigest: event.target.checked })}
+          onChange={(event) => {
+            setWanted(event.target.checked);
+            update.mutate(
+              { notificationDigest: event.target.checked },
+              { onSettled: () => setWanted(null) },
+            );
+          }}
         />
         <span>
           <span className="font-bold">E-mail me a daily digest of unread notices</span>
