@@ -16,7 +16,7 @@ const TREASURER = 'treasurer@larkspit.example';
 async function payWith(page: Page, card: string) {
   await page.getByLabel('Card number').fill(card);
   await page.getByLabel(/^Expiry/).fill('12 / 40');
-  await page.getByLabel(/^CVC/).fill('123');
+  await page.getByLabel(/^Security code/).fill('123');
   await page.getByRole('button', { name: /^Pay / }).click();
 }
 

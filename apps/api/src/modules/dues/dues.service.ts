@@ -12,6 +12,7 @@ import type { Env } from '../../config/env';
 import { AppError, invalid, notFound } from '../../errors/app-error';
 import { withNamedLock } from '../../lib/serialize';
 import { Membership, MembershipPlan, Payment, Refund, User } from '../../models';
+import { cachedClub } from '../club/club-cache';
 import { getSetting } from '../club/club.service';
 import { stripeClient } from '../payments/stripe-client';
 import {
@@ -243,12 +244,14 @@ async function openCheckout(
     userId: String(actor.id),
     planId: String(plan.id),
   };
+  // The local payment stand-in heads its page with the club's name and writes money in the club's region.
+  const club = await cachedClub();
   try {
     const session = await stripe.checkout.sessions.create({
       mode: 'payment',
       customer_email: actor.email,
       client_reference_id: String(payment.id),
-      metadata,
+      metadata: { ...metadata, club_name: club.name.slice(0, 500), club_region: club.locale.region },
       payment_intent_data: { metadata, description: `Club dues: ${plan.name}` },
       expires_at: Math.floor(now.getTime() / 1000) + 60 * 60,
       line_items: quote.lines.map((l) => ({
