@@ -198,6 +198,8 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
   // Behind: paid last year only (due or overdue now), and lapsed two years back.
   await member('maren@larkspit.example', 'individual', '2020-05-01', prev.end);
   await pay('maren@larkspit.example', 'individual', prev, dayIn(prev.start, 8), 'card', null);
+  await member('oriel@larkspit.example', 'individual', '2023-05-01', prev.end);
+  await pay('oriel@larkspit.example', 'individual', prev, dayIn(prev.start, 12), 'card', null);
   await member('saoirse@larkspit.example', 'junior', '2022-04-01', older.end);
   await pay(
     'saoirse@larkspit.example',

@@ -125,7 +125,8 @@ describe('the member home', () => {
       'href',
       '/plans/31',
     );
-    expect(within(boats).getByText(/Chain: 8 mm G43/)).toBeInTheDocument();
+    expect(within(boats).getByText(/Chain: 8 mm grade 43,/)).toBeInTheDocument();
+    expect(within(boats).queryByText(/grade grade|G43/i)).toBeNull();
     const duesCard = screen.getByRole('region', { name: 'My dues' });
     expect(await within(duesCard).findByRole('link', { name: 'Pay €120.00' })).toHaveAttribute(
       'href',
