@@ -87,7 +87,9 @@ describe('the check itself', () => {
     });
     const found = findUnreadable(await visibleText(page), 2);
     expect(found.map((f) => f.kind).sort()).toEqual(['iso-date', 'minor-units']);
-    expect(found.every((f) => !f.text.includes('9000') && !f.text.includes('2026-01-02'))).toBe(true);
+    expect(found.every((f) => !f.text.includes('9000') && !f.text.includes('2026-01-02'))).toBe(
+      true,
+    );
     await page.close();
   });
 });

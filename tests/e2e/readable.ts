@@ -21,7 +21,8 @@ const INTEGER_THEN_SIGN = new RegExp(
 // Money words next to a bare integer of four digits or more: "amount 6000", "the 12000 expected".
 const MONEY_WORD_THEN_INTEGER =
   /\b(?:amount|amounts|total|expected|price|fee|balance)\s+(?:of\s+|was\s+|is\s+)?(\d{4,})\b(?![.,]\d)/gi;
-const INTEGER_THEN_MONEY_WORD = /(?<![\d.,])\b(\d{4,})\s+(?:expected|due|owed|charged|refunded)\b/gi;
+const INTEGER_THEN_MONEY_WORD =
+  /(?<![\d.,])\b(\d{4,})\s+(?:expected|due|owed|charged|refunded)\b/gi;
 // On one line: a field label "Chain grade" above a list whose first choice is "Grade 30" is not a repeat.
 const REPEATED_GRADE = /\bgrade[ \t\u00a0]+grade\b/gi;
 

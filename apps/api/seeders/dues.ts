@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto';
+import { formatMoney } from '@app/shared';
 import { Membership, MembershipPlan, Payment, Refund } from '../src/models';
 import {
   addDays,
@@ -217,6 +218,6 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
   await pay('bram@larkspit.example', 'individual', fy, bramJoined, 'card', null, {
     amountMinor: 6000,
     status: 'held',
-    heldReason: 'Held for the treasurer: amount 6000 does not match the 12000 expected',
+    heldReason: `Held for the treasurer: amount ${formatMoney(6000, 'EUR')} does not match the ${formatMoney(12000, 'EUR')} expected`,
   });
 }

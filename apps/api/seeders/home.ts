@@ -28,6 +28,7 @@ export const seedHome: AreaSeeder = async ({ transaction, users, now }) => {
     ...(boat.displacementKg === null ? {} : { displacementKg: boat.displacementKg }),
     ...(boat.gypsy ? { gypsy: boat.gypsy } : {}),
   });
+  const components = planComponentsFrom(rec);
   await TacklePlan.create(
     {
       boatId: boat.id,
@@ -38,7 +39,7 @@ export const seedHome: AreaSeeder = async ({ transaction, users, now }) => {
       depthM: DEPTH_M,
       tideM: TIDE_M,
       bottom: null,
-      components: planComponentsFrom(rec),
+      components: { ...components, connectors: components.connectors ?? [] },
       notes: '',
     },
     { transaction },

@@ -7,7 +7,7 @@ import type {
   DuesQuoteDto,
   MyDuesDto,
 } from '@app/shared';
-import { formatMoney } from '@app/shared';
+import { formatDate, formatMoney } from '@app/shared';
 import type { Env } from '../../config/env';
 import { AppError, invalid, notFound } from '../../errors/app-error';
 import { withNamedLock } from '../../lib/serialize';
@@ -41,7 +41,10 @@ const KIND_REASON: Record<QuoteResult['kind'], string> = {
 export function describeQuote(q: QuoteResult | null, plan: MembershipPlan): DuesQuoteDto | null {
   if (!q) return null;
   const lines = [
-    { label: `${plan.name} dues, ${q.coversFrom} to ${q.coversTo}`, amountMinor: q.duesMinor },
+    {
+      label: `${plan.name} dues, ${formatDate(q.coversFrom)} to ${formatDate(q.coversTo)}`,
+      amountMinor: q.duesMinor,
+    },
     ...(q.lateFeeMinor > 0
       ? [
           {
@@ -251,7 +254,11 @@ async function openCheckout(
       mode: 'payment',
       customer_email: actor.email,
       client_reference_id: String(payment.id),
-      metadata: { ...metadata, club_name: club.name.slice(0, 500), club_region: club.locale.region },
+      metadata: {
+        ...metadata,
+        club_name: club.name.slice(0, 500),
+        club_region: club.locale.region,
+      },
       payment_intent_data: { metadata, description: `Club dues: ${plan.name}` },
       expires_at: Math.floor(now.getTime() / 1000) + 60 * 60,
       line_items: quote.lines.map((l) => ({
@@ -306,7 +313,7 @@ export async function checkoutStatus(actor: User, sessionId: string): Promise<Ch
     paidThrough: membership?.paidThrough ?? null,
     message:
       payment.status === 'succeeded' && membership?.paidThrough
-        ? `${message} ${formatMoney(payment.amountMinor, payment.currency)} received; paid through ${membership.paidThrough}.`
+        ? `${message} ${formatMoney(payment.amountMinor, payment.currency)} received; paid through ${formatDate(membership.paidThrough)}.`
         : message,
   };
 }
