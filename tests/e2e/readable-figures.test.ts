@@ -71,7 +71,7 @@ describe('the check itself', () => {
       'repeated-grade',
     ]);
     const good =
-      'Paid through 31 Mar 2027 · Total €1,200.00 · 1.234,50 € · €60.00 · 2 kN · in 2026 · Grade 43 high test · 40 m';
+      'Paid through 31 Mar 2027 · Total €1,200.00 · 1.234,50 € · €60.00 · 2 kN · in 2026 · Grade 43 high test · 40 m · covers to 31 Mar 2026 €120.00';
     expect(findUnreadable(good, 2)).toEqual([]);
     // A zero-decimal currency is written without decimals: only dates are checked then.
     expect(findUnreadable('Total ¥5000', 0)).toEqual([]);

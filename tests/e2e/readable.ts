@@ -9,13 +9,14 @@ export interface Unreadable {
 const SYMBOLS = '€$£¥';
 const CODES = 'EUR|USD|GBP|CAD|AUD|NZD|CHF|DKK|SEK|NOK|JPY';
 const ISO_DATE = /\b\d{4}-\d{2}-\d{2}\b/g;
-// A currency sign or code right before or after a bare integer: no grouping mark, no decimals.
+// A currency sign or code right before or after a bare integer: no grouping mark, no decimals. A sign that
+// starts the next amount ("2026 €120.00") is not read as the end of the year before it.
 const SIGN_THEN_INTEGER = new RegExp(
   `(?:[${SYMBOLS}]|\\b(?:${CODES})\\b)\\s?(\\d+)(?!\\d|[.,]\\d)`,
   'g',
 );
 const INTEGER_THEN_SIGN = new RegExp(
-  `(?<![\\d.,])(\\d+)\\s?(?:[${SYMBOLS}]|\\b(?:${CODES})\\b)`,
+  `(?<![\\d.,])(\\d+)\\s?(?:[${SYMBOLS}]|\\b(?:${CODES})\\b)(?!\\s?\\d)`,
   'g',
 );
 // Money words next to a bare integer of four digits or more: "amount 6000", "the 12000 expected".

@@ -133,6 +133,7 @@ describe('the member home', () => {
       '/dues',
     );
     expect(within(duesCard).getByText('Overdue')).toBeInTheDocument();
+    expect(within(duesCard).getByTestId('next-due')).toHaveTextContent('Due from 1 Jan 2026.');
     const notices = screen.getByRole('region', { name: 'Notices' });
     expect(
       await within(notices).findByText('1 unread notice', {}, { timeout: 5000 }),
