@@ -292,7 +292,7 @@ const STATUS_MESSAGES: Record<Payment['status'], string> = {
   held: 'Your payment arrived but did not match your plan. The treasurer will sort it out and contact you.',
   dismissed: 'The treasurer is looking into this payment.',
   failed: 'This checkout did not go through. Nothing was charged.',
-  expired: 'This checkout expired before it was paid. Nothing was charged.',
+  expired: 'This payment page timed out before it was paid. Nothing was charged.',
 };
 
 /** The member's own checkout, for the confirmation page; someone else's is not found. */

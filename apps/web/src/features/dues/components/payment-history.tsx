@@ -7,7 +7,7 @@ const STATUS_WORDS: Record<PaymentDto['status'], string> = {
   held: 'With the treasurer',
   dismissed: 'With the treasurer',
   failed: 'Not charged',
-  expired: 'Not charged (checkout expired)',
+  expired: 'Not charged (payment page timed out)',
 };
 
 /** The member's own recent payments. */
