@@ -78,7 +78,7 @@ describe('marking a listing sold', () => {
     const { requests, user } = setup();
     await user.click(await screen.findByRole('button', { name: 'Close as sold…' }));
     expect(soldPosts(requests)).toHaveLength(0);
-    const dialog = await screen.findByRole('dialog', { name: /Mark “Spare chain” sold\?/ });
+    const dialog = await screen.findByRole('dialog', { name: /Close “Spare chain” as sold\?/ });
     const group = within(dialog).getByRole('group', { name: 'Who took the gear?' });
     expect(
       within(group)
@@ -90,7 +90,7 @@ describe('marking a listing sold', () => {
     await user.click(within(group).getByLabelText('Ilka Buyer'));
     expect(dialog).toHaveTextContent(/Ilka Buyer gets a notice and an e-mail/);
     expect(dialog).toHaveTextContent(/other member who asked is told it is sold/);
-    await user.click(within(dialog).getByRole('button', { name: 'Sold to Ilka Buyer' }));
+    await user.click(within(dialog).getByRole('button', { name: 'Went to Ilka Buyer' }));
     await waitFor(() => expect(soldPosts(requests)).toHaveLength(1));
     expect(soldPosts(requests)[0]?.body).toEqual({ threadId: 21 });
     expect(
