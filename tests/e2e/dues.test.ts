@@ -1,5 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { formatDate } from '../../packages/shared/src/locale-format';
 import { audit, baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
 
 let browser: Browser;
@@ -16,7 +17,7 @@ const TREASURER = 'treasurer@larkspit.example';
 async function payWith(page: Page, card: string) {
   await page.getByLabel('Card number').fill(card);
   await page.getByLabel(/^Expiry/).fill('12 / 40');
-  await page.getByLabel(/^CVC/).fill('123');
+  await page.getByLabel(/^Security code/).fill('123');
   await page.getByRole('button', { name: /^Pay / }).click();
 }
 
@@ -49,7 +50,9 @@ describe('dues in Chromium', () => {
     await screenshot(page, 'dues-paid');
     const receipt = await waitForMail(MEMBER, 'Receipt for your club dues');
     expect(after).toMatch(/^\d{4}-\d{2}-\d{2}$/);
-    expect(receipt.text).toContain(after ?? 'no date');
+    // The receipt writes the date as the club's region does (en-GB for the demo club), never as ISO.
+    expect(receipt.text).toContain(formatDate(after ?? 'no date', 'en-GB'));
+    expect(receipt.text).not.toMatch(/\b\d{4}-\d{2}-\d{2}\b/);
     await page.close();
   });
 
@@ -117,8 +120,11 @@ describe('dues in Chromium', () => {
     await calendar.getByLabel('Fiscal year starts in').selectOption('7');
     await calendar.getByLabel(/^on day/).fill('15');
     await expect
-      .poll(() => page.getByTestId('fy-start').innerText(), { timeout: 10000 })
+      .poll(() => page.getByTestId('fy-start').locator('time').getAttribute('datetime'), {
+        timeout: 10000,
+      })
       .toMatch(/^\d{4}-07-15$/);
+    expect(await page.getByTestId('fy-start').innerText()).toMatch(/^15 Jul \d{4}$/);
     await expect(page.getByRole('heading', { name: /not saved yet/ }).count()).resolves.toBe(1);
     expect(await page.getByRole('row', { name: /Harbour crew/ }).count()).toBe(1);
     await screenshot(page, 'treasury-plans');

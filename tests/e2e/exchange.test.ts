@@ -169,13 +169,13 @@ describe('gear exchange in Chromium', () => {
     const page = await newPage(390);
     await signIn(page, SELLER);
     await page.goto(listingUrl);
-    await page.getByRole('button', { name: 'Mark sold…' }).click();
+    await page.getByRole('button', { name: 'Close as sold…' }).click();
     const dialog = page.getByRole('dialog', { name: /sold\?$/ });
     await dialog.waitFor();
     await dialog.getByLabel(BUYER_NAME).check();
     await audit(page, 'mark sold dialog');
     await screenshotWidths(page, 'exchange-mark-sold-dialog', 390);
-    await dialog.getByRole('button', { name: `Sold to ${BUYER_NAME}` }).click();
+    await dialog.getByRole('button', { name: `Went to ${BUYER_NAME}` }).click();
     await page.getByRole('button', { name: 'Relist for 60 days' }).waitFor({ timeout: 15000 });
     await expect
       .poll(() => page.getByText(new RegExp(`Marked sold to ${BUYER_NAME}`)).count())

@@ -34,6 +34,8 @@ export const DEMO_USERS: DemoUser[] = [
   { email: 'idris@larkspit.example', displayName: 'Idris Fairlead', roles: ['member'] },
   { email: 'saoirse@larkspit.example', displayName: 'Saoirse Gunwale', roles: ['member'] },
   { email: 'bram@larkspit.example', displayName: 'Bram Cleatson', roles: ['member'] },
+  // Behind on dues like Maren, but no other test pays for her: the home-page member path does.
+  { email: 'oriel@larkspit.example', displayName: 'Oriel Kedgewick', roles: ['member'] },
 ];
 
 /** Invented boats of several sizes (SI units), keyed by owner e-mail. */
@@ -96,6 +98,18 @@ export const DEMO_BOATS = [
     draftM: 1.7,
     bowHeightM: 1.3,
     gypsy: { grade: 'G43', tradeSizeIn: 0.375 },
+    harbor: 0,
+  },
+  {
+    owner: 'oriel@larkspit.example',
+    name: 'Saltcress',
+    hull: 'sail',
+    loaM: 10.4,
+    beamM: 3.4,
+    displacementKg: 5600,
+    draftM: 1.6,
+    bowHeightM: 1.2,
+    gypsy: { grade: 'G43', tradeSizeIn: 0.3125 },
     harbor: 0,
   },
 ] as const;

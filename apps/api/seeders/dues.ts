@@ -1,4 +1,5 @@
 import { randomBytes } from 'node:crypto';
+import { formatMoney } from '@app/shared';
 import { Membership, MembershipPlan, Payment, Refund } from '../src/models';
 import {
   addDays,
@@ -198,6 +199,8 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
   // Behind: paid last year only (due or overdue now), and lapsed two years back.
   await member('maren@larkspit.example', 'individual', '2020-05-01', prev.end);
   await pay('maren@larkspit.example', 'individual', prev, dayIn(prev.start, 8), 'card', null);
+  await member('oriel@larkspit.example', 'individual', '2023-05-01', prev.end);
+  await pay('oriel@larkspit.example', 'individual', prev, dayIn(prev.start, 12), 'card', null);
   await member('saoirse@larkspit.example', 'junior', '2022-04-01', older.end);
   await pay(
     'saoirse@larkspit.example',
@@ -215,6 +218,6 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
   await pay('bram@larkspit.example', 'individual', fy, bramJoined, 'card', null, {
     amountMinor: 6000,
     status: 'held',
-    heldReason: 'Held for the treasurer: amount 6000 does not match the 12000 expected',
+    heldReason: `Held for the treasurer: amount ${formatMoney(6000, 'EUR')} does not match the ${formatMoney(12000, 'EUR')} expected`,
   });
 }

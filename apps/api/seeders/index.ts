@@ -3,6 +3,7 @@ import type { Harbor, User } from '../src/models';
 import { seedDues } from './dues';
 import { seedKnowledge } from './knowledge';
 import { seedExchange } from './exchange';
+import { seedHome } from './home';
 import { seedStorm } from './storm';
 
 /** What the base demo seed hands to each area's seeder. */
@@ -27,4 +28,5 @@ export const AREA_SEEDERS: Array<[name: string, seeder: AreaSeeder]> = [
   ['knowledge', seedKnowledge],
   ['exchange', seedExchange],
   ['storm', seedStorm],
+  ['home', seedHome],
 ];

@@ -428,7 +428,7 @@ export async function seedKnowledge(ctx: SeedContext) {
     [
       'maren',
       'accepted',
-      `Your answer on “${title('q-anchor')}” was accepted`,
+      `The asker says your answer on “${title('q-anchor')}” worked`,
       'q-anchor',
       3,
       true,

@@ -6,28 +6,33 @@ import type { ChargeObject, PaymentIntentObject, StoredSession } from './types';
 interface TestCard {
   number: string;
   label: string;
-  decline?: { code: string; declineCode: string; message: string };
+  /** `code` and `declineCode` are the provider's documented codes; the messages are ours. */
+  decline?: { code: string; declineCode: string; message: string; pageMessage: string };
 }
 
-/** The provider's published test card numbers this fake understands. */
+/** The provider's documented test card numbers this stand-in understands. */
 export const TEST_CARDS: readonly TestCard[] = [
-  { number: '4242424242424242', label: 'Succeeds' },
+  { number: '4242424242424242', label: 'Goes through' },
   {
     number: '4000000000000002',
-    label: 'Declined',
+    label: 'Turned down by the bank',
     decline: {
       code: 'card_declined',
       declineCode: 'generic_decline',
-      message: 'Your card was declined.',
+      message: 'The card was declined by its bank.',
+      pageMessage:
+        'Declined: the bank turned this practice card down. Nothing was charged. Try the card that goes through, or go back.',
     },
   },
   {
     number: '4000000000009995',
-    label: 'Declined: insufficient funds',
+    label: 'Turned down: not enough money',
     decline: {
       code: 'card_declined',
       declineCode: 'insufficient_funds',
-      message: 'Your card has insufficient funds.',
+      message: 'The card was declined: not enough funds on it.',
+      pageMessage:
+        'Declined: this practice card has not enough money on it. Nothing was charged. Try the card that goes through, or go back.',
     },
   },
 ];
@@ -42,7 +47,7 @@ export type CardField = 'card_number' | 'expiry' | 'cvc';
 
 export type PaymentResult =
   | { kind: 'paid'; stored: StoredSession; redirectTo: string | null }
-  | { kind: 'declined'; stored: StoredSession; message: string }
+  | { kind: 'declined'; stored: StoredSession; message: string; pageMessage: string }
   | { kind: 'invalid'; stored: StoredSession; message: string; field: CardField }
   | { kind: 'closed'; stored: StoredSession };
 
@@ -62,7 +67,7 @@ export function payWithCard(ledger: Ledger, sessionId: string, input: CardInput)
       kind: 'invalid',
       stored,
       field: 'card_number',
-      message: 'Use one of the test card numbers listed below.',
+      message: 'That number is not one of the practice cards on this page: use one of those.',
     };
   }
   const expiry = parseExpiry(input.expiry, new Date(ledger.nowMs()));
@@ -73,7 +78,7 @@ export function payWithCard(ledger: Ledger, sessionId: string, input: CardInput)
       kind: 'invalid',
       stored,
       field: 'cvc',
-      message: "Your card's security code is incomplete.",
+      message: 'The security code is 3 or 4 digits.',
     };
   }
 
@@ -98,7 +103,12 @@ export function payWithCard(ledger: Ledger, sessionId: string, input: CardInput)
     };
     ledger.emit('payment_intent.payment_failed', intent);
     ledger.commit();
-    return { kind: 'declined', stored, message: card.decline.message };
+    return {
+      kind: 'declined',
+      stored,
+      message: card.decline.message,
+      pageMessage: card.decline.pageMessage,
+    };
   }
 
   intent.status = 'succeeded';
@@ -199,13 +209,13 @@ function newCharge(
 /** Accepts MM/YY, MM / YY or MM/YYYY in the future; returns an error message otherwise. */
 function parseExpiry(value: string, now: Date): { month: number; year: number } | string {
   const match = /^\s*(\d{1,2})\s*\/\s*(\d{2}|\d{4})\s*$/.exec(value);
-  if (!match) return "Your card's expiration date is incomplete. Use MM / YY.";
+  if (!match) return 'Write the expiry as month / year, e.g. 12 / 40.';
   const month = Number(match[1]);
   const yearText = match[2] ?? '';
   const year = yearText.length === 2 ? 2000 + Number(yearText) : Number(yearText);
-  if (month < 1 || month > 12) return "Your card's expiration month is invalid.";
+  if (month < 1 || month > 12) return 'The expiry month runs from 01 to 12.';
   const isPast =
     year < now.getUTCFullYear() || (year === now.getUTCFullYear() && month < now.getUTCMonth() + 1);
-  if (isPast) return "Your card's expiration date is in the past.";
+  if (isPast) return 'That expiry has already gone by: use a month still to come.';
   return { month, year };
 }

@@ -16,20 +16,42 @@ async function start(): Promise<Harness> {
 }
 
 describe('GET /pay/:sessionId', () => {
-  it('shows a labelled TEST card form with the amount, items and a cancel link', async () => {
+  it('shows the practice page in our words: title, club, amount, items, the form and a way back', async () => {
     await start();
-    const session = await h.createSession(5000);
+    const session = await h.createSession(5000, {
+      metadata: { club_name: 'Gullwater Sailing Club', club_region: 'en-GB' },
+    });
     const res = await fetch(session.url ?? '');
     const html = await res.text();
     expect(res.status).toBe(200);
-    expect(html).toContain('TEST payment page');
-    expect(html).toContain('<label for="card_number">Card number</label>');
+    expect(html).toMatch(/<title>Practice payment — no money moves · €50\.00<\/title>/);
+    expect(html).toContain('<p class="club">Gullwater Sailing Club</p>');
+    expect(html).toContain('<h1>Practice payment of €50.00</h1>');
+    expect(html).toMatch(/<label for="card_number">Card number/);
     expect(html).toMatch(/<label for="expiry">Expiry/);
-    expect(html).toMatch(/<label for="cvc">CVC/);
-    expect(html).toContain('Pay €50.00');
+    expect(html).toMatch(/<label for="cvc">Security code/);
+    expect(html).toContain('Pay €50.00</button>');
     expect(html).toContain('Annual dues');
-    expect(html).toContain('href="http://127.0.0.1:9/dues"');
+    expect(html).toContain('href="http://127.0.0.1:9/dues">Back to Gullwater Sailing Club');
     expect(html).toContain('name="viewport"');
+    // One-press choices post the documented test numbers.
+    for (const n of ['4242424242424242', '4000000000000002', '4000000000009995'])
+      expect(html).toContain(`name="card_number" value="${n}"`);
+    // None of the provider's own test-page wording.
+    expect(html).not.toMatch(/TEST payment page|Test card numbers|Your card/);
+  });
+
+  it("writes the amount in the club's region", async () => {
+    await start();
+    const session = await h.createSession(123450, { metadata: { club_region: 'de-DE' } });
+    const html = await (await fetch(session.url ?? '')).text();
+    expect(html).toContain(
+      `Pay ${new Intl.NumberFormat('de-DE', { style: 'currency', currency: 'EUR' }).format(1234.5)}`,
+    );
+    expect(html).toMatch(/Pay 1\.234,50\s€/);
+    // An unknown region tag falls back instead of failing the page.
+    const odd = await h.createSession(5000, { metadata: { club_region: 'not a tag!' } });
+    expect(await (await fetch(odd.url ?? '')).text()).toContain('Pay €50.00');
   });
 
   it('formats zero-decimal currencies without minor units', async () => {
@@ -44,14 +66,17 @@ describe('GET /pay/:sessionId', () => {
       ],
       success_url: 'http://127.0.0.1:9/ok',
     });
-    expect(await (await fetch(session.url ?? '')).text()).toContain('Pay ¥5,000');
+    const html = await (await fetch(session.url ?? '')).text();
+    // en-GB, the default region, writes yen as "JP¥"; no decimals either way.
+    expect(html).toMatch(/Pay (JP)?¥5,000<\/button>/);
+    expect(html).not.toContain('50.00');
   });
 
   it('answers an unknown session with a 404 page', async () => {
     await start();
     const res = await fetch(`${h.fake.url}/pay/cs_test_unknown`);
     expect(res.status).toBe(404);
-    expect(await res.text()).toContain('Checkout session not found');
+    expect(await res.text()).toContain('No payment at this address');
   });
 });
 
@@ -99,17 +124,24 @@ describe('POST /pay/:sessionId', () => {
   });
 
   it.each([
-    ['4000 0000 0000 0002', 'Your card was declined.', 'generic_decline'],
-    ['4000000000009995', 'Your card has insufficient funds.', 'insufficient_funds'],
+    ['4000 0000 0000 0002', 'The card was declined by its bank.', 'generic_decline', 'bank turned'],
+    [
+      '4000000000009995',
+      'The card was declined: not enough funds on it.',
+      'insufficient_funds',
+      'not enough money',
+    ],
   ])(
     '%s re-renders the form with "%s", keeps the session open and emits payment_failed',
-    async (card, message, declineCode) => {
+    async (card, message, declineCode, pageWords) => {
       await start();
       const session = await h.createSession();
       const res = await h.pay(session.url ?? '', card);
       expect(res.status).toBe(402);
       const html = await res.text();
-      expect(html).toContain(`role="alert">${message.replace("'", '&#39;')}</p>`);
+      expect(html).toMatch(
+        new RegExp(`role="alert">Declined: [^<]*${pageWords}[^<]*Nothing was charged`),
+      );
       expect(html).toContain(`value="${card}"`);
 
       const still = await h.stripe.checkout.sessions.retrieve(session.id);
@@ -136,10 +168,11 @@ describe('POST /pay/:sessionId', () => {
   });
 
   it.each([
-    ['4111 1111 1111 1111', '12 / 40', '123', 'Use one of the test card numbers'],
-    ['4242 4242 4242 4242', '13 / 40', '123', 'expiration month is invalid'],
-    ['4242 4242 4242 4242', '01 / 20', '123', 'expiration date is in the past'],
-    ['4242 4242 4242 4242', '12 / 40', '1', 'security code is incomplete'],
+    ['4111 1111 1111 1111', '12 / 40', '123', 'not one of the practice cards'],
+    ['4242 4242 4242 4242', '13 / 40', '123', 'expiry month runs from 01 to 12'],
+    ['4242 4242 4242 4242', '01 / 20', '123', 'already gone by'],
+    ['4242 4242 4242 4242', '12 40', '123', 'month / year'],
+    ['4242 4242 4242 4242', '12 / 40', '1', 'security code is 3 or 4 digits'],
   ])('card %s, expiry %s, cvc %s → 400 with "%s"', async (card, expiry, cvc, message) => {
     await start();
     const session = await h.createSession();
@@ -155,13 +188,13 @@ describe('POST /pay/:sessionId', () => {
     await h.pay(paid.url ?? '', '4242424242424242');
     const again = await h.pay(paid.url ?? '', '4242424242424242');
     expect(again.status).toBe(409);
-    expect(await again.text()).toContain('This payment is complete');
+    expect(await again.text()).toContain('<h1>Already paid</h1>');
 
     const expired = await h.createSession();
     await h.stripe.checkout.sessions.expire(expired.id);
     const page = await fetch(expired.url ?? '');
     expect(page.status).toBe(410);
-    expect(await page.text()).toContain('This checkout session has expired');
+    expect(await page.text()).toContain('This payment page has timed out');
   });
 
   it('expires a session on its own once expires_at has passed, with a webhook', async () => {

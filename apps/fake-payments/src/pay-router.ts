@@ -36,7 +36,7 @@ function findSession(ledger: Ledger, sessionId: string, res: Response): StoredSe
   }
 }
 
-/** The hosted TEST checkout page: `GET /pay/:sessionId` shows the form, `POST` pays. */
+/** The practice payment page: `GET /pay/:sessionId` shows the form, `POST` pays. */
 export function createPayRouter(ledger: Ledger): Router {
   const router = express.Router();
   router.use(express.urlencoded({ extended: false, limit: '16kb' }));
@@ -78,7 +78,7 @@ export function createPayRouter(ledger: Ledger): Router {
         sendPage(
           res,
           402,
-          renderPayPage({ stored: result.stored, values, error: { message: result.message } }),
+          renderPayPage({ stored: result.stored, values, error: { message: result.pageMessage } }),
         );
         return;
       case 'invalid':

@@ -78,6 +78,7 @@ export {
   CHAIN_GRADE_LABELS,
   CHAIN_ROWS,
   CHAIN_TRADE_SIZES_IN,
+  chainGradeWords,
   type ChainGrade,
   type ChainRow,
 } from './tables/chain-cfr';

@@ -85,6 +85,16 @@ export const planComponentsSchema = z.object({
       material: z.enum(['nylon', 'polyester']),
       diameterMm: num('Snubber diameter', 6, 40, 'mm'),
       lengthM: num('Snubber length', 0.5, 60, 'm'),
+      count: z.union([z.literal(1), z.literal(2)], { error: 'One or two snubbers' }).optional(),
+    })
+    .optional(),
+  /** The nylon for a chain-and-rope rode the recommendation offered beside an all-chain rode (not in the load path). */
+  nylonAlternative: z
+    .object({
+      material: z.literal('nylon'),
+      construction: z.literal('three-strand'),
+      diameterMm: num('Rope diameter', 6, 40, 'mm'),
+      lengthM: num('Rope length', 0, 500, 'm'),
     })
     .optional(),
   connectors: z

@@ -31,7 +31,7 @@ export const LISTING_CONDITION_LABELS: Record<ListingCondition, string> = {
   'like-new': 'Like new',
   good: 'Good, light wear',
   fair: 'Fair, visible wear',
-  'for-parts': 'For parts or repair',
+  'for-parts': 'Spares only, not for use',
 };
 
 export const LISTING_STATUSES = ['draft', 'active', 'sold', 'expired', 'withdrawn'] as const;

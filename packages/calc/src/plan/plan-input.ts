@@ -77,6 +77,18 @@ export interface PlanComponents {
     construction?: RopeConstruction;
     diameterMm: number;
     lengthM: number;
+    /** 2 when the recommendation rigs two snubbers or a bridle (shown on the plan; each line is sized alone). */
+    count?: 1 | 2;
+  };
+  /**
+   * The nylon the recommendation offers for a chain-and-rope rode instead of all chain. Kept with the plan so
+   * the member sees it, never counted in the load path or the rode length (the rode is `chain` + `rode`).
+   */
+  nylonAlternative?: {
+    material: 'nylon';
+    construction: 'three-strand';
+    diameterMm: number;
+    lengthM: number;
   };
   connectors?: PlanConnector[];
 }

@@ -434,7 +434,8 @@ export const loaFt = (loaM: number) => loaM / M_PER_FT;
 /**
  * The recommendation as a plan's components, so a saved plan carries exactly what was shown:
  * the anchor, the chain at its length, the storm rode's nylon (spliced to the chain), the
- * snubber and the anchor shackle.
+ * snubber (two when it says to rig two or a bridle), the anchor shackle, and the nylon it offers
+ * for a chain-and-rope rode when the rode it sizes is all chain.
  */
 export function planComponentsFrom(rec: TackleRecommendation): PlanComponents {
   const connectors: PlanConnector[] = [];
@@ -445,6 +446,7 @@ export function planComponentsFrom(rec: TackleRecommendation): PlanComponents {
       material: 'nylon',
       diameterMm: rec.snubber.diameterMm,
       lengthM: rec.snubber.lengthM,
+      ...(rec.snubber.bridle ? { count: 2 as const } : {}),
     },
     connectors,
   };
@@ -464,6 +466,13 @@ export function planComponentsFrom(rec: TackleRecommendation): PlanComponents {
       lengthM: rec.nylon.lengthM,
     };
     connectors.push({ label: 'chain-to-rope splice', kind: 'splice' });
+  } else if (rec.nylon !== null) {
+    components.nylonAlternative = {
+      material: 'nylon',
+      construction: 'three-strand',
+      diameterMm: rec.nylon.sizeMm,
+      lengthM: rec.nylon.lengthM,
+    };
   }
   return components;
 }

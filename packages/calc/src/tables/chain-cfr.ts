@@ -110,6 +110,12 @@ export const CHAIN_GRADE_NUMBER: Readonly<Record<ChainGrade, number>> = {
   G100: 100,
 };
 
+/**
+ * A grade in running text where no "Grade" label stands beside it: "grade 43". Use it, or
+ * CHAIN_GRADE_LABELS ("Grade 43 high test") on its own, never a "grade" prefix before either.
+ */
+export const chainGradeWords = (grade: ChainGrade): string => `grade ${CHAIN_GRADE_NUMBER[grade]}`;
+
 /** Mass coefficient for metric chain, kg/m per mm² of material diameter (fitted, ±10 %). */
 export const CHAIN_MASS_COEFF_KGPM_PER_MM2 = 0.0235;
 

@@ -7,11 +7,12 @@ import type {
   DuesQuoteDto,
   MyDuesDto,
 } from '@app/shared';
-import { formatMoney } from '@app/shared';
+import { formatDate, formatMoney } from '@app/shared';
 import type { Env } from '../../config/env';
 import { AppError, invalid, notFound } from '../../errors/app-error';
 import { withNamedLock } from '../../lib/serialize';
 import { Membership, MembershipPlan, Payment, Refund, User } from '../../models';
+import { cachedClub } from '../club/club-cache';
 import { getSetting } from '../club/club.service';
 import { stripeClient } from '../payments/stripe-client';
 import {
@@ -40,7 +41,10 @@ const KIND_REASON: Record<QuoteResult['kind'], string> = {
 export function describeQuote(q: QuoteResult | null, plan: MembershipPlan): DuesQuoteDto | null {
   if (!q) return null;
   const lines = [
-    { label: `${plan.name} dues, ${q.coversFrom} to ${q.coversTo}`, amountMinor: q.duesMinor },
+    {
+      label: `${plan.name} dues, ${formatDate(q.coversFrom)} to ${formatDate(q.coversTo)}`,
+      amountMinor: q.duesMinor,
+    },
     ...(q.lateFeeMinor > 0
       ? [
           {
@@ -243,12 +247,18 @@ async function openCheckout(
     userId: String(actor.id),
     planId: String(plan.id),
   };
+  // The local payment stand-in heads its page with the club's name and writes money in the club's region.
+  const club = await cachedClub();
   try {
     const session = await stripe.checkout.sessions.create({
       mode: 'payment',
       customer_email: actor.email,
       client_reference_id: String(payment.id),
-      metadata,
+      metadata: {
+        ...metadata,
+        club_name: club.name.slice(0, 500),
+        club_region: club.locale.region,
+      },
       payment_intent_data: { metadata, description: `Club dues: ${plan.name}` },
       expires_at: Math.floor(now.getTime() / 1000) + 60 * 60,
       line_items: quote.lines.map((l) => ({
@@ -282,7 +292,7 @@ const STATUS_MESSAGES: Record<Payment['status'], string> = {
   held: 'Your payment arrived but did not match your plan. The treasurer will sort it out and contact you.',
   dismissed: 'The treasurer is looking into this payment.',
   failed: 'This checkout did not go through. Nothing was charged.',
-  expired: 'This checkout expired before it was paid. Nothing was charged.',
+  expired: 'This payment page timed out before it was paid. Nothing was charged.',
 };
 
 /** The member's own checkout, for the confirmation page; someone else's is not found. */
@@ -303,7 +313,7 @@ export async function checkoutStatus(actor: User, sessionId: string): Promise<Ch
     paidThrough: membership?.paidThrough ?? null,
     message:
       payment.status === 'succeeded' && membership?.paidThrough
-        ? `${message} ${formatMoney(payment.amountMinor, payment.currency)} received; paid through ${membership.paidThrough}.`
+        ? `${message} ${formatMoney(payment.amountMinor, payment.currency)} received; paid through ${formatDate(membership.paidThrough)}.`
         : message,
   };
 }

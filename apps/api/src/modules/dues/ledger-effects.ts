@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { formatMoney, METHOD_LABELS } from '@app/shared';
+import { formatDate, formatMoney, METHOD_LABELS } from '@app/shared';
 import type { Payment } from '../../models';
 import { Membership, Refund, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
@@ -21,7 +21,7 @@ export async function alreadyPaidReason(payment: Payment, t: Transaction): Promi
     transaction: t,
   });
   if (!m?.paidThrough || daysBetween(m.paidThrough, payment.coversTo) > 0) return null;
-  return `${ALREADY_PAID} the dues from ${payment.coversFrom ?? '?'} to ${payment.coversTo} were already paid (paid through ${m.paidThrough}); refund this payment or credit it on purpose`;
+  return `${ALREADY_PAID} the dues from ${payment.coversFrom ? formatDate(payment.coversFrom) : '?'} to ${formatDate(payment.coversTo)} were already paid (paid through ${formatDate(m.paidThrough)}); refund this payment or credit it on purpose`;
 }
 
 /**
@@ -88,7 +88,9 @@ export async function queueReceipt(payment: Payment, publicUrl: string, t: Trans
   const lines = [
     `We received ${formatMoney(payment.amountMinor, payment.currency)} by ${METHOD_LABELS[payment.method].toLowerCase()}.`,
     ...(payment.coversFrom && payment.coversTo
-      ? [`Your dues now cover ${payment.coversFrom} to ${payment.coversTo}.`]
+      ? [
+          `Your dues now cover ${formatDate(payment.coversFrom)} to ${formatDate(payment.coversTo)}.`,
+        ]
       : []),
     ...(payment.reference ? [`Reference: ${payment.reference}`] : []),
     `Receipt number: R-${String(payment.id).padStart(6, '0')}`,

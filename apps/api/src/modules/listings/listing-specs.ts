@@ -103,13 +103,13 @@ export function sizeMmOf(category: ListingCategory, specs: Specs): number | null
   }
 }
 
-/** Why gear sold for parts or repair is never flagged as fitting a boat. */
+/** Why gear sold as spares only is never flagged as fitting a boat. */
 export const FOR_PARTS_BASIS =
-  'Sold for parts or repair: not rated for use, so it is never shown as fitting a boat.';
+  'Sold as spares only: not rated for use, so it is never shown as fitting a boat.';
 
 /**
  * The rating "fits my boat" compares, from @app/calc's tables (or the seller's stated WLL for other connectors).
- * Gear sold for parts or repair has none: its strength is unknown whatever its size.
+ * Gear sold as spares only has none: its strength is unknown whatever its size.
  */
 export function ratingOf(
   category: ListingCategory,

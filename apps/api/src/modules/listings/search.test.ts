@@ -117,7 +117,7 @@ describe('GET /api/listings search', () => {
     expect(await q('45 m')).toEqual([ids.rode16, m8].sort());
   });
 
-  it('never says gear for parts or repair fits a boat', async () => {
+  it('never says gear sold as spares only fits a boat', async () => {
     const boat = (
       await c.post('/api/boats', { name: 'Parts Test', hull: 'sail', loaM: 9.1, bowHeightM: 1.1 })
     ).body.data.id as number;
@@ -133,7 +133,7 @@ describe('GET /api/listings search', () => {
     ).toBe('fits');
     const detail = await c.get(`/api/listings/${parts}?fitsBoat=${boat}`);
     expect(detail.body.data.fit.status).toBe('not-rated');
-    expect(detail.body.data.fit.reason).toMatch(/parts or repair/);
+    expect(detail.body.data.fit.reason).toMatch(/spares only/);
     const list = await c.get(`/api/listings?fitsBoat=${boat}&pageSize=50`);
     const card = (list.body.data as Array<{ id: number; fit: { status: string } }>).find(
       (l) => l.id === parts,

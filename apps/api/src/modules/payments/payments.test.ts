@@ -7,6 +7,7 @@ import request from 'supertest';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { startFakePayments, type FakePayments } from '@app/fake-payments';
+import { formatDate } from '@app/shared';
 import {
   AuditEvent,
   Membership,
@@ -193,7 +194,9 @@ describe('card checkout', () => {
     await flushOutbox();
     const mails = await inbox(user.email, 'Receipt for your club dues');
     expect(mails).toHaveLength(1);
-    expect(mails[0]?.text).toContain(quote.coversTo);
+    // The receipt writes the cover's end as the club's region does, never as an ISO date.
+    expect(mails[0]?.text).toContain(formatDate(quote.coversTo));
+    expect(mails[0]?.text).not.toMatch(/\b\d{4}-\d{2}-\d{2}\b/);
   });
 
   it('a declined card leaves the member as they were, with the decline on the checkout', async () => {

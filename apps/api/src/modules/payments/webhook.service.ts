@@ -1,5 +1,6 @@
 import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import type Stripe from 'stripe';
+import { formatMoney } from '@app/shared';
 import { Payment, ProviderEvent, Refund } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import {
@@ -157,7 +158,9 @@ async function sessionCompleted(
 
   const reasons: string[] = [];
   if (amount !== payment.expectedMinor)
-    reasons.push(`amount ${amount} does not match the ${payment.expectedMinor ?? 0} expected`);
+    reasons.push(
+      `amount ${formatMoney(amount, /^[A-Z]{3}$/.test(currency) ? currency : payment.currency)} does not match the ${formatMoney(payment.expectedMinor ?? 0, payment.currency)} expected`,
+    );
   if (currency !== payment.currency)
     reasons.push(`currency ${currency} does not match the plan's ${payment.currency}`);
   const alreadyPaid = await alreadyPaidReason(payment, t);

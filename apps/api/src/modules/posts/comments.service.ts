@@ -116,7 +116,7 @@ export async function acceptAnswer(actor: User, postId: number, commentId: numbe
     await notify(
       answer.authorId,
       'accepted',
-      `Your answer on “${post.title}” was accepted`,
+      `The asker says your answer on “${post.title}” worked`,
       postPath(post.id),
     );
   return post;

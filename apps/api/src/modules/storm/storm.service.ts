@@ -1,6 +1,11 @@
 import type { z } from 'zod';
 import { Op, type Sequelize } from 'sequelize';
-import type { stormChecklistSchema, stormCloseSchema, stormWatchInputSchema } from '@app/shared';
+import {
+  displayLocale,
+  type stormChecklistSchema,
+  type stormCloseSchema,
+  type stormWatchInputSchema,
+} from '@app/shared';
 import { AppError, invalid, notFound } from '../../errors/app-error';
 import { Harbor, StormWatch, User, UserRole } from '../../models';
 import { recordAudit } from '../audit/audit.service';
@@ -56,7 +61,9 @@ export async function setChecklist(actor: User, input: ChecklistInput) {
   return getChecklist();
 }
 
-const when = (d: Date) => `${d.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
+/** A moment in the club's region, in UTC so every reader's mail says the same ("4 Dec 2026, 18:00 UTC"). */
+const when = (d: Date) =>
+  `${new Intl.DateTimeFormat(displayLocale(), { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }).format(d)} UTC`;
 
 function watchMail(to: User, watch: StormWatch, harbours: string, publicUrl: string) {
   return actionEmail({

@@ -1,4 +1,4 @@
-import { designLoad, tacklePlan } from '@app/calc';
+import { designLoad, planComponentsFrom, recommendTackle, tacklePlan } from '@app/calc';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { TacklePlan } from '../../models';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
@@ -127,4 +127,69 @@ describe('tackle plans', () => {
     ).toBe(404);
     expect((await TacklePlan.findByPk(planId))?.windKn).toBe(45);
   });
+
+  it.each([
+    ['everyday', 30, 9.75],
+    ['storm', 60, 9.75],
+    ['hurricane-hole', 70, 14],
+  ] as const)(
+    'a %s recommendation (%i kn, %f m) saved as a plan reads back with every rode part it listed',
+    async (condition, windKn, loaM) => {
+      const { c, boatId } = await memberWithBoat();
+      if (loaM !== boat.loaM) await c.put(`/api/boats/${boatId}`, { loaM });
+      const rec = recommendTackle({
+        loaM,
+        beamM: boat.beamM,
+        hull: 'sail',
+        bowHeightM: boat.bowHeightM,
+        windKn,
+        anchorType: 'plow',
+        depthM: 6,
+        tideM: 1,
+        extrapolate: true,
+      });
+      const saved = await c.post('/api/tackle-plans', {
+        boatId,
+        name: `Plan at ${windKn} kn`,
+        condition,
+        windKn,
+        depthM: 6,
+        tideM: 1,
+        components: planComponentsFrom(rec),
+      });
+      expect(saved.status).toBe(201);
+      const back = (await c.get(`/api/tackle-plans/${saved.body.data.plan.id as number}`)).body.data
+        .plan.components;
+
+      // Every nylon part the recommendation listed is in the plan, at the size and length it showed.
+      expect(back.snubber).toMatchObject({
+        material: 'nylon',
+        diameterMm: rec.snubber.diameterMm,
+        lengthM: rec.snubber.lengthM,
+      });
+      const { nylon } = rec;
+      if (nylon === null) throw new Error('the recommendation lists nylon for this boat');
+      if (nylon.role === 'storm-rode') {
+        expect(back.rode).toMatchObject({
+          material: 'nylon',
+          diameterMm: nylon.sizeMm,
+          lengthM: nylon.lengthM,
+        });
+        expect(back.chain.lengthM + back.rode.lengthM).toBeCloseTo(rec.scope.rodeLengthM, 6);
+      } else {
+        // An everyday rode is all chain; the nylon the recommendation offers for a chain-and-rope rode is kept
+        // beside it, and is not counted as rode.
+        expect(back.rode).toBeUndefined();
+        expect(back.nylonAlternative).toMatchObject({
+          material: 'nylon',
+          diameterMm: nylon.sizeMm,
+        });
+        expect(back.chain.lengthM).toBeCloseTo(rec.scope.rodeLengthM, 6);
+      }
+      if (rec.snubber.bridle) expect(back.snubber.count).toBe(2);
+      expect(back.connectors.map((k: { kind: string }) => k.kind)).toEqual(
+        planComponentsFrom(rec).connectors?.map((k) => k.kind),
+      );
+    },
+  );
 });

@@ -6,6 +6,11 @@ import { DuesStatusBadge } from '../../features/dues/components/status-badge';
 import { HomeCard, HomeEmpty } from './home-card';
 import { readableDate } from '../../lib/format-date';
 
+/** The calendar day after `iso` (YYYY-MM-DD): when a membership paid through `iso` falls due again. */
+function dayAfter(iso: string): string {
+  return new Date(Date.parse(`${iso}T12:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
+}
+
 /** The member's dues: status, when the membership runs to, and a way to pay what is owed. */
 export function DuesCard() {
   const dues = useMyDues();
@@ -23,6 +28,20 @@ export function DuesCard() {
           </p>
           {data.membership?.paidThrough && (
             <p>Your membership runs to {readableDate(data.membership.paidThrough)}.</p>
+          )}
+          {data.paidUp && data.membership?.paidThrough && (
+            <p data-testid="next-due">
+              Next due on{' '}
+              <time dateTime={dayAfter(data.membership.paidThrough)}>
+                {readableDate(dayAfter(data.membership.paidThrough))}
+              </time>
+              .
+            </p>
+          )}
+          {!data.paidUp && owed && (
+            <p data-testid="next-due">
+              Due from <time dateTime={owed.coversFrom}>{readableDate(owed.coversFrom)}</time>.
+            </p>
           )}
           {!data.paidUp && owed && (
             <>

@@ -1,4 +1,4 @@
-import { inchFractionLabel } from '@app/calc';
+import { chainGradeWords, inchFractionLabel } from '@app/calc';
 import type { BoatDto, TacklePlanDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { paths } from '../../config/paths';
@@ -16,7 +16,7 @@ function chainSize(chain: NonNullable<TacklePlanDto['components']['chain']>): st
       : chain.tradeSizeIn !== undefined
         ? inchFractionLabel(chain.tradeSizeIn)
         : '?';
-  return `${size} ${chain.grade}`;
+  return `${size} ${chainGradeWords(chain.grade)}`;
 }
 
 /** A plan's headline: anchor type and mass, chain size and length, rope if any. */

@@ -33,7 +33,7 @@ function DuesScreen() {
       intro={<p>What your membership covers, what is owed and why, and a one-minute way to pay.</p>}
     >
       {params.get('checkout') === 'cancelled' && (
-        <Alert tone="info" title="Checkout cancelled">
+        <Alert tone="info" title="Card payment stopped">
           <p>You left the payment page; nothing was charged and your dues are as they were.</p>
         </Alert>
       )}
@@ -44,7 +44,7 @@ function DuesScreen() {
         </Alert>
       )}
       {checkout.isError && (
-        <Alert tone="error" title="Couldn't open the checkout">
+        <Alert tone="error" title="Couldn't open the card payment page">
           <p>{errorMessage(checkout.error)}</p>
         </Alert>
       )}

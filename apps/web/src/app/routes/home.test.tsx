@@ -125,13 +125,15 @@ describe('the member home', () => {
       'href',
       '/plans/31',
     );
-    expect(within(boats).getByText(/Chain: 8 mm G43/)).toBeInTheDocument();
+    expect(within(boats).getByText(/Chain: 8 mm grade 43,/)).toBeInTheDocument();
+    expect(within(boats).queryByText(/grade grade|G43/i)).toBeNull();
     const duesCard = screen.getByRole('region', { name: 'My dues' });
     expect(await within(duesCard).findByRole('link', { name: 'Pay €120.00' })).toHaveAttribute(
       'href',
       '/dues',
     );
     expect(within(duesCard).getByText('Overdue')).toBeInTheDocument();
+    expect(within(duesCard).getByTestId('next-due')).toHaveTextContent('Due from 1 Jan 2026.');
     const notices = screen.getByRole('region', { name: 'Notices' });
     expect(
       await within(notices).findByText('1 unread notice', {}, { timeout: 5000 }),

@@ -26,7 +26,8 @@ function NoticesScreen() {
       title="Notices"
       intro={
         <p>
-          Replies to your posts and comments, accepted answers and moderators’ decisions
+          Replies to your posts and comments, answers that worked for the asker and moderators’
+          decisions
           {unread ? ` · ${unread} unread` : ''}.{' '}
           {user?.notificationDigest ? (
             'You also get a daily e-mail of what is unread.'

@@ -36,7 +36,7 @@ export function DigestSetting({ user }: { user: UserDto }) {
         <span>
           <span className="font-bold">E-mail me a daily digest of unread notices</span>
           <span id={hintId} className="block text-sm text-ink-700">
-            At most one e-mail a day to {user.email}, only when a reply, an accepted answer or a
+            At most one e-mail a day to {user.email}, only when a reply, an answer that worked or a
             moderator’s decision is still unread. Every digest has a link to stop it.
           </span>
         </span>

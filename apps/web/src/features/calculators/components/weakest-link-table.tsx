@@ -14,6 +14,23 @@ export interface WeakestLinkTableProps {
 
 const times = (value: number) => `${value.toFixed(2)} ×`;
 
+const COLUMNS = [
+  'Part',
+  'Working limit',
+  'Breaking strength',
+  'Margin on working limit',
+  'Factor on breaking',
+] as const;
+
+/** A cell's column name, shown above its value only where the rows are cards (below md). */
+function CardLabel({ children }: { children: string }) {
+  return (
+    <span aria-hidden="true" className="block text-xs font-normal text-ink-700 md:hidden">
+      {children}
+    </span>
+  );
+}
+
 /**
  * Each part's margin on its working limit and factor on its breaking strength at the load; the
  * weakest link (smallest working-limit margin) is highlighted and named in words, not by colour
@@ -29,73 +46,80 @@ export function WeakestLinkTable({
   const factorOf = new Map(result.byBreak.map((b) => [b.index, b.factor]));
   return (
     <ScrollRegion label={caption}>
-      <table className="w-full min-w-[34rem] border-collapse text-sm">
-        <caption className="mb-2 text-left font-bold">{caption}</caption>
-        <thead>
-          <tr className="border-b-2 border-ink-700 text-left">
-            <th scope="col" className="py-2 pr-2">
-              Part
-            </th>
-            <th scope="col" className="py-2 pr-2">
-              Working limit
-            </th>
-            <th scope="col" className="py-2 pr-2">
-              Breaking strength
-            </th>
-            <th scope="col" className="py-2 pr-2">
-              Margin on working limit
-            </th>
-            <th scope="col" className="py-2">
-              Factor on breaking
-            </th>
+      {/* Below md each part is a card (label over value), so nothing hides to the right on a phone; the
+          explicit roles keep it a table for screen readers once the display changes. */}
+      <table role="table" className="w-full border-collapse text-sm max-md:block md:min-w-[34rem]">
+        <caption className="mb-2 text-left font-bold max-md:block">{caption}</caption>
+        <thead role="rowgroup" className="max-md:sr-only">
+          <tr role="row" className="border-b-2 border-ink-700 text-left">
+            {COLUMNS.map((name, i) => (
+              <th
+                key={name}
+                role="columnheader"
+                scope="col"
+                className={cn('py-2', i < COLUMNS.length - 1 && 'pr-2')}
+              >
+                {name}
+              </th>
+            ))}
           </tr>
         </thead>
-        <tbody>
+        <tbody role="rowgroup" className="max-md:flex max-md:flex-col max-md:gap-2">
           {parts.map((part, index) => {
             const isWeakest = result.weakest.index === index;
             const margin = marginOf.get(index) ?? 0;
             const factor = factorOf.get(index) ?? 0;
+            const lowFactor = designFactor !== undefined && factor < designFactor;
             return (
               <tr
                 key={`${part.label}-${index}`}
+                role="row"
                 aria-current={isWeakest ? 'true' : undefined}
+                data-testid="weakest-link-part"
                 className={cn(
                   'border-b border-sand-300',
+                  'max-md:grid max-md:grid-cols-2 max-md:gap-x-3 max-md:gap-y-2 max-md:rounded-md max-md:border max-md:bg-white max-md:p-3',
                   isWeakest &&
-                    'bg-signal-50 font-bold outline-2 -outline-offset-2 outline-signal-600',
+                    'bg-signal-50 font-bold outline-2 -outline-offset-2 outline-signal-600 max-md:bg-signal-50',
                 )}
               >
-                <th scope="row" className="py-2 pr-2 text-left">
+                <th
+                  role="rowheader"
+                  scope="row"
+                  className="py-2 pr-2 text-left max-md:col-span-2 max-md:py-0"
+                >
                   {part.label}
                   {isWeakest && (
-                    <span className="ml-2 rounded-pill bg-signal-600 px-2 py-0.5 text-xs text-white">
+                    <span className="ml-2 inline-block rounded-pill bg-signal-600 px-2 py-0.5 text-xs text-white">
                       Weakest link
                     </span>
                   )}
                   {result.weakestByBreak.index === index && !isWeakest && (
-                    <span className="ml-2 rounded-pill bg-ink-700 px-2 py-0.5 text-xs text-white">
+                    <span className="ml-2 inline-block rounded-pill bg-ink-700 px-2 py-0.5 text-xs text-white">
                       Parts first in an overload
                     </span>
                   )}
                 </th>
-                <td className="py-2 pr-2">
+                <td role="cell" className="py-2 pr-2 max-md:py-0">
+                  <CardLabel>{COLUMNS[1]}</CardLabel>
                   <Quantity value={part.wllN} kind="force" />
                 </td>
-                <td className="py-2 pr-2">
+                <td role="cell" className="py-2 pr-2 max-md:py-0">
+                  <CardLabel>{COLUMNS[2]}</CardLabel>
                   <Quantity value={part.minBreakN} kind="force" />
                 </td>
-                <td className={cn('py-2 pr-2', margin < 1 && 'text-flare-700')}>
+                <td
+                  role="cell"
+                  className={cn('py-2 pr-2 max-md:py-0', margin < 1 && 'text-flare-700')}
+                >
+                  <CardLabel>{COLUMNS[3]}</CardLabel>
                   {times(margin)}
                   {margin < 1 && <span className="sr-only"> (over its working load limit)</span>}
                 </td>
-                <td
-                  className={cn(
-                    'py-2',
-                    designFactor !== undefined && factor < designFactor && 'text-flare-700',
-                  )}
-                >
+                <td role="cell" className={cn('py-2 max-md:py-0', lowFactor && 'text-flare-700')}>
+                  <CardLabel>{COLUMNS[4]}</CardLabel>
                   {times(factor)}
-                  {designFactor !== undefined && factor < designFactor && (
+                  {lowFactor && (
                     <span className="sr-only"> (below the design factor {designFactor})</span>
                   )}
                 </td>

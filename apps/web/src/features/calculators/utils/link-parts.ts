@@ -1,4 +1,5 @@
 import {
+  chainGradeWords,
   chainSpec,
   inchFractionLabel,
   ropeSpec,
@@ -52,7 +53,10 @@ export function ratePart(part: LinkPart, index: number): RatedComponent {
     switch (part.kind) {
       case 'chain': {
         const spec = chainSpec({ grade: part.grade, tradeSizeIn: part.tradeSizeIn });
-        return { label: `${inchFractionLabel(part.tradeSizeIn)} ${part.grade} chain`, ...spec };
+        return {
+          label: `${inchFractionLabel(part.tradeSizeIn)} ${chainGradeWords(part.grade)} chain`,
+          ...spec,
+        };
       }
       case 'shackle':
         return {

@@ -1,4 +1,5 @@
 import { formatMoney, METHOD_LABELS, type PaymentDto } from '@app/shared';
+import { readableDate } from '../../../lib/format-date';
 
 const STATUS_WORDS: Record<PaymentDto['status'], string> = {
   pending: 'Waiting',
@@ -6,7 +7,7 @@ const STATUS_WORDS: Record<PaymentDto['status'], string> = {
   held: 'With the treasurer',
   dismissed: 'With the treasurer',
   failed: 'Not charged',
-  expired: 'Not charged (checkout expired)',
+  expired: 'Not charged (payment page timed out)',
 };
 
 /** The member's own recent payments. */
@@ -20,8 +21,14 @@ export function PaymentHistory({ payments }: { payments: PaymentDto[] }) {
           className="flex flex-wrap justify-between gap-2 border-t border-sand-300 py-2"
         >
           <span>
-            {p.paidAt?.slice(0, 10) ?? p.createdAt.slice(0, 10)} · {METHOD_LABELS[p.method]}
-            {p.coversTo ? ` · covers to ${p.coversTo}` : ''}
+            <time dateTime={p.paidAt ?? p.createdAt}>{readableDate(p.paidAt ?? p.createdAt)}</time>{' '}
+            · {METHOD_LABELS[p.method]}
+            {p.coversTo && (
+              <>
+                {' '}
+                · covers to <time dateTime={p.coversTo}>{readableDate(p.coversTo)}</time>
+              </>
+            )}
           </span>
           <span className="tabular-nums">
             {formatMoney(p.amountMinor, p.currency)} · {STATUS_WORDS[p.status]}

@@ -36,15 +36,15 @@ export function MarkSoldDialog({
   return (
     <ConfirmDialog
       isOpen={isOpen}
-      title={`Mark “${title}” sold?`}
-      confirmLabel={chosen ? `Sold to ${chosen.otherParty.displayName}` : 'Mark sold'}
+      title={`Close “${title}” as sold?`}
+      confirmLabel={chosen ? `Went to ${chosen.otherParty.displayName}` : 'Close as sold'}
       isPending={isPending}
       confirmDisabled={choice === ''}
       onConfirm={() => onConfirm(chosen ? chosen.id : undefined)}
       onCancel={onCancel}
     >
       <fieldset className="flex flex-col gap-2">
-        <legend className="mb-1 font-bold">Who bought it?</legend>
+        <legend className="mb-1 font-bold">Who took the gear?</legend>
         {threads.map((t) => (
           <label key={t.id} className="flex min-h-11 items-center gap-2">
             <input

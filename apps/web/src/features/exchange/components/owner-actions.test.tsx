@@ -76,21 +76,21 @@ const soldPosts = (requests: Array<{ method: string; url: string; body: unknown 
 describe('marking a listing sold', () => {
   it('asks first, offering the members who wrote and someone else, and sends the chosen buyer', async () => {
     const { requests, user } = setup();
-    await user.click(await screen.findByRole('button', { name: 'Mark sold…' }));
+    await user.click(await screen.findByRole('button', { name: 'Close as sold…' }));
     expect(soldPosts(requests)).toHaveLength(0);
-    const dialog = await screen.findByRole('dialog', { name: /Mark “Spare chain” sold\?/ });
-    const group = within(dialog).getByRole('group', { name: 'Who bought it?' });
+    const dialog = await screen.findByRole('dialog', { name: /Close “Spare chain” as sold\?/ });
+    const group = within(dialog).getByRole('group', { name: 'Who took the gear?' });
     expect(
       within(group)
         .getAllByRole('radio')
         .map((r) => r.closest('label')?.textContent),
     ).toEqual(['Ilka Buyer', 'Pell Asker', 'Someone else, or outside the club']);
-    const confirm = within(dialog).getByRole('button', { name: 'Mark sold' });
+    const confirm = within(dialog).getByRole('button', { name: 'Close as sold' });
     expect(confirm).toBeDisabled();
     await user.click(within(group).getByLabelText('Ilka Buyer'));
     expect(dialog).toHaveTextContent(/Ilka Buyer gets a notice and an e-mail/);
     expect(dialog).toHaveTextContent(/other member who asked is told it is sold/);
-    await user.click(within(dialog).getByRole('button', { name: 'Sold to Ilka Buyer' }));
+    await user.click(within(dialog).getByRole('button', { name: 'Went to Ilka Buyer' }));
     await waitFor(() => expect(soldPosts(requests)).toHaveLength(1));
     expect(soldPosts(requests)[0]?.body).toEqual({ threadId: 21 });
     expect(
@@ -100,17 +100,17 @@ describe('marking a listing sold', () => {
 
   it('cancel sends nothing; "someone else" records no buyer', async () => {
     const { requests, user } = setup();
-    await user.click(await screen.findByRole('button', { name: 'Mark sold…' }));
+    await user.click(await screen.findByRole('button', { name: 'Close as sold…' }));
     let dialog = await screen.findByRole('dialog');
     await user.click(within(dialog).getByRole('button', { name: 'Cancel' }));
     expect(screen.queryByRole('dialog')).toBeNull();
     expect(soldPosts(requests)).toHaveLength(0);
 
-    await user.click(screen.getByRole('button', { name: 'Mark sold…' }));
+    await user.click(screen.getByRole('button', { name: 'Close as sold…' }));
     dialog = await screen.findByRole('dialog');
     await user.click(within(dialog).getByLabelText('Someone else, or outside the club'));
     expect(dialog).toHaveTextContent(/The 2 other members who asked are told it is sold/);
-    await user.click(within(dialog).getByRole('button', { name: 'Mark sold' }));
+    await user.click(within(dialog).getByRole('button', { name: 'Close as sold' }));
     await waitFor(() => expect(soldPosts(requests)).toHaveLength(1));
     expect(soldPosts(requests)[0]?.body).toEqual({});
   });

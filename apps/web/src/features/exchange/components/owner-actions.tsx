@@ -67,7 +67,7 @@ export function OwnerActions({ listing, editHref }: { listing: ListingDto; editH
               setAsking(true);
             }}
           >
-            Mark sold…
+            Close as sold…
           </Button>
         )}
         {['sold', 'expired', 'withdrawn'].includes(listing.status) && (

@@ -1,4 +1,4 @@
-import { CHAIN_GRADE_LABELS, inchFractionLabel } from '@app/calc';
+import { CHAIN_GRADE_LABELS, chainGradeWords, inchFractionLabel } from '@app/calc';
 import { formatMoney } from '@app/shared/locale';
 import {
   LISTING_CATEGORY_LABELS,
@@ -24,7 +24,12 @@ const gradeValue = (v: unknown) => {
   return `${v.replace(/^G/, '')}${name ? ` (${name})` : ''}`;
 };
 /** "G43" → "grade 43", for text that has no label beside it. */
-const gradeWords = (v: unknown) => (typeof v === 'string' ? v.replace(/^G/, 'grade ') : undefined);
+const gradeWords = (v: unknown) =>
+  typeof v !== 'string'
+    ? undefined
+    : v in CHAIN_GRADE_LABELS
+      ? chainGradeWords(v as keyof typeof CHAIN_GRADE_LABELS)
+      : v.replace(/^G(?=\d)/i, 'grade ');
 
 export interface SpecRow {
   label: string;

@@ -120,11 +120,11 @@ function CommentItem({
   const [replying, setReplying] = useState(false);
   return (
     <li
-      className={`flex flex-col gap-2 rounded-md border p-3 ${c.accepted ? 'border-kelp-700 bg-kelp-50' : 'border-sand-500'}`}
+      className={`flex flex-col gap-2 rounded-md border p-3 ${c.accepted ? 'border-l-4 border-ink-800 bg-sand-200' : 'border-sand-500'}`}
     >
       <p className="text-xs text-ink-600">
         <strong>{c.author.displayName}</strong> · {formatDate(c.createdAt)}
-        {c.accepted && <strong className="text-kelp-700"> · Accepted answer</strong>}
+        {c.accepted && <strong className="text-ink-900"> · Worked for the asker</strong>}
         {c.status !== 'approved' && (
           <em> · {c.status === 'pending' ? 'waiting for a moderator' : c.status}</em>
         )}
@@ -138,7 +138,7 @@ function CommentItem({
             isPending={accept.isPending}
             onClick={() => accept.mutate(c.accepted ? null : c.id)}
           >
-            {c.accepted ? 'Clear accepted answer' : 'Accept this answer'}
+            {c.accepted ? 'Take back “worked for me”' : 'This worked for me'}
           </Button>
         )}
         {post.viewer.canComment && c.parentId === null && (

@@ -5,7 +5,7 @@ import { cn } from '../../../lib/cn';
 
 const KIND_LABELS: Record<string, string> = {
   reply: 'Reply',
-  accepted: 'Answer accepted',
+  accepted: 'Your answer worked',
   moderation: 'Moderation',
   report: 'Your report',
   'listing-sold-to-you': 'Exchange: sold to you',

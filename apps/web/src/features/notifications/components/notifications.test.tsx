@@ -22,7 +22,11 @@ describe('Notices page', () => {
   it('lists notices with the unread ones marked in words, and marks all read on request', async () => {
     const member = buildUser();
     let rows = [
-      notice({ id: 2, message: 'Your answer on “Snubber length” was accepted', kind: 'accepted' }),
+      notice({
+        id: 2,
+        message: 'The asker says your answer on “Snubber length” worked',
+        kind: 'accepted',
+      }),
       notice({ id: 1, readAt: '2026-11-30T09:00:00.000Z' }),
     ];
     const { requests } = mockApi({
@@ -41,7 +45,7 @@ describe('Notices page', () => {
     const row = accepted.closest('li');
     expect(row).not.toBeNull();
     expect(within(row as HTMLElement).getByText('New')).toBeInTheDocument();
-    expect(within(row as HTMLElement).getByText('Answer accepted')).toBeInTheDocument();
+    expect(within(row as HTMLElement).getByText('Your answer worked')).toBeInTheDocument();
     expect(accepted).toHaveAttribute('href', '/knowledge/7');
     expect(screen.getByRole('link', { name: /Notices, 1 unread/ })).toBeInTheDocument();
 

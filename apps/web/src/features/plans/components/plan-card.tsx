@@ -19,7 +19,7 @@ const times = (value: number) => `${value.toFixed(2)} ×`;
 /** The one-page card to keep aboard: conditions, each part, the key figures and the cautions. */
 export function PlanCard({ data }: { data: PlanWithResult }) {
   const { plan, boat, result } = data;
-  const { anchor, chain, rode, snubber, connectors } = plan.components;
+  const { anchor, chain, rode, snubber, nylonAlternative, connectors } = plan.components;
   const link = result.weakestLink;
   return (
     <article
@@ -74,8 +74,20 @@ export function PlanCard({ data }: { data: PlanWithResult }) {
             )}
             {snubber && (
               <li>
-                Snubber: <Quantity value={snubber.diameterMm / 1000} kind="diameter" />{' '}
-                {snubber.material}, <Quantity value={snubber.lengthM} kind="length" />
+                {snubber.count === 2 ? 'Snubbers (rig two, or a bridle): ' : 'Snubber: '}
+                <Quantity value={snubber.diameterMm / 1000} kind="diameter" /> {snubber.material},{' '}
+                <Quantity value={snubber.lengthM} kind="length" />
+                {snubber.count === 2 && ' each'}
+              </li>
+            )}
+            {nylonAlternative && (
+              <li>
+                If chain and rope:{' '}
+                <Quantity value={nylonAlternative.diameterMm / 1000} kind="diameter" /> nylon
+                three-strand, up to <Quantity value={nylonAlternative.lengthM} kind="length" />{' '}
+                <span className="text-ink-700">
+                  (instead of part of the chain; not in the checks)
+                </span>
               </li>
             )}
             {connectors.map((c, i) => (

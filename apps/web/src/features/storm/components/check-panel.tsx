@@ -1,4 +1,4 @@
-import { inchFractionLabel } from '@app/calc';
+import { chainGradeWords, inchFractionLabel, type ChainGrade } from '@app/calc';
 import type { StormCheckDto } from '@app/shared';
 import { Quantity } from '../../units/components/quantity';
 import { MarginBadge } from './margin-badge';
@@ -66,9 +66,9 @@ export function CheckPanel({ check }: { check: StormCheckDto }) {
           For comparison, the calc package recommends for this boat at {check.windKn} kn:{' '}
           {[
             check.recommended.chain &&
-              `${inchFractionLabel(check.recommended.chain.tradeSizeIn)} in ${check.recommended.chain.grade} chain`,
+              `${inchFractionLabel(check.recommended.chain.tradeSizeIn)} ${chainGradeWords(check.recommended.chain.grade as ChainGrade)} chain`,
             check.recommended.shackleIn !== null &&
-              `a ${inchFractionLabel(check.recommended.shackleIn)} in shackle`,
+              `a ${inchFractionLabel(check.recommended.shackleIn)} shackle`,
             check.recommended.anchorKg !== null && `an anchor of ${check.recommended.anchorKg} kg`,
             `scope ${check.recommended.scopeRatio.toFixed(0)}:1`,
           ]

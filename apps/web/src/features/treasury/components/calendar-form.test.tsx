@@ -41,13 +41,17 @@ describe('CalendarForm', () => {
     });
     const onSubmit = vi.fn(() => Promise.resolve());
     renderWithProviders(<CalendarForm saved={saved} isPending={false} onSubmit={onSubmit} />);
-    expect(screen.getByTestId('fy-start')).toHaveTextContent('2026-04-01');
+    expect(screen.getByTestId('fy-start')).toHaveTextContent('1 Apr 2026');
+    expect(screen.getByTestId('fy-start').querySelector('time')).toHaveAttribute(
+      'datetime',
+      '2026-04-01',
+    );
     expect(screen.getByRole('cell', { name: '€50.00' })).toBeInTheDocument();
     const user = userEvent.setup();
     await user.selectOptions(screen.getByLabelText('Fiscal year starts in'), '7');
     await user.clear(screen.getByLabelText(/^on day/));
     await user.type(screen.getByLabelText(/^on day/), '15');
-    await waitFor(() => expect(screen.getByTestId('fy-start')).toHaveTextContent('2026-07-15'));
+    await waitFor(() => expect(screen.getByTestId('fy-start')).toHaveTextContent('15 Jul 2026'));
     expect(screen.getByRole('heading', { name: /not saved yet/ })).toBeInTheDocument();
     expect(screen.getByRole('cell', { name: '€80.00' })).toBeInTheDocument();
     expect(requests.at(-1)?.url).toMatch(/fiscalYearStartMonth=7&fiscalYearStartDay=15/);

@@ -14,6 +14,10 @@ import { TextField } from '../../../components/ui/text-field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useCalendarPreview } from '../api/dues-calendar';
 import { ScrollRegion } from '../../../components/ui/scroll-region';
+import { readableDate } from '../../../lib/format-date';
+
+/** A calendar date as the club's region writes it, with the ISO date kept for machines. */
+const Day = ({ iso }: { iso: string }) => <time dateTime={iso}>{readableDate(iso)}</time>;
 
 const MONTHS = Array.from({ length: 12 }, (_, i) => ({
   value: String(i + 1),
@@ -45,9 +49,14 @@ export function CalendarPreview({
       </h3>
       <p>
         This fiscal year, <strong>{view.fiscalYear.label}</strong>, runs from{' '}
-        <strong data-testid="fy-start">{view.fiscalYear.start}</strong> to{' '}
-        <strong data-testid="fy-end">{view.fiscalYear.end}</strong>. The next one starts on{' '}
-        {view.nextFiscalYear.start}.
+        <strong data-testid="fy-start">
+          <Day iso={view.fiscalYear.start} />
+        </strong>{' '}
+        to{' '}
+        <strong data-testid="fy-end">
+          <Day iso={view.fiscalYear.end} />
+        </strong>
+        . The next one starts on <Day iso={view.nextFiscalYear.start} />.
       </p>
       {view.joinToday.length === 0 ? (
         <p>No plan is open to members, so nobody can join today.</p>
@@ -55,7 +64,7 @@ export function CalendarPreview({
         <ScrollRegion label="What a member joining today would pay">
           <table className="w-full min-w-[28rem] text-sm">
             <caption className="text-left font-bold">
-              A member joining today ({view.today}) would pay
+              A member joining today (<Day iso={view.today} />) would pay
             </caption>
             <thead>
               <tr className="border-b-2 border-ink-700 text-left">
@@ -89,7 +98,7 @@ export function CalendarPreview({
                     {formatMoney(p.joinMinor, p.currency)}
                   </td>
                   <td className="px-2 py-1">
-                    {p.coversFrom} to {p.coversTo}
+                    <Day iso={p.coversFrom} /> to <Day iso={p.coversTo} />
                   </td>
                 </tr>
               ))}

@@ -1,6 +1,7 @@
 import { formatMoney, METHOD_LABELS, type PaymentDto } from '@app/shared';
 import { PaymentRowActions } from './payment-row-actions';
 import { ScrollRegion } from '../../../components/ui/scroll-region';
+import { readableDate } from '../../../lib/format-date';
 
 /** Ledger entries with their refunds and actions. */
 export function PaymentsTable({ payments, caption }: { payments: PaymentDto[]; caption: string }) {
@@ -33,7 +34,11 @@ export function PaymentsTable({ payments, caption }: { payments: PaymentDto[]; c
         <tbody>
           {payments.map((p) => (
             <tr key={p.id} className="border-b border-sand-300 align-top">
-              <td className="px-2 py-1">{(p.paidAt ?? p.createdAt).slice(0, 10)}</td>
+              <td className="px-2 py-1">
+                <time dateTime={p.paidAt ?? p.createdAt}>
+                  {readableDate(p.paidAt ?? p.createdAt)}
+                </time>
+              </td>
               <td className="px-2 py-1">
                 {p.memberName}
                 {p.heldReason && <p className="text-xs text-flare-700">{p.heldReason}</p>}

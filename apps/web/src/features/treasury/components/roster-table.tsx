@@ -22,6 +22,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
+import { readableDate } from '../../../lib/format-date';
 
 const features = tableFeatures({
   rowSortingFeature,
@@ -65,7 +66,10 @@ export function RosterTable({ rows, selected, onToggle }: RosterTableProps) {
         col.accessor('planName', { header: 'Plan', cell: (c) => c.getValue() ?? '—' }),
         col.accessor('paidThrough', {
           header: 'Paid through',
-          cell: (c) => c.getValue() ?? 'Never',
+          cell: (c) => {
+            const iso = c.getValue();
+            return iso ? <time dateTime={iso}>{readableDate(iso)}</time> : 'Never';
+          },
         }),
         col.accessor((r) => r.status ?? '', {
           id: 'status',
