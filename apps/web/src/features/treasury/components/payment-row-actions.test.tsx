@@ -66,6 +66,7 @@ describe('PaymentRowActions', () => {
           currency: 'EUR',
           status: 'pending',
           reason: 'Earlier',
+          returnedBy: null,
           createdAt: '2026-04-10T00:00:00.000Z',
           completedAt: null,
         },
