@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import type { ReminderPreviewDto } from '@app/shared';
-import { DUES_STATUS_LABELS, formatMoney } from '@app/shared';
+import { DUES_STATUS_LABELS } from '@app/shared';
+import { formatDate, formatMoney } from '@app/shared/locale';
 import type { Env } from '../../config/env';
 import type { User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
@@ -20,7 +21,7 @@ function reminderFor(row: Row, publicUrl: string) {
     greeting: `Hello ${row.displayName},`,
     lines: [
       row.paidThrough
-        ? `Your ${row.planName ?? ''} dues were paid through ${row.paidThrough}; your membership now shows as ${DUES_STATUS_LABELS[row.status ?? 'due'].toLowerCase()}.`
+        ? `Your ${row.planName ?? ''} dues were paid through ${formatDate(row.paidThrough)}; your membership now shows as ${DUES_STATUS_LABELS[row.status ?? 'due'].toLowerCase()}.`
         : `Your ${row.planName ?? ''} membership has no dues paid yet.`,
       `Amount owed now: ${owed}. You can pay by card in about a minute, or hand a cheque or cash to the treasurer.`,
     ],
