@@ -51,6 +51,15 @@ export const PAYMENT_STATUSES = [
   'expired',
 ] as const;
 export type PaymentStatus = (typeof PAYMENT_STATUSES)[number];
+/** Ledger statuses as the treasurer reads them. */
+export const PAYMENT_STATUS_LABELS: Record<PaymentStatus, string> = {
+  pending: 'Checkout open',
+  succeeded: 'Credited',
+  held: 'Held',
+  dismissed: 'Not credited',
+  failed: 'Failed',
+  expired: 'Expired',
+};
 export const REFUND_STATUSES = ['pending', 'succeeded', 'failed'] as const;
 export type RefundStatus = (typeof REFUND_STATUSES)[number];
 

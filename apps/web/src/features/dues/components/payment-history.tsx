@@ -1,4 +1,5 @@
 import { formatMoney, METHOD_LABELS, type PaymentDto } from '@app/shared';
+import { readableDate } from '../../../lib/format-date';
 
 const STATUS_WORDS: Record<PaymentDto['status'], string> = {
   pending: 'Waiting',
@@ -20,7 +21,7 @@ export function PaymentHistory({ payments }: { payments: PaymentDto[] }) {
           className="flex flex-wrap justify-between gap-2 border-t border-sand-300 py-2"
         >
           <span>
-            {p.paidAt?.slice(0, 10) ?? p.createdAt.slice(0, 10)} · {METHOD_LABELS[p.method]}
+            {readableDate(p.paidAt ?? p.createdAt)} · {METHOD_LABELS[p.method]}
             {p.coversTo ? ` · covers to ${p.coversTo}` : ''}
           </span>
           <span className="tabular-nums">
