@@ -1,6 +1,5 @@
-import type { Browser, Page } from 'playwright-core';
+import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { formatDate } from '../../packages/shared/src/locale-format';
 import { audit, baseUrl, launch, screenshot, signIn, waitForMail } from './browser';
 
 let browser: Browser;
@@ -50,9 +49,15 @@ describe('dues in Chromium', () => {
     await screenshot(page, 'dues-paid');
     const receipt = await waitForMail(MEMBER, 'Receipt for your club dues');
     expect(after).toMatch(/^\d{4}-\d{2}-\d{2}$/);
-    // The receipt writes the date as the club's region does (en-GB for the demo club), never as ISO.
-    expect(receipt.text).toContain(formatDate(after ?? 'no date', 'en-GB'));
-    expect(receipt.text).not.toMatch(/\b\d{4}-\d{2}-\d{2}\b/);
+    // The receipt gives the date as people read it, the one the page shows, never the ISO form.
+    const shown = await page.getByTestId('paid-through').locator('time').innerText();
+    expect(receipt.text).toContain(shown);
+    expect(receipt.text).not.toContain(after ?? 'no date');
+    // The label is said once ("Paid through 31 Mar 2027"), never "Paid through: Paid through …".
+    expect(await page.getByText(/paid through/i).count()).toBe(1);
+    expect(
+      (await page.getByTestId('paid-through').innerText()).match(/paid through/gi),
+    ).toHaveLength(1);
     await page.close();
   });
 
@@ -168,4 +173,128 @@ describe('dues in Chromium', () => {
     await expect.poll(() => page.getByRole('dialog').count()).toBe(0);
     await page.close();
   });
+});
+
+/** True when the element's box lies inside the page's viewport width (no sideways scrolling to reach it). */
+async function insideViewport(page: Page, el: Locator) {
+  const box = await el.boundingBox();
+  const width = page.viewportSize()?.width ?? 0;
+  return !!box && box.x >= 0 && box.x + box.width <= width + 0.5;
+}
+
+// Runs after the tests above (they look at the seeded held payment before it is returned here).
+describe('the treasurer’s day, from the home page', () => {
+  for (const width of [1280, 1024, 390]) {
+    it(`at ${width} px: queue → held payment → tiles → reminders${width === 390 ? ' → money returned' : ''}`, async () => {
+      const page = await browser.newPage({ viewport: { width, height: 900 } });
+      await signIn(page, TREASURER);
+      await page.goto(`${baseUrl()}/`);
+      const queue = page.getByRole('region', { name: "Treasurer's desk" });
+      const heldLine = queue.getByRole('listitem').filter({ hasText: /held for a check/ });
+      await expect.poll(() => heldLine.innerText(), { timeout: 15000 }).toMatch(/^1 payment held/);
+      await expect
+        .poll(() =>
+          queue
+            .getByRole('listitem')
+            .filter({ hasText: /overdue/ })
+            .innerText(),
+        )
+        .toMatch(/^\d+ members? overdue/);
+      await audit(page, `home treasurer ${width}`);
+      await screenshot(page, `treasurer-day-home-${width}`);
+
+      await heldLine.getByRole('link').click();
+      await page.waitForURL(/\/treasury$/);
+      const heldSection = page.locator('section', {
+        has: page.getByRole('heading', { name: 'Held for the treasurer' }),
+      });
+      const first =
+        width < 768
+          ? heldSection.getByTestId('payment-cards').getByRole('listitem').first()
+          : heldSection.getByRole('table').locator('tbody tr').first();
+      await expect.poll(() => first.innerText(), { timeout: 15000 }).toMatch(/Bram Cleatson/);
+      // The reason is in money, never in minor units.
+      expect(await first.innerText()).toMatch(/€\d+\.\d{2} paid, €\d+\.\d{2} expected/);
+      expect(await first.innerText()).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+      const status = width < 768 ? first.getByTestId('payment-status') : first.locator('td').nth(3);
+      expect(await status.innerText()).toBe('Held');
+      const refund = first.getByRole('button', { name: /^Refund Bram/ });
+      for (const el of [status, first.getByRole('button', { name: 'Credit' }), refund])
+        expect(await insideViewport(page, el)).toBe(true);
+
+      // The tiles say what is in them, and the reconciliation line ends on the expected figure.
+      const expected = await page.getByTestId('summary-expected').innerText();
+      expect(await page.getByTestId('summary-collected-note').innerText()).toMatch(
+        /for this year[\s\S]*held payments are not counted/,
+      );
+      expect(await page.getByTestId('summary-outstanding-note').innerText()).toMatch(/late fee/);
+      expect(await page.getByTestId('summary-reconcile').innerText()).toContain(
+        `= ${expected} expected`,
+      );
+      await audit(page, `treasury desk ${width}`);
+      await screenshot(page, `treasurer-day-desk-${width}`);
+
+      if (width === 390) {
+        await refund.click();
+        const dialog = page.getByRole('dialog');
+        await dialog.getByLabel(/^Reason/).fill('Paid the full year instead of the prorated join');
+        await dialog.getByRole('button', { name: 'Refund' }).click();
+        await expect
+          .poll(() => dialog.getByRole('alert').innerText(), { timeout: 10000 })
+          .toMatch(/Nothing was refunded/);
+        await dialog.getByRole('button', { name: 'Record money returned' }).click();
+        await dialog.getByLabel('Returned by').selectOption('transfer');
+        await dialog.getByLabel(/^Note/).fill('Sent back by bank transfer, reference RW-RET-7');
+        await audit(page, 'record money returned 390');
+        await screenshot(page, 'treasurer-day-returned-dialog-390');
+        await dialog.getByRole('button', { name: /^Record €\d+\.\d{2} returned$/ }).click();
+        await expect.poll(() => page.getByRole('dialog').count(), { timeout: 10000 }).toBe(0);
+        await expect
+          .poll(() => page.getByRole('heading', { name: 'Held for the treasurer' }).count(), {
+            timeout: 10000,
+          })
+          .toBe(0);
+        await expect
+          .poll(() => page.getByTestId('summary-held-for-you').innerText(), { timeout: 10000 })
+          .toBe('0');
+        const ledgerCard = page
+          .getByTestId('payment-cards')
+          .getByRole('listitem')
+          .filter({ hasText: /Bram Cleatson/ })
+          .first();
+        await expect.poll(() => ledgerCard.innerText()).toMatch(/returned by transfer/);
+        const mail = await waitForMail('bram@larkspit.example', 'returned to you');
+        expect(mail.text).toMatch(/€\d+\.\d{2} to you by bank transfer/);
+        await screenshot(page, 'treasurer-day-returned-390');
+      }
+
+      await page.getByRole('link', { name: /Member roster/ }).click();
+      await page.waitForURL(/\/treasury\/roster/);
+      const summary = (await (await page.request.get(`${baseUrl()}/api/treasury/summary`)).json())
+        .data as { counts: { due: number; overdue: number } };
+      const behind = summary.counts.due + summary.counts.overdue;
+      // The count is there before Preview is pressed.
+      const send = page.getByRole('button', {
+        name: /^Send \d+ reminders?$|^No reminders to send$/,
+      });
+      await expect
+        .poll(() => send.innerText(), { timeout: 15000 })
+        .toBe(
+          behind === 0
+            ? 'No reminders to send'
+            : `Send ${behind} reminder${behind === 1 ? '' : 's'}`,
+        );
+      if (width < 768) {
+        const card = page
+          .getByRole('list', { name: 'Members and their dues' })
+          .getByRole('listitem')
+          .first();
+        expect(await insideViewport(page, card.getByTestId('roster-status'))).toBe(true);
+        expect(await insideViewport(page, card.getByRole('checkbox'))).toBe(true);
+      }
+      await audit(page, `roster ${width}`);
+      await screenshot(page, `treasurer-day-roster-${width}`);
+      await page.close();
+    });
+  }
 });

@@ -1,5 +1,4 @@
 import { randomBytes } from 'node:crypto';
-import { formatMoney } from '@app/shared';
 import { Membership, MembershipPlan, Payment, Refund } from '../src/models';
 import {
   addDays,
@@ -8,6 +7,7 @@ import {
   toIsoDate,
   type DuesCalendar,
 } from '../src/modules/dues/calendar';
+import { amountMismatchReason, owedOn } from '../src/modules/dues/owed';
 import type { SeedContext } from './index';
 
 // Invented plans and a season of invented payments for the demo club; some members are behind on purpose.
@@ -80,7 +80,12 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
     on: string,
     method: 'card' | 'cheque' | 'cash' | 'transfer',
     reference: string | null,
-    extra: Partial<{ amountMinor: number; status: 'succeeded' | 'held'; heldReason: string }> = {},
+    extra: Partial<{
+      amountMinor: number;
+      expectedMinor: number;
+      status: 'succeeded' | 'held';
+      heldReason: string;
+    }> = {},
   ) => {
     const user = users.get(email);
     const plan = plans.get(planCode);
@@ -93,7 +98,7 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
         status: extra.status ?? 'succeeded',
         amountMinor: extra.amountMinor ?? plan.amountMinor,
         currency: plan.currency,
-        expectedMinor: plan.amountMinor,
+        expectedMinor: extra.expectedMinor ?? plan.amountMinor,
         coversFrom: year.start,
         coversTo: year.end,
         // Card entries carry ids in the provider's format. They were never charged through the provider the
@@ -211,13 +216,32 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
     'Receipt book 5, no. 3',
   );
 
-  // Joined recently and never paid (overdue); one mismatched card payment is held for the treasurer.
+  // Joined recently and never paid (overdue); one mismatched card payment is held for the treasurer: the
+  // full-year price paid through an old link where the prorated join was owed (or half when the two are equal).
   // 45 days ago: past the 30-day grace, not yet lapsed, whatever day the demo is seeded.
   const bramJoined = addDays(today, -45);
   await member('bram@larkspit.example', 'individual', bramJoined, null);
-  await pay('bram@larkspit.example', 'individual', fy, bramJoined, 'card', null, {
-    amountMinor: 6000,
-    status: 'held',
-    heldReason: `Held for the treasurer: amount ${formatMoney(6000, 'EUR')} does not match the ${formatMoney(12000, 'EUR')} expected`,
-  });
+  const individual = plans.get('individual');
+  const owed =
+    individual && owedOn({ paidThrough: null, joinedOn: bramJoined }, individual, today, CAL);
+  if (individual && owed) {
+    const paid =
+      owed.totalMinor === individual.amountMinor
+        ? individual.amountMinor / 2
+        : individual.amountMinor;
+    await pay(
+      'bram@larkspit.example',
+      'individual',
+      { start: owed.coversFrom, end: owed.coversTo },
+      bramJoined,
+      'card',
+      null,
+      {
+        amountMinor: paid,
+        expectedMinor: owed.totalMinor,
+        status: 'held',
+        heldReason: `Held for the treasurer: ${amountMismatchReason(paid, owed.totalMinor, individual.currency)}`,
+      },
+    );
+  }
 }

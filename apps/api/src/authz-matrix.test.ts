@@ -134,6 +134,7 @@ const MATRIX: Record<string, Row> = {
   'POST /api/treasury/payments': TREASURER,
   'POST /api/treasury/payments/:paymentId/refunds': TREASURER,
   'POST /api/treasury/payments/:paymentId/resolve': TREASURER,
+  'POST /api/treasury/payments/:paymentId/returned': TREASURER,
   'POST /api/treasury/reminders/preview': TREASURER,
   'POST /api/treasury/reminders': TREASURER,
   'GET /api/treasury/ledger.csv': TREASURER,

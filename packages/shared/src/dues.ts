@@ -51,6 +51,15 @@ export const PAYMENT_STATUSES = [
   'expired',
 ] as const;
 export type PaymentStatus = (typeof PAYMENT_STATUSES)[number];
+/** Ledger statuses as the treasurer reads them. */
+export const PAYMENT_STATUS_LABELS: Record<PaymentStatus, string> = {
+  pending: 'Checkout open',
+  succeeded: 'Credited',
+  held: 'Held',
+  dismissed: 'Not credited',
+  failed: 'Failed',
+  expired: 'Expired',
+};
 export const REFUND_STATUSES = ['pending', 'succeeded', 'failed'] as const;
 export type RefundStatus = (typeof REFUND_STATUSES)[number];
 
@@ -250,6 +259,8 @@ export interface RefundDto {
   currency: string;
   status: RefundStatus;
   reason: string;
+  /** Set when the money went back outside the payment provider. */
+  returnedBy: OfflineMethod | null;
   createdAt: string;
   completedAt: string | null;
 }
@@ -329,6 +340,19 @@ export const refundInputSchema = z.object({
 });
 export type RefundInput = z.input<typeof refundInputSchema>;
 
+/** Money the treasurer handed back outside the payment provider: how, and a note for the ledger and the member. */
+export const returnedInputSchema = z.object({
+  method: z.enum(OFFLINE_METHODS, {
+    error: 'Choose how the money went back: bank transfer, cash or cheque',
+  }),
+  note: z
+    .string({ error: 'Say how and when the money went back' })
+    .trim()
+    .min(3, 'Say how and when the money went back (for the ledger and the member)')
+    .max(500, 'Keep the note under 500 characters'),
+});
+export type ReturnedInput = z.input<typeof returnedInputSchema>;
+
 export const resolveHeldSchema = z.object({
   decision: z.enum(['credit', 'dismiss'], { error: 'Choose credit or dismiss' }),
   note: z
@@ -381,11 +405,35 @@ export interface SummaryDto {
   currency: string;
   months: SummaryMonthDto[];
   collectedMinor: number;
+  /** Refunds of credited payments completed in the year, already taken off Collected. */
   refundedMinor: number;
   expectedMinor: number;
   outstandingMinor: number;
   heldCount: number;
   counts: Record<DuesStatus, number>;
+  /** What is in each tile, so the tiles can be reconciled (see `summary()` in the treasury module). */
+  breakdown: SummaryBreakdownDto;
+}
+
+export interface SummaryBreakdownDto {
+  /** Memberships whose dues are in Expected. */
+  memberCount: number;
+  /** Of them, members who joined during the year and owe a prorated share. */
+  proratedCount: number;
+  /** Full-year price of those memberships minus Expected: what proration took off. */
+  prorationMinor: number;
+  /** Collected, net of refunds of credited payments, for cover that starts in this fiscal year. */
+  collectedThisYearMinor: number;
+  /** In Collected but for another year: renewals paid ahead, arrears, net of their refunds. */
+  collectedOtherYearsMinor: number;
+  /** Refunds (or money returned) of payments never credited (held, dismissed): not in Collected or refunds. */
+  refundedOfUncreditedMinor: number;
+  /** Late fees inside Outstanding. */
+  outstandingLateFeesMinor: number;
+  /** Held payments in the summary currency: received but not in Collected. */
+  heldMinor: number;
+  /** Expected − collected this year − outstanding dues: late fees paid, amounts above or below the quote, waived dues. */
+  differenceMinor: number;
 }
 
 /** Integer minor units as a plain decimal string: 12050 EUR → "120.50", −3000 → "-30.00". */

@@ -4,9 +4,11 @@ import {
   type CreationOptional,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from 'sequelize';
-import type { RefundStatus } from '@app/shared';
+import type { OfflineMethod, RefundStatus } from '@app/shared';
+import type { Payment } from './payment.model';
 
 /** Money returned against a payment; its status follows the provider's webhook for card payments. */
 export class Refund extends Model<InferAttributes<Refund>, InferCreationAttributes<Refund>> {
@@ -19,8 +21,11 @@ export class Refund extends Model<InferAttributes<Refund>, InferCreationAttribut
   declare reason: string;
   declare requestedById: number | null;
   declare completedAt: Date | null;
+  /** Set when the money went back outside the payment provider (by the treasurer: transfer, cash or cheque). */
+  declare returnedBy: CreationOptional<OfflineMethod | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+  declare payment?: NonAttribute<Payment>;
 }
 
 /** Registers the model on `sequelize`. */
@@ -36,6 +41,7 @@ export function initRefund(sequelize: Sequelize) {
       reason: { type: DataTypes.STRING(500), allowNull: false },
       requestedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
       completedAt: { type: DataTypes.DATE, allowNull: true },
+      returnedBy: { type: DataTypes.STRING(12), allowNull: true, defaultValue: null },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

@@ -1,3 +1,4 @@
+import type { Transaction } from 'sequelize';
 import { z } from 'zod';
 import {
   DEFAULT_CLUB_LOCALE,
@@ -35,8 +36,11 @@ export type SettingKey = keyof typeof SETTINGS;
 export type SettingValue<K extends SettingKey> = z.infer<(typeof SETTINGS)[K]>;
 
 /** Reads one setting, falling back to its default when unset or invalid. */
-export async function getSetting<K extends SettingKey>(key: K): Promise<SettingValue<K>> {
-  const row = await ClubSetting.findByPk(key);
+export async function getSetting<K extends SettingKey>(
+  key: K,
+  transaction?: Transaction,
+): Promise<SettingValue<K>> {
+  const row = await ClubSetting.findByPk(key, { transaction });
   const parsed = SETTINGS[key].safeParse(row?.value);
   return (parsed.success ? parsed.data : SETTINGS[key].parse(undefined)) as SettingValue<K>;
 }

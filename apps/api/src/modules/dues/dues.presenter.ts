@@ -31,6 +31,7 @@ export function toRefundDto(r: Refund): RefundDto {
     currency: r.currency,
     status: r.status,
     reason: r.reason,
+    returnedBy: r.returnedBy ?? null,
     createdAt: r.createdAt.toISOString(),
     completedAt: r.completedAt?.toISOString() ?? null,
   };

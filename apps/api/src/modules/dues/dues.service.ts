@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import type {
   CheckoutDto,
@@ -7,7 +7,7 @@ import type {
   DuesQuoteDto,
   MyDuesDto,
 } from '@app/shared';
-import { formatDate, formatMoney } from '@app/shared';
+import { formatDate, formatMoney } from '@app/shared/locale';
 import type { Env } from '../../config/env';
 import { AppError, invalid, notFound } from '../../errors/app-error';
 import { withNamedLock } from '../../lib/serialize';
@@ -19,16 +19,17 @@ import {
   duesStatus,
   fiscalYearOf,
   paidUpOn,
-  quoteFor,
   toIsoDate,
   type DuesCalendar,
   type QuoteResult,
 } from './calendar';
 import { ALREADY_PAID } from './ledger-effects';
+import { owedOn, type Owed } from './owed';
 import { toPaymentDto, toPlanDto } from './dues.presenter';
 
 /** The club's dues calendar setting. */
-export const duesCalendar = (): Promise<DuesCalendar> => getSetting('duesCalendar');
+export const duesCalendar = (transaction?: Transaction): Promise<DuesCalendar> =>
+  getSetting('duesCalendar', transaction);
 
 const KIND_REASON: Record<QuoteResult['kind'], string> = {
   join: 'New membership, from joining to the end of the fiscal year',
@@ -37,8 +38,8 @@ const KIND_REASON: Record<QuoteResult['kind'], string> = {
   rejoin: 'Rejoining for this fiscal year',
 };
 
-/** The quote as the member and treasurer see it, or null when nothing is owed. */
-export function describeQuote(q: QuoteResult | null, plan: MembershipPlan): DuesQuoteDto | null {
+/** The quote as the member and treasurer see it (from `owedOn`), or null when nothing is owed. */
+export function describeQuote(q: Owed | null, plan: MembershipPlan): DuesQuoteDto | null {
   if (!q) return null;
   const lines = [
     {
@@ -58,7 +59,7 @@ export function describeQuote(q: QuoteResult | null, plan: MembershipPlan): Dues
     planId: plan.id,
     planName: plan.name,
     currency: plan.currency,
-    amountMinor: q.duesMinor + q.lateFeeMinor,
+    amountMinor: q.totalMinor,
     lines,
     coversFrom: q.coversFrom,
     coversTo: q.coversTo,
@@ -103,12 +104,12 @@ export async function getMyDues(actor: User, now = new Date()): Promise<MyDuesDt
         : null,
     status: membership && plan ? duesStatus(membership, plan.graceDays, today, cal) : null,
     paidUp: !!membership && !!plan && paidUpOn(membership.paidThrough, plan.graceDays, today),
-    quote: membership && plan ? describeQuote(quoteFor(membership, plan, today, cal), plan) : null,
+    quote: membership && plan ? describeQuote(owedOn(membership, plan, today, cal), plan) : null,
     offers: membership?.paidThrough
       ? []
       : plans.flatMap((p) => {
           const offer = describeQuote(
-            quoteFor({ paidThrough: null, joinedOn: membership?.joinedOn ?? today }, p, today, cal),
+            owedOn({ paidThrough: null, joinedOn: membership?.joinedOn ?? today }, p, today, cal),
             p,
           );
           return offer ? [offer] : [];
@@ -140,12 +141,14 @@ export async function startCheckout(
   const plan = await MembershipPlan.findByPk(planId);
   if (!plan || (!plan.active && planId !== membership?.planId))
     throw invalid({ planId: 'Choose one of the club’s current plans' });
-  const q = quoteFor(membership ?? { paidThrough: null, joinedOn: today }, plan, today, cal);
+  const q = owedOn(membership ?? { paidThrough: null, joinedOn: today }, plan, today, cal);
   const quote = describeQuote(q, plan);
   if (!quote || !q)
     throw new AppError(
       'CONFLICT',
-      `Your dues are paid through ${membership?.paidThrough ?? ''}; there is nothing to pay yet`,
+      membership?.paidThrough
+        ? `Your dues are paid through ${formatDate(membership.paidThrough)}; there is nothing to pay yet`
+        : 'There is nothing to pay yet',
     );
 
   // One checkout per member at a time: a named lock per member is held while an open checkout for the same plan
@@ -313,7 +316,7 @@ export async function checkoutStatus(actor: User, sessionId: string): Promise<Ch
     paidThrough: membership?.paidThrough ?? null,
     message:
       payment.status === 'succeeded' && membership?.paidThrough
-        ? `${message} ${formatMoney(payment.amountMinor, payment.currency)} received; paid through ${formatDate(membership.paidThrough)}.`
+        ? `${message} ${formatMoney(payment.amountMinor, payment.currency)} received; your dues now run to ${formatDate(membership.paidThrough)}.`
         : message,
   };
 }

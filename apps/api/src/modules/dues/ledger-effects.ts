@@ -1,5 +1,6 @@
 import type { Transaction } from 'sequelize';
-import { formatDate, formatMoney, METHOD_LABELS } from '@app/shared';
+import { METHOD_LABELS } from '@app/shared';
+import { formatDate, formatMoney } from '@app/shared/locale';
 import type { Payment } from '../../models';
 import { Membership, Refund, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
@@ -13,7 +14,11 @@ export const ALREADY_PAID = 'Already paid:';
  * When the member's dues already cover the whole of this payment's period (paid by an earlier checkout, a second
  * tab, or a payment the treasurer recorded), the reason to hold it for the treasurer instead of crediting it again.
  */
-export async function alreadyPaidReason(payment: Payment, t: Transaction): Promise<string | null> {
+export async function alreadyPaidReason(
+  payment: Payment,
+  t: Transaction,
+  paid: { amountMinor: number; currency: string } = payment,
+): Promise<string | null> {
   if (!payment.coversTo) return null;
   const m = await Membership.findOne({
     where: { userId: payment.userId },
@@ -21,7 +26,8 @@ export async function alreadyPaidReason(payment: Payment, t: Transaction): Promi
     transaction: t,
   });
   if (!m?.paidThrough || daysBetween(m.paidThrough, payment.coversTo) > 0) return null;
-  return `${ALREADY_PAID} the dues from ${payment.coversFrom ? formatDate(payment.coversFrom) : '?'} to ${formatDate(payment.coversTo)} were already paid (paid through ${formatDate(m.paidThrough)}); refund this payment or credit it on purpose`;
+  const from = payment.coversFrom ? formatDate(payment.coversFrom) : 'the start';
+  return `${ALREADY_PAID} ${formatMoney(paid.amountMinor, paid.currency)} for the dues from ${from} to ${formatDate(payment.coversTo)}, which were already paid (the membership runs to ${formatDate(m.paidThrough)}); refund this payment or credit it on purpose`;
 }
 
 /**

@@ -7,7 +7,7 @@ import request from 'supertest';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { startFakePayments, type FakePayments } from '@app/fake-payments';
-import { formatDate } from '@app/shared';
+import { formatDate } from '@app/shared/locale';
 import {
   AuditEvent,
   Membership,
@@ -520,5 +520,204 @@ describe('a refund that times out at the provider', () => {
     expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBe(
       '2020-03-31',
     );
+  });
+});
+
+describe('a member joining during the fiscal year', () => {
+  // Today is read from the clock; the default calendar starts the fiscal year on 1 April.
+  const today = new Date().toISOString().slice(0, 10);
+  const fyStartYear =
+    Number(today.slice(5, 7)) >= 4 ? Number(today.slice(0, 4)) : Number(today.slice(0, 4)) - 1;
+  // Monthly proration: the months left in the fiscal year, the joining month included, over 12 (the plan's rule).
+  const monthsLeft =
+    12 - ((Number(today.slice(0, 4)) - fyStartYear) * 12 + Number(today.slice(5, 7)) - 4);
+  const prorated = Math.round((12000 * monthsLeft) / 12);
+
+  async function joiner() {
+    const p = await plan(12000);
+    const user = await buildUser();
+    await Membership.create({ userId: user.id, planId: p.id, joinedOn: today, paidThrough: null });
+    const c = await client(built.app);
+    await c.signIn(user.email);
+    return { user, plan: p, c };
+  }
+
+  it('pays the prorated amount the dues page shows by card and is credited, not held', async () => {
+    const { user, c } = await joiner();
+    const me = (await c.get('/api/dues/me')).body.data;
+    expect(me.quote.amountMinor).toBe(prorated);
+    expect(me.quote.lines[0].label).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+    const { sessionId, quote } = await checkoutAndPay(c);
+    expect(quote.amountMinor).toBe(prorated);
+    const payment = await waitFor(async () => {
+      const p = await Payment.findOne({ where: { providerSessionId: sessionId } });
+      return p && p.status !== 'pending' ? p : null;
+    });
+    expect(payment.status).toBe('succeeded');
+    expect(payment.heldReason).toBeNull();
+    expect(payment.amountMinor).toBe(prorated);
+    expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBe(
+      quote.coversTo,
+    );
+    const status = (await c.get(`/api/dues/checkout/${sessionId}`)).body.data;
+    expect(status.message).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+  });
+
+  it('credits the prorated amount even on a checkout row that stored the full-year price', async () => {
+    const { user, plan: p } = await joiner();
+    const fyEnd = `${fyStartYear + 1}-03-31`;
+    // Older rows (and the demo seed before this rule) carry the plan's full-year price as the expected amount.
+    const pending = await Payment.create({
+      userId: user.id,
+      planId: p.id,
+      method: 'card',
+      status: 'pending',
+      amountMinor: 12000,
+      currency: 'EUR',
+      expectedMinor: 12000,
+      coversFrom: today,
+      coversTo: fyEnd,
+      providerSessionId: null,
+      providerPaymentIntentId: null,
+      reference: null,
+      note: null,
+      heldReason: null,
+      recordedById: null,
+      paidAt: null,
+    });
+    const stripe = new Stripe(KEY, { host: '127.0.0.1', port: fake.port, protocol: 'http' });
+    const session = await stripe.checkout.sessions.create({
+      mode: 'payment',
+      metadata: { userId: String(user.id), paymentId: String(pending.id) },
+      line_items: [
+        {
+          quantity: 1,
+          price_data: { currency: 'eur', unit_amount: prorated, product_data: { name: 'Dues' } },
+        },
+      ],
+      success_url: 'http://rodewise.test/dues/paid',
+    });
+    await payOnHostedPage(session.url ?? '', '4242424242424242');
+    const settled = await waitFor(async () => {
+      const row = await Payment.findByPk(pending.id);
+      return row && row.status !== 'pending' ? row : null;
+    });
+    expect([settled.status, settled.heldReason]).toEqual(['succeeded', null]);
+    expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBe(fyEnd);
+  });
+
+  it('still holds a genuinely wrong amount, with the reason in money', async () => {
+    const { user, plan: p } = await joiner();
+    const fyEnd = `${fyStartYear + 1}-03-31`;
+    const pending = await Payment.create({
+      userId: user.id,
+      planId: p.id,
+      method: 'card',
+      status: 'pending',
+      amountMinor: prorated,
+      currency: 'EUR',
+      expectedMinor: prorated,
+      coversFrom: today,
+      coversTo: fyEnd,
+      providerSessionId: null,
+      providerPaymentIntentId: null,
+      reference: null,
+      note: null,
+      heldReason: null,
+      recordedById: null,
+      paidAt: null,
+    });
+    const stripe = new Stripe(KEY, { host: '127.0.0.1', port: fake.port, protocol: 'http' });
+    const session = await stripe.checkout.sessions.create({
+      mode: 'payment',
+      metadata: { userId: String(user.id), paymentId: String(pending.id) },
+      line_items: [
+        {
+          quantity: 1,
+          price_data: { currency: 'eur', unit_amount: 777, product_data: { name: 'Dues' } },
+        },
+      ],
+      success_url: 'http://rodewise.test/dues/paid',
+    });
+    await payOnHostedPage(session.url ?? '', '4242424242424242');
+    const held = await waitFor(async () => {
+      const row = await Payment.findByPk(pending.id);
+      return row?.status === 'held' ? row : null;
+    });
+    // The formatted figures, built the same way the club's locale formats them (en-GB, EUR by default).
+    const euro = (minor: number) =>
+      new Intl.NumberFormat('en-GB', { style: 'currency', currency: 'EUR' }).format(minor / 100);
+    expect(held.heldReason).toBe(
+      `Held for the treasurer: ${euro(777)} paid, ${euro(prorated)} expected`,
+    );
+    expect(held.heldReason).not.toMatch(/\b777\b|\b\d{4,}\b/);
+    expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBeNull();
+  });
+});
+
+describe('money returned outside the provider', () => {
+  it('reverses a credited card payment, mails the member in money terms, and is idempotent', async () => {
+    const { user, c } = await owingMember();
+    const { sessionId, quote } = await checkoutAndPay(c);
+    const payment = await waitFor(async () => {
+      const p = await Payment.findOne({ where: { providerSessionId: sessionId } });
+      return p?.status === 'succeeded' ? p : null;
+    });
+    expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBe(
+      quote.coversTo,
+    );
+    const { c: tc } = await treasurer();
+    const url = `/api/treasury/payments/${payment.id}/returned`;
+
+    const bad = await tc.post(url, { method: 'carrier pigeon', note: '' });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields).sort()).toEqual(['method', 'note']);
+    expect(await Refund.count({ where: { paymentId: payment.id } })).toBe(0);
+
+    const body = { method: 'transfer', note: 'Sent back to the member’s bank account' };
+    const res = await tc.post(url, body);
+    expect(res.status).toBe(201);
+    expect(res.body.data).toMatchObject({
+      amountMinor: quote.amountMinor,
+      status: 'succeeded',
+      returnedBy: 'transfer',
+      reason: body.note,
+    });
+    expect((await Membership.findOne({ where: { userId: user.id } }))?.paidThrough).toBe(
+      '2020-03-31',
+    );
+    // The same request again (a double click, a retry) records nothing more.
+    const again = await tc.post(url, body);
+    expect(again.status).toBe(200);
+    expect(again.body.data.id).toBe(res.body.data.id);
+    const other = await tc.post(url, { method: 'cash', note: 'Handed over at the clubhouse' });
+    expect(other.status).toBe(409);
+    expect(other.body.error.message).toMatch(/^Already returned: .+ went back by bank transfer/);
+    expect(await Refund.count({ where: { paymentId: payment.id } })).toBe(1);
+    const refund = await tc.post(`/api/treasury/payments/${payment.id}/refunds`, {
+      amountMinor: 100,
+      reason: 'Trying a card refund as well',
+    });
+    expect(refund.status).toBe(400);
+    expect(await AuditEvent.count({ where: { action: 'payment.returned-outside-provider' } })).toBe(
+      1,
+    );
+
+    await flushOutbox();
+    const mails = await inbox(user.email);
+    const mail = mails.find((m) => m.subject.includes('returned to you'));
+    expect(mail?.subject).toMatch(/^€\d+\.\d{2} returned to you/);
+    expect(mail?.text).toContain('by bank transfer');
+    expect(mail?.text).toContain(body.note);
+    expect(mail?.text).toMatch(/no longer counts toward your dues/);
+    expect(mail?.text).not.toMatch(/\b\d{4}-\d{2}-\d{2}\b/);
+    expect(mail?.text).not.toContain(String(quote.amountMinor));
+
+    const member = await client(built.app);
+    await member.signIn(user.email);
+    expect((await member.post(url, { method: 'cash', note: 'Not the treasurer' })).status).toBe(
+      403,
+    );
+    expect((await tc.post('/api/treasury/payments/999999/returned', body)).status).toBe(404);
   });
 });

@@ -1,7 +1,6 @@
 import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import type Stripe from 'stripe';
-import { formatMoney } from '@app/shared';
-import { Payment, ProviderEvent, Refund } from '../../models';
+import { Membership, MembershipPlan, Payment, ProviderEvent, Refund } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import {
   alreadyPaidReason,
@@ -9,6 +8,9 @@ import {
   queueReceipt,
   reverseCoverIfFullyRefunded,
 } from '../dues/ledger-effects';
+import { toIsoDate } from '../dues/calendar';
+import { duesCalendar } from '../dues/dues.service';
+import { amountMismatchReason, owedOn } from '../dues/owed';
 
 export interface WebhookDeps {
   sequelize: Sequelize;
@@ -157,13 +159,17 @@ async function sessionCompleted(
     return paymentSubject(payment, 'already-settled');
 
   const reasons: string[] = [];
-  if (amount !== payment.expectedMinor)
-    reasons.push(
-      `amount ${formatMoney(amount, /^[A-Z]{3}$/.test(currency) ? currency : payment.currency)} does not match the ${formatMoney(payment.expectedMinor ?? 0, payment.currency)} expected`,
-    );
   if (currency !== payment.currency)
-    reasons.push(`currency ${currency} does not match the plan's ${payment.currency}`);
-  const alreadyPaid = await alreadyPaidReason(payment, t);
+    reasons.push(
+      `paid in ${currency || 'an unknown currency'}, the plan is paid in ${payment.currency}`,
+    );
+  else {
+    const expected =
+      amount === payment.expectedMinor ? [amount] : await expectedAmounts(payment, t);
+    if (!expected.includes(amount))
+      reasons.push(amountMismatchReason(amount, expected[0] ?? 0, payment.currency));
+  }
+  const alreadyPaid = await alreadyPaidReason(payment, t, { amountMinor: amount, currency });
   if (alreadyPaid) {
     await payment.update(
       {
@@ -195,6 +201,30 @@ async function sessionCompleted(
   const membership = await creditMembership(payment, t);
   await queueReceipt(payment, deps.publicUrl, t);
   return paymentSubject(payment, 'credited', { paidThrough: membership.paidThrough });
+}
+
+/**
+ * What a card payment for `payment` should amount to: the figure the checkout charged (stored as `expectedMinor`
+ * when it was opened, from `owedOn`, the same function the member's dues page shows), and `owedOn` worked out again
+ * for the day the checkout was opened, so a prorated join, a late fee, or an entry whose stored figure is missing
+ * is checked against what the member was shown, never against the plan's full-year price.
+ */
+async function expectedAmounts(payment: Payment, t: Transaction): Promise<number[]> {
+  const amounts: number[] = [];
+  if (payment.expectedMinor !== null) amounts.push(payment.expectedMinor);
+  if (payment.planId) {
+    const [plan, m, cal] = await Promise.all([
+      MembershipPlan.findByPk(payment.planId, { transaction: t }),
+      Membership.findOne({ where: { userId: payment.userId }, transaction: t }),
+      duesCalendar(t),
+    ]);
+    const opened = toIsoDate(payment.createdAt);
+    const owed = plan && owedOn(m ?? { paidThrough: null, joinedOn: opened }, plan, opened, cal);
+    // Only a quote for the same cover as the checkout is what the member was shown for this payment.
+    if (owed && owed.coversFrom === payment.coversFrom && owed.coversTo === payment.coversTo)
+      amounts.push(owed.totalMinor);
+  }
+  return amounts;
 }
 
 async function sessionExpired(session: Stripe.Checkout.Session, t: Transaction): Promise<Outcome> {

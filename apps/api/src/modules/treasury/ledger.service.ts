@@ -6,8 +6,10 @@ import type {
   paymentListQuerySchema,
   refundInputSchema,
   resolveHeldSchema,
+  returnedInputSchema,
 } from '@app/shared';
-import { formatMoney, minorToDecimal } from '@app/shared';
+import { METHOD_LABELS, minorToDecimal } from '@app/shared';
+import { formatDate, formatMoney } from '@app/shared/locale';
 import type { Env } from '../../config/env';
 import { AppError, invalid, notFound } from '../../errors/app-error';
 import { Membership, MembershipPlan, Payment, Refund, User } from '../../models';
@@ -20,6 +22,7 @@ import {
   quoteFor,
   toIsoDate,
 } from '../dues/calendar';
+import { owedOn } from '../dues/owed';
 import { NO_PROVIDER_REFERENCE } from '../dues/dues.presenter';
 import { duesCalendar } from '../dues/dues.service';
 import {
@@ -27,11 +30,14 @@ import {
   queueReceipt,
   reverseCoverIfFullyRefunded,
 } from '../dues/ledger-effects';
+import { enqueueEmail } from '../mail/outbox.service';
+import { actionEmail } from '../mail/templates';
 import { stripeClient } from '../payments/stripe-client';
 
 type OfflineInput = z.output<typeof offlinePaymentSchema>;
 type RefundInput = z.output<typeof refundInputSchema>;
 type ResolveInput = z.output<typeof resolveHeldSchema>;
+type ReturnedInput = z.output<typeof returnedInputSchema>;
 type ListQuery = z.output<typeof paymentListQuerySchema>;
 
 const includes = [
@@ -98,7 +104,7 @@ export async function recordOfflinePayment(
       lock: t.LOCK.UPDATE,
       transaction: t,
     });
-    const q = quoteFor(
+    const q = owedOn(
       m ?? { paidThrough: null, joinedOn: input.receivedOn },
       plan,
       input.receivedOn,
@@ -112,7 +118,7 @@ export async function recordOfflinePayment(
       coversFrom = next.start;
       coversTo = next.end;
     }
-    const expected = q ? q.duesMinor + q.lateFeeMinor : plan.amountMinor;
+    const expected = q ? q.totalMinor : plan.amountMinor;
     const payment = await Payment.create(
       {
         userId: user.id,
@@ -277,12 +283,12 @@ export async function refundPayment(
     if (refused && err.code === 'resource_missing')
       throw new AppError(
         'CONFLICT',
-        `The payment provider has no record of this card payment (${refund.intent}), so it cannot be refunded by card. Nothing was refunded. Entries carried over from before card payments went through this provider account cannot be refunded here: hand the money back another way and note it on the entry.`,
+        `The payment provider has no record of this card payment (${refund.intent}), so it cannot be refunded by card. Nothing was refunded. ${RETURN_ADVICE}`,
       );
     if (refused)
       throw new AppError(
         'CONFLICT',
-        `The payment provider refused the refund: ${err.message} Nothing was refunded.`,
+        `The payment provider refused the refund: ${err.message} Nothing was refunded. ${RETURN_ADVICE}`,
       );
     throw new AppError(
       'UPSTREAM_UNAVAILABLE',
@@ -290,6 +296,138 @@ export async function refundPayment(
     );
   }
   return (await Refund.findByPk(refund.row.id)) ?? refund.row;
+}
+
+/** What a treasurer can do when the provider cannot refund a payment (the refund dialog offers it). */
+export const RETURN_ADVICE =
+  'If you give the money back by bank transfer, cash or cheque, record it with “Record money returned” so the ledger and the member’s dues show it.';
+
+const RETURN_WORDS: Record<ReturnedInput['method'], string> = {
+  transfer: 'by bank transfer',
+  cash: 'in cash',
+  cheque: 'by cheque',
+};
+
+/**
+ * Records money the treasurer handed back outside the payment provider (a card payment the provider cannot refund,
+ * most often): a completed refund row for all that is left, marked with how it went back. A credited payment that
+ * is now returned in full gives up its cover (paid-through goes back); a held one is dismissed, so it leaves the
+ * queue uncredited. The member is mailed what happened. Sending the same method and note again changes nothing and
+ * answers the first record (`replayed`); anything else once nothing is left answers 409.
+ */
+export async function recordReturned(
+  actor: User,
+  paymentId: number,
+  input: ReturnedInput,
+  deps: { sequelize: Sequelize; env: Env },
+) {
+  return deps.sequelize.transaction(async (t) => {
+    const payment = await Payment.findByPk(paymentId, { lock: t.LOCK.UPDATE, transaction: t });
+    if (!payment) throw notFound('Payment');
+    if (!['succeeded', 'held', 'dismissed'].includes(payment.status))
+      throw new AppError('CONFLICT', 'Only money that was received can be returned');
+    const refunds = await Refund.findAll({
+      where: { paymentId, status: { [Op.ne]: 'failed' } },
+      order: [['id', 'ASC']],
+      transaction: t,
+    });
+    const money = (minor: number) => formatMoney(minor, payment.currency);
+    const same = refunds.find(
+      (r) => r.returnedBy === input.method && r.reason === input.note && r.status === 'succeeded',
+    );
+    if (same) return { refund: same, replayed: true };
+    const left = payment.amountMinor - refunds.reduce((sum, r) => sum + r.amountMinor, 0);
+    if (left <= 0) {
+      const returned = refunds.find((r) => r.returnedBy);
+      const pending = refunds.find((r) => r.status === 'pending');
+      throw new AppError(
+        'CONFLICT',
+        returned
+          ? `Already returned: ${money(returned.amountMinor)} went back ${RETURN_WORDS[(returned.returnedBy as ReturnedInput['method'] | null) ?? 'transfer']} on ${formatDate(returned.completedAt ?? returned.createdAt)}. Nothing is left to return.`
+          : pending
+            ? `A card refund of ${money(pending.amountMinor)} is waiting for the payment provider’s answer, so nothing is left to return. Wait for it to settle; if it fails, record the money returned then.`
+            : `Already refunded in full (${money(payment.amountMinor)}). Nothing is left to return.`,
+      );
+    }
+    const row = await Refund.create(
+      {
+        paymentId,
+        amountMinor: left,
+        currency: payment.currency,
+        status: 'succeeded',
+        providerRefundId: null,
+        reason: input.note,
+        returnedBy: input.method,
+        requestedById: actor.id,
+        completedAt: new Date(),
+      },
+      { transaction: t },
+    );
+    const wasCredited = payment.status === 'succeeded';
+    const paidThrough = wasCredited ? await reverseCoverIfFullyRefunded(payment, t) : undefined;
+    if (payment.status === 'held')
+      await payment.update(
+        {
+          status: 'dismissed',
+          note: `Returned ${RETURN_WORDS[input.method]}: ${input.note}`.slice(0, 500),
+          recordedById: actor.id,
+        },
+        { transaction: t },
+      );
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'treasury',
+        action: 'payment.returned-outside-provider',
+        subjectType: 'payment',
+        subjectId: String(paymentId),
+        reason: input.note,
+        details: {
+          refundId: row.id,
+          amountMinor: left,
+          method: input.method,
+          wasCredited,
+          paidThrough: paidThrough ?? null,
+        },
+      },
+      t,
+    );
+    const user = await User.findByPk(payment.userId, { transaction: t });
+    const m = await Membership.findOne({ where: { userId: payment.userId }, transaction: t });
+    if (user) {
+      const paidOn = payment.paidAt ? ` on ${formatDate(payment.paidAt)}` : '';
+      const dues = m?.paidThrough
+        ? `Your dues are now paid through ${formatDate(m.paidThrough)}.`
+        : 'Your dues now show as not paid.';
+      await enqueueEmail(
+        actionEmail({
+          to: user.email,
+          kind: 'dues-returned',
+          subject: `${money(left)} returned to you by the club treasurer`,
+          greeting: `Hello ${user.displayName},`,
+          lines: [
+            `The treasurer returned ${money(left)} to you ${RETURN_WORDS[input.method]}, for your ${METHOD_LABELS[payment.method].toLowerCase()} payment of ${money(payment.amountMinor)}${paidOn}.`,
+            ...(payment.method === 'card'
+              ? [
+                  'It did not go back to your card: the card payment service could not refund it, so it was returned directly.',
+                ]
+              : []),
+            `The treasurer’s note: ${input.note}`,
+            wasCredited
+              ? paidThrough !== undefined
+                ? `This payment no longer counts toward your dues. ${dues}`
+                : `Part of this payment was refunded before; what counts toward your dues is unchanged. ${dues}`
+              : `This payment was never credited to your dues, so they are as they were. ${dues}`,
+          ],
+          actionLabel: 'See your dues',
+          actionUrl: `${deps.env.PUBLIC_URL}/dues`,
+          footer: 'Questions about this go to the club treasurer.',
+        }),
+        t,
+      );
+    }
+    return { refund: row, replayed: false };
+  });
 }
 
 /** Settles a held payment: credit it to the member's dues, or dismiss it (kept on the ledger, usually refunded). */

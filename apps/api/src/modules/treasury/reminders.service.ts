@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import type { ReminderPreviewDto } from '@app/shared';
-import { DUES_STATUS_LABELS, formatDate, formatMoney } from '@app/shared';
+import { DUES_STATUS_LABELS } from '@app/shared';
+import { formatDate, formatMoney } from '@app/shared/locale';
 import type { Env } from '../../config/env';
 import type { User } from '../../models';
 import { recordAudit } from '../audit/audit.service';

@@ -118,4 +118,42 @@ describe('seeded card payments', () => {
     expect(res.body.error.message).toBe(row?.cardRefundBlocked);
     expect(await Refund.count({ where: { paymentId: bare.id } })).toBe(0);
   });
+
+  it('a held one the provider cannot refund is recorded as returned by transfer, leaves the queue, mails the member', async () => {
+    const c = await treasurer();
+    const held = (await c.get('/api/treasury/payments?status=held')).body.data as {
+      id: number;
+      userId: number;
+      heldReason: string;
+      amountMinor: number;
+    }[];
+    expect(held).toHaveLength(1);
+    const entry = held[0];
+    if (!entry) throw new Error('the demo seed holds one payment');
+    // The reason reads in money, never in minor units.
+    expect(entry.heldReason).toMatch(
+      /^Held for the treasurer: €\d+\.\d{2} paid, €\d+\.\d{2} expected$/,
+    );
+    const refused = await c.post(`/api/treasury/payments/${entry.id}/refunds`, {
+      amountMinor: entry.amountMinor,
+      reason: 'Paid the wrong amount',
+    });
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.message).toMatch(/Record money returned/);
+
+    const res = await c.post(`/api/treasury/payments/${entry.id}/returned`, {
+      method: 'transfer',
+      note: 'Sent back by bank transfer, reference RW-RET-1',
+    });
+    expect(res.status).toBe(201);
+    expect(res.body.data).toMatchObject({ amountMinor: entry.amountMinor, returnedBy: 'transfer' });
+    const after = await Payment.findByPk(entry.id);
+    expect(after?.status).toBe('dismissed');
+    expect((await c.get('/api/treasury/payments?status=held')).body.data).toHaveLength(0);
+    const member = await Membership.findOne({ where: { userId: entry.userId } });
+    expect(member?.paidThrough).toBeNull();
+    const summary = (await c.get('/api/treasury/summary')).body.data;
+    expect(summary.heldCount).toBe(0);
+    expect(summary.breakdown.refundedOfUncreditedMinor).toBe(entry.amountMinor);
+  });
 });

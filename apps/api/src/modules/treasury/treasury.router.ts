@@ -11,6 +11,7 @@ import {
   refundInputSchema,
   reminderInputSchema,
   resolveHeldSchema,
+  returnedInputSchema,
   summaryQuerySchema,
 } from '@app/shared';
 import type { Env } from '../../config/env';
@@ -80,6 +81,16 @@ export function treasuryRouter(deps: { env: Env; sequelize: Sequelize }) {
       deps,
     );
     res.status(201).json({ data: toRefundDto(refund) });
+  });
+  r.post('/payments/:paymentId/returned', async (req, res) => {
+    const { paymentId } = paymentParam.parse(req.params);
+    const { refund, replayed } = await ledger.recordReturned(
+      currentUser(req),
+      Number(paymentId),
+      returnedInputSchema.parse(req.body),
+      deps,
+    );
+    res.status(replayed ? 200 : 201).json({ data: toRefundDto(refund) });
   });
   r.post('/payments/:paymentId/resolve', async (req, res) => {
     const { paymentId } = paymentParam.parse(req.params);

@@ -226,4 +226,105 @@ describe('treasurer desk', () => {
     expect(patched.body.data.amountMinor).toBe(4500);
     expect(await AuditEvent.count({ where: { area: 'treasury', action: 'plan.update' } })).toBe(1);
   });
+
+  it('summary tiles reconcile: what is in each, and the difference is explained', async () => {
+    const plan = await MembershipPlan.create({
+      code: 'individual',
+      name: 'Individual',
+      amountMinor: 12000,
+      currency: 'EUR',
+      proration: 'monthly',
+      lateFeeMinor: 1500,
+      graceDays: 30,
+    });
+    // The fiscal year holding today under the default calendar (from 1 April).
+    const y = Number(today.slice(0, 4));
+    const m = Number(today.slice(5, 7));
+    const start = m >= 4 ? y : y - 1;
+    const fyStart = `${start}-04-01`;
+    const fyEnd = `${start + 1}-03-31`;
+    // Monthly proration: months left including the joining month, over 12 (the plan's rule).
+    const prorated = Math.round((12000 * (12 - ((y - start) * 12 + m - 4))) / 12);
+    const pay = (userId: number, extra: object) =>
+      Payment.create({
+        userId,
+        planId: plan.id,
+        method: 'cheque',
+        status: 'succeeded',
+        amountMinor: 12000,
+        currency: 'EUR',
+        expectedMinor: 12000,
+        coversFrom: fyStart,
+        coversTo: fyEnd,
+        providerSessionId: null,
+        providerPaymentIntentId: null,
+        reference: 'CHQ 1',
+        note: null,
+        heldReason: null,
+        recordedById: null,
+        paidAt: new Date(),
+        ...extra,
+      });
+    const paid = await buildUser();
+    await Membership.create({
+      userId: paid.id,
+      planId: plan.id,
+      joinedOn: '2019-04-01',
+      paidThrough: fyEnd,
+    });
+    await pay(paid.id, {});
+    // A renewal paid ahead for next year: collected now, but not for this year.
+    await pay(paid.id, { coversFrom: `${start + 1}-04-01`, coversTo: `${start + 2}-03-31` });
+    const joiner = await buildUser();
+    await Membership.create({
+      userId: joiner.id,
+      planId: plan.id,
+      joinedOn: today,
+      paidThrough: null,
+    });
+    await pay(joiner.id, { method: 'card', status: 'held', amountMinor: 5000, heldReason: 'Held' });
+    // More than a year behind: owes this full year plus the late fee.
+    const behind = await buildUser();
+    await Membership.create({
+      userId: behind.id,
+      planId: plan.id,
+      joinedOn: '2019-04-01',
+      paidThrough: `${start - 2}-03-31`,
+    });
+    const t = await buildUser({ roles: ['member', 'treasurer'] });
+    const c = await client(built.app);
+    await c.signIn(t.email);
+
+    const s = (await c.get('/api/treasury/summary')).body.data;
+    expect(s.expectedMinor).toBe(12000 + prorated + 12000);
+    expect(s.collectedMinor).toBe(24000);
+    expect(s.outstandingMinor).toBe(prorated + 12000 + 1500);
+    expect(s.heldCount).toBe(1);
+    expect(s.breakdown).toEqual({
+      memberCount: 3,
+      proratedCount: prorated < 12000 ? 1 : 0,
+      prorationMinor: 12000 - prorated,
+      collectedThisYearMinor: 12000,
+      collectedOtherYearsMinor: 12000,
+      refundedOfUncreditedMinor: 0,
+      outstandingLateFeesMinor: 1500,
+      heldMinor: 5000,
+      differenceMinor: 0,
+    });
+    // The identities the tiles' explanations rest on.
+    const b = s.breakdown;
+    expect(b.collectedThisYearMinor + b.collectedOtherYearsMinor).toBe(s.collectedMinor);
+    expect(
+      b.collectedThisYearMinor +
+        s.outstandingMinor -
+        b.outstandingLateFeesMinor +
+        b.differenceMinor,
+    ).toBe(s.expectedMinor);
+
+    // A part payment for this year shows up as the difference, never silently.
+    await pay(behind.id, { amountMinor: 4000, coversFrom: fyStart, coversTo: fyEnd });
+    const after = (await c.get('/api/treasury/summary')).body.data;
+    expect(after.breakdown.collectedThisYearMinor).toBe(16000);
+    expect(after.breakdown.differenceMinor).toBe(-4000);
+  });
 });

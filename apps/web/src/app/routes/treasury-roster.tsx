@@ -1,4 +1,4 @@
-import { useCallback, useState } from 'react';
+import { useCallback, useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Alert } from '../../components/ui/alert';
 import { Page } from '../../components/ui/page';
@@ -23,14 +23,24 @@ function RosterScreen() {
       }),
     [],
   );
-  const selectBehind = () =>
-    setSelected(
-      new Set(
-        (roster.data ?? [])
-          .filter((r) => r.status === 'due' || r.status === 'overdue')
-          .map((r) => r.userId),
+  const selectBehind = useCallback(
+    () =>
+      setSelected(
+        new Set(
+          (roster.data ?? [])
+            .filter((r) => r.status === 'due' || r.status === 'overdue')
+            .map((r) => r.userId),
+        ),
       ),
-    );
+    [roster.data],
+  );
+  // Everyone due or overdue starts selected, so the reminders panel counts who would be reminded at once.
+  const preselected = useRef(false);
+  useEffect(() => {
+    if (preselected.current || !roster.data) return;
+    preselected.current = true;
+    selectBehind();
+  }, [roster.data, selectBehind]);
   return (
     <Page
       title="Member roster"

@@ -1,4 +1,3 @@
-import { formatMoney } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { Alert } from '../../components/ui/alert';
 import { Page } from '../../components/ui/page';
@@ -15,6 +14,7 @@ import { useRecordPayment } from '../../features/treasury/api/record-payment';
 import { OfflinePaymentForm } from '../../features/treasury/components/offline-payment-form';
 import { PaymentsTable } from '../../features/treasury/components/payments-table';
 import { SummaryChart } from '../../features/treasury/components/summary-chart';
+import { SummaryTiles } from '../../features/treasury/components/summary-tiles';
 
 function TreasuryScreen() {
   const summary = useSummary();
@@ -56,24 +56,7 @@ function TreasuryScreen() {
           <h2 id="summary-heading" className="text-xl">
             Fiscal year {s.fiscalYear.label}
           </h2>
-          <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-            {[
-              ['Collected', formatMoney(s.collectedMinor, s.currency)],
-              ['Expected', formatMoney(s.expectedMinor, s.currency)],
-              ['Outstanding', formatMoney(s.outstandingMinor, s.currency)],
-              ['Held for you', String(s.heldCount)],
-            ].map(([k, v]) => (
-              <div key={k} className="rounded-lg border border-sand-300 bg-sand-50 p-3">
-                <dt className="text-sm">{k}</dt>
-                <dd
-                  className="text-xl font-bold tabular-nums"
-                  data-testid={`summary-${k?.toLowerCase().replace(/ /g, '-') ?? ''}`}
-                >
-                  {v}
-                </dd>
-              </div>
-            ))}
-          </dl>
+          <SummaryTiles summary={s} />
           <p className="text-sm">
             Members: {s.counts.current} current, {s.counts.due} due, {s.counts.overdue} overdue,{' '}
             {s.counts.lapsed} lapsed.

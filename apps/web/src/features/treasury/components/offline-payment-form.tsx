@@ -1,5 +1,6 @@
 import {
   currencyDigits,
+  formatMoney,
   METHOD_LABELS,
   OFFLINE_METHODS,
   offlinePaymentSchema,
@@ -8,6 +9,7 @@ import {
   type RosterRowDto,
 } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
@@ -15,6 +17,7 @@ import { FormError } from '../../../components/ui/form-error';
 import { TextField } from '../../../components/ui/text-field';
 import { ApiError } from '../../../lib/api-client';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { minorToInput } from '../utils/money';
 
 // The shared schema, with the amount typed as a decimal (120.50) instead of minor units.
 const formSchema = offlinePaymentSchema.omit({ amountMinor: true }).extend({
@@ -53,6 +56,7 @@ export function OfflinePaymentForm({
     register,
     handleSubmit,
     setError,
+    setValue,
     reset,
     formState: { errors },
   } = useForm<FormValues>({
@@ -66,12 +70,36 @@ export function OfflinePaymentForm({
       amount: '',
     },
   });
+  const [owedHint, setOwedHint] = useState('');
+  // Choosing a member fills their plan and what they owe now (the roster's figure: prorated, late fee when due);
+  // the treasurer can still change either before recording.
+  const prefill = (userId: number) => {
+    const m = members.find((x) => x.userId === userId);
+    const plan = plans.find((p) => p.id === m?.planId);
+    if (!m || !plan) {
+      setOwedHint(m ? 'No plan yet: choose one and type the amount received.' : '');
+      return;
+    }
+    setValue('planId', plan.id, { shouldValidate: false });
+    setValue('currency', plan.currency);
+    if (m.owedMinor > 0) {
+      setValue('amount', minorToInput(m.owedMinor, plan.currency));
+      setOwedHint(
+        `${m.displayName} owes ${formatMoney(m.owedMinor, plan.currency)} now on ${plan.name} (prorated and late fee included where they apply).`,
+      );
+    } else {
+      setValue('amount', '');
+      setOwedHint(`${m.displayName} owes nothing now; a payment is credited to the next year.`);
+    }
+  };
+  const userField = register('userId', { valueAsNumber: true });
   const submit = handleSubmit(async ({ amount, ...rest }) => {
     const digits = currencyDigits(rest.currency);
     const amountMinor = Math.round(Number(amount.replace(',', '.')) * 10 ** digits);
     try {
       await onSubmit({ ...rest, amountMinor });
       reset();
+      setOwedHint('');
     } catch (error) {
       const amountError = error instanceof ApiError ? error.fields.amountMinor : undefined;
       if (amountError) setError('amount', { type: 'server', message: amountError });
@@ -89,8 +117,13 @@ export function OfflinePaymentForm({
         Member
         <select
           className={selectClass}
-          {...register('userId', { valueAsNumber: true })}
+          {...userField}
+          onChange={(e) => {
+            void userField.onChange(e);
+            prefill(Number(e.target.value));
+          }}
           aria-invalid={!!errors.userId}
+          aria-describedby={owedHint ? 'offline-owed-hint' : undefined}
         >
           <option value="">Choose…</option>
           {members.map((m) => (
@@ -100,6 +133,11 @@ export function OfflinePaymentForm({
           ))}
         </select>
         {errors.userId && <span className="text-sm text-flare-700">{errors.userId.message}</span>}
+        {owedHint && (
+          <span id="offline-owed-hint" className="text-sm font-normal text-ink-700">
+            {owedHint}
+          </span>
+        )}
       </label>
       <label className="flex flex-col gap-1 font-bold">
         Plan

@@ -66,6 +66,7 @@ describe('PaymentRowActions', () => {
           currency: 'EUR',
           status: 'pending',
           reason: 'Earlier',
+          returnedBy: null,
           createdAt: '2026-04-10T00:00:00.000Z',
           completedAt: null,
         },
@@ -143,5 +144,53 @@ describe('PaymentRowActions', () => {
     await user.click(within(dialog).getByRole('button', { name: 'Credit' }));
     await waitFor(() => expect(screen.getByRole('status')).toHaveTextContent('Credited.'));
     expect(requests[0]?.body).toEqual({ decision: 'credit', note: 'Paid the old rate' });
+  });
+
+  it('offers recording the money returned another way when the provider refuses, and records it', async () => {
+    const { requests } = mockApi({
+      'POST /api/treasury/payments/7/refunds': () =>
+        errorReply(409, 'CONFLICT', 'The payment provider has no record of this card payment'),
+      'POST /api/treasury/payments/7/returned': () => ({
+        status: 201,
+        body: {
+          data: {
+            id: 2,
+            paymentId: 7,
+            amountMinor: 18000,
+            currency: 'EUR',
+            status: 'succeeded',
+            reason: 'Sent by transfer RW-1',
+            returnedBy: 'transfer',
+            createdAt: '2026-05-01T00:00:00.000Z',
+            completedAt: '2026-05-01T00:00:00.000Z',
+          },
+        },
+      }),
+    });
+    renderWithProviders(<PaymentRowActions payment={buildPayment({ method: 'card' })} />, {
+      session,
+    });
+    const user = userEvent.setup();
+    await user.click(screen.getByRole('button', { name: /^Refund Invented Member/ }));
+    const dialog = screen.getByRole('dialog');
+    await user.type(within(dialog).getByLabelText(/^Reason/), 'Duplicate payment');
+    await user.click(within(dialog).getByRole('button', { name: 'Refund' }));
+    await user.click(await within(dialog).findByRole('button', { name: 'Record money returned' }));
+    expect(within(dialog).getByRole('heading')).toHaveTextContent(
+      'Record money returned to Invented Member',
+    );
+    await user.click(within(dialog).getByRole('button', { name: 'Record €180.00 returned' }));
+    expect(within(dialog).getByLabelText(/^Note/)).toHaveAccessibleDescription(
+      expect.stringContaining('Say how and when'),
+    );
+    await user.type(within(dialog).getByLabelText(/^Note/), 'Sent by transfer RW-1');
+    await user.click(within(dialog).getByRole('button', { name: 'Record €180.00 returned' }));
+    await waitFor(() =>
+      expect(screen.getByRole('status')).toHaveTextContent('Recorded €180.00 returned'),
+    );
+    expect(requests.map((r) => r.body)).toEqual([
+      { amountMinor: 18000, reason: 'Duplicate payment' },
+      { method: 'transfer', note: 'Sent by transfer RW-1' },
+    ]);
   });
 });

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { usePromptDialog } from '../../../components/ui/prompt-dialog';
 import { errorMessage } from '../../../lib/form-errors';
+import { useRecordReturned } from '../api/record-returned';
 import { useRefundPayment } from '../api/refund-payment';
 import { useResolveHeld } from '../api/resolve-held';
 import { refundableMinor } from '../utils/refundable';
@@ -13,6 +14,8 @@ const REFUNDABLE = ['succeeded', 'held', 'dismissed'];
 /** Refund (in full or in part) and, for held payments, credit / dismiss, each asking for a reason for the ledger. */
 export function PaymentRowActions({ payment }: { payment: PaymentDto }) {
   const refund = useRefundPayment();
+  const returned = useRecordReturned();
+  const [startReturned, setStartReturned] = useState(false);
   const resolve = useResolveHeld();
   const { ask, dialog } = usePromptDialog();
   const [isRefunding, setIsRefunding] = useState(false);
@@ -62,7 +65,21 @@ export function PaymentRowActions({ payment }: { payment: PaymentDto }) {
         </>
       )}
       {canRefund && payment.cardRefundBlocked && (
-        <p className="max-w-xs text-xs text-ink-700">{payment.cardRefundBlocked}</p>
+        <>
+          <p className="max-w-xs text-xs text-ink-700">{payment.cardRefundBlocked}</p>
+          <Button
+            size="sm"
+            variant="ghost"
+            aria-label={`Record money returned to ${payment.memberName}, ${formatMoney(left, payment.currency)}`}
+            onClick={() => {
+              setMessage('');
+              setStartReturned(true);
+              setIsRefunding(true);
+            }}
+          >
+            Record money returned
+          </Button>
+        </>
       )}
       {canRefund && !payment.cardRefundBlocked && (
         <Button
@@ -71,6 +88,7 @@ export function PaymentRowActions({ payment }: { payment: PaymentDto }) {
           aria-label={`Refund ${payment.memberName}, ${formatMoney(payment.amountMinor, payment.currency)}`}
           onClick={() => {
             setMessage('');
+            setStartReturned(false);
             setIsRefunding(true);
           }}
         >
@@ -80,7 +98,14 @@ export function PaymentRowActions({ payment }: { payment: PaymentDto }) {
       {isRefunding && (
         <RefundDialog
           payment={payment}
+          startReturned={startReturned}
           onClose={() => setIsRefunding(false)}
+          onReturned={async (input) => {
+            const r = await returned.mutateAsync({ paymentId: payment.id, ...input });
+            setMessage(
+              `Recorded ${formatMoney(r.amountMinor, r.currency)} returned; the member is told by e-mail.`,
+            );
+          }}
           onSubmit={async (input) => {
             const r = await refund.mutateAsync({ paymentId: payment.id, ...input });
             setMessage(

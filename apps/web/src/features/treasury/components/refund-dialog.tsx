@@ -1,6 +1,12 @@
-import { formatMoney, refundInputSchema, type PaymentDto, type RefundInput } from '@app/shared';
+import {
+  formatMoney,
+  refundInputSchema,
+  type PaymentDto,
+  type RefundInput,
+  type ReturnedInput,
+} from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useId, useRef } from 'react';
+import { useEffect, useId, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Button } from '../../../components/ui/button';
@@ -10,6 +16,7 @@ import { ApiError } from '../../../lib/api-client';
 import { errorMessage } from '../../../lib/form-errors';
 import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
 import { refundableMinor } from '../utils/refundable';
+import { ReturnedForm } from './returned-form';
 
 function schemaFor(payment: PaymentDto, left: number) {
   return z
@@ -29,6 +36,10 @@ type FormValues = { amount: string; reason: string };
 export interface RefundDialogProps {
   payment: PaymentDto;
   onSubmit: (input: RefundInput) => Promise<unknown>;
+  /** Records money handed back outside the provider; offered when the provider cannot refund the payment. */
+  onReturned?: (input: ReturnedInput) => Promise<unknown>;
+  /** Open straight on "Record money returned" (the provider is known not to be able to refund it). */
+  startReturned?: boolean;
   onClose: () => void;
 }
 
@@ -37,10 +48,19 @@ export interface RefundDialogProps {
  * goes to the amount, Escape cancels, focus returns where it was. The dialog stays open with the server's
  * message when the refund is refused.
  */
-export function RefundDialog({ payment, onSubmit, onClose }: RefundDialogProps) {
+export function RefundDialog({
+  payment,
+  onSubmit,
+  onReturned,
+  startReturned = false,
+  onClose,
+}: RefundDialogProps) {
   const dialogRef = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   const left = refundableMinor(payment);
+  const [mode, setMode] = useState<'refund' | 'returned'>(startReturned ? 'returned' : 'refund');
+  // The provider said no (409): the dialog offers recording the money handed back another way.
+  const [refused, setRefused] = useState(false);
   const {
     register,
     handleSubmit,
@@ -60,13 +80,13 @@ export function RefundDialog({ payment, onSubmit, onClose }: RefundDialogProps) 
     // jsdom lacks showModal; the open attribute still shows the dialog there.
     if (typeof dialog.showModal === 'function') dialog.showModal();
     else dialog.setAttribute('open', '');
-    setFocus('amount', { shouldSelect: true });
+    if (!startReturned) setFocus('amount', { shouldSelect: true });
     return () => {
       if (typeof dialog.close === 'function' && dialog.open) dialog.close();
       else dialog.removeAttribute('open');
       returnFocusTo?.focus();
     };
-  }, [setFocus]);
+  }, [setFocus, startReturned]);
 
   const submit = handleSubmit(async ({ amount, reason }) => {
     try {
@@ -74,6 +94,7 @@ export function RefundDialog({ payment, onSubmit, onClose }: RefundDialogProps) 
       onClose();
     } catch (error) {
       const fields = error instanceof ApiError ? error.fields : {};
+      if (error instanceof ApiError && error.status === 409 && onReturned) setRefused(true);
       if (fields.amountMinor) setError('amount', { type: 'server', message: fields.amountMinor });
       if (fields.reason) setError('reason', { type: 'server', message: fields.reason });
       if (!fields.amountMinor && !fields.reason)
@@ -91,43 +112,77 @@ export function RefundDialog({ payment, onSubmit, onClose }: RefundDialogProps) 
       }}
       className="m-auto w-[min(30rem,calc(100vw-2rem))] rounded-lg border border-sand-300 bg-sand-50 p-0 text-ink-900 shadow-card backdrop:bg-ink-950/50"
     >
-      <form noValidate onSubmit={(e) => void submit(e)} className="flex flex-col gap-4 p-5">
-        <h2 id={titleId} className="text-xl">
-          Refund {payment.memberName}
-        </h2>
-        <p className="text-sm">
-          Paid {formatMoney(payment.amountMinor, payment.currency)}
-          {payment.method === 'card' ? ' by card' : ''}; {formatMoney(left, payment.currency)} can
-          still be refunded.{' '}
-          {payment.method === 'card'
-            ? 'The card is refunded through the payment provider; the entry updates when the provider confirms.'
-            : 'Record this once you have handed the money back; it counts at once.'}
-        </p>
-        <FormError message={errors.root?.server?.message} />
-        <TextField
-          label={`Amount to refund (${payment.currency})`}
-          inputMode="decimal"
-          required
-          hint="All that is left, or less for a part refund."
-          error={errors.amount?.message}
-          {...register('amount')}
-        />
-        <TextField
-          label="Reason"
-          required
-          hint="Kept in the ledger and the audit log."
-          error={errors.reason?.message}
-          {...register('reason')}
-        />
-        <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-          <Button variant="secondary" onClick={onClose} disabled={isSubmitting}>
-            Cancel
-          </Button>
-          <Button type="submit" variant="danger" isPending={isSubmitting} pendingLabel="Refunding…">
-            Refund
-          </Button>
+      {mode === 'returned' && onReturned ? (
+        <div className="flex flex-col gap-4 p-5">
+          <h2 id={titleId} className="text-xl">
+            Record money returned to {payment.memberName}
+          </h2>
+          <ReturnedForm
+            payment={payment}
+            leftMinor={left}
+            onCancel={onClose}
+            onSubmit={async (input) => {
+              await onReturned(input);
+              onClose();
+            }}
+          />
         </div>
-      </form>
+      ) : (
+        <form noValidate onSubmit={(e) => void submit(e)} className="flex flex-col gap-4 p-5">
+          <h2 id={titleId} className="text-xl">
+            Refund {payment.memberName}
+          </h2>
+          <p className="text-sm">
+            Paid {formatMoney(payment.amountMinor, payment.currency)}
+            {payment.method === 'card' ? ' by card' : ''}; {formatMoney(left, payment.currency)} can
+            still be refunded.{' '}
+            {payment.method === 'card'
+              ? 'The card is refunded through the payment provider; the entry updates when the provider confirms.'
+              : 'Record this once you have handed the money back; it counts at once.'}
+          </p>
+          <FormError message={errors.root?.server?.message} />
+          {refused && onReturned && (
+            <div className="flex flex-col gap-2 rounded-md border border-sand-300 bg-white p-3 text-sm">
+              <p>
+                The card cannot be refunded through the payment provider. If you give the money back
+                by bank transfer, cash or cheque, record it so the ledger and the member’s dues show
+                it.
+              </p>
+              <Button variant="secondary" onClick={() => setMode('returned')}>
+                Record money returned
+              </Button>
+            </div>
+          )}
+          <TextField
+            label={`Amount to refund (${payment.currency})`}
+            inputMode="decimal"
+            required
+            hint="All that is left, or less for a part refund."
+            error={errors.amount?.message}
+            {...register('amount')}
+          />
+          <TextField
+            label="Reason"
+            required
+            hint="Kept in the ledger and the audit log."
+            error={errors.reason?.message}
+            {...register('reason')}
+          />
+          <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
+            <Button variant="secondary" onClick={onClose} disabled={isSubmitting}>
+              Cancel
+            </Button>
+            <Button
+              type="submit"
+              variant="danger"
+              isPending={isSubmitting}
+              pendingLabel="Refunding…"
+            >
+              Refund
+            </Button>
+          </div>
+        </form>
+      )}
     </dialog>
   );
 }

@@ -1,14 +1,21 @@
-import { formatMoney } from '@app/shared';
+import { DUES_STATUS_LABELS, formatMoney } from '@app/shared';
+import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/form-errors';
 import { countOf } from '../../../lib/plural';
-import { usePreviewReminders, useSendReminders } from '../api/reminders';
+import { useReminderPreview, useSendReminders } from '../api/reminders';
+import { sendLabel } from '../utils/reminder-label';
 
-/** Preview, then send, reminders to the selected members (only due and overdue ones receive one). */
+/**
+ * Reminders to the selected members (only due and overdue ones who owe something receive one). Who would be
+ * reminded is asked as soon as the selection is known, so the button counts them; Preview shows the message.
+ */
 export function RemindersPanel({ userIds }: { userIds: number[] }) {
-  const preview = usePreviewReminders();
+  const preview = useReminderPreview(userIds);
   const send = useSendReminders();
+  const [showPreview, setShowPreview] = useState(false);
+  const count = userIds.length === 0 ? 0 : preview.data?.recipients.length;
   return (
     <section aria-labelledby="reminders-heading" className="flex flex-col gap-3">
       <h2 id="reminders-heading" className="text-xl">
@@ -18,21 +25,18 @@ export function RemindersPanel({ userIds }: { userIds: number[] }) {
       <div className="flex flex-wrap gap-2">
         <Button
           variant="secondary"
-          disabled={userIds.length === 0}
-          isPending={preview.isPending}
-          onClick={() => preview.mutate({ userIds })}
+          disabled={userIds.length === 0 || !preview.data}
+          aria-expanded={showPreview}
+          onClick={() => setShowPreview((v) => !v)}
         >
-          Preview reminders
+          {showPreview ? 'Hide the preview' : 'Preview reminders'}
         </Button>
         <Button
-          disabled={!preview.data || preview.data.recipients.length === 0}
+          disabled={!count}
           isPending={send.isPending}
           onClick={() => send.mutate({ userIds })}
         >
-          {/* The count is known only once the preview has said who is due or overdue. */}
-          {preview.data
-            ? `Send ${countOf(preview.data.recipients.length, 'reminder', 'reminders')}`
-            : 'Send reminders (preview first)'}
+          {sendLabel(count)}
         </Button>
       </div>
       {(preview.isError || send.isError) && (
@@ -45,19 +49,21 @@ export function RemindersPanel({ userIds }: { userIds: number[] }) {
           <p>{countOf(send.data.sent, 'reminder is', 'reminders are')} on their way.</p>
         </Alert>
       )}
-      {preview.data && (
+      {preview.data && showPreview && (
         <div className="flex flex-col gap-2 rounded-lg border border-sand-300 bg-sand-50 p-3">
           <h3 className="font-bold">Will receive: “{preview.data.subject}”</h3>
           <ul className="text-sm">
             {preview.data.recipients.map((r) => (
               <li key={r.userId}>
-                {r.displayName} · {r.status} · owes {formatMoney(r.owedMinor, r.currency)}
+                {r.displayName} · {DUES_STATUS_LABELS[r.status].toLowerCase()} · owes{' '}
+                {formatMoney(r.owedMinor, r.currency)}
               </li>
             ))}
           </ul>
           {preview.data.skipped.length > 0 && (
             <p className="text-sm text-ink-700">
-              {preview.data.skipped.length} skipped (current, lapsed or no plan).
+              {countOf(preview.data.skipped.length, 'member', 'members')} skipped (current, lapsed,
+              no plan or nothing owed).
             </p>
           )}
           {preview.data.sampleText && (

@@ -136,7 +136,41 @@ export function RosterTable({ rows, selected, onToggle }: RosterTableProps) {
           </select>
         </label>
       </div>
-      <div className="overflow-x-auto">
+      {/* Below md one card per member, so status, owed and the select box stay on a phone's screen. */}
+      <ul aria-label="Members and their dues" className="flex flex-col gap-2 md:hidden">
+        {table.getRowModel().rows.map((r) => {
+          const m = r.original;
+          return (
+            <li
+              key={r.id}
+              className="flex items-start gap-3 rounded-lg border border-sand-300 bg-sand-50 p-3 text-sm"
+            >
+              <input
+                type="checkbox"
+                className="mt-1 h-5 w-5"
+                aria-label={`Select ${m.displayName}`}
+                checked={selected.has(m.userId)}
+                onChange={() => onToggle(m.userId)}
+              />
+              <div className="flex min-w-0 flex-1 flex-col gap-0.5">
+                <div className="flex flex-wrap items-baseline justify-between gap-2">
+                  <span className="font-bold">{m.displayName}</span>
+                  <span className="font-bold" data-testid="roster-status">
+                    {m.status ? DUES_STATUS_LABELS[m.status] : 'No plan'}
+                  </span>
+                </div>
+                <span className="break-all text-ink-700">{m.email}</span>
+                <span>
+                  {m.planName ?? 'No plan'} · paid through{' '}
+                  {m.paidThrough ? readableDate(m.paidThrough) : 'never'} · owes{' '}
+                  {m.currency ? formatMoney(m.owedMinor, m.currency) : '—'}
+                </span>
+              </div>
+            </li>
+          );
+        })}
+      </ul>
+      <div className="hidden overflow-x-auto md:block">
         <table className="w-full min-w-[40rem] text-sm">
           <caption className="sr-only">Members and their dues</caption>
           <thead>
