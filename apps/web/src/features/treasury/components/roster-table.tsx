@@ -22,6 +22,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
+import { countOf } from '../../../lib/plural';
 
 const features = tableFeatures({
   rowSortingFeature,
@@ -187,7 +188,7 @@ export function RosterTable({ rows, selected, onToggle }: RosterTableProps) {
         </table>
       </div>
       <p className="text-sm text-ink-700">
-        {table.getRowModel().rows.length} of {rows.length} members shown
+        {table.getRowModel().rows.length} of {countOf(rows.length, 'member', 'members')} shown
       </p>
     </div>
   );
