@@ -93,7 +93,7 @@ describe('moderation badge in the main navigation', () => {
       'GET /api/moderation/listing-reports': () => ({ body: { data: [] } }),
       'POST /api/moderation/posts/1/decision': () => {
         queue = { ...queue, posts: queue.posts.filter((p) => p.id !== 1) };
-        return { body: { data: { id: 1, status: 'approved' } } };
+        return { body: { data: { id: 1, status: 'approved', decisionId: 9 } } };
       },
     });
     renderApp({
@@ -104,11 +104,15 @@ describe('moderation badge in the main navigation', () => {
     await within(nav).findByRole('link', { name: 'Moderation, 2 waiting' });
     await userEvent
       .setup()
-      .click(await screen.findByRole('button', { name: 'Approve “Bridle legs of equal length”' }));
+      .click(await screen.findByRole('button', { name: 'Publish “Bridle legs of equal length”' }));
     expect(
       await within(nav).findByRole('link', { name: 'Moderation, 1 waiting' }),
     ).toBeInTheDocument();
-    expect(screen.queryByText('Bridle legs of equal length')).not.toBeInTheDocument();
+    // The decided post stays in place, marked published, until the moderator leaves the page.
+    expect(screen.getByText('Published', { exact: true })).toBeInTheDocument();
+    expect(
+      screen.queryByRole('button', { name: 'Publish “Bridle legs of equal length”' }),
+    ).not.toBeInTheDocument();
   });
 });
 

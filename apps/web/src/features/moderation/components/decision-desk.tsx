@@ -37,8 +37,7 @@ export function DecidedLine({
   return (
     <div className="flex min-h-9 flex-wrap items-center gap-x-4 gap-y-2">
       <p className="font-bold text-kelp-700">
-        <span aria-hidden="true">✓ </span>
-        {d.done}
+        <span aria-hidden="true">✓</span> <span>{d.done}</span>
       </p>
       {desk.canUndo(d) ? (
         <Button

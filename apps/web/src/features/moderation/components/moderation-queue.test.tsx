@@ -88,38 +88,44 @@ const writes = (requests: MockRequest[]) =>
   requests.filter((r) => r.method !== 'GET').map((r) => [r.url, r.body]);
 
 describe('moderation queue', () => {
-  it('asks for a reason to decline in a dialog, refuses a short one, and sends nothing on cancel', async () => {
-    const { requests } = api();
-    renderApp({ route: '/moderation', session: moderator });
-    const user = userEvent.setup();
-    const reject = async () => {
-      const item = (await screen.findByRole('link', { name: post.title })).closest('li');
-      await user.click(
-        within(item as HTMLElement).getByRole('button', { name: `Decline “${post.title}”` }),
-      );
-      return screen.findByRole('dialog', { name: `Decline “${post.title}”?` });
-    };
-    let dialog = await reject();
-    await user.click(within(dialog).getByRole('button', { name: 'Cancel' }));
-    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
-    expect(writes(requests)).toEqual([]);
+  it(
+    'asks for a reason to decline in a dialog, refuses a short one, and sends nothing on cancel',
+    {
+      timeout: 15_000,
+    },
+    async () => {
+      const { requests } = api();
+      renderApp({ route: '/moderation', session: moderator });
+      const user = userEvent.setup();
+      const reject = async () => {
+        const item = (await screen.findByRole('link', { name: post.title })).closest('li');
+        await user.click(
+          within(item as HTMLElement).getByRole('button', { name: `Decline “${post.title}”` }),
+        );
+        return screen.findByRole('dialog', { name: `Decline “${post.title}”?` });
+      };
+      let dialog = await reject();
+      await user.click(within(dialog).getByRole('button', { name: 'Cancel' }));
+      expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+      expect(writes(requests)).toEqual([]);
 
-    dialog = await reject();
-    const field = within(dialog).getByLabelText('Reason');
-    await user.type(field, 'no');
-    await user.click(within(dialog).getByRole('button', { name: 'Decline post' }));
-    expect(within(dialog).getByText('Reason needs at least 3 characters.')).toBeInTheDocument();
-    expect(writes(requests)).toEqual([]);
-    await user.type(field, ' setup figures are missing');
-    await user.click(within(dialog).getByRole('button', { name: 'Decline post' }));
-    await screen.findByText('Declined');
-    expect(writes(requests)).toEqual([
-      [
-        '/api/moderation/posts/4/decision',
-        { action: 'decline', reason: 'no setup figures are missing' },
-      ],
-    ]);
-  });
+      dialog = await reject();
+      const field = within(dialog).getByLabelText('Reason');
+      await user.type(field, 'no');
+      await user.click(within(dialog).getByRole('button', { name: 'Decline post' }));
+      expect(within(dialog).getByText('Reason needs at least 3 characters.')).toBeInTheDocument();
+      expect(writes(requests)).toEqual([]);
+      await user.type(field, ' setup figures are missing');
+      await user.click(within(dialog).getByRole('button', { name: 'Decline post' }));
+      await screen.findByText('Declined');
+      expect(writes(requests)).toEqual([
+        [
+          '/api/moderation/posts/4/decision',
+          { action: 'decline', reason: 'no setup figures are missing' },
+        ],
+      ]);
+    },
+  );
 
   it('tells publishing and declining apart by fill and text, not colour alone', async () => {
     api();
