@@ -13,6 +13,7 @@ import * as m0030 from './20261202-0030-storm-watch';
 import * as m0040 from './20261202-0040-cluster-state';
 import * as m0041 from './20261202-0041-uploaded-images';
 import * as m0050 from './20261203-0050-refund-returned-by';
+import * as m0055 from './20261203-0055-moderation-decisions';
 
 export interface MigrationModule {
   up: (p: { context: QueryInterface }) => Promise<void>;
@@ -35,4 +36,5 @@ export const MIGRATIONS: Array<[name: string, module: MigrationModule]> = [
   ['20261202-0040-cluster-state', m0040],
   ['20261202-0041-uploaded-images', m0041],
   ['20261203-0050-refund-returned-by', m0050],
+  ['20261203-0055-moderation-decisions', m0055],
 ];

@@ -339,7 +339,7 @@ export async function seedKnowledge(ctx: SeedContext) {
         {
           actorId: modId,
           area: 'moderation',
-          action: d.status === 'approved' ? 'post.approve' : 'post.reject',
+          action: d.status === 'approved' ? 'post.publish' : 'post.decline',
           subjectType: 'post',
           subjectId: String(post.id),
           reason: d.note ?? null,

@@ -86,6 +86,7 @@ const MATRIX: Record<string, Row> = {
   'POST /api/moderation/comments/:commentId/decision': MODERATOR,
   'POST /api/moderation/reports/:reportId/resolve': MODERATOR,
   'GET /api/moderation/log': MODERATOR,
+  'POST /api/moderation/decisions/:decisionId/undo': MODERATOR_OR_ADMIN,
   'GET /api/notifications': SIGNED_IN,
   'GET /api/notifications/unread': SIGNED_IN,
   'POST /api/notifications/read': SIGNED_IN,

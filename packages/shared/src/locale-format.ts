@@ -1,5 +1,6 @@
 // Formatting in the club's locale. No zod here: the web client's entry chunk imports this file alone
 // (`@app/shared/locale`).
+import { pluralWord } from './plural';
 
 /**
  * Regions a club can format dates, numbers and money for. The interface text stays in English; the region
@@ -103,4 +104,15 @@ export function formatMoney(amountMinor: number, currency: string, locale = curr
   return new Intl.NumberFormat(locale, { style: 'currency', currency }).format(
     amountMinor / 10 ** digits,
   );
+}
+
+export { pluralWord } from './plural';
+export { excerptOf } from './excerpt';
+
+/**
+ * "0 comments", "1 comment", "1,204 comments": the count in the club's number format and the word in the right
+ * number (English plural rules, `pluralWord`). Every counted noun in screens and mails goes through this.
+ */
+export function countOf(n: number, one: string, other: string, locale = current): string {
+  return `${formatNumber(n, 0, locale)} ${pluralWord(n, one, other)}`;
 }

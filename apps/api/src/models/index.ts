@@ -21,6 +21,7 @@ import { Report, initReport } from './report.model';
 import { Topic, initTopic } from './topic.model';
 import { Vote, initVote } from './vote.model';
 import { UploadedImage, initUploadedImage } from './uploaded-image.model';
+import { ModerationDecision, initModerationDecision } from './moderation-decision.model';
 import { initExchangeModels } from './exchange.models';
 import { StormReadiness, StormWatch, initStormModels } from './storm.models';
 
@@ -51,6 +52,7 @@ export function initModels(sequelize: Sequelize) {
   initReport(sequelize);
   initNotification(sequelize);
   initUploadedImage(sequelize);
+  initModerationDecision(sequelize);
 
   User.hasMany(UserRole, { as: 'roles', foreignKey: 'userId' });
   UserRole.belongsTo(User, { foreignKey: 'userId' });
@@ -106,6 +108,7 @@ export {
   StormWatch,
   StormReadiness,
   UploadedImage,
+  ModerationDecision,
 };
 export {
   Listing,
@@ -117,3 +120,4 @@ export {
   SavedSearchHit,
 } from './exchange.models';
 export type { PostRevision } from './post.model';
+export type { DecisionNotices, RowChange } from './moderation-decision.model';

@@ -1,4 +1,2 @@
-/** "3 posts", "1 post": a count with the word in the right number. */
-export function countOf(n: number, one: string, many: string): string {
-  return `${n} ${n === 1 ? one : many}`;
-}
+// One helper for counted words in screens and mails: English plural rules, the club's number format.
+export { countOf, pluralWord } from '@app/shared/locale';

@@ -4,6 +4,7 @@ import { Listing, ListingReport, User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
+import { DecisionRecord } from '../moderation/decisions.service';
 import { refreshListing } from './listing-index';
 import { getVisibleListing, listingUrl, type ExchangeContext } from './listings.service';
 
@@ -38,19 +39,24 @@ export const openReports = () =>
     limit: 200,
   });
 
-/** A moderator hides a listing: it leaves search, its open reports are resolved, the seller is told, the audit log records why. */
+/**
+ * A moderator hides a listing: it leaves search, its open reports are resolved, the seller is told, the audit
+ * log records why. Kept as a decision that can be undone for a while (`undoDecision`).
+ */
 export async function hideListing(ctx: ExchangeContext, mod: User, id: number, reason: string) {
   const listing = await Listing.findByPk(id);
   if (!listing) throw notFound('Listing');
   const sequelize = Listing.sequelize;
   if (!sequelize) throw new Error('Models are not initialised');
   const seller = await User.findByPk(listing.sellerId);
-  await sequelize.transaction(async (transaction) => {
-    await listing.update({ hiddenAt: new Date(), hiddenReason: reason }, { transaction });
-    await ListingReport.update(
-      { status: 'resolved' },
-      { where: { listingId: id, status: 'open' }, transaction },
-    );
+  const decision = await sequelize.transaction(async (transaction) => {
+    const rec = new DecisionRecord(transaction);
+    await rec.update('listing', listing, { hiddenAt: new Date(), hiddenReason: reason });
+    const open = await ListingReport.findAll({
+      where: { listingId: id, status: 'open' },
+      transaction,
+    });
+    for (const r of open) await rec.update('listing-report', r, { status: 'resolved' });
     await recordAudit(
       {
         actorId: mod.id,
@@ -63,8 +69,8 @@ export async function hideListing(ctx: ExchangeContext, mod: User, id: number, r
       },
       transaction,
     );
-    if (seller)
-      await enqueueEmail(
+    if (seller) {
+      const email = await enqueueEmail(
         actionEmail({
           to: seller.email,
           kind: 'listing-hidden',
@@ -77,9 +83,19 @@ export async function hideListing(ctx: ExchangeContext, mod: User, id: number, r
         }),
         transaction,
       );
+      rec.told({ userId: seller.id, emailId: email.id });
+    }
+    return rec.save(mod, {
+      area: 'exchange',
+      action: 'listing.hide',
+      subjectType: 'listing',
+      subjectId: id,
+      title: listing.title,
+      path: `/exchange/listings/${id}`,
+    });
   });
   await refreshListing(id);
-  return listing;
+  return { row: listing, decision };
 }
 
 /** A moderator shows a hidden listing again (audited). */
@@ -101,7 +117,7 @@ export async function unhideListing(mod: User, id: number) {
 
 /**
  * A moderator dismisses one open report without hiding the listing; `note` (may be empty) is the audit
- * row's reason. NOT_FOUND for an unknown report, CONFLICT for one already resolved.
+ * row's reason. NOT_FOUND for an unknown report, CONFLICT for one already resolved. Can be undone for a while.
  */
 export async function dismissReport(mod: User, reportId: number, note = '') {
   const report = await ListingReport.findByPk(reportId, {
@@ -109,14 +125,30 @@ export async function dismissReport(mod: User, reportId: number, note = '') {
   });
   if (!report) throw notFound('Report');
   if (report.status !== 'open') throw new AppError('CONFLICT', 'This report is already resolved');
-  await report.update({ status: 'resolved' });
-  await recordAudit({
-    actorId: mod.id,
-    area: 'exchange',
-    action: 'listing-report.dismiss',
-    subjectType: 'listing-report',
-    subjectId: String(reportId),
-    reason: note || null,
-    details: { listingId: report.listingId, title: report.listing?.title ?? '' },
+  const sequelize = ListingReport.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised');
+  return sequelize.transaction(async (transaction) => {
+    const rec = new DecisionRecord(transaction);
+    await rec.update('listing-report', report, { status: 'resolved' });
+    await recordAudit(
+      {
+        actorId: mod.id,
+        area: 'exchange',
+        action: 'listing-report.dismiss',
+        subjectType: 'listing-report',
+        subjectId: String(reportId),
+        reason: note || null,
+        details: { listingId: report.listingId, title: report.listing?.title ?? '' },
+      },
+      transaction,
+    );
+    return rec.save(mod, {
+      area: 'exchange',
+      action: 'listing-report.dismiss',
+      subjectType: 'listing-report',
+      subjectId: reportId,
+      title: report.listing?.title ?? '',
+      path: null,
+    });
   });
 }

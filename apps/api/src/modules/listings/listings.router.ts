@@ -101,8 +101,8 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
   r.post('/reports/:reportId/dismiss', requireRole('moderator'), async (req, res) => {
     const { reportId } = reportParams.parse(req.params);
     const { note } = dismissListingReportSchema.parse(req.body ?? {});
-    await moderation.dismissReport(currentUser(req), Number(reportId), note);
-    res.status(204).end();
+    const decision = await moderation.dismissReport(currentUser(req), Number(reportId), note);
+    res.json({ data: { id: Number(reportId), status: 'resolved', decisionId: decision.id } });
   });
   r.post('/', requireAuth(), async (req, res) => {
     const input = listingInputSchema.parse(req.body);
@@ -185,13 +185,13 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
   });
   r.post('/:listingId/hide', requireRole('moderator'), async (req, res) => {
     const id = idOf(req);
-    await moderation.hideListing(
+    const { decision } = await moderation.hideListing(
       ctx,
       currentUser(req),
       id,
       hideListingSchema.parse(req.body).reason,
     );
-    res.json({ data: await show(req, id) });
+    res.json({ data: { ...(await show(req, id)), decisionId: decision.id } });
   });
   r.post('/:listingId/unhide', requireRole('moderator'), async (req, res) => {
     const id = idOf(req);

@@ -56,7 +56,9 @@ describe('listing reports in the moderators’ queue', () => {
     const res = await mod.c.post(`/api/listings/reports/${id}/dismiss`, {
       note: 'Same chain, photographed on deck',
     });
-    expect(res.status).toBe(204);
+    expect(res.status).toBe(200);
+    expect(res.body.data).toMatchObject({ id, status: 'resolved' });
+    expect(res.body.data.decisionId).toBeGreaterThan(0);
     expect((await mod.c.get('/api/listings/reports')).body.data).toEqual([]);
     expect((await mod.c.get('/api/moderation/count')).body.data.total).toBe(0);
     // The listing stays in the exchange.

@@ -3,6 +3,7 @@ import { User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { notify } from '../posts/notifications.service';
+import type { Told } from './decisions.service';
 
 export interface OutcomeNotice {
   userId: number;
@@ -12,11 +13,18 @@ export interface OutcomeNotice {
   path: string;
 }
 
-/** Tells the author of a moderated post or comment by e-mail (via the outbox) and in the app. */
-export async function tellAuthor(publicUrl: string, n: OutcomeNotice, transaction?: Transaction) {
+/**
+ * Tells the author of a moderated post or comment by e-mail (via the outbox) and in the app; answers the ids
+ * of both, so an undo can withdraw them.
+ */
+export async function tellAuthor(
+  publicUrl: string,
+  n: OutcomeNotice,
+  transaction?: Transaction,
+): Promise<Told | null> {
   const user = await User.findByPk(n.userId, { transaction });
-  if (!user) return;
-  await enqueueEmail(
+  if (!user) return null;
+  const email = await enqueueEmail(
     actionEmail({
       to: user.email,
       kind: 'moderation',
@@ -29,5 +37,6 @@ export async function tellAuthor(publicUrl: string, n: OutcomeNotice, transactio
     }),
     transaction,
   );
-  await notify(user.id, 'moderation', n.subject, n.path, transaction);
+  const notice = await notify(user.id, 'moderation', n.subject, n.path, transaction);
+  return { userId: user.id, notificationId: notice.id, emailId: email.id };
 }

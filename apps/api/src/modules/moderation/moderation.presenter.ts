@@ -1,4 +1,4 @@
-import type { AuditEntryDto, QueueCommentDto, ReportDto } from '@app/shared';
+import { excerptOf, type AuditEntryDto, type QueueCommentDto, type ReportDto } from '@app/shared';
 import type { AuditEvent, Comment, Report, User } from '../../models';
 import { toCommentDto } from '../posts/posts.presenter';
 import { reportTarget } from './reports.service';
@@ -18,7 +18,7 @@ export async function toReportDto(r: Report): Promise<ReportDto> {
     targetId: r.targetId,
     postId: post?.id ?? null,
     targetTitle: post?.title ?? '(deleted)',
-    targetExcerpt: (comment?.body ?? post?.bodyText ?? '').slice(0, 240),
+    targetExcerpt: excerptOf(comment?.body ?? post?.bodyText ?? '', 240),
     reason: r.reason,
     reporter: { id: r.reporterId, displayName: r.reporter?.displayName ?? 'A member' },
     status: r.status,

@@ -3,15 +3,18 @@ import { z } from 'zod';
 import {
   commentDecisionSchema,
   decisionSchema,
+  excerptOf,
   idParam,
   postFlagsSchema,
   reportInputSchema,
   resolveReportSchema,
+  type UndoResultDto,
 } from '@app/shared';
 import { currentUser, requireAuth, requireRole } from '../../middleware/require-auth';
 import { approvedCommentCounts } from '../posts/post-access';
 import { toCommentDto, toPostSummaryDto } from '../posts/posts.presenter';
 import { toAuditEntryDto, toQueueCommentDto, toReportDto } from './moderation.presenter';
+import { undoDecision } from './decisions.service';
 import * as mod from './moderation.service';
 import { createReport, resolveReport } from './reports.service';
 
@@ -21,6 +24,17 @@ const id = (name: string, p: unknown) => Number(idParam(name).parse(p)[name]);
 /** The moderators' desk: queue, decisions, flags, reports and the log. Moderators only. */
 export function moderationRouter(ctx: mod.ModContext) {
   const r = Router();
+  // Undo is also open to admins (who may undo any moderator's decision); the rest is moderators only.
+  r.post('/decisions/:decisionId/undo', requireRole('moderator', 'admin'), async (req, res) => {
+    const d = await undoDecision(ctx, currentUser(req), id('decisionId', req.params));
+    const data: UndoResultDto = {
+      id: d.id,
+      subjectType: d.subjectType,
+      subjectId: d.subjectId,
+      undoneAt: (d.undoneAt ?? new Date()).toISOString(),
+    };
+    res.json({ data });
+  });
   r.use(requireRole('moderator'));
   r.get('/queue', async (_req, res) => {
     const q = await mod.queue();
@@ -31,11 +45,10 @@ export function moderationRouter(ctx: mod.ModContext) {
           const summary = toPostSummaryDto(p, counts.get(p.id) ?? 0);
           if (p.status !== 'approved' || !p.revision) return summary;
           // An edit of a published post: the queue shows the edit, marked as such.
-          const text = p.revision.bodyText.replace(/\s+/g, ' ');
           return {
             ...summary,
             title: p.revision.title,
-            excerpt: text.length > 220 ? `${text.slice(0, 220).trimEnd()}…` : text,
+            excerpt: excerptOf(p.revision.bodyText),
             editOfPublished: true,
           };
         }),
@@ -48,13 +61,13 @@ export function moderationRouter(ctx: mod.ModContext) {
     res.json({ data: await mod.counts() });
   });
   r.post('/posts/:postId/decision', async (req, res) => {
-    const post = await mod.decidePost(
+    const { row, decision } = await mod.decidePost(
       ctx,
       currentUser(req),
       id('postId', req.params),
       decisionSchema.parse(req.body),
     );
-    res.json({ data: { id: post.id, status: post.status } });
+    res.json({ data: { id: row.id, status: row.status, decisionId: decision.id } });
   });
   r.patch('/posts/:postId/flags', async (req, res) => {
     const post = await mod.setFlags(
@@ -73,21 +86,21 @@ export function moderationRouter(ctx: mod.ModContext) {
     });
   });
   r.post('/comments/:commentId/decision', async (req, res) => {
-    const c = await mod.decideComment(
+    const { row, decision } = await mod.decideComment(
       ctx,
       currentUser(req),
       id('commentId', req.params),
       commentDecisionSchema.parse(req.body),
     );
-    res.json({ data: toCommentDto(c, null) });
+    res.json({ data: { ...toCommentDto(row, null), decisionId: decision.id } });
   });
   r.post('/reports/:reportId/resolve', async (req, res) => {
-    const rep = await resolveReport(
+    const { row, decision } = await resolveReport(
       currentUser(req),
       id('reportId', req.params),
       resolveReportSchema.parse(req.body),
     );
-    res.json({ data: { id: rep.id, status: rep.status } });
+    res.json({ data: { id: row.id, status: row.status, decisionId: decision.id } });
   });
   r.get('/log', async (req, res) => {
     const { page } = pageQuery.parse(req.query);

@@ -1,8 +1,9 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { z } from 'zod';
 import type { commentDecisionSchema, decisionSchema, postFlagsSchema } from '@app/shared';
 
 import { AppError, notFound } from '../../errors/app-error';
+import type { ModerationDecision } from '../../models';
 import {
   AuditEvent,
   Comment,
@@ -16,6 +17,7 @@ import { recordAudit } from '../audit/audit.service';
 import { notifyReply, postPath } from '../posts/comments.service';
 import { POST_INCLUDE } from '../posts/post-access';
 import { indexPost } from '../search/post-index';
+import { DecisionRecord } from './decisions.service';
 import { tellAuthor } from './moderation-mail';
 
 type Decision = z.output<typeof decisionSchema>;
@@ -73,6 +75,7 @@ export async function queue() {
 
 /** What moderators do on the exchange (written by the listings module) also belongs in their log. */
 const LISTING_MODERATION_ACTIONS = ['listing.hide', 'listing.unhide', 'listing-report.dismiss'];
+const LISTING_AREA_UNDO = { area: 'exchange', action: 'decision.undo' };
 
 /** How much waits for a moderator (for the navigation badge), listing reports included. */
 export async function counts() {
@@ -95,31 +98,63 @@ export async function counts() {
   };
 }
 
+/** Each decision's stored status, what the author reads, and its audit action. */
 const POST_OUTCOME = {
-  approve: { status: 'approved', subject: 'Your post is published', action: 'post.approve' },
-  reject: { status: 'rejected', subject: 'Your post was not approved', action: 'post.reject' },
-  'request-changes': {
+  publish: {
+    status: 'approved',
+    subject: 'Your post is published',
+    action: 'post.publish',
+    line: 'A moderator published it.',
+  },
+  decline: {
+    status: 'rejected',
+    subject: 'Your post was declined',
+    action: 'post.decline',
+    line: 'A moderator declined it:',
+  },
+  'send-back': {
     status: 'changes-requested',
-    subject: 'Your post needs changes',
-    action: 'post.request-changes',
+    subject: 'Your post came back with a note',
+    action: 'post.send-back',
+    line: 'A moderator sent it back with a note:',
   },
 } as const;
 
+export interface Decided<T> {
+  row: T;
+  decision: ModerationDecision;
+}
+
+const inTransaction = <T>(work: (t: Transaction) => Promise<T>): Promise<T> => {
+  const sequelize = Post.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised');
+  return sequelize.transaction(work);
+};
+
 /**
- * Approves, rejects (with a reason) or sends back a pending post. The author is told by e-mail and in the app;
- * the text is kept either way so the author can revise it. Logged in the audit log.
+ * Publishes, sends back (with a note) or declines (with a reason) a waiting post. The author is told by e-mail
+ * and in the app; the text is kept either way so the author can revise it. Logged in the audit log and kept
+ * as a decision that can be undone for a while (`undoDecision`).
  */
-export async function decidePost(ctx: ModContext, actor: User, postId: number, d: Decision) {
+export async function decidePost(
+  ctx: ModContext,
+  actor: User,
+  postId: number,
+  d: Decision,
+): Promise<Decided<Post>> {
   const post = await Post.findByPk(postId);
   if (!post) throw notFound('Post');
   if (post.status === 'approved' && post.revision && post.revisionStatus === 'pending')
     return decideRevision(ctx, actor, post, post.revision, d);
   if (post.status !== 'pending')
-    throw new AppError('CONFLICT', `This post is ${post.status}, not pending`);
+    throw new AppError('CONFLICT', `This post is ${post.status}, not waiting for a moderator`);
   const o = POST_OUTCOME[d.action];
-  await Post.sequelize?.transaction(async (t) => {
-    await post.update(
-      d.action === 'approve'
+  const decision = await inTransaction(async (t) => {
+    const rec = new DecisionRecord(t);
+    await rec.update(
+      'post',
+      post,
+      d.action === 'publish'
         ? {
             status: o.status,
             approvedText: post.bodyText,
@@ -127,7 +162,6 @@ export async function decidePost(ctx: ModContext, actor: User, postId: number, d
             moderationNote: null,
           }
         : { status: o.status, moderationNote: d.reason },
-      { transaction: t },
     );
     await recordAudit(
       {
@@ -142,34 +176,49 @@ export async function decidePost(ctx: ModContext, actor: User, postId: number, d
       t,
     );
     const lines = [`“${post.title}”`];
-    if (d.action === 'approve') lines.push('A moderator approved it and it is now published.');
-    else
-      lines.push(
-        `A moderator says: ${d.reason}`,
-        'Your text is kept: edit it and submit it again.',
-      );
-    await tellAuthor(
-      ctx.publicUrl,
-      { userId: post.authorId, subject: o.subject, lines, path: postPath(post.id) },
-      t,
+    if (d.action === 'publish') lines.push(o.line);
+    else lines.push(`${o.line} ${d.reason}`, 'Your text is kept: change it and send it again.');
+    rec.told(
+      await tellAuthor(
+        ctx.publicUrl,
+        { userId: post.authorId, subject: o.subject, lines, path: postPath(post.id) },
+        t,
+      ),
     );
+    return rec.save(actor, {
+      area: 'moderation',
+      action: o.action,
+      subjectType: 'post',
+      subjectId: post.id,
+      title: post.title,
+      path: postPath(post.id),
+    });
   });
   await indexPost(post.id);
-  return post;
+  return { row: post, decision };
 }
 
 const REVISION_OUTCOME = {
-  approve: { subject: 'Your edit is published', action: 'post.revision-approve' },
-  reject: { subject: 'Your edit was not approved', action: 'post.revision-reject' },
-  'request-changes': {
-    subject: 'Your edit needs changes',
-    action: 'post.revision-request-changes',
+  publish: {
+    subject: 'Your edit is published',
+    action: 'post.revision-publish',
+    line: 'A moderator published your edit.',
+  },
+  decline: {
+    subject: 'Your edit was declined',
+    action: 'post.revision-decline',
+    line: 'A moderator declined your edit:',
+  },
+  'send-back': {
+    subject: 'Your edit came back with a note',
+    action: 'post.revision-send-back',
+    line: 'A moderator sent your edit back with a note:',
   },
 } as const;
 
 /**
- * Decides an edit of a published post: approval publishes the revision (it becomes the approved version);
- * rejection or a request for changes keeps the published version and the author's revision, with the note.
+ * Decides an edit of a published post: publishing makes the revision the published version; declining or
+ * sending it back keeps the published version and the author's revision, with the note.
  */
 async function decideRevision(
   ctx: ModContext,
@@ -177,11 +226,14 @@ async function decideRevision(
   post: Post,
   revision: PostRevision,
   d: Decision,
-) {
+): Promise<Decided<Post>> {
   const o = REVISION_OUTCOME[d.action];
-  await Post.sequelize?.transaction(async (t) => {
-    await post.update(
-      d.action === 'approve'
+  const decision = await inTransaction(async (t) => {
+    const rec = new DecisionRecord(t);
+    await rec.update(
+      'post',
+      post,
+      d.action === 'publish'
         ? {
             ...revision,
             approvedText: revision.bodyText,
@@ -191,10 +243,9 @@ async function decideRevision(
             moderationNote: null,
           }
         : {
-            revisionStatus: d.action === 'reject' ? 'rejected' : 'changes-requested',
+            revisionStatus: d.action === 'decline' ? 'rejected' : 'changes-requested',
             moderationNote: d.reason,
           },
-      { transaction: t },
     );
     await recordAudit(
       {
@@ -209,58 +260,93 @@ async function decideRevision(
       t,
     );
     const lines = [`“${revision.title}”`];
-    if (d.action === 'approve')
-      lines.push('A moderator approved your edit and it is now published.');
+    if (d.action === 'publish') lines.push(o.line);
     else
       lines.push(
-        `A moderator says: ${d.reason}`,
+        `${o.line} ${d.reason}`,
         'Readers still see the published version. Your edit is kept: change it and send it again.',
       );
-    await tellAuthor(
-      ctx.publicUrl,
-      { userId: post.authorId, subject: o.subject, lines, path: postPath(post.id) },
-      t,
+    rec.told(
+      await tellAuthor(
+        ctx.publicUrl,
+        { userId: post.authorId, subject: o.subject, lines, path: postPath(post.id) },
+        t,
+      ),
     );
+    return rec.save(actor, {
+      area: 'moderation',
+      action: o.action,
+      subjectType: 'post',
+      subjectId: post.id,
+      title: revision.title,
+      path: postPath(post.id),
+    });
   });
   await indexPost(post.id);
-  return post;
+  return { row: post, decision };
 }
 
-/** Approves or rejects a pending comment; the author hears either way, and the thread hears of an approval. */
+/** Publishes or declines a waiting comment; the author hears either way, and the thread hears of a publication. */
 export async function decideComment(
   ctx: ModContext,
   actor: User,
   commentId: number,
   d: CommentDecision,
-) {
+): Promise<Decided<Comment>> {
   const comment = await Comment.findByPk(commentId, { include: [{ model: Post, as: 'post' }] });
   if (!comment) throw notFound('Comment');
   if (comment.status !== 'pending')
-    throw new AppError('CONFLICT', `This comment is ${comment.status}, not pending`);
-  const approve = d.action === 'approve';
-  await comment.update({
-    status: approve ? 'approved' : 'rejected',
-    moderationNote: approve ? null : d.reason,
-  });
-  await audit(
-    actor,
-    approve ? 'comment.approve' : 'comment.reject',
-    'comment',
-    comment.id,
-    d.reason,
-    {
-      postId: comment.postId,
-    },
-  );
-  if (approve) await notifyReply(comment);
-  else
-    await tellAuthor(ctx.publicUrl, {
-      userId: comment.authorId,
-      subject: 'Your comment was not approved',
-      lines: [`A moderator says: ${d.reason}`, `Your comment: ${comment.body.slice(0, 500)}`],
+    throw new AppError(
+      'CONFLICT',
+      `This comment is ${comment.status}, not waiting for a moderator`,
+    );
+  const publish = d.action === 'publish';
+  const action = publish ? 'comment.publish' : 'comment.decline';
+  const decision = await inTransaction(async (t) => {
+    const rec = new DecisionRecord(t);
+    await rec.update('comment', comment, {
+      status: publish ? 'approved' : 'rejected',
+      moderationNote: publish ? null : d.reason,
+    });
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'moderation',
+        action,
+        subjectType: 'comment',
+        subjectId: String(comment.id),
+        reason: d.reason || null,
+        details: { postId: comment.postId },
+      },
+      t,
+    );
+    if (publish) for (const n of await notifyReply(comment, t)) rec.told(n);
+    else
+      rec.told(
+        await tellAuthor(
+          ctx.publicUrl,
+          {
+            userId: comment.authorId,
+            subject: 'Your comment was declined',
+            lines: [
+              `A moderator declined it: ${d.reason}`,
+              `Your comment: ${comment.body.slice(0, 500)}`,
+            ],
+            path: postPath(comment.postId),
+          },
+          t,
+        ),
+      );
+    return rec.save(actor, {
+      area: 'moderation',
+      action,
+      subjectType: 'comment',
+      subjectId: comment.id,
+      title: comment.post?.title ?? '',
       path: postPath(comment.postId),
     });
-  return comment;
+  });
+  return { row: comment, decision };
 }
 
 /** Pins, locks or hides (with a reason) a published post, or undoes it; each change is logged. */
@@ -305,7 +391,11 @@ export async function setFlags(ctx: ModContext, actor: User, postId: number, f: 
 export async function auditLog(page: number) {
   const { rows, count } = await AuditEvent.findAndCountAll({
     where: {
-      [Op.or]: [{ area: 'moderation' }, { action: { [Op.in]: LISTING_MODERATION_ACTIONS } }],
+      [Op.or]: [
+        { area: 'moderation' },
+        { action: { [Op.in]: LISTING_MODERATION_ACTIONS } },
+        LISTING_AREA_UNDO,
+      ],
     },
     include: [{ model: User, as: 'actor', attributes: ['id', 'displayName'] }],
     order: [['id', 'DESC']],

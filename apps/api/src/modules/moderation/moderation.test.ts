@@ -123,7 +123,7 @@ describe('reports', () => {
 
     expect(await actions()).toEqual([
       'post.self-publish',
-      'comment.approve',
+      'comment.publish',
       'report.hide-comment',
     ]);
     const log = (await mod.c.get('/api/moderation/log')).body.data;
@@ -168,7 +168,7 @@ describe('pin, lock, hide and send back', () => {
     });
     expect(back.body.data.status).toBe('changes-requested');
     await member.c.post(`/api/posts/${postId}/submit`);
-    await mod.c.post(`/api/moderation/posts/${postId}/decision`, { action: 'approve' });
+    await mod.c.post(`/api/moderation/posts/${postId}/decision`, { action: 'publish' });
 
     const flags = await mod.c.patch(`/api/moderation/posts/${postId}/flags`, {
       pinned: true,
@@ -187,14 +187,14 @@ describe('pin, lock, hide and send back', () => {
     expect((await member.c.get(`/api/posts/${postId}`)).body.data.status).toBe('hidden');
 
     expect(await actions()).toEqual([
-      'post.request-changes',
-      'post.approve',
+      'post.send-back',
+      'post.publish',
       'post.pin',
       'post.lock',
       'post.hide',
     ]);
     await flushOutbox();
-    expect((await inbox(member.user.email, 'Your post needs changes'))[0]?.text).toContain(
+    expect((await inbox(member.user.email, 'Your post came back with a note'))[0]?.text).toContain(
       'Add a photo',
     );
     expect((await inbox(member.user.email, 'Your post was hidden'))[0]?.text).toContain(

@@ -6,6 +6,7 @@ import { recordAudit } from '../audit/audit.service';
 import { notify } from '../posts/notifications.service';
 import { canSeeComment, loadVisiblePost } from '../posts/post-access';
 import { indexPost } from '../search/post-index';
+import { DecisionRecord } from './decisions.service';
 
 type ReportInput = z.output<typeof reportInputSchema>;
 type Resolve = z.output<typeof resolveReportSchema>;
@@ -54,7 +55,8 @@ export async function createReport(actor: User, input: ReportInput) {
 
 /**
  * Resolves an open report: dismiss it, or hide the post or comment it is about. Every open report on the same
- * thing is closed with it; the reporters are told in the app; the action is logged.
+ * thing is closed with it; the reporters are told in the app; the action is logged and can be undone for a
+ * while (`undoDecision`).
  */
 export async function resolveReport(actor: User, reportId: number, input: Resolve) {
   const report = await Report.findByPk(reportId);
@@ -62,37 +64,64 @@ export async function resolveReport(actor: User, reportId: number, input: Resolv
   if (report.status !== 'open') throw new AppError('CONFLICT', 'This report is already resolved');
   const { post, comment } = await reportTarget(report);
   const hide = input.outcome === 'hide-target';
-  if (hide && comment)
-    await comment.update({ status: 'hidden', moderationNote: input.note || report.reason });
-  else if (hide && post)
-    await post.update({ status: 'hidden', moderationNote: input.note || report.reason });
-  const same = await Report.findAll({
-    where: { targetType: report.targetType, targetId: report.targetId, status: 'open' },
-  });
-  for (const r of same) {
-    await r.update({
-      status: hide ? 'actioned' : 'dismissed',
-      resolution: input.note || null,
-      resolvedById: actor.id,
+  const action = hide ? `report.hide-${report.targetType}` : 'report.dismiss';
+  const sequelize = Report.sequelize;
+  if (!sequelize) throw new Error('Models are not initialised');
+  const decision = await sequelize.transaction(async (t) => {
+    const rec = new DecisionRecord(t);
+    if (hide && comment)
+      await rec.update('comment', comment, {
+        status: 'hidden',
+        moderationNote: input.note || report.reason,
+      });
+    else if (hide && post)
+      await rec.update('post', post, {
+        status: 'hidden',
+        moderationNote: input.note || report.reason,
+      });
+    const same = await Report.findAll({
+      where: { targetType: report.targetType, targetId: report.targetId, status: 'open' },
+      transaction: t,
     });
-    await notify(
-      r.reporterId,
-      'report',
-      hide
-        ? 'Thanks: a moderator acted on your report'
-        : 'A moderator looked at your report and left it as it is',
-      post ? `/knowledge/${post.id}` : null,
+    const path = post ? `/knowledge/${post.id}` : null;
+    for (const r of same) {
+      await rec.update('report', r, {
+        status: hide ? 'actioned' : 'dismissed',
+        resolution: input.note || null,
+        resolvedById: actor.id,
+      });
+      const n = await notify(
+        r.reporterId,
+        'report',
+        hide
+          ? 'Thanks: a moderator acted on your report'
+          : 'A moderator looked at your report and left it as it is',
+        path,
+        t,
+      );
+      rec.told({ userId: r.reporterId, notificationId: n.id });
+    }
+    await recordAudit(
+      {
+        actorId: actor.id,
+        area: 'moderation',
+        action,
+        subjectType: 'report',
+        subjectId: String(report.id),
+        reason: input.note || null,
+        details: { targetType: report.targetType, targetId: report.targetId },
+      },
+      t,
     );
-  }
-  await recordAudit({
-    actorId: actor.id,
-    area: 'moderation',
-    action: hide ? `report.hide-${report.targetType}` : 'report.dismiss',
-    subjectType: 'report',
-    subjectId: String(report.id),
-    reason: input.note || null,
-    details: { targetType: report.targetType, targetId: report.targetId },
+    return rec.save(actor, {
+      area: 'moderation',
+      action,
+      subjectType: 'report',
+      subjectId: report.id,
+      title: post?.title ?? '',
+      path,
+    });
   });
   if (post) await indexPost(post.id);
-  return report.reload();
+  return { row: await report.reload(), decision };
 }

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { excerptOf } from '@app/shared';
 import { renderBody, sanitizePostHtml } from './body-render';
 import { editRatio } from './edit-size';
 import {
@@ -102,5 +103,42 @@ describe('editRatio', () => {
     ['', '', 0],
   ])('%s → %s is %f', (a, b, expected) => {
     expect(editRatio(a, b)).toBeCloseTo(expected, 6);
+  });
+});
+
+describe('excerpts from a rendered body', () => {
+  const heading = (text: string) => ({
+    type: 'heading',
+    attrs: { level: 2 },
+    content: [{ type: 'text', text }],
+  });
+  const list = (...items: string[]) => ({
+    type: 'bulletList',
+    content: items.map((t) => ({ type: 'listItem', content: [para(t)] })),
+  });
+
+  it('keeps a heading, the paragraph under it and list items apart', () => {
+    const { text } = renderBody(
+      doc(
+        heading('What changed'),
+        para('Seven metres of chain came off the locker.'),
+        heading('Kit'),
+        list('Snubber', 'Chain hook'),
+        para('Check the shackle wire before the season.'),
+      ),
+    );
+    expect(excerptOf(text)).toBe(
+      'What changed — Seven metres of chain came off the locker. Kit — Snubber — Chain hook — Check the shackle wire before the season.',
+    );
+  });
+
+  it('keeps two paragraphs as two sentences, and a post summary uses the same excerpt', () => {
+    const { text } = renderBody(doc(para('First line.'), para('Second line')));
+    expect(excerptOf(text)).toBe('First line. Second line');
+    const long = renderBody(doc(heading('Heading'), para('word '.repeat(80)))).text;
+    const out = excerptOf(long);
+    expect(out.startsWith('Heading — word')).toBe(true);
+    expect(out.endsWith('…')).toBe(true);
+    expect(out.length).toBeLessThanOrEqual(221);
   });
 });

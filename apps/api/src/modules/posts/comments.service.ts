@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { UniqueConstraintError } from 'sequelize';
+import { UniqueConstraintError, type Transaction } from 'sequelize';
 import type { CommentDto, commentInputSchema } from '@app/shared';
 import { AppError, invalid, notFound } from '../../errors/app-error';
 import { Comment, Post, User, Vote } from '../../models';
@@ -13,23 +13,29 @@ type CommentInput = z.output<typeof commentInputSchema>;
 export const postPath = (postId: number) => `/knowledge/${postId}`;
 
 /** Tells the post's author (and the parent comment's author) about a newly visible reply. */
-export async function notifyReply(comment: Comment) {
-  const post = await Post.findByPk(comment.postId);
-  if (!post) return;
+export async function notifyReply(
+  comment: Comment,
+  transaction?: Transaction,
+): Promise<Array<{ userId: number; notificationId: number }>> {
+  const post = await Post.findByPk(comment.postId, { transaction });
+  if (!post) return [];
   const told = new Set<number>([comment.authorId]);
+  const sent: Array<{ userId: number; notificationId: number }> = [];
   const tell = async (userId: number, message: string) => {
     if (told.has(userId)) return;
     told.add(userId);
-    await notify(userId, 'reply', message, postPath(post.id));
+    const n = await notify(userId, 'reply', message, postPath(post.id), transaction);
+    sent.push({ userId, notificationId: n.id });
   };
   if (comment.parentId) {
-    const parent = await Comment.findByPk(comment.parentId);
+    const parent = await Comment.findByPk(comment.parentId, { transaction });
     if (parent) await tell(parent.authorId, `New reply to your comment on “${post.title}”`);
   }
   await tell(
     post.authorId,
     `New ${post.kind === 'question' ? 'answer' : 'comment'} on “${post.title}”`,
   );
+  return sent;
 }
 
 /**

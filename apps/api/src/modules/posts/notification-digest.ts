@@ -6,6 +6,7 @@ import type { Logger } from '../../logger';
 import { Notification, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
+import { countOf, pluralWord } from '@app/shared';
 
 export interface DigestContext {
   publicUrl: string;
@@ -60,12 +61,12 @@ function digestEmail(ctx: DigestContext, user: User, unread: Notification[]) {
   return actionEmail({
     to: user.email,
     kind: 'notification-digest',
-    subject: `Rodewise: ${n} unread notice${n === 1 ? '' : 's'}`,
+    subject: `Rodewise: ${countOf(n, 'unread notice', 'unread notices')}`,
     greeting: `Hello ${user.displayName},`,
     lines: [
-      `Here ${n === 1 ? 'is what' : `are the ${n} notices that`} came in since your last digest and ${n === 1 ? 'is' : 'are'} still unread:`,
+      `Here ${pluralWord(n, 'is what', `are the ${countOf(n, 'notice', 'notices')} that`)} came in since your last digest and ${pluralWord(n, 'is', 'are')} still unread:`,
       ...listed.map((x) => `• ${x.message}${x.link ? ` — ${ctx.publicUrl}${x.link}` : ''}`),
-      ...(more > 0 ? [`…and ${more} older notice${more === 1 ? '' : 's'}.`] : []),
+      ...(more > 0 ? [`…and ${countOf(more, 'older notice', 'older notices')}.`] : []),
     ],
     actionLabel: 'Open your notices',
     actionUrl: `${ctx.publicUrl}/notifications`,

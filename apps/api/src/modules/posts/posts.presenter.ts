@@ -1,16 +1,15 @@
-import type { CommentDto, NotificationDto, PostSummaryDto } from '@app/shared';
+import { excerptOf, type CommentDto, type NotificationDto, type PostSummaryDto } from '@app/shared';
 import type { Comment, Notification, Post } from '../../models';
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
 /** A post as it appears in lists. */
 export function toPostSummaryDto(p: Post, commentCount: number): PostSummaryDto {
-  const text = p.bodyText.replace(/\s+/g, ' ');
   return {
     id: p.id,
     kind: p.kind,
     title: p.title,
-    excerpt: text.length > 220 ? `${text.slice(0, 220).trimEnd()}…` : text,
+    excerpt: excerptOf(p.bodyText),
     status: p.status,
     visibility: p.visibility,
     topic: p.topic ? { id: p.topic.id, slug: p.topic.slug, name: p.topic.name } : null,

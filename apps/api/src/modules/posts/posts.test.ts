@@ -66,7 +66,7 @@ describe('posts through moderation', () => {
     const queue = await mod.get('/api/moderation/queue');
     expect(queue.body.data.posts.map((p: { id: number }) => p.id)).toEqual([id]);
     expect((await mod.get('/api/moderation/count')).body.data.pendingPosts).toBe(1);
-    const ok = await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'approve' });
+    const ok = await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'publish' });
     expect(ok.status).toBe(200);
 
     const seen = await visitor.get(`/api/posts/${id}`);
@@ -85,7 +85,7 @@ describe('posts through moderation', () => {
     ).toBe(true);
 
     const audit = await AuditEvent.findAll({ where: { area: 'moderation' } });
-    expect(audit.map((a) => [a.action, a.subjectId])).toEqual([['post.approve', String(id)]]);
+    expect(audit.map((a) => [a.action, a.subjectId])).toEqual([['post.publish', String(id)]]);
     await flushOutbox();
     expect((await inbox(user.email, 'Your post is published')).length).toBe(1);
   });
@@ -94,16 +94,16 @@ describe('posts through moderation', () => {
     const { user, c } = await signedIn();
     const id = await submitted(c, 'My chain story', 'Forty metres of chain and a plow anchor.');
     const mod = (await signedIn(['member', 'moderator'])).c;
-    const noReason = await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'reject' });
+    const noReason = await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'decline' });
     expect(noReason.status).toBe(400);
     expect(noReason.body.error.fields.reason).toMatch(/say why/i);
     const res = await mod.post(`/api/moderation/posts/${id}/decision`, {
-      action: 'reject',
+      action: 'decline',
       reason: 'Please add the chain grade and size.',
     });
     expect(res.body.data.status).toBe('rejected');
     await flushOutbox();
-    const [mail] = await inbox(user.email, 'Your post was not approved');
+    const [mail] = await inbox(user.email, 'Your post was declined');
     expect(mail?.text).toContain('Please add the chain grade and size.');
     expect(mail?.text).toContain(`http://rodewise.test/knowledge/${id}`);
 
@@ -112,7 +112,7 @@ describe('posts through moderation', () => {
     expect(mine.body.data.bodyHtml).toContain('Forty metres of chain');
     expect(mine.body.data.moderationNote).toBe('Please add the chain grade and size.');
     expect((await c.post(`/api/posts/${id}/submit`)).body.data.status).toBe('pending');
-    const log = await AuditEvent.findOne({ where: { action: 'post.reject' } });
+    const log = await AuditEvent.findOne({ where: { action: 'post.decline' } });
     expect(log?.reason).toBe('Please add the chain grade and size.');
   });
 
@@ -130,7 +130,7 @@ describe('posts through moderation', () => {
     const words = 'one two three four five six seven eight nine ten';
     const id = await submitted(c, 'Ten words', words);
     const mod = (await signedIn(['member', 'moderator'])).c;
-    await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'approve' });
+    await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'publish' });
     const small = await c.patch(`/api/posts/${id}`, {
       body: docOf('Ten words', `${words} eleven`),
     });
@@ -191,10 +191,13 @@ describe('post bodies and bad input', () => {
       const got = (await c.get(`/api/posts/${id}`)).body.data;
       expect(got.title).toBe(title.trim()); // stored as plain text; the client renders it as text
       expect(scriptVectors(got.bodyHtml)).toEqual([]);
-      await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'reject', reason: payload });
+      await mod.post(`/api/moderation/posts/${id}/decision`, {
+        action: 'decline',
+        reason: payload,
+      });
     }
     await flushOutbox();
-    const mails = await inbox(user.email, 'not approved');
+    const mails = await inbox(user.email, 'was declined');
     expect(mails.length).toBe(sample.length);
     // the mail template itself uses <div> and inline styles; handlers, script URLs and script tags must not appear
     const inMail = (html: string) =>
@@ -250,7 +253,7 @@ describe('setup block, questions and engagement', () => {
     });
     const id = q.body.data.id as number;
     const mod = await signedIn(['member', 'moderator']);
-    await mod.c.post(`/api/moderation/posts/${id}/decision`, { action: 'approve' });
+    await mod.c.post(`/api/moderation/posts/${id}/decision`, { action: 'publish' });
     expect((await asker.c.get(`/api/posts/${id}`)).body.data.boat.name).toBe('Q boat');
 
     const answerer = await signedIn();
@@ -258,7 +261,7 @@ describe('setup block, questions and engagement', () => {
     const answerId = answer.body.data.id as number;
     expect(answer.body.data.status).toBe('pending');
     expect((await asker.c.get(`/api/posts/${id}`)).body.data.comments).toEqual([]);
-    await mod.c.post(`/api/moderation/comments/${answerId}/decision`, { action: 'approve' });
+    await mod.c.post(`/api/moderation/comments/${answerId}/decision`, { action: 'publish' });
     const reply = await asker.c.post(`/api/posts/${id}/comments`, {
       body: 'Thanks!',
       parentId: answerId,

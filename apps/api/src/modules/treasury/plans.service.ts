@@ -3,6 +3,7 @@ import type { planInputSchema, planPatchSchema } from '@app/shared';
 import { invalid, notFound } from '../../errors/app-error';
 import { MembershipPlan, Payment, type User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
+import { countOf } from '@app/shared';
 
 type PlanInput = z.output<typeof planInputSchema>;
 type PlanPatch = z.output<typeof planPatchSchema>;
@@ -53,7 +54,7 @@ export async function updatePlan(actor: User, planId: number, patch: PlanPatch) 
     const payments = await Payment.count({ where: { planId } });
     if (payments > 0)
       throw invalid({
-        currency: `${payments} payment${payments === 1 ? ' was' : 's were'} made in ${plan.currency} on this plan; retire it and create a new plan for another currency`,
+        currency: `${countOf(payments, 'payment was', 'payments were')} made in ${plan.currency} on this plan; retire it and create a new plan for another currency`,
       });
   }
   const changes: Record<string, { before: unknown; after: unknown }> = {};

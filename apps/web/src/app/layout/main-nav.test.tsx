@@ -86,29 +86,33 @@ describe('moderation badge in the main navigation', () => {
       comments: [],
       reports: [],
     };
+    const session = buildSession(buildUser({ roles: ['member', 'moderator'] }));
     mockApi({
       'GET /api/club': () => ({ body: { data: club } }),
       'GET /api/moderation/count': () => ({ body: { data: count(queue.posts.length) } }),
       'GET /api/moderation/queue': () => ({ body: { data: queue } }),
-      'GET /api/moderation/listing-reports': () => ({ body: { data: [] } }),
+      'GET /api/listings/reports': () => ({ body: { data: [] } }),
+      // Every query refreshes after a decision, the session included.
+      'GET /api/auth/me': () => ({ body: { data: session } }),
       'POST /api/moderation/posts/1/decision': () => {
         queue = { ...queue, posts: queue.posts.filter((p) => p.id !== 1) };
-        return { body: { data: { id: 1, status: 'approved' } } };
+        return { body: { data: { id: 1, status: 'approved', decisionId: 9 } } };
       },
     });
-    renderApp({
-      route: '/moderation',
-      session: buildSession(buildUser({ roles: ['member', 'moderator'] })),
-    });
+    renderApp({ route: '/moderation', session });
     const nav = await mainNav();
     await within(nav).findByRole('link', { name: 'Moderation, 2 waiting' });
     await userEvent
       .setup()
-      .click(await screen.findByRole('button', { name: 'Approve “Bridle legs of equal length”' }));
+      .click(await screen.findByRole('button', { name: 'Publish “Bridle legs of equal length”' }));
     expect(
       await within(nav).findByRole('link', { name: 'Moderation, 1 waiting' }),
     ).toBeInTheDocument();
-    expect(screen.queryByText('Bridle legs of equal length')).not.toBeInTheDocument();
+    // The decided post stays in place, marked published, until the moderator leaves the page.
+    expect(await screen.findByText('Published', { exact: true })).toBeInTheDocument();
+    expect(
+      screen.queryByRole('button', { name: 'Publish “Bridle legs of equal length”' }),
+    ).not.toBeInTheDocument();
   });
 });
 

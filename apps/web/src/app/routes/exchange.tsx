@@ -14,6 +14,7 @@ import { useListingSearch } from '../../features/exchange/api/search-listings';
 import { ListingCard } from '../../features/exchange/components/listing-card';
 import { SaveSearchButton } from '../../features/exchange/components/save-search-button';
 import { SearchFilters } from '../../features/exchange/components/search-filters';
+import { countOf } from '../../lib/plural';
 
 const KEYS = [
   'q',
@@ -107,7 +108,7 @@ export function ExchangeRoute() {
       {user && <SaveSearchButton filters={filters} />}
       <section aria-labelledby="results-heading" className="flex flex-col gap-3">
         <h2 id="results-heading" className="text-xl">
-          {meta ? `${meta.total} ${meta.total === 1 ? 'listing' : 'listings'}` : 'Listings'}
+          {meta ? countOf(meta.total, 'listing', 'listings') : 'Listings'}
         </h2>
         {search.isPending && <Spinner label="Searching…" />}
         {search.isError && (

@@ -18,6 +18,7 @@ import { useBuddies, useSetBuddy } from '../../features/storm/api/manage-watch';
 import { BoardPrintStyles } from '../../features/storm/components/board-print-styles';
 import { BoardTable } from '../../features/storm/components/board-table';
 import { BuddySelect } from '../../features/storm/components/buddy-select';
+import { countOf } from '../../lib/plural';
 
 function BoardScreen({ watchId }: { watchId: number }) {
   const [search, setSearch] = useSearchParams();
@@ -83,7 +84,7 @@ function BoardScreen({ watchId }: { watchId: number }) {
         )}
       </div>
       <p className="text-sm" aria-live="polite">
-        {rows.length} boats:{' '}
+        {countOf(rows.length, 'boat', 'boats')}:{' '}
         {counts.map((c) => `${c.n} ${READINESS_STATUS_LABELS[c.s].toLowerCase()}`).join(', ')}
       </p>
       {!manages && !watch.shareDetails && (

@@ -1,7 +1,8 @@
 import type { ButtonHTMLAttributes, Ref } from 'react';
 import { cn } from '../../lib/cn';
 
-export type ButtonVariant = 'primary' | 'secondary' | 'ghost' | 'danger';
+/** `refuse`: outlined red, for a refusal that sits beside a filled primary action (decline next to publish). */
+export type ButtonVariant = 'primary' | 'secondary' | 'ghost' | 'danger' | 'refuse';
 
 export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   variant?: ButtonVariant;
@@ -17,6 +18,7 @@ const VARIANT_CLASSES: Record<ButtonVariant, string> = {
   secondary: 'bg-sand-50 text-ink-900 border border-sand-500 hover:bg-sand-200',
   ghost: 'bg-transparent text-ink-800 hover:bg-sand-200',
   danger: 'bg-flare-700 text-white hover:bg-flare-800',
+  refuse: 'bg-white text-flare-800 border-2 border-dashed border-flare-700 hover:bg-flare-50',
 };
 
 const SIZE_CLASSES = {

@@ -26,9 +26,9 @@ function Asker({ options }: { options: PromptOptions }) {
 }
 
 const reason: PromptOptions = {
-  title: 'Reject this post',
+  title: 'Decline this post',
   label: 'Reason',
-  confirmLabel: 'Reject',
+  confirmLabel: 'Decline',
 };
 
 describe('usePromptDialog', () => {
@@ -39,7 +39,7 @@ describe('usePromptDialog', () => {
     const field = screen.getByLabelText('Reason');
     expect(field).toHaveFocus();
     await user.type(field, '  Names a real boat.  ');
-    await user.click(screen.getByRole('button', { name: 'Reject' }));
+    await user.click(screen.getByRole('button', { name: 'Decline' }));
     expect(screen.getByTestId('answer')).toHaveTextContent('got: Names a real boat.');
     expect(screen.queryByLabelText('Reason')).not.toBeInTheDocument();
   });
@@ -49,7 +49,7 @@ describe('usePromptDialog', () => {
     render(<Asker options={reason} />);
     await user.click(screen.getByRole('button', { name: 'Ask' }));
     await user.type(screen.getByLabelText('Reason'), 'no');
-    await user.click(screen.getByRole('button', { name: 'Reject' }));
+    await user.click(screen.getByRole('button', { name: 'Decline' }));
     const field = screen.getByLabelText('Reason');
     expect(field).toHaveAttribute('aria-invalid', 'true');
     expect(field).toHaveAccessibleDescription('Reason needs at least 3 characters.');

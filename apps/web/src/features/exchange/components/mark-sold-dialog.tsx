@@ -1,6 +1,7 @@
 import type { ThreadSummaryDto } from '@app/shared';
 import { useState } from 'react';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
+import { countOf } from '../../../lib/plural';
 
 /** The "someone else" choice: sold outside the listing's conversations (another buyer, or outside the club). */
 export const SOLD_ELSEWHERE = 'elsewhere';
@@ -75,7 +76,7 @@ export function MarkSoldDialog({
           ? `${chosen.otherParty.displayName} gets a notice and an e-mail, and your conversation stays open for the hand-over.`
           : 'No member is recorded as the buyer.'}
         {others > 0 &&
-          ` ${others === 1 ? 'The other member who asked is' : `The ${others} other members who asked are`} told it is sold.`}{' '}
+          ` ${others === 1 ? 'The other member who asked is' : `The ${countOf(others, 'other member', 'other members')} who asked are`} told it is sold.`}{' '}
         The listing leaves the search; you can relist it if the sale falls through.
       </p>
       {error && (

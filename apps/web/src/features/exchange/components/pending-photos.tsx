@@ -1,6 +1,7 @@
 import { MAX_LISTING_PHOTOS } from '@app/shared';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { Button } from '../../../components/ui/button';
+import { countOf } from '../../../lib/plural';
 
 const TYPES = ['image/jpeg', 'image/png', 'image/webp'];
 const MAX_BYTES = 8 * 1024 * 1024;
@@ -32,7 +33,7 @@ export function PendingPhotos({ files, onChange, disabled = false }: PendingPhot
     if (big) return setError(`${big.name} is larger than 8 MB.`);
     if (picked.length > room)
       return setError(
-        `You can add ${room} more photo${room === 1 ? '' : 's'} (${MAX_LISTING_PHOTOS} at most).`,
+        `You can add ${countOf(room, 'more photo', 'more photos')} (${MAX_LISTING_PHOTOS} at most).`,
       );
     setError(null);
     onChange([...files, ...picked]);

@@ -8,6 +8,7 @@ import { errorMessage } from '../../../lib/form-errors';
 import { listingKeys } from '../api/keys';
 import { useDeletePhoto, useReorderPhotos } from '../api/manage-photos';
 import { uploadPhotos } from '../api/upload-photos';
+import { countOf } from '../../../lib/plural';
 
 export interface PhotoManagerProps {
   listingId: number;
@@ -30,7 +31,7 @@ export function PhotoManager({ listingId, photos }: PhotoManagerProps) {
     setError(null);
     if (files.length > room) {
       setError(
-        `You can add ${room} more photo${room === 1 ? '' : 's'} (${MAX_LISTING_PHOTOS} at most).`,
+        `You can add ${countOf(room, 'more photo', 'more photos')} (${MAX_LISTING_PHOTOS} at most).`,
       );
       return;
     }

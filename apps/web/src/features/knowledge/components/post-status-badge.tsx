@@ -4,9 +4,9 @@ import { cn } from '../../../lib/cn';
 const LABELS: Record<PostStatus, string> = {
   draft: 'Draft',
   pending: 'Waiting for a moderator',
-  'changes-requested': 'Changes requested',
+  'changes-requested': 'Sent back with a note',
   approved: 'Published',
-  rejected: 'Not approved',
+  rejected: 'Declined',
   hidden: 'Hidden',
 };
 

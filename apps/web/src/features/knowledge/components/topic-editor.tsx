@@ -11,6 +11,7 @@ import {
   useUpdateTopic,
 } from '../api/edit-topics';
 import { TopicFieldsForm } from './topic-fields-form';
+import { countOf } from '../../../lib/plural';
 
 /** Moves the item at `from` by `step` places; the ids of the new order. */
 const moved = (topics: TopicDto[], from: number, step: -1 | 1) => {
@@ -80,7 +81,9 @@ export function TopicEditor({ topics }: { topics: TopicDto[] }) {
                     )}
                   </h3>
                   {t.description && <p className="text-sm text-ink-700">{t.description}</p>}
-                  <p className="text-xs text-ink-600">{t.postCount} published posts</p>
+                  <p className="text-xs text-ink-600">
+                    {countOf(t.postCount, 'published post', 'published posts')}
+                  </p>
                 </div>
               )}
               <div className="flex flex-wrap gap-2">

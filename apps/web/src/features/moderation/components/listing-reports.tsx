@@ -1,8 +1,10 @@
 import { formatDate } from '@app/shared/locale';
 import type { ListingReportDto } from '@app/shared';
+import type { MouseEvent } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '../../../components/ui/button';
-import { useModerate } from '../api/decide';
+import { DecidedLine, DeskAlerts } from './decision-desk';
+import { cardHeight, keptHeight, useDecisionDesk, useKeptInPlace } from './use-decision-desk';
 import { useReasonDialog } from './reason-dialog';
 
 export interface ListingReportsProps {
@@ -10,11 +12,18 @@ export interface ListingReportsProps {
   listingHref: (listingId: number) => string;
 }
 
-/** Open reports on exchange listings: hide the listing (the seller is told why) or dismiss with a note. */
+const keyOf = (r: ListingReportDto) => `listing-report:${r.id}`;
+
+/**
+ * Open reports on exchange listings: hide the listing (the seller is told why) or dismiss with a note. Cards at
+ * every width (the status and buttons wrap inside the card on a phone); a decided card stays with Undo.
+ */
 export function ListingReports({ reports, listingHref }: ListingReportsProps) {
-  const moderate = useModerate();
+  const desk = useDecisionDesk();
+  const shown = useKeptInPlace(reports, keyOf, desk.kept);
   const { askReason, askNote, dialog } = useReasonDialog();
-  const hide = async (r: ListingReportDto) => {
+  const hide = async (r: ListingReportDto, e: MouseEvent) => {
+    const height = cardHeight(e);
     const reason = await askReason({
       title: `Hide “${r.listingTitle}”?`,
       hint: 'The seller reads this. The listing leaves search and every open report on it is closed.',
@@ -22,58 +31,87 @@ export function ListingReports({ reports, listingHref }: ListingReportsProps) {
       isDestructive: true,
     });
     if (reason !== null)
-      moderate.mutate({ kind: 'listing-hide', id: r.listingId, body: { reason } });
+      await desk.decide(
+        keyOf(r),
+        r.listingTitle,
+        'Listing hidden',
+        { kind: 'listing-hide', id: r.listingId, body: { reason } },
+        height,
+      );
   };
-  const dismiss = async (r: ListingReportDto) => {
+  const dismiss = async (r: ListingReportDto, e: MouseEvent) => {
+    const height = cardHeight(e);
     const note = await askNote({
       title: `Dismiss the report on “${r.listingTitle}”?`,
       hint: 'The listing stays up. Only moderators read the note, in the log.',
       confirmLabel: 'Dismiss report',
     });
     if (note !== null)
-      moderate.mutate({ kind: 'listing-report-dismiss', id: r.id, body: { note } });
+      await desk.decide(
+        keyOf(r),
+        r.listingTitle,
+        'Report dismissed',
+        { kind: 'listing-report-dismiss', id: r.id, body: { note } },
+        height,
+      );
   };
   return (
     <section aria-labelledby="q-listings" className="flex flex-col gap-2">
       <h2 id="q-listings" className="text-xl">
         Listings reported ({reports.length})
       </h2>
-      {reports.length === 0 && <p>No open listing reports.</p>}
+      <DeskAlerts desk={desk} />
+      {shown.length === 0 && <p>No open listing reports.</p>}
       <ul className="flex flex-col gap-3">
-        {reports.map((r) => (
-          <li
-            key={r.id}
-            className="flex flex-col gap-2 rounded-md border border-flare-700 bg-sand-50 p-3"
-          >
-            <p className="text-xs text-ink-600">
-              {r.reporterName} reported a listing on {formatDate(r.createdAt)}
-            </p>
-            <Link to={listingHref(r.listingId)} className="text-lg font-bold underline">
-              {r.listingTitle}
-            </Link>
-            <p className="text-sm">
-              <strong>Reason:</strong> {r.reason}
-            </p>
-            <div className="flex flex-wrap gap-2">
-              <Button
-                size="sm"
-                variant="danger"
-                aria-label={`Hide listing “${r.listingTitle}”`}
-                onClick={() => void hide(r)}
+        {shown.map((r) => {
+          const key = keyOf(r);
+          const decided = desk.decidedOf(key);
+          return (
+            <li
+              key={key}
+              style={keptHeight(decided)}
+              className="flex min-w-0 flex-col gap-2 rounded-md border border-flare-700 bg-sand-50 p-3"
+            >
+              <p className="text-xs text-ink-600">
+                {r.reporterName} reported a listing on {formatDate(r.createdAt)}
+              </p>
+              <Link
+                to={listingHref(r.listingId)}
+                className="text-lg font-bold break-words underline"
               >
-                Hide listing
-              </Button>
-              <Button
-                size="sm"
-                variant="secondary"
-                aria-label={`Dismiss the report on “${r.listingTitle}”`}
-                onClick={() => void dismiss(r)}
-              >
-                Dismiss
-              </Button>
-            </div>
-          </li>
-        ))}
+                {r.listingTitle}
+              </Link>
+              <p className="text-sm break-words">
+                <strong>Reason:</strong> {r.reason}
+              </p>
+              {decided ? (
+                <DecidedLine desk={desk} itemKey={key} title={r.listingTitle} />
+              ) : (
+                <div className="flex flex-wrap gap-2">
+                  <Button
+                    size="sm"
+                    variant="secondary"
+                    disabled={desk.isPending(key)}
+                    aria-label={`Dismiss the report on “${r.listingTitle}”`}
+                    onClick={(e) => void dismiss(r, e)}
+                  >
+                    Dismiss
+                  </Button>
+                  <Button
+                    size="sm"
+                    variant="refuse"
+                    className="sm:ml-auto"
+                    isPending={desk.isPending(key)}
+                    aria-label={`Hide listing “${r.listingTitle}”`}
+                    onClick={(e) => void hide(r, e)}
+                  >
+                    Hide listing
+                  </Button>
+                </div>
+              )}
+            </li>
+          );
+        })}
       </ul>
       {dialog}
     </section>

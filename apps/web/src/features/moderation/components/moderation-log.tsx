@@ -1,42 +1,48 @@
 import { formatDateTime } from '@app/shared/locale';
 import type { AuditEntryDto } from '@app/shared';
-import { ScrollRegion } from '../../../components/ui/scroll-region';
 
-const WORDS: Record<string, string> = {
-  'post.approve': 'approved a post',
-  'post.reject': 'rejected a post',
-  'post.request-changes': 'asked for changes to a post',
-  'post.self-publish': 'published their own post',
-  'post.self-edit': 'edited their own published post',
-  'post.pin': 'pinned a post',
-  'post.unpin': 'unpinned a post',
-  'post.lock': 'locked a post',
-  'post.unlock': 'unlocked a post',
-  'post.hide': 'hid a post',
-  'post.unhide': 'unhid a post',
-  'post.accept-answer': 'accepted an answer',
-  'comment.approve': 'approved a comment',
-  'comment.reject': 'rejected a comment',
-  'comment.self-publish': 'published their own comment',
-  'report.dismiss': 'dismissed a report',
-  'report.hide-post': 'hid a reported post',
-  'report.hide-comment': 'hid a reported comment',
-};
+import { actionWords, stringIn } from './moderation-log-words';
 
-const titleOf = (details: unknown) =>
-  typeof details === 'object' &&
-  details !== null &&
-  'title' in details &&
-  typeof details.title === 'string'
-    ? details.title
-    : '';
+function What({ e }: { e: AuditEntryDto }) {
+  const title = stringIn(e.details, 'title');
+  return (
+    <>
+      {actionWords(e)} {title && <em>“{title}”</em>}{' '}
+      <span className="text-ink-600">
+        ({e.subjectType} {e.subjectId})
+      </span>
+    </>
+  );
+}
 
-/** The moderation log: who did what, when and why. */
+/**
+ * The moderation log: who did what, when and why. A table from `md` up; below it one card per entry, so on a
+ * phone what happened and why read without scrolling sideways.
+ */
 export function ModerationLog({ entries }: { entries: AuditEntryDto[] }) {
   if (entries.length === 0) return <p>No moderator actions yet.</p>;
   return (
-    <ScrollRegion label="Moderator actions">
-      <table className="w-full border-collapse text-left text-sm">
+    <>
+      <ul aria-label="Moderator actions" className="flex flex-col gap-2 md:hidden">
+        {entries.map((e) => (
+          <li
+            key={e.id}
+            className="flex min-w-0 flex-col gap-1 rounded-md border border-sand-500 bg-sand-50 p-3 text-sm"
+          >
+            <p className="text-xs text-ink-600">
+              {formatDateTime(e.createdAt)} · {e.actor?.displayName ?? 'system'}
+            </p>
+            <p className="break-words">
+              <What e={e} />
+            </p>
+            <p className="break-words">
+              <strong>Why:</strong> {e.reason ?? '—'}
+            </p>
+          </li>
+        ))}
+      </ul>
+      <table className="hidden w-full border-collapse text-left text-sm md:table">
+        <caption className="sr-only">Moderator actions</caption>
         <thead>
           <tr className="border-b-2 border-ink-800">
             <th scope="col" className="p-2">
@@ -59,17 +65,13 @@ export function ModerationLog({ entries }: { entries: AuditEntryDto[] }) {
               <td className="p-2 whitespace-nowrap">{formatDateTime(e.createdAt)}</td>
               <td className="p-2">{e.actor?.displayName ?? 'system'}</td>
               <td className="p-2">
-                {WORDS[e.action] ?? e.action}{' '}
-                {titleOf(e.details) && <em>“{titleOf(e.details)}”</em>}{' '}
-                <span className="text-ink-600">
-                  ({e.subjectType} {e.subjectId})
-                </span>
+                <What e={e} />
               </td>
-              <td className="p-2">{e.reason ?? '—'}</td>
+              <td className="p-2 break-words">{e.reason ?? '—'}</td>
             </tr>
           ))}
         </tbody>
       </table>
-    </ScrollRegion>
+    </>
   );
 }

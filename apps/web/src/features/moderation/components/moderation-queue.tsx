@@ -1,10 +1,16 @@
-import type { ModerationQueueDto } from '@app/shared';
-import type { ReactNode } from 'react';
+import type {
+  ModerationQueueDto,
+  PostDecision,
+  PostSummaryDto,
+  QueueCommentDto,
+  ReportDto,
+} from '@app/shared';
+import type { MouseEvent, ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { errorMessage } from '../../../lib/form-errors';
-import { useModerate } from '../api/decide';
+import { DecidedLine, DeskAlerts } from './decision-desk';
+import { cardHeight, keptHeight, useDecisionDesk, useKeptInPlace } from './use-decision-desk';
+import { POST_DECISION_WORDS } from './decision-words';
 import { useReasonDialog } from './reason-dialog';
 
 export interface ModerationQueueProps {
@@ -14,183 +20,256 @@ export interface ModerationQueueProps {
   children?: ReactNode;
 }
 
-/** The moderators' queue: pending posts, pending comments and open reports, each with its decisions. */
+const postKey = (p: PostSummaryDto) => `post:${p.id}`;
+const commentKey = (c: QueueCommentDto) => `comment:${c.id}`;
+const reportKey = (r: ReportDto) => `report:${r.id}`;
+
+/**
+ * The moderators' queue: waiting posts, waiting comments and open reports, each with its decisions. A decided
+ * item stays in place, as tall as it was, saying what happened with an Undo, until the moderator leaves.
+ */
 export function ModerationQueue({ queue, postHref, children }: ModerationQueueProps) {
-  const moderate = useModerate();
+  const desk = useDecisionDesk();
   const { askReason, askNote, dialog } = useReasonDialog();
-  const decidePost = async (
-    p: { id: number; title: string },
-    action: 'approve' | 'reject' | 'request-changes',
-  ) => {
-    const reason =
-      action === 'approve'
-        ? ''
-        : await askReason(
-            action === 'reject'
-              ? {
-                  title: `Reject “${p.title}”?`,
-                  hint: 'Why is it not approved? The author reads this and keeps their text.',
-                  confirmLabel: 'Reject post',
-                  isDestructive: true,
-                }
-              : {
-                  title: `Ask for changes to “${p.title}”?`,
-                  hint: 'What should the author change? They read this.',
-                  confirmLabel: 'Send back',
-                },
-          );
-    if (reason !== null) moderate.mutate({ kind: 'post', id: p.id, body: { action, reason } });
+  const posts = useKeptInPlace(queue.posts, postKey, desk.kept);
+  const comments = useKeptInPlace(queue.comments, commentKey, desk.kept);
+  const reports = useKeptInPlace(queue.reports, reportKey, desk.kept);
+
+  const decidePost = async (p: PostSummaryDto, action: PostDecision, e: MouseEvent) => {
+    const words = POST_DECISION_WORDS[action];
+    const height = cardHeight(e);
+    const reason = words.ask ? await askReason(words.ask(p.title)) : '';
+    if (reason === null) return;
+    await desk.decide(
+      postKey(p),
+      p.title,
+      words.done,
+      {
+        kind: 'post',
+        id: p.id,
+        body: { action, reason },
+      },
+      height,
+    );
   };
-  const decideComment = async (id: number, action: 'approve' | 'reject') => {
+  const decideComment = async (
+    c: QueueCommentDto,
+    action: 'publish' | 'decline',
+    e: MouseEvent,
+  ) => {
+    const height = cardHeight(e);
     const reason =
-      action === 'approve'
+      action === 'publish'
         ? ''
         : await askReason({
-            title: 'Reject this comment?',
-            hint: 'Why is it not approved? The author reads this.',
-            confirmLabel: 'Reject comment',
+            title: 'Decline this comment?',
+            hint: 'Why is it not published? The author reads this.',
+            confirmLabel: 'Decline comment',
             isDestructive: true,
           });
-    if (reason !== null) moderate.mutate({ kind: 'comment', id, body: { action, reason } });
+    if (reason === null) return;
+    await desk.decide(
+      commentKey(c),
+      c.postTitle,
+      action === 'publish' ? 'Comment published' : 'Comment declined',
+      { kind: 'comment', id: c.id, body: { action, reason } },
+      height,
+    );
   };
-  const resolve = async (id: number, outcome: 'dismiss' | 'hide-target', what: string) => {
+  const resolve = async (r: ReportDto, outcome: 'dismiss' | 'hide-target', e: MouseEvent) => {
+    const height = cardHeight(e);
+    const what = r.targetType;
     const note = await askNote({
       title: outcome === 'dismiss' ? 'Dismiss this report?' : `Hide the reported ${what}?`,
       hint: 'Only moderators read the note, in the log.',
       confirmLabel: outcome === 'dismiss' ? 'Dismiss report' : `Hide ${what}`,
       isDestructive: outcome === 'hide-target',
     });
-    if (note !== null) moderate.mutate({ kind: 'report', id, body: { outcome, note } });
+    if (note === null) return;
+    await desk.decide(
+      reportKey(r),
+      r.targetTitle,
+      outcome === 'dismiss' ? 'Report dismissed' : `The ${what} is hidden`,
+      { kind: 'report', id: r.id, body: { outcome, note } },
+      height,
+    );
   };
+  const waitingPosts = queue.posts.length;
   return (
     <div className="flex flex-col gap-6">
-      {moderate.isError && (
-        <Alert tone="error">
-          <p>{errorMessage(moderate.error)}</p>
-        </Alert>
-      )}
+      <DeskAlerts desk={desk} />
       <section aria-labelledby="q-posts" className="flex flex-col gap-2">
         <h2 id="q-posts" className="text-xl">
-          Posts waiting ({queue.posts.length})
+          Posts waiting ({waitingPosts})
         </h2>
-        {queue.posts.length === 0 && <p>Nothing waiting.</p>}
+        {posts.length === 0 && <p>Nothing waiting.</p>}
         <ul className="flex flex-col gap-3">
-          {queue.posts.map((p) => (
-            <li
-              key={p.id}
-              className="flex flex-col gap-2 rounded-md border border-sand-500 bg-sand-50 p-3"
-            >
-              <p className="text-xs text-ink-600">
-                {p.kind} · {p.topic?.name} · by {p.author.displayName}
-              </p>
-              <Link to={postHref(p.id)} className="text-lg font-bold underline">
-                {p.title}
-              </Link>
-              <p className="text-sm text-ink-700">{p.excerpt}</p>
-              <div className="flex flex-wrap gap-2">
-                <Button
-                  size="sm"
-                  onClick={() => void decidePost(p, 'approve')}
-                  aria-label={`Approve “${p.title}”`}
-                >
-                  Approve
-                </Button>
-                <Button
-                  size="sm"
-                  variant="secondary"
-                  onClick={() => void decidePost(p, 'request-changes')}
-                >
-                  Request changes
-                </Button>
-                <Button size="sm" variant="danger" onClick={() => void decidePost(p, 'reject')}>
-                  Reject
-                </Button>
-              </div>
-            </li>
-          ))}
+          {posts.map((p) => {
+            const key = postKey(p);
+            const decided = desk.decidedOf(key);
+            return (
+              <li
+                key={key}
+                style={keptHeight(decided)}
+                className="flex flex-col gap-2 rounded-md border border-sand-500 bg-sand-50 p-3"
+              >
+                <p className="text-xs text-ink-600">
+                  {p.kind} · {p.topic?.name} · by {p.author.displayName}
+                  {p.status === 'approved' ? ' · edit of a published post' : ''}
+                </p>
+                <Link to={postHref(p.id)} className="text-lg font-bold underline">
+                  {p.title}
+                </Link>
+                <p className="text-sm text-ink-700">{p.excerpt}</p>
+                {decided ? (
+                  <DecidedLine desk={desk} itemKey={key} title={p.title} />
+                ) : (
+                  <div className="flex flex-wrap gap-2">
+                    <Button
+                      size="sm"
+                      variant="primary"
+                      isPending={desk.isPending(key)}
+                      onClick={(e) => void decidePost(p, 'publish', e)}
+                      aria-label={`Publish “${p.title}”`}
+                    >
+                      {POST_DECISION_WORDS.publish.button}
+                    </Button>
+                    <Button
+                      size="sm"
+                      variant="secondary"
+                      disabled={desk.isPending(key)}
+                      onClick={(e) => void decidePost(p, 'send-back', e)}
+                      aria-label={`Send back “${p.title}”`}
+                    >
+                      {POST_DECISION_WORDS['send-back'].button}
+                    </Button>
+                    <Button
+                      size="sm"
+                      variant="refuse"
+                      className="sm:ml-auto"
+                      disabled={desk.isPending(key)}
+                      onClick={(e) => void decidePost(p, 'decline', e)}
+                      aria-label={`Decline “${p.title}”`}
+                    >
+                      {POST_DECISION_WORDS.decline.button}
+                    </Button>
+                  </div>
+                )}
+              </li>
+            );
+          })}
         </ul>
       </section>
       <section aria-labelledby="q-comments" className="flex flex-col gap-2">
         <h2 id="q-comments" className="text-xl">
           Comments waiting ({queue.comments.length})
         </h2>
-        {queue.comments.length === 0 && <p>Nothing waiting.</p>}
+        {comments.length === 0 && <p>Nothing waiting.</p>}
         <ul className="flex flex-col gap-3">
-          {queue.comments.map((c) => (
-            <li
-              key={c.id}
-              className="flex flex-col gap-2 rounded-md border border-sand-500 bg-sand-50 p-3"
-            >
-              <p className="text-xs text-ink-600">
-                {c.author.displayName} on{' '}
-                <Link to={postHref(c.postId)} className="underline">
-                  {c.postTitle}
-                </Link>
-              </p>
-              <p className="whitespace-pre-line">{c.body}</p>
-              <div className="flex gap-2">
-                <Button size="sm" onClick={() => void decideComment(c.id, 'approve')}>
-                  Approve
-                </Button>
-                <Button
-                  size="sm"
-                  variant="danger"
-                  onClick={() => void decideComment(c.id, 'reject')}
-                >
-                  Reject
-                </Button>
-              </div>
-            </li>
-          ))}
+          {comments.map((c) => {
+            const key = commentKey(c);
+            const decided = desk.decidedOf(key);
+            return (
+              <li
+                key={key}
+                style={keptHeight(decided)}
+                className="flex flex-col gap-2 rounded-md border border-sand-500 bg-sand-50 p-3"
+              >
+                <p className="text-xs text-ink-600">
+                  {c.author.displayName} on{' '}
+                  <Link to={postHref(c.postId)} className="underline">
+                    {c.postTitle}
+                  </Link>
+                </p>
+                <p className="whitespace-pre-line">{c.body}</p>
+                {decided ? (
+                  <DecidedLine desk={desk} itemKey={key} title={c.postTitle} />
+                ) : (
+                  <div className="flex flex-wrap gap-2">
+                    <Button
+                      size="sm"
+                      isPending={desk.isPending(key)}
+                      aria-label={`Publish the comment by ${c.author.displayName}`}
+                      onClick={(e) => void decideComment(c, 'publish', e)}
+                    >
+                      Publish
+                    </Button>
+                    <Button
+                      size="sm"
+                      variant="refuse"
+                      className="sm:ml-auto"
+                      disabled={desk.isPending(key)}
+                      aria-label={`Decline the comment by ${c.author.displayName}`}
+                      onClick={(e) => void decideComment(c, 'decline', e)}
+                    >
+                      Decline…
+                    </Button>
+                  </div>
+                )}
+              </li>
+            );
+          })}
         </ul>
       </section>
       <section aria-labelledby="q-reports" className="flex flex-col gap-2">
         <h2 id="q-reports" className="text-xl">
           Reports ({queue.reports.length})
         </h2>
-        {queue.reports.length === 0 && <p>No open reports.</p>}
+        {reports.length === 0 && <p>No open reports.</p>}
         <ul className="flex flex-col gap-3">
-          {queue.reports.map((r) => (
-            <li
-              key={r.id}
-              className="flex flex-col gap-2 rounded-md border border-flare-700 bg-sand-50 p-3"
-            >
-              <p className="text-xs text-ink-600">
-                {r.reporter.displayName} reported a {r.targetType}
-                {r.postId ? (
-                  <>
-                    {' '}
-                    on{' '}
-                    <Link to={postHref(r.postId)} className="underline">
-                      {r.targetTitle}
-                    </Link>
-                  </>
-                ) : null}
-              </p>
-              <blockquote className="border-l-4 border-sand-500 pl-2 text-sm">
-                {r.targetExcerpt}
-              </blockquote>
-              <p className="text-sm">
-                <strong>Reason:</strong> {r.reason}
-              </p>
-              <div className="flex gap-2">
-                <Button
-                  size="sm"
-                  variant="danger"
-                  onClick={() => void resolve(r.id, 'hide-target', r.targetType)}
-                >
-                  Hide the {r.targetType}
-                </Button>
-                <Button
-                  size="sm"
-                  variant="secondary"
-                  onClick={() => void resolve(r.id, 'dismiss', r.targetType)}
-                >
-                  Dismiss
-                </Button>
-              </div>
-            </li>
-          ))}
+          {reports.map((r) => {
+            const key = reportKey(r);
+            const decided = desk.decidedOf(key);
+            return (
+              <li
+                key={key}
+                style={keptHeight(decided)}
+                className="flex flex-col gap-2 rounded-md border border-flare-700 bg-sand-50 p-3"
+              >
+                <p className="text-xs text-ink-600">
+                  {r.reporter.displayName} reported a {r.targetType}
+                  {r.postId ? (
+                    <>
+                      {' '}
+                      on{' '}
+                      <Link to={postHref(r.postId)} className="underline">
+                        {r.targetTitle}
+                      </Link>
+                    </>
+                  ) : null}
+                </p>
+                <blockquote className="border-l-4 border-sand-500 pl-2 text-sm">
+                  {r.targetExcerpt}
+                </blockquote>
+                <p className="text-sm">
+                  <strong>Reason:</strong> {r.reason}
+                </p>
+                {decided ? (
+                  <DecidedLine desk={desk} itemKey={key} title={r.targetTitle} />
+                ) : (
+                  <div className="flex flex-wrap gap-2">
+                    <Button
+                      size="sm"
+                      variant="secondary"
+                      disabled={desk.isPending(key)}
+                      onClick={(e) => void resolve(r, 'dismiss', e)}
+                    >
+                      Dismiss
+                    </Button>
+                    <Button
+                      size="sm"
+                      variant="refuse"
+                      className="sm:ml-auto"
+                      disabled={desk.isPending(key)}
+                      onClick={(e) => void resolve(r, 'hide-target', e)}
+                    >
+                      Hide the {r.targetType}
+                    </Button>
+                  </div>
+                )}
+              </li>
+            );
+          })}
         </ul>
       </section>
       {children}

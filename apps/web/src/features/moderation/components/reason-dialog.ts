@@ -6,6 +6,8 @@ export interface ReasonQuestion {
   hint: string;
   confirmLabel: string;
   isDestructive?: boolean;
+  /** The field's label; "Reason" unless given (a note sent back to the author is "Note to the author"). */
+  label?: string;
 }
 
 /**
@@ -15,7 +17,7 @@ export interface ReasonQuestion {
 export function useReasonDialog() {
   const { ask, dialog } = usePromptDialog();
   const askReason = (q: ReasonQuestion) =>
-    ask({ ...q, label: 'Reason', minLength: 3, maxLength: 1000 });
+    ask({ ...q, label: q.label ?? 'Reason', minLength: 3, maxLength: 1000 });
   const askNote = (q: ReasonQuestion) =>
     ask({ ...q, label: 'Note for the log (optional)', minLength: 0, maxLength: 1000 });
   return { askReason, askNote, dialog };

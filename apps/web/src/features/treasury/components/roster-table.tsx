@@ -23,6 +23,7 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { readableDate } from '../../../lib/format-date';
+import { countOf } from '../../../lib/plural';
 
 const features = tableFeatures({
   rowSortingFeature,
@@ -225,7 +226,7 @@ export function RosterTable({ rows, selected, onToggle }: RosterTableProps) {
         </table>
       </div>
       <p className="text-sm text-ink-700">
-        {table.getRowModel().rows.length} of {rows.length} members shown
+        {table.getRowModel().rows.length} of {countOf(rows.length, 'member', 'members')} shown
       </p>
     </div>
   );
