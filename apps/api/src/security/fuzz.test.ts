@@ -42,6 +42,7 @@ const NO_BODY = new Set([
   'POST /api/listings/:listingId/unhide',
   'DELETE /api/listings/:listingId/photos/:photoId',
   'DELETE /api/saved-searches/:savedSearchId',
+  'POST /api/moderation/decisions/:decisionId/undo', // the decision is in the path; undo.test.ts
 ]);
 
 /** Real keys of routes whose fields are all optional (an empty object is valid there, so it names none). */
