@@ -17,7 +17,7 @@ import { useModerationCount } from '../../features/moderation/api/get-queue';
 import { useUnreadNotices } from '../../features/notifications/api/get-notices';
 
 const ITEM_CLASSES =
-  'flex min-h-11 items-center rounded-md px-3 font-bold text-sand-100 no-underline hover:bg-ink-800 hover:text-white';
+  'flex min-h-11 items-center rounded-md px-3 md:px-2 xl:px-3 font-bold text-sand-100 no-underline hover:bg-ink-800 hover:text-white';
 
 function MenuIcon({ isOpen }: { isOpen: boolean }) {
   return (
