@@ -183,6 +183,8 @@ export async function waitForMail(
   to: string,
   subject: string,
   timeoutMs = 15000,
+  /** Only a mail whose text holds this (another file's run may have sent the same subject to the same person). */
+  containing?: string,
 ): Promise<MailDto> {
   const end = Date.now() + timeoutMs;
   while (Date.now() < end) {
@@ -190,7 +192,8 @@ export async function waitForMail(
     url.searchParams.set('to', to);
     url.searchParams.set('subject', subject);
     const { data } = (await (await fetch(url)).json()) as { data: MailDto[] };
-    if (data[0]) return data[0];
+    const found = containing ? data.find((m) => m.text.includes(containing)) : data[0];
+    if (found) return found;
     await new Promise((r) => setTimeout(r, 250));
   }
   throw new Error(`no mail "${subject}" for ${to}`);

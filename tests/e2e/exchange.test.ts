@@ -45,7 +45,11 @@ describe('gear exchange in Chromium', () => {
   it('a paid-up seller lists chain with two photos on the new-listing form and publishes it in one step', async () => {
     const page = await newPage(390);
     await signIn(page, SELLER);
-    await page.goto(`${baseUrl()}/exchange/new`);
+    // The seller starts from the home page: their side of the exchange, with the way to list more.
+    await page.goto(`${baseUrl()}/`);
+    const mine = page.getByRole('region', { name: 'Your gear on the exchange' });
+    await mine.getByRole('link', { name: 'List gear you no longer need' }).click();
+    await page.getByRole('heading', { level: 1 }).waitFor();
     await page.getByLabel('Category').selectOption('chain');
     await audit(page, 'new chain listing form');
     await page.getByLabel('Title').fill(TITLE);

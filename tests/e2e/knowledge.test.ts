@@ -141,7 +141,7 @@ describe('shared knowledge in Chromium', () => {
         { timeout: 15000 },
       )
       .toBe(1);
-    const mail = await waitForMail(AUTHOR, 'Your post is published');
+    const mail = await waitForMail(AUTHOR, 'Your post is published', 15000, TITLE);
     expect(mail.text).toContain(TITLE);
     await page.close();
   });

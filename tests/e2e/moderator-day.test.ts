@@ -161,10 +161,18 @@ describe('a moderator’s day from the home page', () => {
       await note.getByRole('button', { name: 'Dismiss report' }).click();
       await section.getByText('Report dismissed', { exact: true }).waitFor({ timeout: 15000 });
       // Status and buttons fit the width: nothing scrolls sideways.
-      const overflow = await page.evaluate(
-        () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
-      );
-      expect(overflow).toBeLessThanOrEqual(0);
+      const { overflow, widest } = await page.evaluate(() => {
+        const edge = document.documentElement.clientWidth;
+        // The outermost element that reaches past the right edge, to say what pushes the page wider.
+        const past = [...document.body.querySelectorAll<HTMLElement>('*')].find(
+          (el) => el.getBoundingClientRect().right > edge + 0.5,
+        );
+        return {
+          overflow: document.documentElement.scrollWidth - edge,
+          widest: past ? `${past.tagName.toLowerCase()}.${past.className}`.slice(0, 160) : '',
+        };
+      });
+      expect(overflow, `sideways scroll at ${width} px from ${widest}`).toBeLessThanOrEqual(0);
       await audit(page, `queue after decisions (${width} px)`);
       await screenshot(page, `moderator-day-decided-${width}`);
 

@@ -3,6 +3,7 @@ import { useBoats } from '../../features/boats/api/get-boats';
 import { DuesCard } from './dues-card';
 import { ListingsCard } from './listings-card';
 import { MyBoatsCard } from './my-boats-card';
+import { MyListingsCard } from './my-listings-card';
 import { NoticesCard } from './notices-card';
 import { ModeratorQueue, TreasurerQueue } from './officer-queues';
 import { PostsCard } from './posts-card';
@@ -41,6 +42,7 @@ export function MemberHome({ user }: { user: UserDto }) {
         {user.roles.includes('member') && <DuesCard />}
         <NoticesCard />
         <FitsMyBoat />
+        <MyListingsCard />
         <PostsCard title="Open questions" show="open-questions" />
       </div>
     </>

@@ -113,6 +113,7 @@ const memberApi = (extra: Record<string, () => { body: unknown }> = {}) =>
     'GET /api/listings': () => ({
       body: { data: [], meta: { page: 1, pageSize: 4, total: 0, tookMs: 1 } },
     }),
+    'GET /api/listings/mine': () => ({ body: { data: [] } }),
     ...extra,
   });
 
@@ -141,11 +142,38 @@ describe('the member home', () => {
     const questions = screen.getByRole('region', { name: 'Open questions' });
     expect(await within(questions).findByText(/1 comment$/)).toBeInTheDocument();
     expect(screen.getByRole('region', { name: 'Gear that fits Petrel' })).toBeInTheDocument();
-    const search = requests.find((r) => r.url.startsWith('/api/listings'));
+    const search = requests.find((r) => r.url.startsWith('/api/listings?'));
     expect(search?.url).toContain('fitsBoat=7');
     expect(search?.url).toContain('harborId=2');
     expect(screen.queryByRole('region', { name: 'Moderation desk' })).not.toBeInTheDocument();
     expect(requests.some((r) => r.url.startsWith('/api/treasury'))).toBe(false);
+  });
+
+  it('shows a seller what they have live and in draft, and the way to list more', async () => {
+    const listing = (id: number, title: string, status: string) => ({ id, title, status });
+    memberApi({
+      'GET /api/listings/mine': () => ({
+        body: {
+          data: [
+            listing(3, 'Spare 8 mm chain, 40 m', 'active'),
+            listing(4, 'Old claw anchor', 'draft'),
+            listing(5, 'Nylon snubber', 'sold'),
+          ],
+        },
+      }),
+    });
+    renderApp({ route: '/', session: buildSession(buildUser({ roles: ['member'] })) });
+    const card = await screen.findByRole('region', { name: 'Your gear on the exchange' });
+    expect(
+      await within(card).findByText('1 listing live, 1 draft not yet published'),
+    ).toBeInTheDocument();
+    expect(within(card).getByRole('link', { name: 'Old claw anchor' })).toHaveAttribute(
+      'href',
+      '/exchange/listings/4/edit',
+    );
+    expect(
+      within(card).getByRole('link', { name: 'List gear you no longer need' }),
+    ).toHaveAttribute('href', '/exchange/new');
   });
 
   it("puts a moderator's and a treasurer's queues on the same page, with counts", async () => {
