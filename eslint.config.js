@@ -1,8 +1,52 @@
 import js from '@eslint/js';
+import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
+import { importX } from 'eslint-plugin-import-x';
 import globals from 'globals';
+import { readdirSync } from 'node:fs';
 import reactHooks from 'eslint-plugin-react-hooks';
 import reactRefresh from 'eslint-plugin-react-refresh';
 import tseslint from 'typescript-eslint';
+
+const WEB = './apps/web/src';
+const FEATURES = readdirSync(new URL('./apps/web/src/features', import.meta.url), {
+  withFileTypes: true,
+})
+  .filter((entry) => entry.isDirectory())
+  .map((entry) => entry.name);
+
+/**
+ * The layering rules of the style guide, as lint errors: shared web code never reaches up into features or the app
+ * shell, a feature never imports another feature (a route combines them; shared bits move down), the web app never
+ * imports the API, packages never import apps, and apps never import the repo's orchestration scripts.
+ * tests/lint-boundaries.test.ts proves each zone fails on a deliberate violation.
+ */
+export const BOUNDARY_ZONES = [
+  ...FEATURES.map((name) => ({
+    target: `${WEB}/features/${name}`,
+    from: `${WEB}/features`,
+    except: [`./${name}`],
+    message:
+      'A feature never imports another feature: combine them in a route, or move the shared bit to components/ or lib/.',
+  })),
+  {
+    target: [`${WEB}/components`, `${WEB}/lib`, `${WEB}/config`],
+    from: [`${WEB}/features`, `${WEB}/app`],
+    message:
+      'Shared web code (components/, lib/, config/) never imports features or the app shell.',
+  },
+  {
+    target: `${WEB}/features`,
+    from: `${WEB}/app`,
+    message: 'Features never import the app shell (routes, layout, home).',
+  },
+  {
+    target: './apps/web',
+    from: './apps/api',
+    message: 'The web app never imports the API: share through @app/shared.',
+  },
+  { target: './packages', from: './apps', message: 'Packages never import apps.' },
+  { target: './apps', from: './scripts', message: 'Apps never import the orchestration scripts.' },
+];
 
 export default tseslint.config(
   {
@@ -43,6 +87,23 @@ export default tseslint.config(
         'error',
         { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
       ],
+    },
+  },
+  {
+    files: ['**/*.{ts,tsx,mts}'],
+    plugins: { 'import-x': importX },
+    settings: {
+      'import-x/extensions': importX.flatConfigs.typescript.settings['import-x/extensions'],
+      'import-x/parsers': importX.flatConfigs.typescript.settings['import-x/parsers'],
+      'import-x/resolver-next': [
+        createTypeScriptImportResolver({
+          project: ['apps/*/tsconfig.json', 'packages/*/tsconfig.json', 'tests/tsconfig.json'],
+        }),
+      ],
+    },
+    rules: {
+      'import-x/no-restricted-paths': ['error', { zones: BOUNDARY_ZONES }],
+      'import-x/no-cycle': ['error', { ignoreExternal: true }],
     },
   },
   {

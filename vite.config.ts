@@ -38,6 +38,8 @@ export default defineConfig({
   root: fileURLToPath(new URL('./apps/web', import.meta.url)),
   publicDir: fileURLToPath(new URL('./apps/web/public', import.meta.url)),
   plugins: [react(), tailwindcss(), precompress()],
+  // `@/…` is apps/web/src (the same mapping as apps/web/tsconfig.json's paths).
+  resolve: { alias: { '@': fileURLToPath(new URL('./apps/web/src', import.meta.url)) } },
   server: {
     port: 5173,
     proxy: {

@@ -37,6 +37,14 @@ export default defineConfig({
       },
       {
         test: {
+          name: 'lint',
+          root: 'tests',
+          include: ['lint/**/*.test.ts'],
+          testTimeout: 120000,
+        },
+      },
+      {
+        test: {
           name: 'drills',
           root: 'tests',
           include: ['drills/**/*.test.ts'],

@@ -68,8 +68,9 @@ try {
     check('format (prettier --check)', 'npx', ['prettier', '--check', '.', '--log-level', 'warn']);
     check('lint (eslint)', 'npx', ['eslint', '.', '--max-warnings=0']);
     check('typecheck (tsc)', 'node', ['scripts/typecheck.mjs']);
+    check('unused files, exports and dependencies (knip)', 'npx', ['knip', '--no-progress']);
   }
-  if (only('unit')) vitest('unit+api', ['calc', 'shared', 'fakes', 'web', 'api']);
+  if (only('unit')) vitest('unit+api', ['calc', 'shared', 'fakes', 'lint', 'web', 'api']);
   if (only('drills')) vitest('fault drills', ['drills']);
   if (only('e2e')) {
     ensureDebianPackages(

@@ -147,6 +147,19 @@ describe('a member sizes, checks, saves and prints a plan', () => {
     );
     await screenshot(page, 'plan-card');
 
+    // Deleting the plan asks first, then returns to the boat, whose saved plans no longer list it.
+    await page.emulateMedia({ media: 'screen' });
+    const planName = (await page.getByRole('heading', { level: 1 }).textContent()) ?? '';
+    await page.getByRole('button', { name: 'Delete this plan' }).click();
+    const dialog = page.getByRole('dialog', { name: `Delete ${planName}?` });
+    await dialog.getByRole('button', { name: 'Delete plan' }).click();
+    await page.waitForURL(/\/boats\/\d+$/, { timeout: 15000 });
+    // The boat had only this plan: the list loads to its empty state, with no link to the deleted plan.
+    await expect
+      .poll(() => page.getByText('No saved plans yet.').count(), { timeout: 15000 })
+      .toBe(1);
+    expect(await page.getByRole('link', { name: planName, exact: true }).count()).toBe(0);
+
     // The calculators start from the saved boat: pick it once at the top and every card follows.
     await page.emulateMedia({ media: 'screen' });
     await page.goto(`${baseUrl()}/calculators`);

@@ -1,10 +1,10 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
-import { AppProvider } from './app/provider';
-import { createAppRouter } from './app/router';
-import { readClubLocaleFromPage } from './lib/club-locale';
-import './styles/index.css';
+import { AppProvider } from '@/app/provider';
+import { createAppRouter } from '@/app/router';
+import { readClubLocaleFromPage } from '@/lib/club-locale';
+import '@/styles/index.css';
 
 readClubLocaleFromPage();
 

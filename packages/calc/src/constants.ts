@@ -20,11 +20,6 @@ export const AIR_DENSITY_KGPM3 = 1.225;
  */
 export const CHAIN_SAFETY_FACTOR = 3;
 /**
- * Default breaking factor below which a plan warns about a part (UFC 4-159-03 Table 3-7's
- * 3.0 for new chain, wire rope and synthetic line, seen).
- */
-export const DEFAULT_DESIGN_FACTOR = CHAIN_SAFETY_FACTOR;
-/**
  * Anchoring factor for nylon rode: its wet minimum breaking strength must be at least 2.25 ×
  * the peak load, so in the design gust it works at no more than about 45 % of its wet strength,
  * inside nylon's elastic range (Rodewise's rule, common practice for anchoring, where a boat

@@ -3,7 +3,6 @@ export { CalcInputError, withFieldPrefix } from './errors';
 export {
   AIR_DENSITY_KGPM3,
   CHAIN_SAFETY_FACTOR,
-  DEFAULT_DESIGN_FACTOR,
   NYLON_ANCHORING_FACTOR,
   SHOCK_NYLON_MIN_M,
   SHOCK_REDUCTION_FACTOR,

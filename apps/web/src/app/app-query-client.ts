@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { authKeys } from '../features/auth/api/keys';
-import { createQueryClient } from '../lib/query-client';
+import { authKeys } from '@/features/auth/api/keys';
+import { createQueryClient } from '@/lib/query-client';
 
 /** A QueryClient whose 401 answers make the session be fetched again (so the header and guards follow). */
 export function createAppQueryClient(): QueryClient {

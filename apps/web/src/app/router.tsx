@@ -1,5 +1,5 @@
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
-import { paths } from '../config/paths';
+import { paths } from '@/config/paths';
 import { AppLayout } from './layout/app-layout';
 import { PageFallback } from './layout/page-fallback';
 import { RouteErrorBoundary } from './routes/route-error';

@@ -1,6 +1,6 @@
-import '../testing/setup';
+import '@/testing/setup';
 import { describe, expect, it } from 'vitest';
-import { errorReply, mockApi } from '../testing/mock-api';
+import { errorReply, mockApi } from '@/testing/mock-api';
 import { ApiError, apiFetch, getCsrfToken, setCsrfToken } from './api-client';
 
 describe('apiFetch', () => {

@@ -1,5 +1,5 @@
 import type { ErrorBody, ErrorCode, SessionDto } from '@app/shared';
-import { env } from '../config/env';
+import { env } from '@/config/env';
 
 /** Codes the server sends, plus two the client raises itself when no usable answer arrived. */
 export type ClientErrorCode = ErrorCode | 'NETWORK_ERROR' | 'BAD_RESPONSE';

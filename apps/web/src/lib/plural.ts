@@ -1,2 +1,2 @@
 // One helper for counted words in screens and mails: English plural rules, the club's number format.
-export { countOf, pluralWord } from '@app/shared/locale';
+export { countOf } from '@app/shared/locale';

@@ -2,11 +2,11 @@ import type { SessionDto } from '@app/shared';
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { createMemoryRouter, RouterProvider, type RouteObject } from 'react-router-dom';
-import { AppProvider } from '../app/provider';
-import { APP_ROUTES } from '../app/router';
-import { authKeys } from '../features/auth/api/keys';
-import { setCsrfToken } from '../lib/api-client';
-import { createQueryClient } from '../lib/query-client';
+import { AppProvider } from '@/app/provider';
+import { APP_ROUTES } from '@/app/router';
+import { authKeys } from '@/features/auth/api/keys';
+import { setCsrfToken } from '@/lib/api-client';
+import { createQueryClient } from '@/lib/query-client';
 
 export interface RenderOptions {
   /** Where the memory router starts. */

@@ -2,7 +2,7 @@
 import '@testing-library/jest-dom/vitest';
 import { cleanup, configure } from '@testing-library/react';
 import { afterEach, vi } from 'vitest';
-import { setCsrfToken } from '../lib/api-client';
+import { setCsrfToken } from '@/lib/api-client';
 
 // findBy… and waitFor wait up to 5 s (default 1 s): on a loaded 2-core machine a lazy screen can take longer to render.
 configure({ asyncUtilTimeout: 5000 });

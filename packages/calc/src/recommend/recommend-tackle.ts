@@ -35,7 +35,6 @@ import {
 } from '../tables/anchor-holding';
 import { CHAIN_GRADES, CHAIN_GRADE_LABELS, CHAIN_ROWS, type ChainGrade } from '../tables/chain-cfr';
 import { inchFractionLabel, tradeSizeMm } from '../units/format';
-import { M_PER_FT } from '../units/units';
 import type { PlanComponents, PlanConnector } from '../plan/plan-input';
 
 /** Pull angle above the seabed at the anchor beyond which Rodewise warns, degrees (about 5°, from memory). */
@@ -427,9 +426,6 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
 export function sizeLabel(sizeIn: number): string {
   return `${inchFractionLabel(sizeIn)} (${tradeSizeMm(sizeIn)} mm)`;
 }
-
-/** LOA in feet, for tests and texts. */
-export const loaFt = (loaM: number) => loaM / M_PER_FT;
 
 /**
  * The recommendation as a plan's components, so a saved plan carries exactly what was shown:

@@ -18,6 +18,3 @@ export const DOUBLE_BRAID_STRAIN_FACTOR = 0.7;
 
 /** Heavy-weather snubber length, 20 ft (cruising-seamanship texts, seen). */
 export const SNUBBER_HEAVY_WEATHER_M = 6.096;
-
-/** Target stretch under load: 4–5 ft, midpoint 4.5 ft (cruising-seamanship texts, seen). */
-export const SNUBBER_TARGET_STRETCH_M = 1.3716;

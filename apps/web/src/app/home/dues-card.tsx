@@ -1,10 +1,10 @@
 import { formatMoney } from '@app/shared';
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { useMyDues } from '../../features/dues/api/get-my-dues';
-import { DuesStatusBadge } from '../../features/dues/components/status-badge';
+import { paths } from '@/config/paths';
+import { useMyDues } from '@/features/dues/api/get-my-dues';
+import { DuesStatusBadge } from '@/features/dues/components/status-badge';
 import { HomeCard, HomeEmpty } from './home-card';
-import { readableDate } from '../../lib/format-date';
+import { readableDate } from '@/lib/format-date';
 
 /** The calendar day after `iso` (YYYY-MM-DD): when a membership paid through `iso` falls due again. */
 function dayAfter(iso: string): string {

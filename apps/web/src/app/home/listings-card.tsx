@@ -1,7 +1,7 @@
 import { formatMoney, type ListingSummaryDto } from '@app/shared';
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { useListingSearch, type ListingFilters } from '../../features/exchange/api/search-listings';
+import { paths } from '@/config/paths';
+import { useListingSearch, type ListingFilters } from '@/features/exchange/api/search-listings';
 import { HomeCard, HomeEmpty } from './home-card';
 
 function ListingLine({ listing, fitsBoat }: { listing: ListingSummaryDto; fitsBoat?: number }) {

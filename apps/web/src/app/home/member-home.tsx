@@ -1,5 +1,5 @@
 import type { UserDto } from '@app/shared';
-import { useBoats } from '../../features/boats/api/get-boats';
+import { useBoats } from '@/features/boats/api/get-boats';
 import { DuesCard } from './dues-card';
 import { ListingsCard } from './listings-card';
 import { MyBoatsCard } from './my-boats-card';

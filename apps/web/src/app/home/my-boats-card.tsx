@@ -1,10 +1,10 @@
 import { chainGradeWords, inchFractionLabel } from '@app/calc';
 import type { BoatDto, TacklePlanDto } from '@app/shared';
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { useBoats } from '../../features/boats/api/get-boats';
-import { usePlans } from '../../features/plans/api/get-plans';
-import { Quantity } from '../../features/units/components/quantity';
+import { paths } from '@/config/paths';
+import { useBoats } from '@/features/boats/api/get-boats';
+import { usePlans } from '@/features/plans/api/get-plans';
+import { Quantity } from '@/components/units/quantity';
 import { HomeCard, HomeEmpty } from './home-card';
 
 const ANCHOR_WORDS: Record<string, string> = { scoop: 'scoop / roll-bar' };

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { useMyListings } from '../../features/exchange/api/get-my-listings';
-import { countOf } from '../../lib/plural';
+import { paths } from '@/config/paths';
+import { useMyListings } from '@/features/exchange/api/get-my-listings';
+import { countOf } from '@/lib/plural';
 import { HomeCard, HomeEmpty } from './home-card';
 
 /** The seller's side of the exchange: what they have live and in draft, and the way to list more. */

@@ -1,9 +1,9 @@
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { useNotices } from '../../features/notifications/api/get-notices';
+import { paths } from '@/config/paths';
+import { useNotices } from '@/features/notifications/api/get-notices';
 import { HomeCard, HomeEmpty } from './home-card';
-import { readableDate } from '../../lib/format-date';
-import { countOf } from '../../lib/plural';
+import { readableDate } from '@/lib/format-date';
+import { countOf } from '@/lib/plural';
 
 /** Unread notices (replies, answers, decisions), newest first. */
 export function NoticesCard() {

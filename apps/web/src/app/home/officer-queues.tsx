@@ -1,10 +1,10 @@
 import { formatMoney } from '@app/shared';
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { useModerationCount } from '../../features/moderation/api/get-queue';
-import { useSummary } from '../../features/treasury/api/get-summary';
+import { paths } from '@/config/paths';
+import { useModerationCount } from '@/features/moderation/api/get-queue';
+import { useSummary } from '@/features/treasury/api/get-summary';
 import { HomeCard, HomeEmpty } from './home-card';
-import { countOf } from '../../lib/plural';
+import { countOf } from '@/lib/plural';
 
 function QueueLine({
   count,

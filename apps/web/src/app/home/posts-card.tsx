@@ -1,8 +1,8 @@
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { usePosts } from '../../features/knowledge/api/get-posts';
+import { paths } from '@/config/paths';
+import { usePosts } from '@/features/knowledge/api/get-posts';
 import { HomeCard, HomeEmpty } from './home-card';
-import { countOf } from '../../lib/plural';
+import { countOf } from '@/lib/plural';
 
 export interface PostsCardProps {
   title: string;

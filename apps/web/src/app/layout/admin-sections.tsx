@@ -1,6 +1,6 @@
 import { NavLink } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { cn } from '../../lib/cn';
+import { paths } from '@/config/paths';
+import { cn } from '@/lib/cn';
 
 const SECTIONS = [
   { to: paths.adminUsers.href(), label: 'Users and roles' },

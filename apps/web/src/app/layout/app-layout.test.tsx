@@ -1,10 +1,10 @@
-import '../../testing/setup';
+import '@/testing/setup';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../testing/builders';
-import { mockApi } from '../../testing/mock-api';
-import { renderApp } from '../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { mockApi } from '@/testing/mock-api';
+import { renderApp } from '@/testing/render';
 
 const club = { name: 'Gullwing Cove Cruising Club', harbors: [] };
 

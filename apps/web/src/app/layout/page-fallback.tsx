@@ -1,4 +1,4 @@
-import { Spinner } from '../../components/ui/spinner';
+import { Spinner } from '@/components/ui/spinner';
 
 /** Shown while the first screen's code loads. */
 export function PageFallback() {

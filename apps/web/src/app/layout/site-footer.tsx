@@ -1,4 +1,4 @@
-import { useClub } from '../../features/club/api/get-club';
+import { useClub } from '@/features/club/api/get-club';
 
 /** Safety line every page carries, plus the club's name. */
 export const SAFETY_LINE =

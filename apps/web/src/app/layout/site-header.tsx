@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
-import { paths } from '../../config/paths';
-import { useClub } from '../../features/club/api/get-club';
+import { paths } from '@/config/paths';
+import { useClub } from '@/features/club/api/get-club';
 import { MainNav } from './main-nav';
 
 /** The ink-blue bar: wordmark, the club's name, the main navigation. */

@@ -1,11 +1,11 @@
 import { formatDate } from '@app/shared/locale';
 import type { UserDto } from '@app/shared';
-import { Page } from '../../components/ui/page';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { AccountProfileForm } from '../../features/auth/components/account-profile-form';
-import { ChangePasswordForm } from '../../features/auth/components/change-password-form';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { DigestSetting } from '../../features/auth/components/digest-setting';
+import { Page } from '@/components/ui/page';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { AccountProfileForm } from '@/features/auth/components/account-profile-form';
+import { ChangePasswordForm } from '@/features/auth/components/change-password-form';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { DigestSetting } from '@/features/auth/components/digest-setting';
 
 function AccountScreen({ user }: { user: UserDto }) {
   return (

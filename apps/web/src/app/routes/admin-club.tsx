@@ -1,8 +1,8 @@
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useClub } from '../../features/club/api/get-club';
-import { ClubLocaleForm } from '../../features/club/components/club-locale-form';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useClub } from '@/features/club/api/get-club';
+import { ClubLocaleForm } from '@/features/club/components/club-locale-form';
 import { AdminSections } from '../layout/admin-sections';
 
 function AdminClubScreen() {

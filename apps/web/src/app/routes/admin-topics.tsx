@@ -1,10 +1,10 @@
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useTopics } from '../../features/knowledge/api/get-topics';
-import { TopicEditor } from '../../features/knowledge/components/topic-editor';
-import { errorMessage } from '../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useTopics } from '@/features/knowledge/api/get-topics';
+import { TopicEditor } from '@/features/knowledge/components/topic-editor';
+import { errorMessage } from '@/lib/form-errors';
 import { AdminSections } from '../layout/admin-sections';
 
 function TopicsScreen() {

@@ -1,10 +1,10 @@
 import type { UserDto } from '@app/shared';
 import { useQueryClient } from '@tanstack/react-query';
-import { Page } from '../../components/ui/page';
-import { UserRolesPanel } from '../../features/admin/components/user-roles-panel';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { updateSessionUser } from '../../features/auth/api/session-cache';
-import { RequireAuth } from '../../features/auth/components/require-auth';
+import { Page } from '@/components/ui/page';
+import { UserRolesPanel } from '@/features/admin/components/user-roles-panel';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { updateSessionUser } from '@/features/auth/api/session-cache';
+import { RequireAuth } from '@/features/auth/components/require-auth';
 import { AdminSections } from '../layout/admin-sections';
 
 function AdminUsersScreen() {

@@ -1,27 +1,27 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Button } from '../../components/ui/button';
-import { ConfirmDialog } from '../../components/ui/confirm-dialog';
-import { Page } from '../../components/ui/page';
-import { UnavailablePage } from '../../components/ui/unavailable-page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useDeleteBoat } from '../../features/boats/api/delete-boat';
-import { useBoat } from '../../features/boats/api/get-boat';
-import { useUpdateBoat } from '../../features/boats/api/update-boat';
-import { BoatForm } from '../../features/boats/components/boat-form';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { Page } from '@/components/ui/page';
+import { UnavailablePage } from '@/components/ui/unavailable-page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useDeleteBoat } from '@/features/boats/api/delete-boat';
+import { useBoat } from '@/features/boats/api/get-boat';
+import { useUpdateBoat } from '@/features/boats/api/update-boat';
+import { BoatForm } from '@/features/boats/components/boat-form';
 import {
   BoatRecommendation,
   type PlanDraft,
-} from '../../features/boats/components/boat-recommendation';
-import { useClub } from '../../features/club/api/get-club';
-import { useCreatePlan } from '../../features/plans/api/create-plan';
-import { usePlans } from '../../features/plans/api/get-plans';
-import { Quantity } from '../../features/units/components/quantity';
-import { UnitToggle } from '../../features/units/components/unit-toggle';
+} from '@/features/boats/components/boat-recommendation';
+import { useClub } from '@/features/club/api/get-club';
+import { useCreatePlan } from '@/features/plans/api/create-plan';
+import { usePlans } from '@/features/plans/api/get-plans';
+import { Quantity } from '@/components/units/quantity';
+import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
 
 function PlanList({ boatId }: { boatId: number }) {

@@ -1,17 +1,17 @@
 import { Link, useNavigate } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useCreateBoat } from '../../features/boats/api/create-boat';
-import { useBoats } from '../../features/boats/api/get-boats';
-import { BoatForm } from '../../features/boats/components/boat-form';
-import { useClub } from '../../features/club/api/get-club';
-import { Quantity } from '../../features/units/components/quantity';
-import { UnitToggle } from '../../features/units/components/unit-toggle';
+import { Alert } from '@/components/ui/alert';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useCreateBoat } from '@/features/boats/api/create-boat';
+import { useBoats } from '@/features/boats/api/get-boats';
+import { BoatForm } from '@/features/boats/components/boat-form';
+import { useClub } from '@/features/club/api/get-club';
+import { Quantity } from '@/components/units/quantity';
+import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
 
 function BoatsScreen() {

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { useUpdateAccount } from '../../features/auth/api/update-account';
-import { UnitSystemProvider } from '../../features/units/components/unit-system-provider';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { useUpdateAccount } from '@/features/auth/api/update-account';
+import { UnitSystemProvider } from '@/components/units/unit-system-provider';
 
 /**
  * The unit choice for the ground-tackle screens: a member's is read from and saved to their account;

@@ -1,16 +1,16 @@
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { AnchorCalculator } from '../../features/calculators/components/anchor-calculator';
-import { DesignLoadCalculator } from '../../features/calculators/components/design-load-calculator';
-import { RatingsCalculator } from '../../features/calculators/components/ratings-calculator';
-import { ScopeCalculator } from '../../features/calculators/components/scope-calculator';
-import { SwingCircleCalculator } from '../../features/calculators/components/swing-circle-calculator';
-import { WeakestLinkBuilder } from '../../features/calculators/components/weakest-link-builder';
-import { UnitToggle } from '../../features/units/components/unit-toggle';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { useBoats } from '../../features/boats/api/get-boats';
-import { ConditionsBlock } from '../../features/calculators/components/conditions-block';
-import { ConditionsProvider } from '../../features/calculators/components/conditions-provider';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { AnchorCalculator } from '@/features/calculators/components/anchor-calculator';
+import { DesignLoadCalculator } from '@/features/calculators/components/design-load-calculator';
+import { RatingsCalculator } from '@/features/calculators/components/ratings-calculator';
+import { ScopeCalculator } from '@/features/calculators/components/scope-calculator';
+import { SwingCircleCalculator } from '@/features/calculators/components/swing-circle-calculator';
+import { WeakestLinkBuilder } from '@/features/calculators/components/weakest-link-builder';
+import { UnitToggle } from '@/components/units/unit-toggle';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { useBoats } from '@/features/boats/api/get-boats';
+import { ConditionsBlock } from '@/features/calculators/components/conditions-block';
+import { ConditionsProvider } from '@/features/calculators/components/conditions-provider';
 import { TackleUnits } from './calculators-units';
 
 /** The signed-in member's boats for the conditions block (none for a visitor). */

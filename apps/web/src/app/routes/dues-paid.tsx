@@ -1,13 +1,13 @@
 import { Link, useSearchParams } from 'react-router-dom';
 import { formatMoney } from '@app/shared';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useCheckoutStatus } from '../../features/dues/api/get-checkout-status';
-import { readableDate } from '../../lib/format-date';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useCheckoutStatus } from '@/features/dues/api/get-checkout-status';
+import { readableDate } from '@/lib/format-date';
 
 function PaidScreen({ sessionId }: { sessionId: string }) {
   const status = useCheckoutStatus(sessionId);

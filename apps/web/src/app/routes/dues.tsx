@@ -1,16 +1,16 @@
 import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useMyDues } from '../../features/dues/api/get-my-dues';
-import { useStartCheckout } from '../../features/dues/api/start-checkout';
-import { PaymentHistory } from '../../features/dues/components/payment-history';
-import { QuoteCard } from '../../features/dues/components/quote-card';
-import { DuesStatusBadge } from '../../features/dues/components/status-badge';
-import { readableDate } from '../../lib/format-date';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useMyDues } from '@/features/dues/api/get-my-dues';
+import { useStartCheckout } from '@/features/dues/api/start-checkout';
+import { PaymentHistory } from '@/features/dues/components/payment-history';
+import { QuoteCard } from '@/features/dues/components/quote-card';
+import { DuesStatusBadge } from '@/features/dues/components/status-badge';
+import { readableDate } from '@/lib/format-date';
 
 function DuesScreen() {
   const dues = useMyDues();

@@ -1,9 +1,9 @@
-import '../../testing/setup';
+import '@/testing/setup';
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../testing/builders';
-import { errorReply, mockApi } from '../../testing/mock-api';
-import { renderApp } from '../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { errorReply, mockApi } from '@/testing/mock-api';
+import { renderApp } from '@/testing/render';
 
 // Someone else's boat, plan or conversation answers 404; the screen still has its one h1 and a way back.
 describe('screens for rows that are not yours', () => {

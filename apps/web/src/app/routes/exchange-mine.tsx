@@ -1,13 +1,13 @@
 import { Link } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useMyListings } from '../../features/exchange/api/get-my-listings';
-import { formatPrice } from '../../features/exchange/utils/format';
+import { Alert } from '@/components/ui/alert';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useMyListings } from '@/features/exchange/api/get-my-listings';
+import { formatPrice } from '@/features/exchange/utils/format';
 
 function MineScreen() {
   const mine = useMyListings();

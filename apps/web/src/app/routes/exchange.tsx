@@ -1,20 +1,20 @@
 import { Link, useSearchParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Button } from '../../components/ui/button';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { ApiError } from '../../lib/api-client';
-import { errorMessage } from '../../lib/form-errors';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { useBoats } from '../../features/boats/api/get-boats';
-import { useClub } from '../../features/club/api/get-club';
-import { useListingSearch } from '../../features/exchange/api/search-listings';
-import { ListingCard } from '../../features/exchange/components/listing-card';
-import { SaveSearchButton } from '../../features/exchange/components/save-search-button';
-import { SearchFilters } from '../../features/exchange/components/search-filters';
-import { countOf } from '../../lib/plural';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { useBoats } from '@/features/boats/api/get-boats';
+import { useClub } from '@/features/club/api/get-club';
+import { useListingSearch } from '@/features/exchange/api/search-listings';
+import { ListingCard } from '@/features/exchange/components/listing-card';
+import { SaveSearchButton } from '@/features/exchange/components/save-search-button';
+import { SearchFilters } from '@/features/exchange/components/search-filters';
+import { countOf } from '@/lib/plural';
 
 const KEYS = [
   'q',

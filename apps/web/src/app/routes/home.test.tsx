@@ -1,4 +1,4 @@
-import '../../testing/setup';
+import '@/testing/setup';
 import type {
   BoatDto,
   ModerationCountDto,
@@ -10,9 +10,9 @@ import type {
 } from '@app/shared';
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../testing/builders';
-import { mockApi } from '../../testing/mock-api';
-import { renderApp } from '../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { mockApi } from '@/testing/mock-api';
+import { renderApp } from '@/testing/render';
 
 const club = { name: 'Gullwing Cove Cruising Club', harbors: [] };
 

@@ -1,8 +1,8 @@
 import { Link } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { paths } from '../../config/paths';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { useClub } from '../../features/club/api/get-club';
+import { Page } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { useClub } from '@/features/club/api/get-club';
 import { ListingsCard } from '../home/listings-card';
 import { MemberHome } from '../home/member-home';
 import { PostsCard } from '../home/posts-card';

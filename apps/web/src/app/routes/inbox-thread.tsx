@@ -1,14 +1,14 @@
 import { Link, useParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { UnavailablePage } from '../../components/ui/unavailable-page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useThread } from '../../features/messages/api/get-thread';
-import { MessageForm } from '../../features/messages/components/message-form';
-import { ThreadView } from '../../features/messages/components/thread-view';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { UnavailablePage } from '@/components/ui/unavailable-page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useThread } from '@/features/messages/api/get-thread';
+import { MessageForm } from '@/features/messages/components/message-form';
+import { ThreadView } from '@/features/messages/components/thread-view';
 
 function ThreadScreen({ id }: { id: number }) {
   const thread = useThread(id);

@@ -1,12 +1,12 @@
-import { Alert } from '../../components/ui/alert';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useThreads } from '../../features/messages/api/get-threads';
-import { ThreadList } from '../../features/messages/components/thread-list';
+import { Alert } from '@/components/ui/alert';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useThreads } from '@/features/messages/api/get-threads';
+import { ThreadList } from '@/features/messages/components/thread-list';
 
 function InboxScreen() {
   const threads = useThreads();

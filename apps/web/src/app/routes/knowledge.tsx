@@ -1,15 +1,15 @@
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { useMyPosts, usePosts } from '../../features/knowledge/api/get-posts';
-import { useTopics } from '../../features/knowledge/api/get-topics';
-import { useSearchPosts } from '../../features/knowledge/api/search-posts';
-import { PostCard } from '../../features/knowledge/components/post-card';
-import { errorMessage } from '../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { useMyPosts, usePosts } from '@/features/knowledge/api/get-posts';
+import { useTopics } from '@/features/knowledge/api/get-topics';
+import { useSearchPosts } from '@/features/knowledge/api/search-posts';
+import { PostCard } from '@/features/knowledge/components/post-card';
+import { errorMessage } from '@/lib/form-errors';
 
 /** The club's knowledge: search, topics, published posts, and the member's own posts. */
 export function KnowledgeRoute() {

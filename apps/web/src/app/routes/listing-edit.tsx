@@ -1,19 +1,19 @@
 import { Link, useLocation, useParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { ApiError } from '../../lib/api-client';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useClub } from '../../features/club/api/get-club';
-import { useListing } from '../../features/exchange/api/get-listing';
-import { useSaveListing } from '../../features/exchange/api/save-listing';
-import { ListingForm } from '../../features/exchange/components/listing-form';
-import { listingFormValues } from '../../features/exchange/utils/listing-form-values';
-import { OwnerActions } from '../../features/exchange/components/owner-actions';
-import { PhotoManager } from '../../features/exchange/components/photo-manager';
-import type { ListingEditorNotice } from '../../features/exchange/utils/editor-notice';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useClub } from '@/features/club/api/get-club';
+import { useListing } from '@/features/exchange/api/get-listing';
+import { useSaveListing } from '@/features/exchange/api/save-listing';
+import { ListingForm } from '@/features/exchange/components/listing-form';
+import { listingFormValues } from '@/features/exchange/utils/listing-form-values';
+import { OwnerActions } from '@/features/exchange/components/owner-actions';
+import { PhotoManager } from '@/features/exchange/components/photo-manager';
+import type { ListingEditorNotice } from '@/features/exchange/utils/editor-notice';
 
 function EditListingScreen({ id }: { id: number }) {
   const listing = useListing(id);

@@ -1,15 +1,15 @@
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { paths } from '../../config/paths';
-import { ApiError } from '../../lib/api-client';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useClub } from '../../features/club/api/get-club';
-import { useCreateListing } from '../../features/exchange/api/create-listing';
-import { ListingForm } from '../../features/exchange/components/listing-form';
-import { PendingPhotos } from '../../features/exchange/components/pending-photos';
-import type { ListingEditorNotice } from '../../features/exchange/utils/editor-notice';
-import { listingFormValues } from '../../features/exchange/utils/listing-form-values';
+import { Page } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useClub } from '@/features/club/api/get-club';
+import { useCreateListing } from '@/features/exchange/api/create-listing';
+import { ListingForm } from '@/features/exchange/components/listing-form';
+import { PendingPhotos } from '@/features/exchange/components/pending-photos';
+import type { ListingEditorNotice } from '@/features/exchange/utils/editor-notice';
+import { listingFormValues } from '@/features/exchange/utils/listing-form-values';
 
 function NewListingScreen() {
   const club = useClub();

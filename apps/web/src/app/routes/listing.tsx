@@ -1,16 +1,16 @@
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { UnavailablePage } from '../../components/ui/unavailable-page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { useListing } from '../../features/exchange/api/get-listing';
-import { ListingDetail } from '../../features/exchange/components/listing-detail';
-import { OwnerActions } from '../../features/exchange/components/owner-actions';
-import { ReportListingForm } from '../../features/exchange/components/report-listing-form';
-import { MessageForm } from '../../features/messages/components/message-form';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { UnavailablePage } from '@/components/ui/unavailable-page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { useListing } from '@/features/exchange/api/get-listing';
+import { ListingDetail } from '@/features/exchange/components/listing-detail';
+import { OwnerActions } from '@/features/exchange/components/owner-actions';
+import { ReportListingForm } from '@/features/exchange/components/report-listing-form';
+import { MessageForm } from '@/features/messages/components/message-form';
 
 /** One listing: details, the seller's controls or the buyer's message box, and a report link. */
 export function ListingRoute() {

@@ -1,12 +1,12 @@
 import { useState } from 'react';
-import { Alert } from '../../components/ui/alert';
-import { Button } from '../../components/ui/button';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useModerationLog } from '../../features/moderation/api/get-queue';
-import { ModerationLog } from '../../features/moderation/components/moderation-log';
-import { errorMessage } from '../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useModerationLog } from '@/features/moderation/api/get-queue';
+import { ModerationLog } from '@/features/moderation/components/moderation-log';
+import { errorMessage } from '@/lib/form-errors';
 
 function LogScreen() {
   const [page, setPage] = useState(1);

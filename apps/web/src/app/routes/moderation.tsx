@@ -1,14 +1,14 @@
 import { Link } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useListingReports } from '../../features/moderation/api/get-listing-reports';
-import { useModerationQueue } from '../../features/moderation/api/get-queue';
-import { ListingReports } from '../../features/moderation/components/listing-reports';
-import { ModerationQueue } from '../../features/moderation/components/moderation-queue';
-import { errorMessage } from '../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useListingReports } from '@/features/moderation/api/get-listing-reports';
+import { useModerationQueue } from '@/features/moderation/api/get-queue';
+import { ListingReports } from '@/features/moderation/components/listing-reports';
+import { ModerationQueue } from '@/features/moderation/components/moderation-queue';
+import { errorMessage } from '@/lib/form-errors';
 
 function QueueScreen() {
   const queue = useModerationQueue();

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { paths } from '../../config/paths';
+import { Page } from '@/components/ui/page';
+import { paths } from '@/config/paths';
 
 /** Any path no route matches. */
 export function NotFoundRoute() {

@@ -1,19 +1,16 @@
 import { Link } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Button } from '../../components/ui/button';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useNotices } from '../../features/notifications/api/get-notices';
-import {
-  useMarkAllNoticesRead,
-  useMarkNoticeRead,
-} from '../../features/notifications/api/mark-read';
-import { NoticeList } from '../../features/notifications/components/notice-list';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useNotices } from '@/features/notifications/api/get-notices';
+import { useMarkAllNoticesRead, useMarkNoticeRead } from '@/features/notifications/api/mark-read';
+import { NoticeList } from '@/features/notifications/components/notice-list';
 
 function NoticesScreen() {
   const notices = useNotices();

@@ -1,21 +1,24 @@
 import type { RatedComponent, TacklePlanResult } from '@app/calc';
-import { Link, useParams } from 'react-router-dom';
-import { Button } from '../../components/ui/button';
-import { Page } from '../../components/ui/page';
-import { UnavailablePage } from '../../components/ui/unavailable-page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { CatenaryDrawing } from '../../features/calculators/components/catenary-drawing';
-import { WeakestLinkTable } from '../../features/calculators/components/weakest-link-table';
-import { RecommendationColumn } from '../../features/boats/components/recommendation-column';
-import { usePlan } from '../../features/plans/api/get-plan';
-import { useUpdatePlan } from '../../features/plans/api/update-plan';
-import { ConnectorEditor } from '../../features/plans/components/connector-editor';
-import { PlanCard } from '../../features/plans/components/plan-card';
-import { PrintStyles } from '../../features/plans/components/print-styles';
-import { UnitToggle } from '../../features/units/components/unit-toggle';
+import { useState } from 'react';
+import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { Page } from '@/components/ui/page';
+import { UnavailablePage } from '@/components/ui/unavailable-page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { CatenaryDrawing } from '@/features/calculators/components/catenary-drawing';
+import { WeakestLinkTable } from '@/features/calculators/components/weakest-link-table';
+import { RecommendationColumn } from '@/features/boats/components/recommendation-column';
+import { useDeletePlan } from '@/features/plans/api/delete-plan';
+import { usePlan } from '@/features/plans/api/get-plan';
+import { useUpdatePlan } from '@/features/plans/api/update-plan';
+import { ConnectorEditor } from '@/features/plans/components/connector-editor';
+import { PlanCard } from '@/features/plans/components/plan-card';
+import { PrintStyles } from '@/features/plans/components/print-styles';
+import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
 
 /** The parts `tacklePlan` checked, in the order it passed them to `weakestLink`. */
@@ -30,6 +33,9 @@ function linkParts(result: TacklePlanResult): RatedComponent[] {
 function PlanScreen({ planId }: { planId: number }) {
   const query = usePlan(planId);
   const update = useUpdatePlan(planId);
+  const remove = useDeletePlan();
+  const navigate = useNavigate();
+  const [confirmDelete, setConfirmDelete] = useState(false);
   if (query.isPending) return <Spinner label="Loading the plan…" />;
   if (query.isError) {
     return (
@@ -118,6 +124,28 @@ function PlanScreen({ planId }: { planId: number }) {
           <p className="text-xs text-ink-600">{result.catenary.basis}</p>
         </section>
       )}
+      <div className="print:hidden">
+        <Button variant="danger" onClick={() => setConfirmDelete(true)}>
+          Delete this plan
+        </Button>
+      </div>
+      <ConfirmDialog
+        isOpen={confirmDelete}
+        title={`Delete ${plan.name}?`}
+        confirmLabel="Delete plan"
+        isDestructive
+        isPending={remove.isPending}
+        onCancel={() => setConfirmDelete(false)}
+        onConfirm={() =>
+          remove.mutate(planId, { onSuccess: () => void navigate(paths.boat.href(boat.id)) })
+        }
+      >
+        <p>
+          The plan and its fittings are removed from {boat.name}; the boat and its other plans stay.
+          This cannot be undone.
+        </p>
+        {remove.isError && <p role="alert">{errorMessage(remove.error)}</p>}
+      </ConfirmDialog>
     </Page>
   );
 }

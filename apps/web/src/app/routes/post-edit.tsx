@@ -1,14 +1,14 @@
 import { useNavigate, useParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { usePost } from '../../features/knowledge/api/get-post';
-import { useMyBoats } from '../../features/knowledge/api/get-my-boats';
-import { useTopics } from '../../features/knowledge/api/get-topics';
-import { PostForm } from '../../features/knowledge/components/post-form';
-import { errorMessage } from '../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { usePost } from '@/features/knowledge/api/get-post';
+import { useMyBoats } from '@/features/knowledge/api/get-my-boats';
+import { useTopics } from '@/features/knowledge/api/get-topics';
+import { PostForm } from '@/features/knowledge/components/post-form';
+import { errorMessage } from '@/lib/form-errors';
 
 function Editor({ postId }: { postId: number | null }) {
   const navigate = useNavigate();

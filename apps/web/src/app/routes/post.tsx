@@ -1,19 +1,19 @@
 import { formatDate } from '@app/shared/locale';
 import { Link, useParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Button } from '../../components/ui/button';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { usePost } from '../../features/knowledge/api/get-post';
-import { useHelpfulVote } from '../../features/knowledge/api/post-actions';
-import { CommentThread, ReportButton } from '../../features/knowledge/components/comment-thread';
-import { POST_BODY_CLASSES } from '../../features/knowledge/components/post-body-classes';
-import { PostStatusBadge } from '../../features/knowledge/components/post-status-badge';
-import { SetupCard } from '../../features/knowledge/components/setup-card';
-import { PostModerationBar } from '../../features/moderation/components/post-moderation-bar';
-import { errorMessage } from '../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { usePost } from '@/features/knowledge/api/get-post';
+import { useHelpfulVote } from '@/features/knowledge/api/post-actions';
+import { CommentThread, ReportButton } from '@/features/knowledge/components/comment-thread';
+import { POST_BODY_CLASSES } from '@/features/knowledge/components/post-body-classes';
+import { PostStatusBadge } from '@/features/knowledge/components/post-status-badge';
+import { SetupCard } from '@/features/knowledge/components/setup-card';
+import { PostModerationBar } from '@/features/moderation/components/post-moderation-bar';
+import { errorMessage } from '@/lib/form-errors';
 
 /** One post: body (sanitized on the server), setup card, votes, comments, and moderator tools. */
 export function PostRoute() {

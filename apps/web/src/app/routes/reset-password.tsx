@@ -1,7 +1,7 @@
 import { useSearchParams } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { ResetPasswordForm } from '../../features/auth/components/reset-password-form';
-import { ResetRequestForm } from '../../features/auth/components/reset-request-form';
+import { Page } from '@/components/ui/page';
+import { ResetPasswordForm } from '@/features/auth/components/reset-password-form';
+import { ResetRequestForm } from '@/features/auth/components/reset-request-form';
 
 /** Without a token: ask for a reset link. With `?token=` (the e-mailed link): choose a new password. */
 export function ResetPasswordRoute() {

@@ -1,8 +1,8 @@
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
 
 function describe(error: unknown): string {
   if (isRouteErrorResponse(error)) return `${error.status} ${error.statusText}`.trim();

@@ -1,8 +1,8 @@
 import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { safeNextPath } from '../../config/paths';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { SignInForm } from '../../features/auth/components/sign-in-form';
+import { Page } from '@/components/ui/page';
+import { safeNextPath } from '@/config/paths';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { SignInForm } from '@/features/auth/components/sign-in-form';
 
 /** Sign-in; afterwards back to `?next=` (a path inside the app) or home. */
 export function SignInRoute() {

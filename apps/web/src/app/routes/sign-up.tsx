@@ -1,5 +1,5 @@
-import { Page } from '../../components/ui/page';
-import { SignUpForm } from '../../features/auth/components/sign-up-form';
+import { Page } from '@/components/ui/page';
+import { SignUpForm } from '@/features/auth/components/sign-up-form';
 
 /** Create an account. */
 export function SignUpRoute() {

@@ -1,11 +1,11 @@
 import { Link, useSearchParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Button } from '../../components/ui/button';
-import { Page } from '../../components/ui/page';
-import { paths } from '../../config/paths';
-import { ApiError } from '../../lib/api-client';
-import { errorMessage } from '../../lib/form-errors';
-import { useStopDigest } from '../../features/auth/api/stop-digest';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { Page } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
+import { useStopDigest } from '@/features/auth/api/stop-digest';
 
 /**
  * The stop link in a digest e-mail lands here (`/notifications/stop-digest?token=…`). It asks before it changes

@@ -1,18 +1,18 @@
 import { STORM_LOCATION_LABELS } from '@app/shared';
 import { Link, useParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { UnavailablePage } from '../../components/ui/unavailable-page';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { usePlans } from '../../features/plans/api/get-plans';
-import { useReadiness, useSaveReadiness } from '../../features/storm/api/readiness';
-import { CheckPanel } from '../../features/storm/components/check-panel';
-import { ReadinessForm } from '../../features/storm/components/readiness-form';
-import { StatusBadge } from '../../features/storm/components/status-badge';
-import { StormCautions } from '../../features/storm/components/storm-cautions';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { UnavailablePage } from '@/components/ui/unavailable-page';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { usePlans } from '@/features/plans/api/get-plans';
+import { useReadiness, useSaveReadiness } from '@/features/storm/api/readiness';
+import { CheckPanel } from '@/features/storm/components/check-panel';
+import { ReadinessForm } from '@/features/storm/components/readiness-form';
+import { StatusBadge } from '@/features/storm/components/status-badge';
+import { StormCautions } from '@/features/storm/components/storm-cautions';
 import { TackleUnits } from './calculators-units';
 
 function OwnerForm({ watchId, boatId }: { watchId: number; boatId: number }) {

@@ -1,12 +1,12 @@
 import { Link } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useChecklist, useSaveChecklist } from '../../features/storm/api/manage-watch';
-import { ChecklistEditor } from '../../features/storm/components/checklist-editor';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useChecklist, useSaveChecklist } from '@/features/storm/api/manage-watch';
+import { ChecklistEditor } from '@/features/storm/components/checklist-editor';
 
 function ChecklistScreen() {
   const checklist = useChecklist();

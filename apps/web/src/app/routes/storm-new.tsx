@@ -1,10 +1,10 @@
 import { Link, useNavigate } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { paths } from '../../config/paths';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useClub } from '../../features/club/api/get-club';
-import { useOpenWatch } from '../../features/storm/api/manage-watch';
-import { WatchForm } from '../../features/storm/components/watch-form';
+import { Page } from '@/components/ui/page';
+import { paths } from '@/config/paths';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useClub } from '@/features/club/api/get-club';
+import { useOpenWatch } from '@/features/storm/api/manage-watch';
+import { WatchForm } from '@/features/storm/components/watch-form';
 
 function StormNewScreen() {
   const club = useClub();

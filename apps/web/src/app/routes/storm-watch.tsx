@@ -1,22 +1,22 @@
 import { formatDateTime } from '@app/shared/locale';
 import type { ReadinessDto, StormWatchDto } from '@app/shared';
 import { Link, useParams } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { UnavailablePage } from '../../components/ui/unavailable-page';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useClub } from '../../features/club/api/get-club';
-import { useWatch } from '../../features/storm/api/get-watch';
-import { useCloseWatch } from '../../features/storm/api/manage-watch';
-import { CloseForm } from '../../features/storm/components/close-form';
-import { MarginBadge } from '../../features/storm/components/margin-badge';
-import { StatusBadge } from '../../features/storm/components/status-badge';
-import { StormCautions } from '../../features/storm/components/storm-cautions';
+import { Alert } from '@/components/ui/alert';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { UnavailablePage } from '@/components/ui/unavailable-page';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useClub } from '@/features/club/api/get-club';
+import { useWatch } from '@/features/storm/api/get-watch';
+import { useCloseWatch } from '@/features/storm/api/manage-watch';
+import { CloseForm } from '@/features/storm/components/close-form';
+import { MarginBadge } from '@/features/storm/components/margin-badge';
+import { StatusBadge } from '@/features/storm/components/status-badge';
+import { StormCautions } from '@/features/storm/components/storm-cautions';
 
 const when = (iso: string) => formatDateTime(iso);
 

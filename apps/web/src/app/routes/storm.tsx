@@ -1,15 +1,15 @@
 import { formatDateTime } from '@app/shared/locale';
 import type { StormWatchDto } from '@app/shared';
 import { Link } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { EmptyState } from '../../components/ui/empty-state';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { useCurrentUser } from '../../features/auth/api/get-session';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useWatches } from '../../features/storm/api/get-watches';
+import { Alert } from '@/components/ui/alert';
+import { EmptyState } from '@/components/ui/empty-state';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { useCurrentUser } from '@/features/auth/api/get-session';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useWatches } from '@/features/storm/api/get-watches';
 
 const day = (iso: string) => formatDateTime(iso);
 

@@ -1,14 +1,14 @@
 import { Link } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useDuesCalendar, useSaveCalendar } from '../../features/treasury/api/dues-calendar';
-import { usePlans } from '../../features/treasury/api/get-plans';
-import { CalendarForm } from '../../features/treasury/components/calendar-form';
-import { PlanList } from '../../features/treasury/components/plan-list';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useDuesCalendar, useSaveCalendar } from '@/features/treasury/api/dues-calendar';
+import { usePlans } from '@/features/treasury/api/get-plans';
+import { CalendarForm } from '@/features/treasury/components/calendar-form';
+import { PlanList } from '@/features/treasury/components/plan-list';
 
 function PlansScreen() {
   const plans = usePlans();

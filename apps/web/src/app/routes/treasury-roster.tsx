@@ -1,14 +1,14 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { useRoster } from '../../features/treasury/api/get-roster';
-import { RemindersPanel } from '../../features/treasury/components/reminders-panel';
-import { RosterTable } from '../../features/treasury/components/roster-table';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { useRoster } from '@/features/treasury/api/get-roster';
+import { RemindersPanel } from '@/features/treasury/components/reminders-panel';
+import { RosterTable } from '@/features/treasury/components/roster-table';
 
 function RosterScreen() {
   const roster = useRoster();

@@ -1,20 +1,20 @@
 import { Link } from 'react-router-dom';
-import { Alert } from '../../components/ui/alert';
-import { Page } from '../../components/ui/page';
-import { Spinner } from '../../components/ui/spinner';
-import { paths } from '../../config/paths';
-import { apiUrl } from '../../lib/api-client';
-import { errorMessage } from '../../lib/form-errors';
-import { RequireAuth } from '../../features/auth/components/require-auth';
-import { usePayments } from '../../features/treasury/api/get-payments';
-import { usePlans } from '../../features/treasury/api/get-plans';
-import { useRoster } from '../../features/treasury/api/get-roster';
-import { useSummary } from '../../features/treasury/api/get-summary';
-import { useRecordPayment } from '../../features/treasury/api/record-payment';
-import { OfflinePaymentForm } from '../../features/treasury/components/offline-payment-form';
-import { PaymentsTable } from '../../features/treasury/components/payments-table';
-import { SummaryChart } from '../../features/treasury/components/summary-chart';
-import { SummaryTiles } from '../../features/treasury/components/summary-tiles';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { apiUrl } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
+import { RequireAuth } from '@/features/auth/components/require-auth';
+import { usePayments } from '@/features/treasury/api/get-payments';
+import { usePlans } from '@/features/treasury/api/get-plans';
+import { useRoster } from '@/features/treasury/api/get-roster';
+import { useSummary } from '@/features/treasury/api/get-summary';
+import { useRecordPayment } from '@/features/treasury/api/record-payment';
+import { OfflinePaymentForm } from '@/features/treasury/components/offline-payment-form';
+import { PaymentsTable } from '@/features/treasury/components/payments-table';
+import { SummaryChart } from '@/features/treasury/components/summary-chart';
+import { SummaryTiles } from '@/features/treasury/components/summary-tiles';
 
 function TreasuryScreen() {
   const summary = useSummary();

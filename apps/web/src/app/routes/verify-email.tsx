@@ -1,6 +1,6 @@
 import { useSearchParams } from 'react-router-dom';
-import { Page } from '../../components/ui/page';
-import { VerifyEmailStatus } from '../../features/auth/components/verify-email-status';
+import { Page } from '@/components/ui/page';
+import { VerifyEmailStatus } from '@/features/auth/components/verify-email-status';
 
 /** The e-mailed confirmation link lands here (`/verify-email?token=…`). */
 export function VerifyEmailRoute() {

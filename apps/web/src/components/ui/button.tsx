@@ -1,5 +1,5 @@
 import type { ButtonHTMLAttributes, Ref } from 'react';
-import { cn } from '../../lib/cn';
+import { cn } from '@/lib/cn';
 
 /** `refuse`: outlined red, for a refusal that sits beside a filled primary action (decline next to publish). */
 export type ButtonVariant = 'primary' | 'secondary' | 'ghost' | 'danger' | 'refuse';

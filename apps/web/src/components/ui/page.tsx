@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { cn } from '../../lib/cn';
+import { cn } from '@/lib/cn';
 
 export interface PageProps {
   /** The h1 and the start of the document title. */

@@ -1,4 +1,4 @@
-import '../../testing/setup';
+import '@/testing/setup';
 import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { useState } from 'react';

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { cn } from '../../lib/cn';
+import { cn } from '@/lib/cn';
 
 export interface ScrollRegionProps {
   /** Names the region for screen readers, e.g. the table's caption. */

@@ -1,5 +1,5 @@
 import { useId, type SelectHTMLAttributes } from 'react';
-import { cn } from '../../lib/cn';
+import { cn } from '@/lib/cn';
 
 export interface SelectOption {
   value: string;

@@ -1,4 +1,4 @@
-import { cn } from '../../lib/cn';
+import { cn } from '@/lib/cn';
 
 export interface SpinnerProps {
   /** Read out to screen readers; also shown next to the spinner unless `hideLabel`. */

@@ -1,6 +1,6 @@
 import type { UserDto } from '@app/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { adminUserKeys } from './keys';
 
 /** GET /api/admin/users?q= (admins only). */

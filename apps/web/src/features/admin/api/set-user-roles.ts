@@ -1,6 +1,6 @@
 import type { Role, UserDto } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { adminUserKeys } from './keys';
 
 export interface SetUserRolesVariables {

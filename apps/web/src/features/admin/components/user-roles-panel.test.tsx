@@ -1,11 +1,11 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { Role, UserDto } from '@app/shared';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { errorReply, mockApi, type MockRequest } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { errorReply, mockApi, type MockRequest } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { UserRolesPanel } from './user-roles-panel';
 
 const admin = buildUser({ id: 1, displayName: 'Ada Admin', roles: ['member', 'admin'] });

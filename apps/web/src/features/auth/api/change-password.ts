@@ -1,6 +1,6 @@
 import type { ChangePasswordInput } from '@app/shared';
 import { useMutation } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 
 /** POST /api/account/password. */
 export const changePassword = (input: ChangePasswordInput) =>

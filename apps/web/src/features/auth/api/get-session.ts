@@ -1,6 +1,6 @@
 import type { SessionDto, UserDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch, setCsrfToken } from '../../../lib/api-client';
+import { apiFetch, setCsrfToken } from '@/lib/api-client';
 import { authKeys } from './keys';
 
 /** GET /api/auth/me; remembers the CSRF token it carries. */

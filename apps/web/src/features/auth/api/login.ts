@@ -1,6 +1,6 @@
 import type { LoginInput, SessionDto } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { replaceSession } from './session-cache';
 
 /** POST /api/auth/login. */

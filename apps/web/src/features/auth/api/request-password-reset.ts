@@ -1,6 +1,6 @@
 import type { ResetRequestInput } from '@app/shared';
 import { useMutation } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 
 /** POST /api/auth/password-reset; answers 202 whether or not the address is known. */
 export const requestPasswordReset = (input: ResetRequestInput) =>

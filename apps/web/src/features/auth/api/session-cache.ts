@@ -1,6 +1,6 @@
 import type { SessionDto, UserDto } from '@app/shared';
 import type { QueryClient } from '@tanstack/react-query';
-import { setCsrfToken } from '../../../lib/api-client';
+import { setCsrfToken } from '@/lib/api-client';
 import { authKeys } from './keys';
 
 /**

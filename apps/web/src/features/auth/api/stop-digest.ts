@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { authKeys } from './keys';
 
 /** POST /api/account/digest/stop with the signed token from a digest e-mail (works signed out). */

@@ -1,6 +1,6 @@
 import type { UpdateAccountInput, UserDto } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { updateSessionUser } from './session-cache';
 
 /** PATCH /api/account. */

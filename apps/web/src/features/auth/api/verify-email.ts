@@ -1,6 +1,6 @@
 import type { TokenInput, UserDto } from '@app/shared';
 import { useMutation } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 
 /** POST /api/auth/verify-email with the token from the e-mailed link. */
 export const verifyEmail = (input: TokenInput) =>

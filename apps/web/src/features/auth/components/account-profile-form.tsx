@@ -2,11 +2,11 @@ import { updateAccountSchema, type UserDto } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useId } from 'react';
 import { useForm } from 'react-hook-form';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateAccount } from '../api/update-account';
 
 export interface AccountProfileFormProps {

@@ -2,11 +2,11 @@ import { changePasswordSchema } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
 import { useChangePassword } from '../api/change-password';
 
 const changePasswordFormSchema = changePasswordSchema

@@ -1,10 +1,10 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import { fireEvent, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { errorReply, mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { errorReply, mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { DigestSetting } from './digest-setting';
 
 describe('DigestSetting', () => {

@@ -1,7 +1,7 @@
 import type { UserDto } from '@app/shared';
 import { useId, useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { errorMessage } from '@/lib/form-errors';
 import { useUpdateAccount } from '../api/update-account';
 
 /**

@@ -1,11 +1,11 @@
 import { resetRequestSchema } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
 
 export interface EmailRequestFormProps {
   /** Sends the request; resolves when the server accepted it. */

@@ -1,11 +1,11 @@
 import type { Role } from '@app/shared';
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
-import { Alert } from '../../../components/ui/alert';
-import { Page } from '../../../components/ui/page';
-import { Spinner } from '../../../components/ui/spinner';
-import { paths } from '../../../config/paths';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Page } from '@/components/ui/page';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { errorMessage } from '@/lib/form-errors';
 import { useSession } from '../api/get-session';
 
 export interface RequireAuthProps {

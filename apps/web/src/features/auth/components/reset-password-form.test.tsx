@@ -1,10 +1,10 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { buildSession } from '../../../testing/builders';
-import { errorReply, mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession } from '@/testing/builders';
+import { errorReply, mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { ResetPasswordForm } from './reset-password-form';
 
 const TOKEN = 'b'.repeat(40);

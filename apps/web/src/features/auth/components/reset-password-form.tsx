@@ -3,13 +3,13 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { z } from 'zod';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { paths } from '../../../config/paths';
-import { ApiError } from '../../../lib/api-client';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
 
 const newPasswordFormSchema = z

@@ -1,10 +1,10 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { errorReply, mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { errorReply, mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { SignInForm } from './sign-in-form';
 
 const visitor = buildSession(null);

@@ -2,12 +2,12 @@ import { signupSchema } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { paths } from '../../../config/paths';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { paths } from '@/config/paths';
+import { applyServerErrors } from '@/lib/form-errors';
 import { useSignup } from '../api/signup';
 
 const FIELDS = ['email', 'password', 'displayName'] as const;

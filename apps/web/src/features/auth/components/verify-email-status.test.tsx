@@ -1,11 +1,11 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { StrictMode } from 'react';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { errorReply, mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { errorReply, mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { VerifyEmailStatus } from './verify-email-status';
 
 const TOKEN = 'a'.repeat(32);

@@ -1,10 +1,10 @@
 import { useEffect, useRef } from 'react';
 import { Link } from 'react-router-dom';
-import { Alert } from '../../../components/ui/alert';
-import { Spinner } from '../../../components/ui/spinner';
-import { paths } from '../../../config/paths';
-import { ApiError } from '../../../lib/api-client';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Spinner } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { ApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
 import { useVerifyEmail } from '../api/verify-email';
 import { ResendVerificationForm } from './resend-verification-form';
 

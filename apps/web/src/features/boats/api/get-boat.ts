@@ -1,6 +1,6 @@
 import type { BoatDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { boatKeys } from './keys';
 
 /** GET /api/boats/:boatId (404 for another member's boat). */

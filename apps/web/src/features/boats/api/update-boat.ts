@@ -1,6 +1,6 @@
 import type { BoatDto, BoatInput } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { boatKeys } from './keys';
 
 /** PATCH /api/boats/:boatId. */

@@ -9,13 +9,13 @@ import {
 } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Controller, useForm, useWatch, type Control, type FieldPath } from 'react-hook-form';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
-import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../../components/ui/select-field';
-import type { QuantityKind } from '../../units/utils/parse-quantity';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
+import { QuantityField } from '@/components/units/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
+import type { QuantityKind } from '@/lib/units/parse-quantity';
 
 export interface BoatFormProps {
   /** The boat to edit; left out for a new one. */

@@ -1,9 +1,9 @@
 import { ANCHOR_TYPE_LABELS, ANCHOR_TYPES, STANDARD_CAUTIONS, type AnchorType } from '@app/calc';
 import type { BoatDto, PlanComponents, PlanCondition } from '@app/shared';
 import { useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../../components/ui/select-field';
+import { Alert } from '@/components/ui/alert';
+import { QuantityField } from '@/components/units/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
 import { recommendedComponents, recommendFor } from '../utils/recommend';
 import { RecommendationColumn } from './recommendation-column';
 

@@ -4,9 +4,9 @@ import {
   inchFractionLabel,
   type TackleRecommendation,
 } from '@app/calc';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { Quantity } from '../../units/components/quantity';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { Quantity } from '@/components/units/quantity';
 import { RecommendationReasoning } from './recommendation-reasoning';
 
 export interface RecommendationColumnProps {

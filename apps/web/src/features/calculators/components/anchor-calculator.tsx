@@ -10,8 +10,8 @@ import {
 import { useState } from 'react';
 import { useConditions, useLinkedState } from '../utils/conditions';
 import { LinkedNote } from './linked-note';
-import { Quantity } from '../../units/components/quantity';
-import { SelectField } from '../../../components/ui/select-field';
+import { Quantity } from '@/components/units/quantity';
+import { SelectField } from '@/components/ui/select-field';
 import { ANCHOR_OPTIONS, BOTTOM_OPTIONS, pick } from '../utils/options';
 import { runCalc } from '../utils/run-calc';
 import { DEFAULT_BOAT_WIND, type BoatWind } from '../utils/boat-wind';

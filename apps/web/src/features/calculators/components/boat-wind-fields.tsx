@@ -1,6 +1,6 @@
 import { HULL_TYPES } from '@app/calc';
-import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../../components/ui/select-field';
+import { QuantityField } from '@/components/units/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
 import { HULL_OPTIONS, pick } from '../utils/options';
 import type { BoatWind } from '../utils/boat-wind';
 import { fieldError, type CalcOutcome } from '../utils/run-calc';

@@ -1,5 +1,5 @@
 import { formatLength, type CatenaryResult } from '@app/calc';
-import { useUnits } from '../../units/utils/use-units';
+import { useUnits } from '@/lib/units/use-units';
 import { drawingScale, pathThrough } from '../utils/drawing-scale';
 
 export interface CatenaryDrawingProps {

@@ -1,9 +1,9 @@
 import { BOTTOM_TYPES, HULL_TYPES } from '@app/calc';
 import type { BoatDto } from '@app/shared';
 import { useId, useState } from 'react';
-import { SelectField } from '../../../components/ui/select-field';
-import { Quantity } from '../../units/components/quantity';
-import { QuantityField } from '../../units/components/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
+import { Quantity } from '@/components/units/quantity';
+import { QuantityField } from '@/components/units/quantity-field';
 import { BOTTOM_OPTIONS, HULL_OPTIONS, pick } from '../utils/options';
 import { conditionsFromBoat, useConditions, type CalcConditions } from '../utils/conditions';
 

@@ -2,7 +2,7 @@ import { designLoad, STANDARD_CAUTIONS } from '@app/calc';
 import { useState } from 'react';
 import { useConditions, useLinkedState } from '../utils/conditions';
 import { LinkedNote } from './linked-note';
-import { Quantity } from '../../units/components/quantity';
+import { Quantity } from '@/components/units/quantity';
 import { runCalc } from '../utils/run-calc';
 import { DEFAULT_BOAT_WIND, type BoatWind } from '../utils/boat-wind';
 import { BoatWindFields } from './boat-wind-fields';

@@ -1,7 +1,7 @@
 import { CHAIN_GRADES, CHAIN_TRADE_SIZES_IN, ROPE_CONSTRUCTIONS, ROPE_MATERIALS } from '@app/calc';
-import { TextField } from '../../../components/ui/text-field';
-import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../../components/ui/select-field';
+import { TextField } from '@/components/ui/text-field';
+import { QuantityField } from '@/components/units/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
 import type { LinkPart } from '../utils/link-parts';
 import {
   CONSTRUCTION_OPTIONS,

@@ -1,4 +1,4 @@
-import { Button } from '../../../components/ui/button';
+import { Button } from '@/components/ui/button';
 
 /** Says whether a calculator follows the boat and conditions at the top, with a way back when it does not. */
 export function LinkedNote({

@@ -12,9 +12,9 @@ import {
   type RopeMaterial,
 } from '@app/calc';
 import { useState } from 'react';
-import { Quantity } from '../../units/components/quantity';
-import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../../components/ui/select-field';
+import { Quantity } from '@/components/units/quantity';
+import { QuantityField } from '@/components/units/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
 import {
   CONSTRUCTION_OPTIONS,
   GRADE_OPTIONS,

@@ -13,9 +13,9 @@ import {
 import { useState } from 'react';
 import { useConditions, useLinkedState } from '../utils/conditions';
 import { LinkedNote } from './linked-note';
-import { Quantity } from '../../units/components/quantity';
-import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../../components/ui/select-field';
+import { Quantity } from '@/components/units/quantity';
+import { QuantityField } from '@/components/units/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
 import { GRADE_OPTIONS, chainSizeOptions, pick } from '../utils/options';
 import { fieldError, runCalc } from '../utils/run-calc';
 import { CalcCard } from './calc-card';

@@ -1,10 +1,10 @@
 import { STANDARD_CAUTIONS, formatLength, swingRadius } from '@app/calc';
 import { useConditions, useLinkedState } from '../utils/conditions';
 import { LinkedNote } from './linked-note';
-import { cn } from '../../../lib/cn';
-import { Quantity } from '../../units/components/quantity';
-import { QuantityField } from '../../units/components/quantity-field';
-import { useUnits } from '../../units/utils/use-units';
+import { cn } from '@/lib/cn';
+import { Quantity } from '@/components/units/quantity';
+import { QuantityField } from '@/components/units/quantity-field';
+import { useUnits } from '@/lib/units/use-units';
 import { drawingScale } from '../utils/drawing-scale';
 import { fieldError, runCalc } from '../utils/run-calc';
 import { CalcCard } from './calc-card';

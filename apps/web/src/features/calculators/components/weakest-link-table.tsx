@@ -1,7 +1,7 @@
 import type { RatedComponent, WeakestLinkResult } from '@app/calc';
-import { ScrollRegion } from '../../../components/ui/scroll-region';
-import { cn } from '../../../lib/cn';
-import { Quantity } from '../../units/components/quantity';
+import { ScrollRegion } from '@/components/ui/scroll-region';
+import { cn } from '@/lib/cn';
+import { Quantity } from '@/components/units/quantity';
 
 export interface WeakestLinkTableProps {
   /** The parts in load-path order, as passed to `weakestLink`. */

@@ -26,12 +26,3 @@ export function fieldError<T>(outcome: CalcOutcome<T>, ...fields: string[]): str
     ? outcome.message
     : undefined;
 }
-
-/** The message of a rejection no field of the form shows (so it is shown under the form). */
-export function otherError<T>(
-  outcome: CalcOutcome<T>,
-  known: readonly string[],
-): string | undefined {
-  if (outcome.ok) return undefined;
-  return known.includes(outcome.field) ? undefined : outcome.message;
-}

@@ -1,7 +1,7 @@
 import type { ClubDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
-import { applyClubLocale } from '../../../lib/club-locale';
+import { apiFetch } from '@/lib/api-client';
+import { applyClubLocale } from '@/lib/club-locale';
 import { clubKeys } from './keys';
 
 /** GET /api/club: the club's name, harbours and locale (which from then on formats dates and money). */

@@ -1,7 +1,7 @@
 import type { ClubDto, ClubLocale } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
-import { applyClubLocale } from '../../../lib/club-locale';
+import { apiFetch } from '@/lib/api-client';
+import { applyClubLocale } from '@/lib/club-locale';
 import { clubKeys } from './keys';
 
 /** PUT /api/club/locale (admin): the club's region, currency and default units. */

@@ -6,11 +6,11 @@ import {
   type ClubLocale,
 } from '@app/shared/locale';
 import { useState, type FormEvent } from 'react';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { ApiError } from '../../../lib/api-client';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { SelectField } from '@/components/ui/select-field';
+import { TextField } from '@/components/ui/text-field';
+import { ApiError } from '@/lib/api-client';
 import { useSetClubLocale } from '../api/set-club-locale';
 
 const SAMPLE_DATE = '2026-10-23';

@@ -1,6 +1,6 @@
 import type { CheckoutStatusDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { duesKeys } from './keys';
 
 /** GET /api/dues/checkout/:sessionId. */

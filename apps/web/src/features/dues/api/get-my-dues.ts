@@ -1,6 +1,6 @@
 import type { MyDuesDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { duesKeys } from './keys';
 
 /** GET /api/dues/me: membership, status, what is owed and recent payments. */

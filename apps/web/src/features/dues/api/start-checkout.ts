@@ -1,6 +1,6 @@
 import type { CheckoutDto, CheckoutInput } from '@app/shared';
 import { useMutation } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 
 /** POST /api/dues/checkout: opens a checkout session and returns its page. */
 export const startCheckout = (input: CheckoutInput) =>

@@ -1,5 +1,5 @@
 import { formatMoney, METHOD_LABELS, type PaymentDto } from '@app/shared';
-import { readableDate } from '../../../lib/format-date';
+import { readableDate } from '@/lib/format-date';
 
 const STATUS_WORDS: Record<PaymentDto['status'], string> = {
   pending: 'Waiting',

@@ -1,5 +1,5 @@
 import { formatMoney, type DuesQuoteDto } from '@app/shared';
-import { Button } from '../../../components/ui/button';
+import { Button } from '@/components/ui/button';
 
 /** What is owed and why, line by line, with the pay button. */
 export function QuoteCard({

@@ -1,5 +1,5 @@
 import { DUES_STATUS_LABELS, type DuesStatus } from '@app/shared';
-import { cn } from '../../../lib/cn';
+import { cn } from '@/lib/cn';
 
 const TONES: Record<DuesStatus, string> = {
   current: 'bg-kelp-50 text-kelp-700 border-kelp-700',

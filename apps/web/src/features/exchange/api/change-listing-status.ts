@@ -1,6 +1,6 @@
 import type { ListingDto } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { listingKeys } from './keys';
 
 export type ListingAction = 'publish' | 'relist' | 'withdraw' | 'sold';

@@ -1,7 +1,7 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { ListingInput } from '@app/shared';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
-import { errorReply, mockApi } from '../../../testing/mock-api';
+import { errorReply, mockApi } from '@/testing/mock-api';
 import { createListing } from './create-listing';
 import { uploadPhotos } from './upload-photos';
 

@@ -1,7 +1,7 @@
 import type { ListingDto, ListingInput } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
-import { errorMessage } from '../../../lib/form-errors';
+import { apiFetch } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
 import { changeListingStatus } from './change-listing-status';
 import { listingKeys } from './keys';
 import { uploadPhotos } from './upload-photos';

@@ -1,6 +1,6 @@
 import type { ThreadSummaryDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { listingKeys } from './keys';
 
 /** GET /api/listings/:id/threads: the seller's conversations about one listing. */

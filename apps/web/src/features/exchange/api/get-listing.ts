@@ -1,6 +1,6 @@
 import type { ListingDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { listingKeys } from './keys';
 
 /** GET /api/listings/:id, with the fit flag when `fitsBoat` is one of the member's boats. */

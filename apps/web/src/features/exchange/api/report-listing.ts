@@ -1,5 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 
 /** POST /api/listings/:id/reports. */
 export const reportListing = ({ id, reason }: { id: number; reason: string }) =>

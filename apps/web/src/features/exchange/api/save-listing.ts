@@ -1,6 +1,6 @@
 import type { ListingDto, ListingInput } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { listingKeys } from './keys';
 
 export interface SaveListingVariables {

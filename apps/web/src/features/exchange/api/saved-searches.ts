@@ -1,6 +1,6 @@
 import type { SavedSearchDto, SavedSearchInput } from '@app/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { listingKeys } from './keys';
 
 /** GET /api/saved-searches. */

@@ -1,6 +1,6 @@
 import type { ListingSearchResultDto } from '@app/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { apiUrl, ApiError } from '../../../lib/api-client';
+import { apiUrl, ApiError } from '@/lib/api-client';
 import { listingKeys } from './keys';
 
 /** Search filters as strings (the query string of `GET /api/listings`, validated by the server). */

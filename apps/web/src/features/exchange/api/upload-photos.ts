@@ -1,5 +1,5 @@
 import type { ListingPhotoDto } from '@app/shared';
-import { ApiError, apiUrl, getCsrfToken } from '../../../lib/api-client';
+import { ApiError, apiUrl, getCsrfToken } from '@/lib/api-client';
 
 /**
  * POST /api/listings/:id/photos (multipart field `photos`) with upload progress (0–1) reported through

@@ -1,5 +1,5 @@
 import type { FitDto } from '@app/shared';
-import { cn } from '../../../lib/cn';
+import { cn } from '@/lib/cn';
 
 const LABELS: Record<FitDto['status'], string> = {
   fits: 'Fits your boat',

@@ -1,8 +1,8 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { ListingSummaryDto } from '@app/shared';
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { renderWithProviders } from '../../../testing/render';
+import { renderWithProviders } from '@/testing/render';
 import { specRows } from '../utils/format';
 import { ListingCard } from './listing-card';
 

@@ -17,9 +17,9 @@ import {
 } from '@app/shared';
 import { useRef, type ReactNode } from 'react';
 import { useForm, useWatch, type FieldErrors } from 'react-hook-form';
-import { Alert } from '../../../components/ui/alert';
-import { Button, type ButtonVariant } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
+import { Alert } from '@/components/ui/alert';
+import { Button, type ButtonVariant } from '@/components/ui/button';
+import { TextField } from '@/components/ui/text-field';
 import { formSchema, type ListingFormValues } from '../utils/listing-form-values';
 import { ExchangeSelect } from './select';
 

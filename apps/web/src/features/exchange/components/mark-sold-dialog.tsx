@@ -1,7 +1,7 @@
 import type { ThreadSummaryDto } from '@app/shared';
 import { useState } from 'react';
-import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
-import { countOf } from '../../../lib/plural';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { countOf } from '@/lib/plural';
 
 /** The "someone else" choice: sold outside the listing's conversations (another buyer, or outside the club). */
 export const SOLD_ELSEWHERE = 'elsewhere';

@@ -1,11 +1,11 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { ListingDto, ThreadSummaryDto } from '@app/shared';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { OwnerActions } from './owner-actions';
 
 const listing = (over: Partial<ListingDto> = {}): ListingDto => ({

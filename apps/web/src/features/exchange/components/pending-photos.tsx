@@ -1,7 +1,7 @@
 import { MAX_LISTING_PHOTOS } from '@app/shared';
 import { useEffect, useMemo, useRef, useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { countOf } from '../../../lib/plural';
+import { Button } from '@/components/ui/button';
+import { countOf } from '@/lib/plural';
 
 const TYPES = ['image/jpeg', 'image/png', 'image/webp'];
 const MAX_BYTES = 8 * 1024 * 1024;

@@ -1,14 +1,14 @@
 import { MAX_LISTING_PHOTOS, type ListingPhotoDto } from '@app/shared';
 import { useQueryClient } from '@tanstack/react-query';
 import { useRef, useState, type DragEvent } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { cn } from '../../../lib/cn';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { cn } from '@/lib/cn';
+import { errorMessage } from '@/lib/form-errors';
 import { listingKeys } from '../api/keys';
 import { useDeletePhoto, useReorderPhotos } from '../api/manage-photos';
 import { uploadPhotos } from '../api/upload-photos';
-import { countOf } from '../../../lib/plural';
+import { countOf } from '@/lib/plural';
 
 export interface PhotoManagerProps {
   listingId: number;

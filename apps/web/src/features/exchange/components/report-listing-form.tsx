@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
-import { ApiError } from '../../../lib/api-client';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/text-field';
+import { ApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
 import { useReportListing } from '../api/report-listing';
 
 /** Tells the moderators about a listing that looks wrong. */

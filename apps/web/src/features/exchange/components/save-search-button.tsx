@@ -1,8 +1,8 @@
 import type { SavedSearchInput } from '@app/shared';
 import { useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { errorMessage } from '@/lib/form-errors';
 import {
   useCreateSavedSearch,
   useDeleteSavedSearch,

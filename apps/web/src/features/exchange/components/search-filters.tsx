@@ -6,9 +6,9 @@ import {
   LISTING_CONDITION_LABELS,
 } from '@app/shared';
 import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
-import { cn } from '../../../lib/cn';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/text-field';
+import { cn } from '@/lib/cn';
 import { activeFilterCount } from '../utils/filters';
 import { ExchangeSelect } from './select';
 

@@ -1,5 +1,5 @@
 import { useId, type Ref, type SelectHTMLAttributes } from 'react';
-import { cn } from '../../../lib/cn';
+import { cn } from '@/lib/cn';
 
 export interface ExchangeSelectProps extends Omit<SelectHTMLAttributes<HTMLSelectElement>, 'id'> {
   label: string;

@@ -1,6 +1,6 @@
 import type { TopicDto, TopicInput, TopicOrderInput, TopicPatchInput } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { knowledgeKeys } from './keys';
 
 /** Every topic edit changes the list (and post filters): refresh everything knowledge shows. */

@@ -1,6 +1,6 @@
 import type { BoatDto } from '@app/shared';
 import { useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { knowledgeKeys } from './keys';
 
 /** GET /api/boats: the member's boat profiles, to attach one to a question. */

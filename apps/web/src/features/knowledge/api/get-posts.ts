@@ -1,6 +1,6 @@
 import type { PostSummaryDto } from '@app/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { knowledgeKeys } from './keys';
 
 export interface PostFilters {

@@ -1,6 +1,6 @@
 import type { TopicDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { knowledgeKeys } from './keys';
 
 export const topicsQuery = () =>

@@ -1,6 +1,6 @@
 import type { CommentDto, CommentInput, ReportInput } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { knowledgeKeys } from './keys';
 
 function useInvalidatePost(postId: number) {

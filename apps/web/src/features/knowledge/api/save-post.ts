@@ -1,6 +1,6 @@
 import type { CreatePostInput, PostDetailDto, PostPatchInput } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch, apiUrl, getCsrfToken } from '../../../lib/api-client';
+import { apiFetch, apiUrl, getCsrfToken } from '@/lib/api-client';
 import { knowledgeKeys } from './keys';
 
 /** POST /api/posts: a new draft (or, with submit, a post sent to moderation). */

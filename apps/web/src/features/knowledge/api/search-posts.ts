@@ -1,6 +1,6 @@
 import type { SearchHitDto } from '@app/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { knowledgeKeys } from './keys';
 
 export const searchQuery = (q: string, topic?: string) =>

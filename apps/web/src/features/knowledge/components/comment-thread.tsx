@@ -1,10 +1,10 @@
 import { formatDate } from '@app/shared/locale';
 import type { CommentDto, PostDetailDto } from '@app/shared';
 import { useState, type FormEvent } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { usePromptDialog } from '../../../components/ui/prompt-dialog';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { usePromptDialog } from '@/components/ui/prompt-dialog';
+import { errorMessage } from '@/lib/form-errors';
 import { useAcceptAnswer, useAddComment, useReport } from '../api/post-actions';
 
 /** A plain-text box for a comment or reply; says when it waits for a moderator. */

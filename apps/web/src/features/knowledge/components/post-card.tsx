@@ -2,7 +2,7 @@ import type { HighlightPiece, PostSummaryDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { HighlightText } from './highlight-text';
 import { PostStatusBadge } from './post-status-badge';
-import { countOf } from '../../../lib/plural';
+import { countOf } from '@/lib/plural';
 
 export interface PostCardProps {
   post: PostSummaryDto;

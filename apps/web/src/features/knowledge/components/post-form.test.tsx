@@ -1,9 +1,9 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { PostDetailDto } from '@app/shared';
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { renderWithProviders } from '@/testing/render';
 import { PostForm } from './post-form';
 
 const doc = (text: string) => ({

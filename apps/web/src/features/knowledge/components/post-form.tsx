@@ -7,11 +7,11 @@ import {
 } from '@app/shared';
 import type { JSONContent } from '@tiptap/react';
 import { useEffect, useId, useRef, useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/text-field';
-import { ApiError } from '../../../lib/api-client';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/text-field';
+import { ApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
 import { useSavePost } from '../api/save-post';
 import { RichTextEditor } from './rich-text-editor';
 import { SetupFields } from './setup-fields';

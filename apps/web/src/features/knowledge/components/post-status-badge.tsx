@@ -1,5 +1,5 @@
 import type { PostStatus } from '@app/shared';
-import { cn } from '../../../lib/cn';
+import { cn } from '@/lib/cn';
 
 const LABELS: Record<PostStatus, string> = {
   draft: 'Draft',

@@ -1,8 +1,8 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import { fireEvent, screen } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
-import { errorReply, mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { errorReply, mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { RichTextEditor } from './rich-text-editor';
 
 const file = () => new File([new Uint8Array([137, 80, 78, 71])], 'deck.png', { type: 'image/png' });

@@ -3,8 +3,8 @@ import { EditorContent, useEditor, type Editor, type JSONContent } from '@tiptap
 import StarterKit from '@tiptap/starter-kit';
 import { useRef, useState, type ReactNode } from 'react';
 import { createPortal } from 'react-dom';
-import { usePromptDialog } from '../../../components/ui/prompt-dialog';
-import { cn } from '../../../lib/cn';
+import { usePromptDialog } from '@/components/ui/prompt-dialog';
+import { cn } from '@/lib/cn';
 import { uploadImage } from '../api/save-post';
 import { linkProblem } from './link-address';
 import { POST_BODY_CLASSES } from './post-body-classes';

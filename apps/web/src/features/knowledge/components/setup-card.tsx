@@ -12,7 +12,7 @@ import {
   type UnitSystem,
 } from '@app/calc';
 import type { SetupCardDto } from '@app/shared';
-import { formatQuantity } from '../../units/utils/format-quantity';
+import { formatQuantity } from '@/lib/units/format-quantity';
 
 const fix = (n: number, d = 1) => n.toFixed(d);
 

@@ -1,5 +1,5 @@
 import { ANCHOR_KINDS, CHAIN_GRADE_IDS, HULLS } from '@app/shared';
-import { TextField } from '../../../components/ui/text-field';
+import { TextField } from '@/components/ui/text-field';
 import type { SetupValues } from './setup-values';
 
 function Select({

@@ -1,9 +1,9 @@
 import type { TopicDto } from '@app/shared';
 import { useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { errorMessage } from '@/lib/form-errors';
 import {
   useCreateTopic,
   useDeleteTopic,
@@ -11,7 +11,7 @@ import {
   useUpdateTopic,
 } from '../api/edit-topics';
 import { TopicFieldsForm } from './topic-fields-form';
-import { countOf } from '../../../lib/plural';
+import { countOf } from '@/lib/plural';
 
 /** Moves the item at `from` by `step` places; the ids of the new order. */
 const moved = (topics: TopicDto[], from: number, step: -1 | 1) => {

@@ -2,10 +2,10 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { topicInputSchema } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
 
 const fieldsSchema = topicInputSchema.pick({ name: true, description: true });
 type FieldsInput = z.input<typeof fieldsSchema>;

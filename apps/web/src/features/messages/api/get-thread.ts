@@ -1,7 +1,7 @@
 import type { ThreadDto } from '@app/shared';
 import { useEffect } from 'react';
 import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { threadKeys } from './keys';
 
 /** GET /api/threads/:id (marks it read). */

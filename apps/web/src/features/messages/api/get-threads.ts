@@ -1,6 +1,6 @@
 import type { ThreadSummaryDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { threadKeys } from './keys';
 
 /** GET /api/threads: the member's conversations as buyer or seller. */

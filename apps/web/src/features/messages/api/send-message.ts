@@ -1,6 +1,6 @@
 import type { ThreadDto } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { threadKeys } from './keys';
 
 /** POST /api/threads (first message about a listing) or /api/threads/:id/messages (a reply). */

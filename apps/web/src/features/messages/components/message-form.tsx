@@ -1,9 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { messageInputSchema } from '@app/shared';
 import { useForm } from 'react-hook-form';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { applyServerErrors } from '@/lib/form-errors';
 import { useSendMessage } from '../api/send-message';
 
 export interface MessageFormProps {

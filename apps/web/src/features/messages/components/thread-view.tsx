@@ -1,6 +1,6 @@
 import { formatDateTime } from '@app/shared/locale';
 import type { ThreadDto } from '@app/shared';
-import { cn } from '../../../lib/cn';
+import { cn } from '@/lib/cn';
 
 /** The messages of one conversation, oldest first. */
 export function ThreadView({ thread }: { thread: ThreadDto }) {

@@ -8,7 +8,7 @@ import type {
   UndoResultDto,
 } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 
 export type ModerationAction =
   | { kind: 'post'; id: number; body: DecisionInput }

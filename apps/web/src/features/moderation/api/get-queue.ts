@@ -1,6 +1,6 @@
 import type { AuditEntryDto, ModerationCountDto, ModerationQueueDto } from '@app/shared';
 import { useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { moderationKeys } from './keys';
 
 /** GET /api/moderation/queue: pending posts and comments, open reports. */

@@ -1,6 +1,6 @@
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { errorMessage } from '../../../lib/form-errors';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { errorMessage } from '@/lib/form-errors';
 import type { DecisionDesk } from './use-decision-desk';
 
 /** The desk's error (a refused decision or undo) and a polite status line for screen readers. */

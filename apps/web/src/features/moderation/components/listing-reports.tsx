@@ -2,7 +2,7 @@ import { formatDate } from '@app/shared/locale';
 import type { ListingReportDto } from '@app/shared';
 import type { MouseEvent } from 'react';
 import { Link } from 'react-router-dom';
-import { Button } from '../../../components/ui/button';
+import { Button } from '@/components/ui/button';
 import { DecidedLine, DeskAlerts } from './decision-desk';
 import { cardHeight, keptHeight, useDecisionDesk, useKeptInPlace } from './use-decision-desk';
 import { useReasonDialog } from './reason-dialog';

@@ -1,4 +1,4 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { AuditEntryDto } from '@app/shared';
 import { render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';

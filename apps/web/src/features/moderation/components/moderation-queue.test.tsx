@@ -1,11 +1,11 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { ListingReportDto, ModerationQueueDto, PostSummaryDto } from '@app/shared';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { mockApi, type MockRequest } from '../../../testing/mock-api';
-import { renderApp } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { mockApi, type MockRequest } from '@/testing/mock-api';
+import { renderApp } from '@/testing/render';
 
 const post: PostSummaryDto = {
   id: 4,

@@ -7,7 +7,7 @@ import type {
 } from '@app/shared';
 import type { MouseEvent, ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { Button } from '../../../components/ui/button';
+import { Button } from '@/components/ui/button';
 import { DecidedLine, DeskAlerts } from './decision-desk';
 import { cardHeight, keptHeight, useDecisionDesk, useKeptInPlace } from './use-decision-desk';
 import { POST_DECISION_WORDS } from './decision-words';

@@ -1,7 +1,7 @@
 import type { PostDecision, PostDetailDto } from '@app/shared';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { errorMessage } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { errorMessage } from '@/lib/form-errors';
 import { useModerate, useUndoDecision } from '../api/decide';
 import { POST_DECISION_WORDS } from './decision-words';
 import { useReasonDialog } from './reason-dialog';

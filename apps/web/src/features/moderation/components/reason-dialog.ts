@@ -1,4 +1,4 @@
-import { usePromptDialog } from '../../../components/ui/prompt-dialog';
+import { usePromptDialog } from '@/components/ui/prompt-dialog';
 
 export interface ReasonQuestion {
   title: string;

@@ -1,6 +1,6 @@
 import type { NotificationDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { noticeKeys } from './keys';
 
 /** GET /api/notifications: the member's latest 30 notices, newest first. */

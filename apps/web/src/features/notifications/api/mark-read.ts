@@ -1,6 +1,6 @@
 import type { NotificationDto } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { noticeKeys } from './keys';
 
 /** POST /api/notifications/read: every notice of the member. */

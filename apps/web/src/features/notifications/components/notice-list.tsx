@@ -1,7 +1,7 @@
 import { formatDateTime } from '@app/shared/locale';
 import type { NotificationDto } from '@app/shared';
 import { Link } from 'react-router-dom';
-import { cn } from '../../../lib/cn';
+import { cn } from '@/lib/cn';
 
 const KIND_LABELS: Record<string, string> = {
   reply: 'Reply',

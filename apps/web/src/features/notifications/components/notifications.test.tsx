@@ -1,11 +1,11 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type { NotificationDto } from '@app/shared';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { errorReply, mockApi } from '../../../testing/mock-api';
-import { renderApp, renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { errorReply, mockApi } from '@/testing/mock-api';
+import { renderApp, renderWithProviders } from '@/testing/render';
 import { NoticeList } from './notice-list';
 
 const notice = (over: Partial<NotificationDto> = {}): NotificationDto => ({

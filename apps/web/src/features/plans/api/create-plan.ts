@@ -1,6 +1,6 @@
 import type { TacklePlanInput } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { planKeys } from './keys';
 import type { PlanWithResult } from './types';
 

@@ -1,6 +1,6 @@
 import type { TacklePlanDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { planKeys } from './keys';
 
 /** GET /api/tackle-plans?boatId=: a boat's saved plans, newest first. */

@@ -1,11 +1,11 @@
 import { CONNECTOR_KIND_LABELS, SHACKLE_SIZES_IN, inchFractionLabel } from '@app/calc';
 import { CONNECTOR_KINDS, type PlanComponents } from '@app/shared';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { QuantityField } from '../../units/components/quantity-field';
-import { SelectField } from '../../../components/ui/select-field';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { QuantityField } from '@/components/units/quantity-field';
+import { SelectField } from '@/components/ui/select-field';
 
 export type PlanConnectorInput = PlanComponents['connectors'][number];
 

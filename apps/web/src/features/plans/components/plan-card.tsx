@@ -4,7 +4,7 @@ import {
   CONNECTOR_KIND_LABELS,
   inchFractionLabel,
 } from '@app/calc';
-import { Quantity } from '../../units/components/quantity';
+import { Quantity } from '@/components/units/quantity';
 import type { PlanWithResult } from '../api/types';
 
 const CONDITION_LABELS = {

@@ -1,6 +1,6 @@
 import type { ReadinessDto, StormWatchDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { stormKeys } from './keys';
 
 export interface BoardDto {

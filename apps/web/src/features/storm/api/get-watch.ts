@@ -1,6 +1,6 @@
 import type { StormWatchDetailDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { stormKeys } from './keys';
 
 /** GET /api/storm-watches/:watchId: the watch, the viewer's boats and the boats they are buddy for. */

@@ -1,6 +1,6 @@
 import type { StormWatchDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { stormKeys } from './keys';
 
 /** GET /api/storm-watches: open watches first, then closed ones. */

@@ -7,7 +7,7 @@ import type {
   ReadinessDto,
 } from '@app/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { stormKeys } from './keys';
 
 /** POST /api/storm-watches (moderator or admin). */

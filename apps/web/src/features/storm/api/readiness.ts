@@ -1,6 +1,6 @@
 import type { ReadinessDto, ReadinessInput, StormWatchDto } from '@app/shared';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { stormKeys } from './keys';
 
 export interface BoatReadinessDto {

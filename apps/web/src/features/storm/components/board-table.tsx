@@ -1,7 +1,7 @@
 import { STORM_LOCATION_LABELS, type HarborDto, type ReadinessDto } from '@app/shared';
 import { Link } from 'react-router-dom';
-import { ScrollRegion } from '../../../components/ui/scroll-region';
-import { paths } from '../../../config/paths';
+import { ScrollRegion } from '@/components/ui/scroll-region';
+import { paths } from '@/config/paths';
 import { MarginBadge } from './margin-badge';
 import { StatusBadge } from './status-badge';
 

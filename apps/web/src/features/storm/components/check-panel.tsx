@@ -1,6 +1,6 @@
 import { chainGradeWords, inchFractionLabel, type ChainGrade } from '@app/calc';
 import type { StormCheckDto } from '@app/shared';
-import { Quantity } from '../../units/components/quantity';
+import { Quantity } from '@/components/units/quantity';
 import { MarginBadge } from './margin-badge';
 
 /** A plan checked against the forecast: the weakest link and its margins, scope, and the warnings. */

@@ -1,9 +1,9 @@
 import { stormChecklistSchema, type StormChecklistItem } from '@app/shared';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { errorMessage } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { errorMessage } from '@/lib/form-errors';
 
 const slug = (label: string) =>
   label

@@ -1,9 +1,9 @@
 import { stormCloseSchema, type StormCloseInput } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { applyServerErrors } from '@/lib/form-errors';
 
 export interface CloseFormProps {
   isPending: boolean;

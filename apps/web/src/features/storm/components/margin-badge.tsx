@@ -1,5 +1,5 @@
 import { MARGIN_BAND_LABELS, type MarginBand } from '@app/shared';
-import { cn } from '../../../lib/cn';
+import { cn } from '@/lib/cn';
 
 const BAND_STYLE: Record<MarginBand, { mark: string; className: string }> = {
   passes: { mark: '✓', className: 'border-kelp-700 bg-kelp-50 text-kelp-700' },

@@ -8,11 +8,11 @@ import {
   type StormLocation,
 } from '@app/shared';
 import { useForm, useWatch } from 'react-hook-form';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { SelectField } from '@/components/ui/select-field';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
 
 interface FormValues {
   location: StormLocation | '';

@@ -1,5 +1,5 @@
 import { READINESS_STATUS_LABELS, type ReadinessStatus } from '@app/shared';
-import { cn } from '../../../lib/cn';
+import { cn } from '@/lib/cn';
 
 const STATUS_CLASS: Record<ReadinessStatus, string> = {
   'not-started': 'border-sand-500 bg-sand-50 text-ink-800',

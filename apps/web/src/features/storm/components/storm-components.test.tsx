@@ -1,9 +1,9 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { ReadinessDto } from '@app/shared';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { renderWithProviders } from '../../../testing/render';
+import { renderWithProviders } from '@/testing/render';
 import { BoardTable } from './board-table';
 import { MarginBadge } from './margin-badge';
 import { ReadinessForm } from './readiness-form';

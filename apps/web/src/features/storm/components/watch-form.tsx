@@ -1,9 +1,9 @@
 import { stormWatchInputSchema, type HarborDto, type StormWatchInput } from '@app/shared';
 import { useForm } from 'react-hook-form';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
 
 interface FormValues {
   name: string;

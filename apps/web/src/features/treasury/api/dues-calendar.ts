@@ -6,7 +6,7 @@ import {
   useQuery,
   useQueryClient,
 } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { treasuryKeys } from './keys';
 
 /** GET /api/treasury/calendar: the saved calendar and what it gives today. */

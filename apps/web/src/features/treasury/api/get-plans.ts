@@ -1,6 +1,6 @@
 import type { PlanDto } from '@app/shared';
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { treasuryKeys } from './keys';
 
 /** GET /api/treasury/plans. */

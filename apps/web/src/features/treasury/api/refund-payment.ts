@@ -1,6 +1,6 @@
 import type { RefundDto, RefundInput } from '@app/shared';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { treasuryKeys } from './keys';
 
 /** POST /api/treasury/payments/:id/refunds. */

@@ -1,6 +1,6 @@
 import type { ReminderInput, ReminderPreviewDto } from '@app/shared';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { apiFetch } from '../../../lib/api-client';
+import { apiFetch } from '@/lib/api-client';
 import { treasuryKeys } from './keys';
 
 /** POST /api/treasury/reminders/preview. */

@@ -1,10 +1,10 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { DuesCalendarDto } from '@app/shared';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { CalendarForm } from './calendar-form';
 
 const view = (start: string, end: string, joinMinor: number): DuesCalendarDto => ({

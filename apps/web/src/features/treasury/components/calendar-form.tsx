@@ -7,14 +7,14 @@ import {
 } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch } from 'react-hook-form';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { SelectField } from '@/components/ui/select-field';
+import { TextField } from '@/components/ui/text-field';
+import { applyServerErrors } from '@/lib/form-errors';
 import { useCalendarPreview } from '../api/dues-calendar';
-import { ScrollRegion } from '../../../components/ui/scroll-region';
-import { readableDate } from '../../../lib/format-date';
+import { ScrollRegion } from '@/components/ui/scroll-region';
+import { readableDate } from '@/lib/format-date';
 
 /** A calendar date as the club's region writes it, with the ISO date kept for machines. */
 const Day = ({ iso }: { iso: string }) => <time dateTime={iso}>{readableDate(iso)}</time>;

@@ -12,11 +12,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { TextField } from '../../../components/ui/text-field';
-import { ApiError } from '../../../lib/api-client';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { TextField } from '@/components/ui/text-field';
+import { ApiError } from '@/lib/api-client';
+import { applyServerErrors } from '@/lib/form-errors';
 import { minorToInput } from '../utils/money';
 
 // The shared schema, with the amount typed as a decimal (120.50) instead of minor units.

@@ -1,11 +1,11 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { PaymentDto } from '@app/shared';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { errorReply, mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { errorReply, mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { PaymentRowActions } from './payment-row-actions';
 
 const session = buildSession(buildUser({ roles: ['member', 'treasurer'] }));

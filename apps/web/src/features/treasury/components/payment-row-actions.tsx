@@ -1,8 +1,8 @@
 import { formatMoney, type PaymentDto } from '@app/shared';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { usePromptDialog } from '../../../components/ui/prompt-dialog';
-import { errorMessage } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { usePromptDialog } from '@/components/ui/prompt-dialog';
+import { errorMessage } from '@/lib/form-errors';
 import { useRecordReturned } from '../api/record-returned';
 import { useRefundPayment } from '../api/refund-payment';
 import { useResolveHeld } from '../api/resolve-held';

@@ -1,7 +1,7 @@
 import { formatMoney, METHOD_LABELS, PAYMENT_STATUS_LABELS, type PaymentDto } from '@app/shared';
-import { readableDate } from '../../../lib/format-date';
+import { readableDate } from '@/lib/format-date';
 import { PaymentRowActions } from './payment-row-actions';
-import { ScrollRegion } from '../../../components/ui/scroll-region';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 const RETURNED_WORDS = { transfer: 'by transfer', cash: 'in cash', cheque: 'by cheque' } as const;
 

@@ -1,10 +1,10 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import type { PlanDto } from '@app/shared';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { ApiError } from '../../../lib/api-client';
-import { renderWithProviders } from '../../../testing/render';
+import { ApiError } from '@/lib/api-client';
+import { renderWithProviders } from '@/testing/render';
 import { PlanForm } from './plan-form';
 
 const family: PlanDto = {

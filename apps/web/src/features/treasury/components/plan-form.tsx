@@ -10,12 +10,12 @@ import {
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, type Path } from 'react-hook-form';
 import { z } from 'zod';
-import { Button } from '../../../components/ui/button';
-import { FormError } from '../../../components/ui/form-error';
-import { SelectField } from '../../../components/ui/select-field';
-import { TextField } from '../../../components/ui/text-field';
-import { ApiError } from '../../../lib/api-client';
-import { errorMessage } from '../../../lib/form-errors';
+import { Button } from '@/components/ui/button';
+import { FormError } from '@/components/ui/form-error';
+import { SelectField } from '@/components/ui/select-field';
+import { TextField } from '@/components/ui/text-field';
+import { ApiError } from '@/lib/api-client';
+import { errorMessage } from '@/lib/form-errors';
 import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
 
 const shape = planInputSchema.shape;

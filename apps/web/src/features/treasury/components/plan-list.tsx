@@ -1,7 +1,7 @@
 import { formatMoney, PLAN_KIND_LABELS, PRORATION_LABELS, type PlanDto } from '@app/shared';
 import { useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
 import { useCreatePlan, useUpdatePlan } from '../api/save-plan';
 import { PlanForm } from './plan-form';
 

@@ -1,9 +1,9 @@
-import '../../../testing/setup';
+import '@/testing/setup';
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { buildSession, buildUser } from '../../../testing/builders';
-import { mockApi } from '../../../testing/mock-api';
-import { renderWithProviders } from '../../../testing/render';
+import { buildSession, buildUser } from '@/testing/builders';
+import { mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
 import { sendLabel } from '../utils/reminder-label';
 import { RemindersPanel } from './reminders-panel';
 

@@ -1,9 +1,9 @@
 import { DUES_STATUS_LABELS, formatMoney } from '@app/shared';
 import { useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { errorMessage } from '../../../lib/form-errors';
-import { countOf } from '../../../lib/plural';
+import { Alert } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { errorMessage } from '@/lib/form-errors';
+import { countOf } from '@/lib/plural';
 import { useReminderPreview, useSendReminders } from '../api/reminders';
 import { sendLabel } from '../utils/reminder-label';
 

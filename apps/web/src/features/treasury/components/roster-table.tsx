@@ -22,8 +22,8 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
-import { readableDate } from '../../../lib/format-date';
-import { countOf } from '../../../lib/plural';
+import { readableDate } from '@/lib/format-date';
+import { countOf } from '@/lib/plural';
 
 const features = tableFeatures({
   rowSortingFeature,

@@ -1,5 +1,5 @@
 import { formatMoney, type SummaryDto } from '@app/shared';
-import { countOf } from '../../../lib/plural';
+import { countOf } from '@/lib/plural';
 
 /**
  * The year's four figures, each with a line saying what is in it, so collected, outstanding and expected can be

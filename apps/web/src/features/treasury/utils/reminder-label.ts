@@ -1,4 +1,4 @@
-import { countOf } from '../../../lib/plural';
+import { countOf } from '@/lib/plural';
 
 /** What the send button says: the real number of members who would be reminded, in the right number. */
 export function sendLabel(count: number | undefined): string {

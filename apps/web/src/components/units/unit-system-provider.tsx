@@ -1,8 +1,8 @@
 import type { UnitSystem } from '@app/calc';
 import { useMemo, useState, type ReactNode } from 'react';
-import { UnitSystemContext } from '../utils/unit-system-context';
-import { readStoredUnitSystem, storeUnitSystem } from '../utils/unit-preference';
-import { clubLocale } from '../../../lib/club-locale';
+import { UnitSystemContext } from '@/lib/units/unit-system-context';
+import { readStoredUnitSystem, storeUnitSystem } from '@/lib/units/unit-preference';
+import { clubLocale } from '@/lib/club-locale';
 
 export interface UnitSystemProviderProps {
   /** The signed-in member's stored choice; undefined for a visitor. */

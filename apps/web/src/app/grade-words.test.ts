@@ -1,8 +1,9 @@
 import { CHAIN_GRADE_LABELS, CHAIN_GRADES, chainGradeWords } from '@app/calc';
 import { describe, expect, it } from 'vitest';
-import { specDetails } from '../../exchange/utils/format';
-import { ratePart } from './link-parts';
+import { specDetails } from '@/features/exchange/utils/format';
+import { ratePart } from '@/features/calculators/utils/link-parts';
 
+// Spans two features (calculators and exchange), so it lives with the app shell that combines them.
 // Every place that writes a chain grade in words: the weakest-link part names, the exchange's spec rows
 // and card lines. Each grade is named once, as "grade 43" or as its label ("Grade 43 high test").
 const doubled = /\bgrade\s+grade\b/i;

@@ -1,7 +1,7 @@
 import { UNIT_SYSTEMS, type UnitSystem } from '@app/calc';
 import { useId } from 'react';
-import { cn } from '../../../lib/cn';
-import { useUnits } from '../utils/use-units';
+import { cn } from '@/lib/cn';
+import { useUnits } from '@/lib/units/use-units';
 
 const LABELS: Record<UnitSystem, string> = { metric: 'Metric', imperial: 'Imperial' };
 

@@ -1,7 +1,7 @@
-import { cn } from '../../../lib/cn';
-import { formatQuantity, otherSystem } from '../utils/format-quantity';
-import type { QuantityKind } from '../utils/parse-quantity';
-import { useUnits } from '../utils/use-units';
+import { cn } from '@/lib/cn';
+import { formatQuantity, otherSystem } from '@/lib/units/format-quantity';
+import type { QuantityKind } from '@/lib/units/parse-quantity';
+import { useUnits } from '@/lib/units/use-units';
 
 export interface QuantityProps {
   /** In the kind's base unit: m, kg, N or kn. */

@@ -1,8 +1,8 @@
 import { useId, useState, type Ref } from 'react';
-import { cn } from '../../../lib/cn';
-import { formatQuantity, otherSystem, quantityInputText } from '../utils/format-quantity';
-import { parseQuantity, QUANTITY_EXAMPLES, type QuantityKind } from '../utils/parse-quantity';
-import { useUnits } from '../utils/use-units';
+import { cn } from '@/lib/cn';
+import { formatQuantity, otherSystem, quantityInputText } from '@/lib/units/format-quantity';
+import { parseQuantity, QUANTITY_EXAMPLES, type QuantityKind } from '@/lib/units/parse-quantity';
+import { useUnits } from '@/lib/units/use-units';
 
 /** Whether a field is empty, holds a reading, or holds text it could not read. */
 export type QuantityEntryState = 'empty' | 'ok' | 'invalid';
