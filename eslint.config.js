@@ -72,6 +72,7 @@ export default tseslint.config(
             'vitest.config.ts',
             'scripts/*.mjs',
             'scripts/lib/*.mjs',
+            'packages/devkit/src/*.mjs',
             'apps/api/src/modules/auth/*.mjs',
           ],
         },

@@ -20,9 +20,9 @@ import {
   ROOT,
   rootSql,
   startServer,
-} from './lib/mariadb.mjs';
-import { freshSecrets } from './lib/secrets.mjs';
-import { mustRun, stopService, TSX, waitForHttp } from './lib/setup.mjs';
+} from '../packages/devkit/src/mariadb.mjs';
+import { freshSecrets } from '../packages/devkit/src/secrets.mjs';
+import { mustRun, stopService, TSX, waitForHttp } from '../packages/devkit/src/setup.mjs';
 
 const PORT = Number(process.env.BENCH_API_PORT ?? 4810);
 const DB = process.env.BENCH_API_DB ?? 'rodewise_bench_api';

@@ -8,7 +8,7 @@ import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'nod
 import { tmpdir } from 'node:os';
 import { join, relative } from 'node:path';
 import { gzipSync } from 'node:zlib';
-import { ROOT } from './lib/mariadb.mjs';
+import { ROOT } from '../packages/devkit/src/mariadb.mjs';
 
 const HOME_BUDGET_KB = 150;
 /** Heavy parts that must stay on their own routes, recognised by the modules a chunk holds. */

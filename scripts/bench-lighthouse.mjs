@@ -5,7 +5,7 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { ensureDebianPackages } from './lib/apt.mjs';
+import { ensureDebianPackages } from '../packages/devkit/src/apt.mjs';
 
 export const TARGET_SCORE = 95;
 const CHROME = process.env.CHROME_PATH ?? '/usr/bin/chromium';

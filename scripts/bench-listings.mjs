@@ -2,7 +2,7 @@
 // Listing search benchmark (called by `npm run bench`); the work is in apps/api/src/modules/listings/listing-bench.ts, run with tsx.
 import { spawnSync } from 'node:child_process';
 import { join } from 'node:path';
-import { ROOT } from './lib/mariadb.mjs';
+import { ROOT } from '../packages/devkit/src/mariadb.mjs';
 
 const r = spawnSync(
   join(ROOT, 'node_modules/.bin/tsx'),

@@ -5,8 +5,8 @@ import { existsSync, mkdirSync, rmSync } from 'node:fs';
 import { cpus, loadavg, totalmem } from 'node:os';
 import { join } from 'node:path';
 import { BENCH_DIR, machineInfo, writeBenchmarksDoc } from './lib/bench-report.mjs';
-import { profileConfig, ROOT, startServer } from './lib/mariadb.mjs';
-import { ensureDeps, run } from './lib/setup.mjs';
+import { profileConfig, ROOT, startServer } from '../packages/devkit/src/mariadb.mjs';
+import { ensureDeps, run } from '../packages/devkit/src/setup.mjs';
 
 ensureDeps();
 const startedAt = new Date().toISOString();

@@ -3,8 +3,8 @@
 // (API_PROCESSES, default 3), object storage and the stand-ins, in the background. `npm run cluster stop` stops it all.
 import { existsSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { ROOT } from './lib/mariadb.mjs';
-import { ensureDeps, mustRun, TSX } from './lib/setup.mjs';
+import { ROOT } from '../packages/devkit/src/mariadb.mjs';
+import { ensureDeps, mustRun, TSX } from '../packages/devkit/src/setup.mjs';
 import {
   apiEnv,
   CLUSTER_DIR,

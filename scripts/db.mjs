@@ -9,7 +9,7 @@ import {
   resetServer,
   startServer,
   stopServer,
-} from './lib/mariadb.mjs';
+} from '../packages/devkit/src/mariadb.mjs';
 
 const [cmd = 'status', ...rest] = process.argv.slice(2);
 const cfg = profileConfig(rest.includes('--test') ? 'test' : 'dev');

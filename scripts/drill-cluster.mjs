@@ -9,7 +9,7 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { cpus } from 'node:os';
 import { crc32, deflateSync } from 'node:zlib';
-import { ROOT, rootSql } from './lib/mariadb.mjs';
+import { ROOT, rootSql } from '../packages/devkit/src/mariadb.mjs';
 import {
   clusterPorts,
   nodeCfg,

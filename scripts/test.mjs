@@ -3,9 +3,9 @@
 // the production build and end-to-end tests in headless Chromium. Ends with one line: `N passed, N failed`.
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
-import { ensureDebianPackages } from './lib/apt.mjs';
-import { profileConfig, ROOT, startServer, stopServer } from './lib/mariadb.mjs';
-import { ensureDeps, run } from './lib/setup.mjs';
+import { ensureDebianPackages } from '../packages/devkit/src/apt.mjs';
+import { profileConfig, ROOT, startServer, stopServer } from '../packages/devkit/src/mariadb.mjs';
+import { ensureDeps, run } from '../packages/devkit/src/setup.mjs';
 
 const args = process.argv.slice(2);
 const only = (name) => args.length === 0 || args.includes(name);

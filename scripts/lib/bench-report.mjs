@@ -4,7 +4,7 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg, totalmem } from 'node:os';
 import { join } from 'node:path';
-import { ROOT } from './mariadb.mjs';
+import { ROOT } from '../../packages/devkit/src/mariadb.mjs';
 
 export const BENCH_DIR = join(ROOT, '.data', 'bench');
 export const CALC_TARGET_US = 50;

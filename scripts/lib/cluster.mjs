@@ -12,10 +12,10 @@ import {
   writeFileSync,
 } from 'node:fs';
 import { join } from 'node:path';
-import { ensureDebianPackages } from './apt.mjs';
-import { isRunning, provision, ROOT, rootSql } from './mariadb.mjs';
-import { ensureSecrets } from './secrets.mjs';
-import { TSX, waitForHttp, waitForPort } from './setup.mjs';
+import { ensureDebianPackages } from '../../packages/devkit/src/apt.mjs';
+import { isRunning, provision, ROOT, rootSql } from '../../packages/devkit/src/mariadb.mjs';
+import { ensureSecrets } from '../../packages/devkit/src/secrets.mjs';
+import { TSX, waitForHttp, waitForPort } from '../../packages/devkit/src/setup.mjs';
 
 export const CLUSTER_DIR = join(ROOT, '.data', 'cluster');
 const GALERA_LIB = '/usr/lib/galera/libgalera_smm.so';
@@ -76,7 +76,7 @@ export function ensureClusterPackages() {
   ensureDebianPackages('haproxy', ['haproxy'], 'the load balancer in front of the cluster');
 }
 
-/** The `cfg` shape scripts/lib/mariadb.mjs works with, for one Galera node. */
+/** The `cfg` shape @app/devkit/mariadb works with, for one Galera node. */
 export function nodeCfg(node) {
   const dataDir = join(CLUSTER_DIR, node.name);
   return {

@@ -9,8 +9,8 @@ import {
   ROOT,
   rootSql,
   startServer,
-} from '../../scripts/lib/mariadb.mjs';
-import { mustRun, TSX } from '../../scripts/lib/setup.mjs';
+} from '@app/devkit/mariadb';
+import { mustRun, TSX } from '@app/devkit/setup';
 
 const cfg = profileConfig('test');
 

@@ -7,9 +7,9 @@ import {
   recreateDatabase,
   startServer,
   stopServer,
-} from '../../scripts/lib/mariadb.mjs';
-import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
-import { freshSecrets } from '../../scripts/lib/secrets.mjs';
+} from '@app/devkit/mariadb';
+import { mustRun, startService, stopService, TSX, waitForHttp } from '@app/devkit/setup';
+import { freshSecrets } from '@app/devkit/secrets';
 
 // A MariaDB of its own (port 3309, .data/mariadb-drill) so stopping it disturbs no other test.
 const cfg = profileConfig('drill', { port: 3309, dataDir: '.data/mariadb-drill' });

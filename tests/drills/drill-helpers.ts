@@ -1,5 +1,5 @@
 // Helpers the fault drills share: a signed-in HTTP session against a running API process, and SQL reads.
-import { rootSql, type DbConfig } from '../../scripts/lib/mariadb.mjs';
+import { rootSql, type DbConfig } from '@app/devkit/mariadb';
 
 /** Rows of a query run as root over the instance's socket, each row an array of column strings (header dropped). */
 export function sqlRows(cfg: DbConfig, db: string, query: string): string[][] {

@@ -9,9 +9,9 @@ import {
   recreateDatabase,
   ROOT,
   startServer,
-} from '../../scripts/lib/mariadb.mjs';
-import { startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
-import { freshSecrets } from '../../scripts/lib/secrets.mjs';
+} from '@app/devkit/mariadb';
+import { startService, stopService, TSX, waitForHttp } from '@app/devkit/setup';
+import { freshSecrets } from '@app/devkit/secrets';
 import { sqlNumber, sqlRows, waitUntil } from './drill-helpers';
 
 // The shared test MariaDB (never stopped here) with its own empty database (the API migrates it); the API and the mail sink run as separate

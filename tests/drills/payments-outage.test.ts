@@ -9,9 +9,9 @@ import {
   recreateDatabase,
   ROOT,
   startServer,
-} from '../../scripts/lib/mariadb.mjs';
-import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
-import { freshSecrets } from '../../scripts/lib/secrets.mjs';
+} from '@app/devkit/mariadb';
+import { mustRun, startService, stopService, TSX, waitForHttp } from '@app/devkit/setup';
+import { freshSecrets } from '@app/devkit/secrets';
 import { signIn, sqlNumber, sqlRows, waitUntil } from './drill-helpers';
 
 // The shared test MariaDB (never stopped here) with a database of its own; the API and the fake payment provider

@@ -8,9 +8,9 @@ import {
   provision,
   recreateDatabase,
   startServer,
-} from '../../scripts/lib/mariadb.mjs';
-import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
-import { freshSecrets } from '../../scripts/lib/secrets.mjs';
+} from '@app/devkit/mariadb';
+import { mustRun, startService, stopService, TSX, waitForHttp } from '@app/devkit/setup';
+import { freshSecrets } from '@app/devkit/secrets';
 import { sqlNumber, waitUntil } from './drill-helpers';
 
 const cfg = profileConfig('test');

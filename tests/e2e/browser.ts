@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { AxeBuilder } from '@axe-core/playwright';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { inject } from 'vitest';
-import { ROOT } from '../../scripts/lib/mariadb.mjs';
+import { ROOT } from '@app/devkit/mariadb';
 
 export const ARTIFACTS = join(ROOT, 'tests', 'artifacts');
 export const DEMO_PASSWORD = 'harbour-demo-2026';

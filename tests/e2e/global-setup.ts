@@ -9,9 +9,9 @@ import {
   recreateDatabase,
   ROOT,
   startServer,
-} from '../../scripts/lib/mariadb.mjs';
-import { freshSecrets } from '../../scripts/lib/secrets.mjs';
-import { mustRun, startService, stopService, TSX, waitForHttp } from '../../scripts/lib/setup.mjs';
+} from '@app/devkit/mariadb';
+import { freshSecrets } from '@app/devkit/secrets';
+import { mustRun, startService, stopService, TSX, waitForHttp } from '@app/devkit/setup';
 
 declare module 'vitest' {
   export interface ProvidedContext {

@@ -56,7 +56,7 @@ describe('architecture lint', () => {
     [
       'an app importing the orchestration scripts',
       'apps/api/src/lib/lint-probe.ts',
-      "import { ROOT } from '../../../../scripts/lib/mariadb.mjs';\nexport const probe = ROOT;\n",
+      "import { CLUSTER_DIR } from '../../../../scripts/lib/cluster.mjs';\nexport const probe = CLUSTER_DIR;\n",
     ],
   ])('refuses %s', async (_name, filePath, code) => {
     expect(await ruleIds(filePath, code)).toContain('import-x/no-restricted-paths');

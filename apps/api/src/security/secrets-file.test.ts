@@ -2,7 +2,7 @@ import { mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { ensureSecrets, freshSecrets } from '../../../../scripts/lib/secrets.mjs';
+import { ensureSecrets, freshSecrets } from '@app/devkit/secrets';
 import { loadEnv } from '../config/env';
 
 const dir = mkdtempSync(join(tmpdir(), 'rodewise-secrets-'));

@@ -10,7 +10,7 @@ import {
   recreateDatabase,
   ROOT,
   startServer,
-} from '../../../../scripts/lib/mariadb.mjs';
+} from '@app/devkit/mariadb';
 import { createSequelize } from '../db';
 import { loadEnv } from '../config/env';
 import { migrateUp } from '../migrator';

@@ -15,8 +15,8 @@ import {
   recreateDatabase,
   ROOT,
   startServer,
-} from '../../../../../scripts/lib/mariadb.mjs';
-import { freshSecrets } from '../../../../../scripts/lib/secrets.mjs';
+} from '@app/devkit/mariadb';
+import { freshSecrets } from '@app/devkit/secrets';
 import { listingSearchSchema, type ListingInput } from '@app/shared';
 import { loadEnv } from '../../config/env';
 import { createSequelize } from '../../db';

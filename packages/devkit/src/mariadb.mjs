@@ -5,7 +5,7 @@ import { existsSync, mkdirSync, openSync, readFileSync, rmSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { ensureDebianPackages } from './apt.mjs';
 
-export const ROOT = resolve(new URL('../..', import.meta.url).pathname);
+export const ROOT = resolve(new URL('../../..', import.meta.url).pathname);
 
 /** Instance settings per profile. `dev` serves `npm start`; `test` is a separate server so the two never collide. */
 export function profileConfig(profile = 'dev', overrides = {}) {
