@@ -5,7 +5,12 @@
 import { spawnSync } from 'node:child_process';
 import { mkdirSync, openSync, closeSync, existsSync } from 'node:fs';
 import { join } from 'node:path';
-import { profileConfig, provision, recreateDatabase, ROOT } from '../packages/devkit/src/mariadb.mjs';
+import {
+  profileConfig,
+  provision,
+  recreateDatabase,
+  ROOT,
+} from '../packages/devkit/src/mariadb.mjs';
 
 /** Writes a dump of `database` to `file`; returns the file path. */
 export function dump(cfg, database, file) {

@@ -2,9 +2,22 @@
 // `npm start`: every set-up step, then the app with the demo club. `npm run dev`: the same with Vite HMR.
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
-import { dbEnv, profileConfig, provision, ROOT, startServer } from '../packages/devkit/src/mariadb.mjs';
+import {
+  dbEnv,
+  profileConfig,
+  provision,
+  ROOT,
+  startServer,
+} from '../packages/devkit/src/mariadb.mjs';
 import { ensureSecrets } from '../packages/devkit/src/secrets.mjs';
-import { ensureDeps, mustRun, startService, stopService, TSX, waitForHttp } from '../packages/devkit/src/setup.mjs';
+import {
+  ensureDeps,
+  mustRun,
+  startService,
+  stopService,
+  TSX,
+  waitForHttp,
+} from '../packages/devkit/src/setup.mjs';
 
 const dev = process.argv.includes('--dev');
 const PORTS = {
