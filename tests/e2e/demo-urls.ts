@@ -52,7 +52,7 @@ export async function demoUrls(browser: Browser): Promise<Record<PathKey, string
       .getByRole('region', { name: 'Everyday: 30 kn' })
       .getByRole('button', { name: 'Save as plan' })
       .click();
-    await page.waitForURL(/\/plans\/\d+$/, { timeout: 15000 });
+    await page.waitForURL(/\/tackle-plans\/\d+$/, { timeout: 15000 });
     plans = await data<Array<{ id: number }>>(page, '/api/tackle-plans');
   }
   const myPosts = await data<Array<{ id: number; status: string }>>(page, '/api/posts/mine');
@@ -74,7 +74,7 @@ export async function demoUrls(browser: Browser): Promise<Record<PathKey, string
     verifyEmail: `${paths.verifyEmail.href()}?token=not-a-real-token`,
     resetPassword: paths.resetPassword.href(),
     account: paths.account.href(),
-    notifications: paths.notifications.href(),
+    notices: paths.notices.href(),
     stopDigest: paths.stopDigest.href('1.not-a-real-stop-token'),
     adminUsers: paths.adminUsers.href(),
     adminTopics: paths.adminTopics.href(),
@@ -88,12 +88,12 @@ export async function demoUrls(browser: Browser): Promise<Record<PathKey, string
     calculators: paths.calculators.href(),
     boats: paths.boats.href(),
     boat: paths.boat.href(need('boat', boatId)),
-    plan: paths.plan.href(need('plan', plans[0]?.id)),
+    tacklePlan: paths.tacklePlan.href(need('tackle plan', plans[0]?.id)),
     dues: paths.dues.href(),
     duesPaid: paths.duesPaid.href(),
     treasury: paths.treasury.href(),
     treasuryRoster: paths.treasuryRoster.href(),
-    treasuryPlans: paths.treasuryPlans.href(),
+    membershipPlans: paths.membershipPlans.href(),
     exchange: paths.exchange.href(),
     exchangeMine: paths.exchangeMine.href(),
     listingNew: paths.listingNew.href(),
@@ -102,7 +102,7 @@ export async function demoUrls(browser: Browser): Promise<Record<PathKey, string
       need('own listing', (myListings.find((l) => l.status === 'active') ?? myListings[0])?.id),
     ),
     messages: paths.messages.href(),
-    thread: paths.thread.href(need('thread', threads[0]?.id)),
+    conversation: paths.conversation.href(need('conversation', threads[0]?.id)),
     storm: paths.storm.href(),
     stormNew: paths.stormNew.href(),
     stormChecklist: paths.stormChecklist.href(),

@@ -96,9 +96,9 @@ describe('dues in Chromium', () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
     await signIn(page, TREASURER);
     await page.goto(`${baseUrl()}/treasury`);
-    await page.getByRole('link', { name: 'Plans and fiscal calendar' }).click();
-    await page.waitForURL(/\/treasury\/plans/);
-    const plans = page.getByRole('list', { name: 'Plans' });
+    await page.getByRole('link', { name: 'Membership plans and fiscal calendar' }).click();
+    await page.waitForURL(/\/treasury\/membership-plans/);
+    const plans = page.getByRole('list', { name: 'Membership plans' });
     await expect.poll(() => plans.getByRole('listitem').count(), { timeout: 15000 }).toBe(3);
 
     await page.getByRole('button', { name: 'Add a plan' }).click();
@@ -113,7 +113,7 @@ describe('dues in Chromium', () => {
     await form.getByLabel(/^Annual amount/).fill('60.00');
     await form.getByRole('button', { name: 'Create plan' }).click();
     await expect
-      .poll(() => page.getByRole('status').filter({ hasText: 'Plan created' }).count(), {
+      .poll(() => page.getByRole('status').filter({ hasText: 'Membership plan created' }).count(), {
         timeout: 10000,
       })
       .toBe(1);

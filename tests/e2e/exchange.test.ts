@@ -195,7 +195,7 @@ describe('gear exchange in Chromium', () => {
 
     const buyer = await newPage(1280);
     await signIn(buyer, BUYER);
-    await buyer.goto(`${baseUrl()}/notifications`);
+    await buyer.goto(`${baseUrl()}/notices`);
     const notice = buyer.getByRole('link', { name: new RegExp(`as sold to you`) }).first();
     await notice.waitFor({ timeout: 15000 });
     await audit(buyer, 'buyer notices with the sale');

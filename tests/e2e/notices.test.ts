@@ -44,7 +44,7 @@ describe('notices and the daily digest in Chromium', () => {
     // The API's digest job runs shortly after start; the seeded member's unread notices are in it.
     const mail = await waitForMail(MAREN, 'unread notice', 60_000);
     expect(mail.text).toContain('/knowledge/');
-    const stop = /https?:\/\/\S+\/notifications\/stop-digest\?token=\S+/.exec(mail.text)?.[0];
+    const stop = /https?:\/\/\S+\/notices\/stop-digest\?token=\S+/.exec(mail.text)?.[0];
     expect(stop, 'a stop link in the digest').toBeDefined();
     const link = new URL(stop ?? '');
 

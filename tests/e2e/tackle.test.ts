@@ -105,7 +105,7 @@ describe('a member sizes, checks, saves and prints a plan', () => {
     await audit(page, 'boat recommendation');
 
     await storm.getByRole('button', { name: 'Save as plan' }).click();
-    await page.waitForURL(/\/plans\/\d+$/, { timeout: 15000 });
+    await page.waitForURL(/\/tackle-plans\/\d+$/, { timeout: 15000 });
     await expect
       .poll(() => page.getByRole('article', { name: 'Plan card' }).count(), { timeout: 15000 })
       .toBe(1);

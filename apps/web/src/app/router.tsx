@@ -1,5 +1,5 @@
-import { createBrowserRouter, type RouteObject } from 'react-router-dom';
-import { paths } from '@/config/paths';
+import { createBrowserRouter, generatePath, redirect, type RouteObject } from 'react-router-dom';
+import { OLD_PATHS, paths } from '@/config/paths';
 import { AppLayout } from './layout/app-layout';
 import { PageFallback } from './layout/page-fallback';
 import { RouteErrorBoundary } from './routes/route-error';
@@ -31,9 +31,9 @@ export const SCREEN_ROUTES: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/account')).AccountRoute }),
   },
   {
-    path: paths.notifications.path,
+    path: paths.notices.path,
     lazy: async () => ({
-      Component: (await import('./routes/notifications')).NotificationsRoute,
+      Component: (await import('./routes/notices')).NoticesRoute,
     }),
   },
   {
@@ -65,8 +65,8 @@ export const SCREEN_ROUTES: RouteObject[] = [
     lazy: async () => ({ Component: (await import('./routes/boat')).BoatRoute }),
   },
   {
-    path: paths.plan.path,
-    lazy: async () => ({ Component: (await import('./routes/plan')).PlanRoute }),
+    path: paths.tacklePlan.path,
+    lazy: async () => ({ Component: (await import('./routes/tackle-plan')).TacklePlanRoute }),
   },
   {
     path: paths.storm.path,
@@ -113,9 +113,9 @@ export const SCREEN_ROUTES: RouteObject[] = [
     }),
   },
   {
-    path: paths.treasuryPlans.path,
+    path: paths.membershipPlans.path,
     lazy: async () => ({
-      Component: (await import('./routes/treasury-plans')).TreasuryPlansRoute,
+      Component: (await import('./routes/treasury-membership-plans')).MembershipPlansRoute,
     }),
   },
   {
@@ -166,12 +166,17 @@ export const SCREEN_ROUTES: RouteObject[] = [
   },
   {
     path: paths.messages.path,
-    lazy: async () => ({ Component: (await import('./routes/inbox')).InboxRoute }),
+    lazy: async () => ({ Component: (await import('./routes/messages')).MessagesRoute }),
   },
   {
-    path: paths.thread.path,
-    lazy: async () => ({ Component: (await import('./routes/inbox-thread')).InboxThreadRoute }),
+    path: paths.conversation.path,
+    lazy: async () => ({ Component: (await import('./routes/conversation')).ConversationRoute }),
   },
+  ...OLD_PATHS.map(({ from, to }): RouteObject => ({
+    path: from,
+    loader: ({ params, request }) =>
+      redirect(`${generatePath(to, params)}${new URL(request.url).search}`),
+  })),
   {
     path: '*',
     lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }),

@@ -168,7 +168,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
     id: 'notices',
     kind: 'link',
     label: 'Notices',
-    to: paths.notifications.href(),
+    to: paths.notices.href(),
     section: 'account',
     signedIn: true,
     badge: 'notices-unread',

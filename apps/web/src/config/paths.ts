@@ -9,10 +9,10 @@ export const paths = {
   verifyEmail: { path: '/verify-email', href: () => '/verify-email' },
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   account: { path: '/account', href: () => '/account' },
-  notifications: { path: '/notifications', href: () => '/notifications' },
+  notices: { path: '/notices', href: () => '/notices' },
   stopDigest: {
-    path: '/notifications/stop-digest',
-    href: (token: string) => `/notifications/stop-digest?token=${encodeURIComponent(token)}`,
+    path: '/notices/stop-digest',
+    href: (token: string) => `/notices/stop-digest?token=${encodeURIComponent(token)}`,
   },
   adminUsers: { path: '/admin/users', href: () => '/admin/users' },
   adminTopics: { path: '/admin/topics', href: () => '/admin/topics' },
@@ -29,12 +29,18 @@ export const paths = {
   calculators: { path: '/calculators', href: () => '/calculators' },
   boats: { path: '/boats', href: () => '/boats' },
   boat: { path: '/boats/:boatId', href: (boatId: number | string) => `/boats/${boatId}` },
-  plan: { path: '/plans/:planId', href: (planId: number | string) => `/plans/${planId}` },
+  tacklePlan: {
+    path: '/tackle-plans/:planId',
+    href: (planId: number | string) => `/tackle-plans/${planId}`,
+  },
   dues: { path: '/dues', href: () => '/dues' },
   duesPaid: { path: '/dues/paid', href: () => '/dues/paid' },
   treasury: { path: '/treasury', href: () => '/treasury' },
   treasuryRoster: { path: '/treasury/roster', href: () => '/treasury/roster' },
-  treasuryPlans: { path: '/treasury/plans', href: () => '/treasury/plans' },
+  membershipPlans: {
+    path: '/treasury/membership-plans',
+    href: () => '/treasury/membership-plans',
+  },
   exchange: { path: '/exchange', href: () => '/exchange' },
   exchangeMine: { path: '/exchange/mine', href: () => '/exchange/mine' },
   listingNew: { path: '/exchange/new', href: () => '/exchange/new' },
@@ -65,11 +71,22 @@ export const paths = {
       `/storm/${watchId}/boats/${boatId}`,
   },
   messages: { path: '/messages', href: () => '/messages' },
-  thread: {
-    path: '/messages/:threadId',
-    href: (threadId: number | string) => `/messages/${threadId}`,
+  conversation: {
+    path: '/messages/:conversationId',
+    href: (conversationId: number | string) => `/messages/${conversationId}`,
   },
 } as const;
+
+/**
+ * Addresses from before the glossary's renames (DEVELOPERS.md): members bookmarked them and older mails link to
+ * them, so each keeps working by redirecting, with its query string, to the new address. `:param` parts carry over.
+ */
+export const OLD_PATHS: ReadonlyArray<{ from: string; to: string }> = [
+  { from: '/plans/:planId', to: '/tackle-plans/:planId' },
+  { from: '/notifications', to: '/notices' },
+  { from: '/notifications/stop-digest', to: '/notices/stop-digest' },
+  { from: '/treasury/plans', to: '/treasury/membership-plans' },
+];
 
 /**
  * Returns `next` when it is a path inside this app (starts with one `/`), else the home path.

@@ -101,7 +101,7 @@ describe('notification digest', () => {
     for (const n of notices) expect(mail.text).toContain(n.message);
     expect(mail.text).toContain(`${ctx.publicUrl}/knowledge/${postId}`);
     expect(mail.text).toContain(`${ctx.publicUrl}/notifications`);
-    expect(linkIn(mail, `${ctx.publicUrl}/notifications/stop-digest?token=`)).toContain(
+    expect(linkIn(mail, `${ctx.publicUrl}/notices/stop-digest?token=`)).toContain(
       digestStopToken(member.id, ctx.secret),
     );
     const fresh = await User.findByPk(member.id);

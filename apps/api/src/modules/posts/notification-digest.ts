@@ -74,7 +74,7 @@ function digestEmail(ctx: DigestContext, user: User, unread: Notification[]) {
       'You asked for this daily digest. It comes at most once a day, and only when something is unread. You can turn it off on your account page.',
     footerLink: {
       label: 'Stop the daily digest',
-      url: `${ctx.publicUrl}/notifications/stop-digest?token=${digestStopToken(user.id, ctx.secret)}`,
+      url: `${ctx.publicUrl}/notices/stop-digest?token=${digestStopToken(user.id, ctx.secret)}`,
     },
   });
 }

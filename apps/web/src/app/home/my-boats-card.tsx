@@ -3,7 +3,7 @@ import type { BoatDto, TacklePlanDto } from '@app/shared';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { useBoats } from '@/features/boats/api/get-boats';
-import { usePlans } from '@/features/plans/api/get-plans';
+import { useTacklePlans } from '@/features/tackle-plans/api/get-tackle-plans';
 import { Quantity } from '@/components/units/quantity';
 import { HomeCard, HomeEmpty } from './home-card';
 
@@ -46,7 +46,7 @@ function PlanHeadline({ plan }: { plan: TacklePlanDto }) {
 }
 
 function BoatLine({ boat }: { boat: BoatDto }) {
-  const plans = usePlans(boat.id);
+  const plans = useTacklePlans(boat.id);
   const latest = plans.data?.[0];
   return (
     <li className="flex flex-col gap-1 border-t border-sand-300 pt-2 first:border-t-0 first:pt-0">
@@ -66,7 +66,7 @@ function BoatLine({ boat }: { boat: BoatDto }) {
       {latest && (
         <>
           <p>
-            Latest plan: <Link to={paths.plan.href(latest.id)}>{latest.name}</Link>
+            Latest plan: <Link to={paths.tacklePlan.href(latest.id)}>{latest.name}</Link>
           </p>
           <PlanHeadline plan={latest} />
           <Link to={paths.boat.href(boat.id)} className="self-start">

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
-import { useNotices } from '@/features/notifications/api/get-notices';
+import { useNotices } from '@/features/notices/api/get-notices';
 import { HomeCard, HomeEmpty } from './home-card';
 import { readableDate } from '@/lib/format-date';
 import { countOf } from '@/lib/plural';
@@ -10,7 +10,7 @@ export function NoticesCard() {
   const notices = useNotices();
   const unread = (notices.data ?? []).filter((n) => n.readAt === null);
   return (
-    <HomeCard title="Notices" more={{ to: paths.notifications.href(), label: 'All notices' }}>
+    <HomeCard title="Notices" more={{ to: paths.notices.href(), label: 'All notices' }}>
       {notices.isPending && <HomeEmpty>Loading your notices…</HomeEmpty>}
       {notices.isError && <HomeEmpty>Your notices could not be loaded.</HomeEmpty>}
       {notices.data && unread.length === 0 && (

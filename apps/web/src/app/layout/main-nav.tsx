@@ -12,9 +12,9 @@ import { paths } from '@/config/paths';
 import { cn } from '@/lib/cn';
 import { useCurrentUser } from '@/features/auth/api/get-session';
 import { useLogout } from '@/features/auth/api/logout';
-import { useUnread } from '@/features/messages/api/get-unread';
+import { useUnread } from '@/features/conversations/api/get-unread';
 import { useModerationCount } from '@/features/moderation/api/get-queue';
-import { useUnreadNotices } from '@/features/notifications/api/get-notices';
+import { useUnreadNotices } from '@/features/notices/api/get-notices';
 
 const ITEM_CLASSES =
   'flex min-h-11 items-center rounded-md px-3 md:px-2 xl:px-3 font-bold text-sand-100 no-underline hover:bg-ink-800 hover:text-white';

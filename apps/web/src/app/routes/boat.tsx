@@ -18,14 +18,14 @@ import {
   type PlanDraft,
 } from '@/features/boats/components/boat-recommendation';
 import { useClub } from '@/features/club/api/get-club';
-import { useCreatePlan } from '@/features/plans/api/create-plan';
-import { usePlans } from '@/features/plans/api/get-plans';
+import { useCreateTacklePlan } from '@/features/tackle-plans/api/create-tackle-plan';
+import { useTacklePlans } from '@/features/tackle-plans/api/get-tackle-plans';
 import { Quantity } from '@/components/units/quantity';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
 
 function PlanList({ boatId }: { boatId: number }) {
-  const plans = usePlans(boatId);
+  const plans = useTacklePlans(boatId);
   if (plans.isPending) return <Spinner label="Loading plans…" />;
   if (plans.isError) return <Alert tone="error">{errorMessage(plans.error)}</Alert>;
   if (plans.data.length === 0) return <p className="text-sm">No saved plans yet.</p>;
@@ -33,7 +33,7 @@ function PlanList({ boatId }: { boatId: number }) {
     <ul className="flex flex-col gap-1">
       {plans.data.map((plan) => (
         <li key={plan.id}>
-          <Link to={paths.plan.href(plan.id)}>{plan.name}</Link>{' '}
+          <Link to={paths.tacklePlan.href(plan.id)}>{plan.name}</Link>{' '}
           <span className="text-sm text-ink-600">
             (<Quantity value={plan.windKn} kind="speed" />)
           </span>
@@ -48,7 +48,7 @@ function BoatScreen({ boatId }: { boatId: number }) {
   const club = useClub();
   const update = useUpdateBoat(boatId);
   const remove = useDeleteBoat();
-  const createPlan = useCreatePlan();
+  const createTacklePlan = useCreateTacklePlan();
   const navigate = useNavigate();
   const [savingWind, setSavingWind] = useState<number | undefined>(undefined);
   const [confirmDelete, setConfirmDelete] = useState(false);
@@ -67,18 +67,18 @@ function BoatScreen({ boatId }: { boatId: number }) {
   }
   const handleSavePlan = (draft: PlanDraft) => {
     setSavingWind(draft.windKn);
-    createPlan
+    createTacklePlan
       .mutateAsync({ boatId, ...draft })
-      .then((saved) => navigate(paths.plan.href(saved.plan.id)))
+      .then((saved) => navigate(paths.tacklePlan.href(saved.plan.id)))
       .catch(() => undefined)
       .finally(() => setSavingWind(undefined));
   };
   return (
     <Page title={boat.data.name} intro={<p>Suggested ground tackle for 30 kn and for 60 kn.</p>}>
       <UnitToggle />
-      {createPlan.isError && (
+      {createTacklePlan.isError && (
         <Alert tone="error" title="Couldn't save the plan">
-          <p>{errorMessage(createPlan.error)}</p>
+          <p>{errorMessage(createTacklePlan.error)}</p>
         </Alert>
       )}
       <section aria-labelledby="rec-heading" className="flex flex-col gap-3">

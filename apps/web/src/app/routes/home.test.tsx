@@ -124,7 +124,7 @@ describe('the member home', () => {
     const boats = await screen.findByRole('region', { name: 'My boats' });
     expect(await within(boats).findByRole('link', { name: 'Summer anchorage' })).toHaveAttribute(
       'href',
-      '/plans/31',
+      '/tackle-plans/31',
     );
     expect(within(boats).getByText(/Chain: 8 mm grade 43,/)).toBeInTheDocument();
     expect(within(boats).queryByText(/grade grade|G43/i)).toBeNull();

@@ -10,7 +10,7 @@ import { useListing } from '@/features/exchange/api/get-listing';
 import { ListingDetail } from '@/features/exchange/components/listing-detail';
 import { OwnerActions } from '@/features/exchange/components/owner-actions';
 import { ReportListingForm } from '@/features/exchange/components/report-listing-form';
-import { MessageForm } from '@/features/messages/components/message-form';
+import { MessageForm } from '@/features/conversations/components/message-form';
 
 /** One listing: details, the seller's controls or the buyer's message box, and a report link. */
 export function ListingRoute() {
@@ -60,7 +60,7 @@ export function ListingRoute() {
             listingId={l.id}
             label="Your message"
             submitLabel="Send message"
-            onSent={(threadId) => void navigate(paths.thread.href(threadId))}
+            onSent={(threadId) => void navigate(paths.conversation.href(threadId))}
           />
         </section>
       )}

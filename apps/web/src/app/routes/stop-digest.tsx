@@ -8,7 +8,7 @@ import { errorMessage } from '@/lib/form-errors';
 import { useStopDigest } from '@/features/auth/api/stop-digest';
 
 /**
- * The stop link in a digest e-mail lands here (`/notifications/stop-digest?token=…`). It asks before it changes
+ * The stop link in a digest e-mail lands here (`/notices/stop-digest?token=…`). It asks before it changes
  * anything, so a mail scanner that follows links cannot turn the digest off.
  */
 export function StopDigestRoute() {

@@ -7,7 +7,7 @@ import { UnavailablePage } from '@/components/ui/unavailable-page';
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/form-errors';
 import { RequireAuth } from '@/features/auth/components/require-auth';
-import { usePlans } from '@/features/plans/api/get-plans';
+import { useTacklePlans } from '@/features/tackle-plans/api/get-tackle-plans';
 import { useReadiness, useSaveReadiness } from '@/features/storm/api/readiness';
 import { CheckPanel } from '@/features/storm/components/check-panel';
 import { ReadinessForm } from '@/features/storm/components/readiness-form';
@@ -17,7 +17,7 @@ import { TackleUnits } from './calculators-units';
 
 function OwnerForm({ watchId, boatId }: { watchId: number; boatId: number }) {
   const query = useReadiness(watchId, boatId);
-  const plans = usePlans(boatId);
+  const plans = useTacklePlans(boatId);
   const save = useSaveReadiness(watchId, boatId);
   if (!query.data || plans.isPending) return <Spinner label="Loading the boat's plans…" />;
   const { watch, readiness } = query.data;

@@ -7,7 +7,7 @@ import { apiUrl } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { usePayments } from '@/features/treasury/api/get-payments';
-import { usePlans } from '@/features/treasury/api/get-plans';
+import { useMembershipPlans } from '@/features/treasury/api/get-membership-plans';
 import { useRoster } from '@/features/treasury/api/get-roster';
 import { useSummary } from '@/features/treasury/api/get-summary';
 import { useRecordPayment } from '@/features/treasury/api/record-payment';
@@ -20,7 +20,7 @@ function TreasuryScreen() {
   const summary = useSummary();
   const payments = usePayments();
   const roster = useRoster();
-  const plans = usePlans();
+  const plans = useMembershipPlans();
   const record = useRecordPayment();
   const s = summary.data;
   const held = payments.data?.filter((p) => p.status === 'held') ?? [];
@@ -38,8 +38,8 @@ function TreasuryScreen() {
         <Link to={paths.treasuryRoster.href()} className="font-bold">
           Member roster and reminders
         </Link>
-        <Link to={paths.treasuryPlans.href()} className="font-bold">
-          Plans and fiscal calendar
+        <Link to={paths.membershipPlans.href()} className="font-bold">
+          Membership plans and fiscal calendar
         </Link>
         <a href={apiUrl('/treasury/ledger.csv')} download className="font-bold">
           Download the ledger (CSV)
