@@ -14,7 +14,7 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from '../modules/listings/exchange-testing';
+} from '../testing/exchange';
 import { buildUser, client, createTestApp, resetDb } from '../testing/test-app';
 
 const uploadDir = mkdtempSync(join(tmpdir(), 'rw-limits-'));

@@ -2,9 +2,9 @@ import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { listRoutes } from '../lib/routes';
 import { MembershipPlan, Payment, Topic } from '../models';
-import { chainListing, exchangeFixture, grantPaidUp } from '../modules/listings/exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../testing/exchange';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../modules/search/post-index';
+import { resetPostIndex } from '../modules/posts/post-index';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
 
 // Property-based input tests (fast-check): random JSON thrown at every state-changing route.

@@ -10,9 +10,9 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from '../modules/listings/exchange-testing';
+} from '../testing/exchange';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../modules/search/post-index';
+import { resetPostIndex } from '../modules/posts/post-index';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
 
 // Insecure direct object references: a signed-in, paid-up member guesses the ids of another member's rows.

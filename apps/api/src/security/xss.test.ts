@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { HIDDEN_CHARACTERS } from '@app/shared';
 import { Comment, MembershipPlan, Report } from '../models';
-import { chainListing, exchangeFixture, grantPaidUp } from '../modules/listings/exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../testing/exchange';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
 import { OWASP_XSS_FILTER_EVASION_PAYLOADS } from '../modules/posts/testing/owasp-xss-payloads';
-import { resetPostIndex } from '../modules/search/post-index';
+import { resetPostIndex } from '../modules/posts/post-index';
 import {
   buildUser,
   client,

@@ -14,7 +14,7 @@ import { withNamedLock } from '../../lib/serialize';
 import { Membership, MembershipPlan, Payment, Refund, User } from '../../models';
 import { cachedClub } from '../club/club-cache';
 import { getSetting } from '../club/club.service';
-import { stripeClient } from '../payments/stripe-client';
+import { stripeClient } from '../../lib/stripe-client';
 import {
   duesStatus,
   fiscalYearOf,

@@ -8,7 +8,7 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from './exchange-testing';
+} from '../../testing/exchange';
 import { catchUpListingIndex, searchIndex } from './listing-index';
 
 const built = createTestApp();

@@ -4,7 +4,7 @@ import { Listing, ListingReport, User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
-import { DecisionRecord } from '../moderation/decisions.service';
+import { DecisionRecord } from '../audit/decision-record';
 import { refreshListing } from './listing-index';
 import { getVisibleListing, listingUrl, type ExchangeContext } from './listings.service';
 

@@ -7,7 +7,7 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from './exchange-testing';
+} from '../../testing/exchange';
 import { sweepExpiredListings } from './listing-expiry';
 import { anonymousListingDetail, clearAnonymousListingCache } from './listing-read-cache';
 

@@ -12,13 +12,13 @@ import {
   User,
 } from '../../models';
 import type { Logger } from '../../logger';
-import { getSetting } from '../club/club.service';
-import { isPaidUp, membershipPaidUp } from '../dues/paid-up';
+import { assertMayTrade } from '../dues/may-trade';
+import { membershipPaidUp } from '../dues/paid-up';
 import { actionEmail } from '../mail/templates';
 import { enqueueEmail } from '../mail/outbox.service';
 import { notify } from '../posts/notifications.service';
 import { notifySavedSearches } from '../saved-searches/saved-searches.service';
-import { refreshListing } from './listing-index';
+import { matchesCriteria, refreshListing } from './listing-index';
 import { checkSpecs, sizeMmOf, type ParsedListing } from './listing-specs';
 
 export interface ExchangeContext {
@@ -132,25 +132,6 @@ export async function sellerOf(sellerId: number, at = new Date()): Promise<Selle
   return sellerDtoOf(user, at, true);
 }
 
-const PAID_UP_NEEDED = {
-  list: 'The club asks for a paid-up membership before gear is listed. Pay your dues, then publish; your draft is kept.',
-  message:
-    'The club asks for a paid-up membership before members message sellers. Pay your dues on the Dues page, then send your message again.',
-} as const;
-
-/**
- * Throws FORBIDDEN when the club's trading policy (`listingRequiresPaidUp`, an admin setting) is on and the actor
- * is not paid up: it covers publishing a listing and opening a conversation with a seller.
- */
-export async function assertMayTrade(
-  actor: User,
-  action: keyof typeof PAID_UP_NEEDED,
-  at = new Date(),
-) {
-  if (!(await getSetting('listingRequiresPaidUp'))) return;
-  if (!(await isPaidUp(actor.id, at))) throw new AppError('FORBIDDEN', PAID_UP_NEEDED[action]);
-}
-
 /** Throws FORBIDDEN when the club requires a paid-up membership to list and the actor is not paid up. */
 export const assertMayList = (actor: User, at = new Date()) => assertMayTrade(actor, 'list', at);
 
@@ -181,7 +162,7 @@ function fieldsOf(input: ParsedListing) {
 async function afterActivated(ctx: ExchangeContext, listing: Listing) {
   await refreshListing(listing.id);
   try {
-    await notifySavedSearches(ctx, listing);
+    await notifySavedSearches(ctx, listing, matchesCriteria);
   } catch (err) {
     ctx.logger?.error({ err, listingId: listing.id }, 'saved-search alerts not queued');
   }

@@ -1,7 +1,7 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, ListingReport } from '../../models';
 import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
-import { chainListing, exchangeFixture, grantPaidUp } from '../listings/exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../../testing/exchange';
 
 const built = createTestApp();
 afterAll(() => built.close());

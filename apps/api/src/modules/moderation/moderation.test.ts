@@ -1,7 +1,7 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Comment, Post, Report } from '../../models';
 import { docOf, seedTopics } from '../posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import {
   buildUser,
   client,

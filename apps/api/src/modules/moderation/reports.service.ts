@@ -5,8 +5,8 @@ import { Comment, Post, Report, type User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { notify } from '../posts/notifications.service';
 import { canSeeComment, loadVisiblePost } from '../posts/post-access';
-import { indexPost } from '../search/post-index';
-import { DecisionRecord } from './decisions.service';
+import { indexPost } from '../posts/post-index';
+import { DecisionRecord } from '../audit/decision-record';
 
 type ReportInput = z.output<typeof reportInputSchema>;
 type Resolve = z.output<typeof resolveReportSchema>;

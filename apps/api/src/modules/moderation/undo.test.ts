@@ -1,9 +1,9 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { UNDO_WINDOW_MS } from '@app/shared';
 import { AuditEvent, Listing, ListingReport, ModerationDecision, Post } from '../../models';
-import { chainListing, exchangeFixture, grantPaidUp } from '../listings/exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../../testing/exchange';
 import { docOf, seedTopics } from '../posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import {
   buildUser,
   client,

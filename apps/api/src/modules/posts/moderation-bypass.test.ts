@@ -1,7 +1,7 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { Post } from '../../models';
 import { setSetting } from '../club/club.service';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
 import { SETUP, docOf, seedTopics } from './testing/knowledge-fixtures';
 

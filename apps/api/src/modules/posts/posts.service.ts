@@ -5,7 +5,7 @@ import { AppError, invalid, notFound } from '../../errors/app-error';
 import { Boat, Post, Topic, Vote, type PostRevision, type User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { getSetting } from '../club/club.service';
-import { indexPost } from '../search/post-index';
+import { indexPost } from './post-index';
 import { renderBody } from './body-render';
 import { editRatio } from './edit-size';
 import { POST_INCLUDE, isModerator, loadOwnPost, publicWhere } from './post-access';

@@ -2,7 +2,7 @@ import { tacklePlan } from '@app/calc';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Post } from '../../models';
 import { setSetting } from '../club/club.service';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import {
   buildUser,
   client,

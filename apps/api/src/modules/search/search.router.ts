@@ -4,7 +4,7 @@ import type { Logger } from '../../logger';
 import { approvedCommentCounts, canSeePost } from '../posts/post-access';
 import { toPostSummaryDto } from '../posts/posts.presenter';
 import { postsByIds } from '../posts/posts.service';
-import { ensurePostIndex, highlight, searchPosts, snippet } from './post-index';
+import { ensurePostIndex, highlight, searchPosts, snippet } from '../posts/post-index';
 
 /** Search over published posts; the index is built from MariaDB when the app starts. */
 export function searchRouter(logger: Logger) {

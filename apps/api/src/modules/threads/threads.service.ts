@@ -4,7 +4,7 @@ import { AppError, notFound } from '../../errors/app-error';
 import { Listing, ListingMessage, ListingThread, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
-import { assertMayTrade } from '../listings/listings.service';
+import { assertMayTrade } from '../dues/may-trade';
 
 const PREVIEW = 140;
 

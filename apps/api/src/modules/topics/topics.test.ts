@@ -2,7 +2,7 @@ import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import type { TopicDto } from '@app/shared';
 import { AuditEvent, Topic } from '../../models';
 import { docOf, seedTopics } from '../posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
 
 const built = createTestApp();

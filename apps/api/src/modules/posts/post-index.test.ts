@@ -1,7 +1,7 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import type { User } from '../../models';
 import { Post } from '../../models';
-import { seedTopics } from '../posts/testing/knowledge-fixtures';
+import { seedTopics } from './testing/knowledge-fixtures';
 import { buildUser, createTestApp, resetDb } from '../../testing/test-app';
 import { highlight, resetPostIndex, searchPosts, snippet } from './post-index';
 
