@@ -1,15 +1,15 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { listingSearchSchema } from '@app/shared';
-import { Listing } from '../../models';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
+import { Listing } from '../models';
+import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
 import {
   chainListing,
   exchangeFixture,
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from '../../testing/exchange';
-import { catchUpListingIndex, searchIndex } from './listing-index';
+} from '../testing/exchange';
+import { catchUpListingIndex, searchIndex } from '../modules/listings/listing-index';
 
 const built = createTestApp();
 afterAll(() => built.close());
