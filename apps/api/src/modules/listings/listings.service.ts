@@ -20,6 +20,7 @@ import { notify } from '../posts/notifications.service';
 import { notifySavedSearches } from '../saved-searches/saved-searches.service';
 import { matchesCriteria, refreshListing } from './listing-index';
 import { checkSpecs, sizeMmOf, type ParsedListing } from './listing-specs';
+import { canEditListing, canSeeListing } from '../../policies/listings';
 
 export interface ExchangeContext {
   publicUrl: string;
@@ -31,8 +32,6 @@ const DAY_MS = 86_400_000;
 const expiryFrom = (at: Date) => new Date(at.getTime() + LISTING_LIFETIME_DAYS * DAY_MS);
 export const listingUrl = (ctx: ExchangeContext, id: number) =>
   `${ctx.publicUrl}/exchange/listings/${id}`;
-
-const isModerator = (u: User | null) => !!u && (u.hasRole('moderator') || u.hasRole('admin'));
 
 const LISTING_INCLUDE = [
   { model: Harbor, as: 'harbor' },
@@ -83,15 +82,13 @@ export async function getVisibleListingPage(
 }
 
 function assertVisible(viewer: User | null, listing: Listing) {
-  const mine = viewer?.id === listing.sellerId;
-  const isPublic = ['active', 'sold'].includes(listing.status) && listing.hiddenAt === null;
-  if (!isPublic && !mine && !isModerator(viewer)) throw notFound('Listing');
+  if (!canSeeListing(viewer, listing)) throw notFound('Listing');
 }
 
 /** The actor's own listing; anyone else's is reported as not found. */
 export async function getOwnListing(actor: User, id: number): Promise<Listing> {
   const listing = await loadListing(id);
-  if (!listing || listing.sellerId !== actor.id) throw notFound('Listing');
+  if (!listing || !canEditListing(actor, listing)) throw notFound('Listing');
   return listing;
 }
 

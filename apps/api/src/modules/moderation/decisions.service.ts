@@ -10,6 +10,7 @@ import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { notify } from '../posts/notifications.service';
 import { indexPost } from '../posts/post-index';
+import { canUndoDecision } from '../../policies/moderation';
 
 export interface UndoContext {
   publicUrl: string;
@@ -57,7 +58,7 @@ export async function undoDecision(ctx: UndoContext, actor: User, decisionId: nu
       lock: t.LOCK.UPDATE,
     });
     if (!d) throw notFound('Decision');
-    if (d.actorId !== actor.id && !actor.hasRole('admin'))
+    if (!canUndoDecision(actor, d))
       throw new AppError(
         'FORBIDDEN',
         'Only the moderator who made this decision, or an admin, can undo it',
