@@ -50,7 +50,7 @@ const common = {
   LOG_LEVEL: 'silent',
   UPLOAD_DIR: uploadDir,
 };
-mustRun(TSX, ['apps/api/src/cli/seed-bench.ts'], { env: common });
+mustRun(TSX, ['apps/api/bench/seed-bench.ts'], { env: common });
 const counts = rootSql(
   cfg,
   `SELECT (SELECT COUNT(*) FROM \`${DB}\`.users), (SELECT COUNT(*) FROM \`${DB}\`.listings WHERE status='active'), (SELECT COUNT(*) FROM \`${DB}\`.posts);`,

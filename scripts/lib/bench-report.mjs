@@ -108,7 +108,7 @@ export function writeBenchmarksDoc({ startedAt, machine, texts = {} }) {
       'node scripts/bench-lighthouse.mjs http://127.0.0.1:4310 / /calculators  # against a running app',
       '```',
       '',
-      'The API bench uses its own database (`rodewise_bench_api`) on the test MariaDB (port 3308), seeds the demo club and enlarges it (apps/api/seeders/bench-enlarge.ts), builds the client into `.data/bench/web` (or `BENCH_WEB_DIST`) when missing, and starts the API with `NODE_ENV=production` on port 4810, logging only warnings to `.data/bench/api-server.log`.',
+      'The API bench uses its own database (`rodewise_bench_api`) on the test MariaDB (port 3308), seeds the demo club and enlarges it (apps/api/bench/bench-enlarge.ts), builds the client into `.data/bench/web` (or `BENCH_WEB_DIST`) when missing, and starts the API with `NODE_ENV=production` on port 4810, logging only warnings to `.data/bench/api-server.log`.',
     ].join('\n'),
   );
   out.push('');

@@ -40,12 +40,9 @@ import { stormRouter } from './modules/storm/storm.router';
 import { topicsRouter } from './modules/topics/topics.router';
 import { uploadsFromStorage, uploadsRouter, uploadsStatic } from './modules/uploads/uploads.router';
 import { s3Storage } from './modules/uploads/s3-storage';
-import { configureImageQuota, startImageSweeper } from './modules/uploads/image-quota';
+import { configureImageQuota } from './modules/uploads/image-quota';
 import { configureStorage, DEFAULT_UPLOAD_DIR, localDiskStorage } from './modules/uploads/storage';
-import { startListingSweeper } from './modules/listings/listing-expiry';
 import { ensureListingIndex } from './modules/listings/listing-index';
-import { startListingIndexSync } from './modules/listings/listing-index-sync';
-import { startDigestJob } from './modules/posts/notification-digest';
 import { listingsRouter } from './modules/listings/listings.router';
 import { savedSearchesRouter } from './modules/saved-searches/saved-searches.router';
 import { threadsRouter } from './modules/threads/threads.router';
@@ -58,7 +55,7 @@ export interface AppDeps {
 
 export interface BuiltApp {
   app: Express;
-  /** Stops timers the app owns (session expiry sweeps). */
+  /** Stops timers the app owns (session expiry sweeps). The timed jobs are `jobs/runner.ts`'s. */
   close: () => void;
 }
 
@@ -252,15 +249,6 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
     cachedClub().catch((err: unknown) => logger.warn({ err }, 'club locale not read yet'));
   // The listing search index is built from MariaDB at start (and lazily on first search if that fails).
   ensureListingIndex().catch((err: unknown) => logger.warn({ err }, 'listing index not built yet'));
-  const stopListingSweeper =
-    env.NODE_ENV === 'test' ? () => undefined : startListingSweeper(exchange, logger);
-  // Listings written by other API processes on the same database reach this index within a poll or two.
-  const stopListingSync = env.NODE_ENV === 'test' ? () => undefined : startListingIndexSync(logger);
-  // Daily e-mail of unread notices for members who opted in (tests call sendNotificationDigests directly).
-  const stopDigests = env.NODE_ENV === 'test' ? () => undefined : startDigestJob(digest, logger);
-  // Hourly removal of post images that no saved post shows after the grace period.
-  const stopImageSweeper = env.NODE_ENV === 'test' ? () => undefined : startImageSweeper(logger);
-
   app.use('/api', notFoundHandler);
   if (env.STORAGE === 's3') app.use('/uploads', uploadsFromStorage());
   else app.use('/uploads', ...uploadsStatic(uploadDir));
@@ -299,10 +287,6 @@ export function createApp({ env, sequelize, logger }: AppDeps): BuiltApp {
   return {
     app,
     close: () => {
-      stopListingSweeper();
-      stopListingSync();
-      stopDigests();
-      stopImageSweeper();
       (store as unknown as { stopExpiringSessions?: () => void }).stopExpiringSessions?.();
     },
   };

@@ -1,6 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '@app/shared';
 import { listRoutes } from './lib/routes';
+import {
+  hasModeratorRole,
+  isAdmin,
+  isModeratorOrAdmin,
+  isTreasurer,
+  type Actor,
+} from './policies/roles';
 import { buildUser, client, createTestApp, resetDb } from './testing/test-app';
 
 type Who = 'visitor' | Role;
@@ -16,16 +23,25 @@ const SIGNED_IN: Row = {
   treasurer: 'ok',
   admin: 'ok',
 };
-const ADMIN: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 403, admin: 'ok' };
-const MODERATOR: Row = { visitor: 401, member: 403, moderator: 'ok', treasurer: 403, admin: 403 };
-const MODERATOR_OR_ADMIN: Row = {
-  visitor: 401,
-  member: 403,
-  moderator: 'ok',
-  treasurer: 403,
-  admin: 'ok',
-};
-const TREASURER: Row = { visitor: 401, member: 403, moderator: 403, treasurer: 'ok', admin: 403 };
+/**
+ * The row for a route behind a role rule: a visitor is asked to sign in, a person holding one role gets through
+ * when the policy (`policies/roles.ts`) lets that role through, and is refused otherwise.
+ */
+function rowFor(rule: (user: Actor) => boolean): Row {
+  const holding = (role: Role): Actor => ({ id: 1, hasRole: (r) => r === role });
+  const of = (role: Role): Expect => (rule(holding(role)) ? 'ok' : 403);
+  return {
+    visitor: 401,
+    member: of('member'),
+    moderator: of('moderator'),
+    treasurer: of('treasurer'),
+    admin: of('admin'),
+  };
+}
+const ADMIN = rowFor(isAdmin);
+const MODERATOR = rowFor(hasModeratorRole);
+const MODERATOR_OR_ADMIN = rowFor(isModeratorOrAdmin);
+const TREASURER = rowFor(isTreasurer);
 
 /**
  * Every route the app registers, with who may reach it. A route missing from this table fails the test, so a new

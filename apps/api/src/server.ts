@@ -6,7 +6,9 @@ import { createLogger } from './logger';
 import { migrateUp } from './migrator';
 import { initModels } from './models';
 import { closePasswordPool } from './modules/auth/password-hash';
-import { createTransport, startOutboxWorker } from './modules/mail/outbox.service';
+import { createTransport } from './modules/mail/outbox.service';
+import { JOBS } from './jobs/registry';
+import { startJobs } from './jobs/runner';
 
 const env = loadEnv();
 const logger = createLogger(env.LOG_LEVEL);
@@ -18,7 +20,8 @@ const applied = await migrateUp(sequelize);
 if (applied.length) logger.info({ applied }, 'migrations applied');
 
 const { app, close } = createApp({ env, sequelize, logger });
-const stopOutbox = startOutboxWorker(sequelize, createTransport(env), env, logger);
+// Every timed job (outbox, listing expiry and index sync, digests, image sweep) starts here and nowhere else.
+const jobs = startJobs(JOBS, { env, sequelize, logger, transport: createTransport(env) });
 let closing = false;
 // While shutting down, every answer closes its connection, so a keep-alive client sends its next request to the
 // load balancer (and so to another process) instead of to this one.
@@ -36,7 +39,7 @@ async function shutdown(signal: string) {
   if (closing) return;
   closing = true;
   logger.info({ signal }, 'shutting down');
-  stopOutbox();
+  jobs.stop();
   close();
   // No new connections; requests under way finish before the pool closes (closing it first answered them 500).
   const drained = new Promise<void>((resolve) => server.close(() => resolve()));

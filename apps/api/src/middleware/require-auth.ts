@@ -17,7 +17,7 @@ export const requireAuth = (): RequestHandler => (req, _res, next) => {
 
 /** Requires a signed-in user holding at least one of `roles`. */
 export const requireRole =
-  (...roles: Role[]): RequestHandler =>
+  (...roles: readonly Role[]): RequestHandler =>
   (req, _res, next) => {
     const user = currentUser(req);
     if (!roles.some((r) => user.hasRole(r))) {

@@ -14,8 +14,9 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from '../modules/listings/exchange-testing';
+} from '../testing/exchange';
 import { buildUser, client, createTestApp, resetDb } from '../testing/test-app';
+import { buildBoat } from '../testing/builders';
 
 const uploadDir = mkdtempSync(join(tmpdir(), 'rw-limits-'));
 const built = createTestApp({ UPLOAD_DIR: uploadDir });
@@ -38,19 +39,7 @@ const codes = (results: Array<{ status: number }>) => results.map((r) => r.statu
 describe('count-then-insert limits hold under concurrency', () => {
   it(`boats: ${RACERS} concurrent creates one short of the limit make exactly one boat`, async () => {
     const { user, c } = await member();
-    for (let i = 1; i < MAX_BOATS; i += 1)
-      await Boat.create({
-        ownerId: user.id,
-        name: `Boat ${i}`,
-        hull: 'sail',
-        loaM: 9,
-        beamM: null,
-        displacementKg: null,
-        draftM: null,
-        bowHeightM: 1,
-        gypsy: null,
-        homeHarborId: null,
-      });
+    for (let i = 1; i < MAX_BOATS; i += 1) await buildBoat(user, { name: `Boat ${i}` });
     const results = await Promise.all(
       Array.from({ length: RACERS }, (_, i) =>
         c.post('/api/boats', { name: `Racer ${i}`, hull: 'sail', loaM: 9 }),

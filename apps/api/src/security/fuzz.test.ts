@@ -1,11 +1,12 @@
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { listRoutes } from '../lib/routes';
-import { MembershipPlan, Payment, Topic } from '../models';
-import { chainListing, exchangeFixture, grantPaidUp } from '../modules/listings/exchange-testing';
+import { MembershipPlan, Payment, Topic, type User } from '../models';
+import { chainListing, exchangeFixture } from '../testing/exchange';
+import { signedInAs } from '../testing/sign-in';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../modules/search/post-index';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
+import { resetPostIndex } from '../modules/posts/post-index';
+import { buildUser, createTestApp, resetDb, type Client } from '../testing/test-app';
 
 // Property-based input tests (fast-check): random JSON thrown at every state-changing route.
 const built = createTestApp({
@@ -131,19 +132,18 @@ const STACK =
 
 const ids: Record<string, number> = {};
 let targetUserId = 0;
-let email = '';
+let everyRole: User | undefined;
 
 beforeAll(async () => {
   await resetDb();
   resetPostIndex();
   const harborId = (await exchangeFixture()).harbors[0]?.id ?? 0;
   const topicId = (await seedTopics())[0]?.id ?? 0;
-  const user = await buildUser({ roles: ['member', 'moderator', 'treasurer', 'admin'] });
-  await grantPaidUp(user);
-  email = user.email;
+  const { user, c } = await signedInAs(built, ['member', 'moderator', 'treasurer', 'admin'], {
+    paidUp: true,
+  });
+  everyRole = user;
   targetUserId = (await buildUser()).id;
-  const c = await client(built.app);
-  await c.signIn(email);
   const boat = { name: 'Fuzz Sloop', hull: 'sail', loaM: 9.75, beamM: 3.35, bowHeightM: 1.2 };
   ids.boatId = (await c.post('/api/boats', boat)).body.data.id as number;
   ids.planId = (
@@ -167,10 +167,7 @@ beforeAll(async () => {
   ).body.data.id as number;
   ids.listingId = (await c.post('/api/listings', { ...chainListing(harborId), publish: true })).body
     .data.id as number;
-  const seller = await buildUser();
-  await grantPaidUp(seller);
-  const s = await client(built.app);
-  await s.signIn(seller.email);
+  const { c: s } = await signedInAs(built, 'member', { paidUp: true });
   const theirs = (await s.post('/api/listings', { ...chainListing(harborId), publish: true })).body
     .data.id as number;
   ids.threadId = (await c.post('/api/threads', { listingId: theirs, body: 'Still for sale?' })).body
@@ -219,10 +216,9 @@ type Verb = 'post' | 'put' | 'patch' | 'delete';
 const writes = listRoutes(built.app).filter((r) => !['GET', 'HEAD'].includes(r.method));
 const validating = writes.filter((r) => !NO_BODY.has(`${r.method} ${r.path}`));
 
-async function signedIn(): Promise<Client> {
-  const c = await client(built.app);
-  expect((await c.signIn(email)).status).toBe(200);
-  return c;
+async function signedInWithEveryRole(): Promise<Client> {
+  if (!everyRole) throw new Error('beforeAll made no member');
+  return (await signedInAs(built, everyRole)).c;
 }
 
 /** Sends `body` as JSON and returns the status with the raw and parsed body. */
@@ -255,7 +251,7 @@ describe('random JSON at every write route', () => {
   it.each(validating)(
     '$method $path: wrong-typed real keys and non-object bodies always get a 4xx with a message',
     async ({ method, path }) => {
-      const c = await signedIn();
+      const c = await signedInWithEveryRole();
       // The route's required keys, as its own validation names them for an empty object.
       const empty = await send(c, method, path, {});
       expect(empty.status, `${method} ${path} with {}`).toBeLessThan(500);
@@ -279,7 +275,7 @@ describe('random JSON at every write route', () => {
   it.each(writes)(
     '$method $path: any JSON at all never gets a 5xx or a stack trace',
     async ({ method, path }) => {
-      const c = await signedIn();
+      const c = await signedInWithEveryRole();
       await fc.assert(
         fc.asyncProperty(anything, async (body) => {
           const res = await send(c, method, path, body);

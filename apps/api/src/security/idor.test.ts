@@ -4,16 +4,11 @@ import { join } from 'node:path';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Notification, Payment } from '../models';
-import {
-  chainListing,
-  exchangeFixture,
-  grantPaidUp,
-  postPhotos,
-  testJpeg,
-} from '../modules/listings/exchange-testing';
+import { chainListing, exchangeFixture, postPhotos, testJpeg } from '../testing/exchange';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../modules/search/post-index';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
+import { resetPostIndex } from '../modules/posts/post-index';
+import { createTestApp, resetDb, type Client } from '../testing/test-app';
+import { signedInAs } from '../testing/sign-in';
 
 // Insecure direct object references: a signed-in, paid-up member guesses the ids of another member's rows.
 // Every attempt must answer 404 (ids leak nothing, see DEVELOPERS.md) and change nothing in the database.
@@ -88,21 +83,13 @@ let intruder: Client;
 let ownerClient: Client;
 let intruderBoatId = 0;
 
-async function signedIn(paid: boolean) {
-  const user = await buildUser();
-  if (paid) await grantPaidUp(user);
-  const c = await client(built.app);
-  expect((await c.signIn(user.email)).status).toBe(200);
-  return { user, c };
-}
-
 beforeAll(async () => {
   await resetDb();
   resetPostIndex();
   harborId = (await exchangeFixture()).harbors[0]?.id ?? 0;
   const topicId = (await seedTopics())[0]?.id ?? 0;
-  const owner = await signedIn(true);
-  const buyer = await signedIn(true); // the club's policy: only paid-up members message sellers
+  const owner = await signedInAs(built, 'member', { paidUp: true });
+  const buyer = await signedInAs(built, 'member', { paidUp: true }); // the club's policy: only paid-up members message sellers
   const o = owner.c;
   ownerClient = o;
 
@@ -175,7 +162,7 @@ beforeAll(async () => {
   };
   for (const [k, v] of Object.entries(ids)) expect(v, k).toBeTruthy();
 
-  const i = await signedIn(true);
+  const i = await signedInAs(built, 'member', { paidUp: true });
   intruder = i.c;
   intruderBoatId = (await intruder.post('/api/boats', { ...boat, name: 'Intruder Sloop' })).body
     .data.id as number;

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { ListingPhoto } from '../models';
-import { chainListing, exchangeFixture, grantPaidUp } from '../modules/listings/exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../testing/exchange';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
 
 const uploadDir = mkdtempSync(join(tmpdir(), 'rw-multipart-'));

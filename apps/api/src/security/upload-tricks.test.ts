@@ -11,7 +11,7 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from '../modules/listings/exchange-testing';
+} from '../testing/exchange';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
 
 // Hostile files, all generated here (no binaries in the repository), sent to both upload routes.

@@ -1,13 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { HIDDEN_CHARACTERS } from '@app/shared';
 import { Comment, MembershipPlan, Report } from '../models';
-import { chainListing, exchangeFixture, grantPaidUp } from '../modules/listings/exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../testing/exchange';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
 import { OWASP_XSS_FILTER_EVASION_PAYLOADS } from '../modules/posts/testing/owasp-xss-payloads';
-import { resetPostIndex } from '../modules/search/post-index';
+import { resetPostIndex } from '../modules/posts/post-index';
 import {
   buildUser,
-  client,
   createTestApp,
   flushOutbox,
   inbox,
@@ -15,6 +14,7 @@ import {
   type Client,
 } from '../testing/test-app';
 import { executableMarkup, visibleText } from './html-check';
+import { signedInAs } from '../testing/sign-in';
 
 // OWASP XSS Filter Evasion Cheat Sheet payloads (OWASP Cheat Sheet Series, XSS_Filter_Evasion_Cheat_Sheet.md; the
 // list is the fixture modules/posts/testing/owasp-xss-payloads.ts) through every plain-text field the server stores
@@ -44,25 +44,18 @@ let admin: Client;
 let treasurer: Client;
 let planId = 0;
 
-async function signedIn(roles: Array<'member' | 'moderator' | 'admin' | 'treasurer'> = ['member']) {
-  const user = await buildUser({ roles });
-  const c = await client(built.app);
-  expect((await c.signIn(user.email)).status).toBe(200);
-  return { user, c };
-}
-
 beforeAll(async () => {
   await resetDb();
   resetPostIndex();
   harborId = (await exchangeFixture()).harbors[0]?.id ?? 0;
   topicId = (await seedTopics())[0]?.id ?? 0;
-  const m = await signedIn();
+  const m = await signedInAs(built);
   await grantPaidUp(m.user);
   member = m.c;
   memberEmail = m.user.email;
-  mod = (await signedIn(['member', 'moderator'])).c;
-  admin = (await signedIn(['member', 'admin'])).c;
-  treasurer = (await signedIn(['member', 'treasurer'])).c;
+  mod = (await signedInAs(built, ['member', 'moderator'])).c;
+  admin = (await signedInAs(built, ['member', 'admin'])).c;
+  treasurer = (await signedInAs(built, ['member', 'treasurer'])).c;
   const post = await member.post('/api/posts', {
     kind: 'question',
     title: 'Which snubber length?',
@@ -238,7 +231,7 @@ describe('OWASP XSS Filter Evasion Cheat Sheet payloads through plain-text field
 
   it('report reasons come back as the same text in the moderation queue', async () => {
     const fails = await failuresOf(fitting(1000, 3), async (p) => {
-      const reporter = (await signedIn()).c;
+      const reporter = (await signedInAs(built)).c;
       const res = await reporter.post('/api/reports', {
         targetType: 'post',
         targetId: approvedPostId,
@@ -289,7 +282,7 @@ describe('OWASP XSS Filter Evasion Cheat Sheet payloads through plain-text field
 
 describe('OWASP payloads in outgoing e-mail', () => {
   it('thread messages: display name, listing title and message are escaped in the mail HTML', async () => {
-    const seller = await signedIn();
+    const seller = await signedInAs(built);
     await grantPaidUp(seller.user);
     const fails = await failuresOf(fitting(80, 3), async (p) => {
       const listing = await seller.c.post('/api/listings', {

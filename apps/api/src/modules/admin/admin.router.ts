@@ -5,12 +5,13 @@ import { setRolesSchema, userListQuerySchema } from '@app/shared';
 import { currentUser, requireRole } from '../../middleware/require-auth';
 import { toUserDto } from '../auth/user.presenter';
 import { listUsers, setRoles } from './users.service';
+import { ROLES_ADMIN } from '../../policies/roles';
 
 const userParams = z.object({ userId: z.coerce.number().int().positive('Unknown user') });
 
 export function adminRouter(sequelize: Sequelize) {
   const r = Router();
-  r.use(requireRole('admin'));
+  r.use(requireRole(...ROLES_ADMIN));
   r.get('/users', async (req, res) => {
     const { q } = userListQuerySchema.parse(req.query);
     res.json({ data: (await listUsers(q)).map(toUserDto) });

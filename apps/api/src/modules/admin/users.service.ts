@@ -5,6 +5,7 @@ import { User, UserRole } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
+import { dropsOwnAdminRole } from '../../policies/admin';
 
 /** Users matching `q` (name or e-mail), with roles, for the admin page. */
 export function listUsers(q?: string) {
@@ -24,7 +25,7 @@ export function listUsers(q?: string) {
  * by accident. Logged to the audit trail; the user is told by e-mail.
  */
 export async function setRoles(sequelize: Sequelize, actor: User, userId: number, roles: Role[]) {
-  if (actor.id === userId && actor.hasRole('admin') && !roles.includes('admin')) {
+  if (dropsOwnAdminRole(actor, userId, roles)) {
     throw new AppError('CONFLICT', 'You cannot remove your own admin role. Ask another admin.', {
       roles: 'Keep admin for yourself',
     });

@@ -3,6 +3,7 @@ import type { boatInputSchema, boatPatchSchema } from '@app/shared';
 import { AppError, notFound } from '../../errors/app-error';
 import { withParentLocked } from '../../lib/serialize';
 import { Boat, Harbor, User } from '../../models';
+import { ownsBoat } from '../../policies/boats';
 
 type BoatInput = z.output<typeof boatInputSchema>;
 type BoatPatch = z.output<typeof boatPatchSchema>;
@@ -16,7 +17,7 @@ export const listBoats = (actor: User) =>
 /** One of the actor's boats; someone else's boat is reported as not found (no existence oracle). */
 export async function getOwnBoat(actor: User, boatId: number): Promise<Boat> {
   const boat = await Boat.findByPk(boatId);
-  if (!boat || boat.ownerId !== actor.id) throw notFound('Boat');
+  if (!boat || !ownsBoat(actor, boat)) throw notFound('Boat');
   return boat;
 }
 

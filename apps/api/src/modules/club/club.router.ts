@@ -4,6 +4,7 @@ import { currentUser, requireRole } from '../../middleware/require-auth';
 import { recordAudit } from '../audit/audit.service';
 import { cachedClub, clearClubCache, clearClubCacheOnWrites } from './club-cache';
 import { getSetting, setSetting } from './club.service';
+import { ROLES_ADMIN } from '../../policies/roles';
 
 export function clubRouter() {
   const r = Router();
@@ -12,7 +13,7 @@ export function clubRouter() {
     res.json({ data: await cachedClub() });
   });
   /** `PUT /api/club/locale` (admin): the club's region, currency and default units. */
-  r.put('/locale', requireRole('admin'), async (req, res) => {
+  r.put('/locale', requireRole(...ROLES_ADMIN), async (req, res) => {
     const next = clubLocaleSchema.parse(req.body);
     const before = await getSetting('locale');
     await setSetting('locale', next);

@@ -14,7 +14,7 @@ import { withNamedLock } from '../../lib/serialize';
 import { Membership, MembershipPlan, Payment, Refund, User } from '../../models';
 import { cachedClub } from '../club/club-cache';
 import { getSetting } from '../club/club.service';
-import { stripeClient } from '../payments/stripe-client';
+import { stripeClient } from '../../lib/stripe-client';
 import {
   duesStatus,
   fiscalYearOf,
@@ -26,6 +26,7 @@ import {
 import { ALREADY_PAID } from './ledger-effects';
 import { owedOn, type Owed } from './owed';
 import { toPaymentDto, toPlanDto } from './dues.presenter';
+import { ownsPayment } from '../../policies/treasury';
 
 /** The club's dues calendar setting. */
 export const duesCalendar = (transaction?: Transaction): Promise<DuesCalendar> =>
@@ -301,7 +302,7 @@ const STATUS_MESSAGES: Record<Payment['status'], string> = {
 /** The member's own checkout, for the confirmation page; someone else's is not found. */
 export async function checkoutStatus(actor: User, sessionId: string): Promise<CheckoutStatusDto> {
   const payment = await Payment.findOne({ where: { providerSessionId: sessionId } });
-  if (!payment || payment.userId !== actor.id) throw notFound('Checkout');
+  if (!payment || !ownsPayment(actor, payment)) throw notFound('Checkout');
   const membership = await Membership.findOne({ where: { userId: actor.id } });
   const message =
     payment.status === 'pending' && payment.note

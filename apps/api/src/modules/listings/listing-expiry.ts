@@ -1,5 +1,3 @@
-import { runWithLease } from '../../lib/job-lease';
-import type { Logger } from '../../logger';
 import { Listing, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
@@ -46,29 +44,4 @@ export async function sweepExpiredListings(ctx: ExchangeContext, at = new Date()
     }
   }
   return { expired };
-}
-
-/**
- * Runs the sweep every `intervalMs` (default hourly); returns a stop function. Errors are logged and retried.
- * The `listing-expiry` lease makes one process of a cluster sweep per interval.
- */
-export function startListingSweeper(ctx: ExchangeContext, logger: Logger, intervalMs = 3_600_000) {
-  const tick = () => {
-    const db = Listing.sequelize;
-    if (!db) return;
-    runWithLease(db, 'listing-expiry', intervalMs * 0.9, () => sweepExpiredListings(ctx)).then(
-      (r) => {
-        if (r.ran && r.result.expired) logger.info(r.result, 'listings expired');
-      },
-      (err: unknown) => logger.debug({ err }, 'listing sweep skipped'),
-    );
-  };
-  const timer = setInterval(tick, intervalMs);
-  timer.unref();
-  const first = setTimeout(tick, 5_000);
-  first.unref();
-  return () => {
-    clearInterval(timer);
-    clearTimeout(first);
-  };
 }

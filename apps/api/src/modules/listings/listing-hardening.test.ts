@@ -1,15 +1,9 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { Listing, ListingMessage, Membership, OutboxEmail } from '../../models';
 import { clipSubject } from '../mail/outbox.service';
-import {
-  buildUser,
-  client,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  resetDb,
-} from '../../testing/test-app';
-import { chainListing, exchangeFixture, grantPaidUp } from './exchange-testing';
+import { client, createTestApp, flushOutbox, inbox, resetDb } from '../../testing/test-app';
+import { chainListing, exchangeFixture } from '../../testing/exchange';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -18,14 +12,6 @@ beforeEach(async () => {
   await resetDb();
   harborId = (await exchangeFixture()).harbors[0]?.id ?? 0;
 });
-
-async function signedIn(paid = true) {
-  const user = await buildUser();
-  if (paid) await grantPaidUp(user);
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return { user, c };
-}
 
 describe('publishing a listing answers 500 yet goes live', () => {
   it('clips a subject on a whole character, with an ellipsis, to the column width', () => {
@@ -38,13 +24,13 @@ describe('publishing a listing answers 500 yet goes live', () => {
   });
 
   it('publishes with a long saved-search name and title: 201, live, and the alert queued with a clipped subject', async () => {
-    const watcher = await signedIn(false);
+    const watcher = await signedInAs(built);
     const name = `${'Grade 43 chain for the long passage south '.repeat(2)}`.slice(0, 80);
     expect(
       (await watcher.c.post('/api/saved-searches', { name, criteria: { category: 'chain' } }))
         .status,
     ).toBe(201);
-    const seller = await signedIn();
+    const seller = await signedInAs(built, 'member', { paidUp: true });
     const title = `Grade 43 chain ${'x'.repeat(85)}`.slice(0, 100);
     const res = await seller.c.post('/api/listings', {
       ...chainListing(harborId, { title }),
@@ -59,9 +45,9 @@ describe('publishing a listing answers 500 yet goes live', () => {
   });
 
   it('a failure while queueing alerts never fails the seller’s publish', async () => {
-    const watcher = await signedIn(false);
+    const watcher = await signedInAs(built);
     await watcher.c.post('/api/saved-searches', { name: 'Chain', criteria: { category: 'chain' } });
-    const seller = await signedIn();
+    const seller = await signedInAs(built, 'member', { paidUp: true });
     const draft = await seller.c.post('/api/listings', chainListing(harborId));
     const { sequelize } = built;
     await sequelize.query('RENAME TABLE outbox_emails TO outbox_emails_away');
@@ -84,7 +70,7 @@ describe('publishing a listing answers 500 yet goes live', () => {
 describe('listing state changes are atomic', () => {
   it('concurrent sold and withdraw leave one consistent state: one wins, the other is refused', async () => {
     for (let round = 0; round < 5; round += 1) {
-      const seller = await signedIn();
+      const seller = await signedInAs(built, 'member', { paidUp: true });
       const id = (
         await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
       ).body.data.id as number;
@@ -106,7 +92,7 @@ describe('listing state changes are atomic', () => {
   });
 
   it('two concurrent relists of a withdrawn listing: one relists, the other is refused', async () => {
-    const seller = await signedIn();
+    const seller = await signedInAs(built, 'member', { paidUp: true });
     const id = (await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true }))
       .body.data.id as number;
     await seller.c.post(`/api/listings/${id}/withdraw`);
@@ -138,21 +124,21 @@ describe('display names: no control or bidi characters; replies follow the paid-
     });
     expect(signup.status).toBe(400);
     expect(signup.body.error.fields.displayName).toMatch(/control or text-direction/);
-    const { c: member } = await signedIn(false);
+    const { c: member } = await signedInAs(built);
     const rename = await member.patch('/api/account', { displayName });
     expect(rename.status).toBe(400);
     expect(rename.body.error.fields.displayName).toMatch(/control or text-direction/);
   });
 
   it('keeps a name with accents, other scripts and an emoji', async () => {
-    const { c } = await signedIn(false);
+    const { c } = await signedInAs(built);
     const res = await c.patch('/api/account', { displayName: 'Zoë Ó Néill ⚓ 海' });
     expect(res.status).toBe(200);
   });
 
   async function openConversation() {
-    const seller = await signedIn();
-    const buyer = await signedIn();
+    const seller = await signedInAs(built, 'member', { paidUp: true });
+    const buyer = await signedInAs(built, 'member', { paidUp: true });
     const listingId = (
       await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
     ).body.data.id as number;

@@ -4,14 +4,15 @@ import { Listing, ListingReport, User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
-import { DecisionRecord } from '../moderation/decisions.service';
+import { DecisionRecord } from '../audit/decision-record';
 import { refreshListing } from './listing-index';
 import { getVisibleListing, listingUrl, type ExchangeContext } from './listings.service';
+import { canReportListing } from '../../policies/listings';
 
 /** A member reports a listing they can see (not their own); once per member and listing. */
 export async function reportListing(actor: User, id: number, reason: string) {
   const listing = await getVisibleListing(actor, id);
-  if (listing.sellerId === actor.id)
+  if (!canReportListing(actor, listing))
     throw new AppError('CONFLICT', 'You cannot report your own listing');
   try {
     return await ListingReport.create({

@@ -7,9 +7,10 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from './exchange-testing';
+} from '../../testing/exchange';
 import { sweepExpiredListings } from './listing-expiry';
 import { anonymousListingDetail, clearAnonymousListingCache } from './listing-read-cache';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -29,12 +30,6 @@ async function publishedListing(paidUp = true) {
   expect(created.status).toBe(201);
   if (!paidUp) await Membership.update({ paidThrough: null }, { where: { userId: user.id } });
   return { id: created.body.data.id as number, seller, user };
-}
-
-async function signedIn(roles: Array<'member' | 'moderator'>) {
-  const c = await client(built.app);
-  expect((await c.signIn((await buildUser({ roles })).email)).status).toBe(200);
-  return c;
 }
 
 /** The SQL statements the app sends while `fn` runs that read the listing page's tables. */
@@ -103,7 +98,7 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
   it("updates a member's paid-up badge as soon as the membership changes, and never shows it to visitors", async () => {
     const { id, user } = await publishedListing(false);
     const visitor = await client(built.app);
-    const member = await signedIn(['member']);
+    const member = (await signedInAs(built, 'member')).c;
     expect((await member.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(false);
     expect((await visitor.get(`/api/listings/${id}`)).body.data.seller).not.toHaveProperty(
       'paidUp',
@@ -149,7 +144,7 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
   });
   it('keeps serving visitors the copy it holds, but gives signed-in members and the seller the live page', async () => {
     const { id, seller } = await publishedListing();
-    const member = await signedIn(['member']);
+    const member = (await signedInAs(built, 'member')).c;
     const visitor = await client(built.app);
     expect((await visitor.get(`/api/listings/${id}`)).body.data.title).toBe(
       'Grade 43 chain, 3/8 inch, 30 m',
@@ -192,8 +187,8 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
 
   it('hides a listing a moderator hides from visitors at once, while the moderator and the seller still see it', async () => {
     const { id, seller } = await publishedListing();
-    const mod = await signedIn(['member', 'moderator']);
-    const member = await signedIn(['member']);
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
+    const member = (await signedInAs(built, 'member')).c;
     const visitor = await client(built.app);
     expect((await visitor.get(`/api/listings/${id}`)).status).toBe(200);
     const hidden = await mod.post(`/api/listings/${id}/hide`, { reason: 'Reported as a scam' });
@@ -231,8 +226,8 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
 
   it('stops showing a withdrawn listing to visitors and other members; the seller and moderators still see it', async () => {
     const { id, seller } = await publishedListing();
-    const mod = await signedIn(['member', 'moderator']);
-    const member = await signedIn(['member']);
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
+    const member = (await signedInAs(built, 'member')).c;
     const visitor = await client(built.app);
     expect((await visitor.get(`/api/listings/${id}`)).status).toBe(200);
     expect((await seller.post(`/api/listings/${id}/withdraw`)).status).toBe(200);
@@ -244,7 +239,7 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
 
   it('stops showing a listing to visitors as soon as the sweep expires it', async () => {
     const { id, seller } = await publishedListing();
-    const mod = await signedIn(['member', 'moderator']);
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
     const visitor = await client(built.app);
     expect((await visitor.get(`/api/listings/${id}`)).status).toBe(200);
     const ctx = { publicUrl: built.env.PUBLIC_URL };
@@ -293,7 +288,7 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
     const { id, user } = await publishedListing();
     const lapsed = new Date(Date.now() - 10 * 86_400_000).toISOString().slice(0, 10);
     await Membership.update({ paidThrough: lapsed }, { where: { userId: user.id } });
-    const member = await signedIn(['member']);
+    const member = (await signedInAs(built, 'member')).c;
     // Ten days past paid-through, inside the plan's 30-day default grace period.
     expect((await member.get(`/api/listings/${id}`)).body.data.seller.paidUp).toBe(true);
     const m = await Membership.findOne({ where: { userId: user.id } });

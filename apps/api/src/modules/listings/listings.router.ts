@@ -26,6 +26,7 @@ import { toListingDto, toListingPhotoDto } from './listings.presenter';
 import { searchResponse } from './search-response';
 import * as listings from './listings.service';
 import { threadsOfListing } from '../threads/threads.service';
+import { ROLES_MODERATOR } from '../../policies/roles';
 
 const listingParams = idParam('listingId');
 const photoParams = z.object({
@@ -84,7 +85,7 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
     const mine = await listings.listMine(actor);
     res.json({ data: mine.map((l) => toListingDto(l, seller, { isMine: true })) });
   });
-  r.get('/reports', requireRole('moderator'), async (_req, res) => {
+  r.get('/reports', requireRole(...ROLES_MODERATOR), async (_req, res) => {
     const reports = await moderation.openReports();
     res.json({
       data: reports.map((x): ListingReportDto => ({
@@ -98,7 +99,7 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
       })),
     });
   });
-  r.post('/reports/:reportId/dismiss', requireRole('moderator'), async (req, res) => {
+  r.post('/reports/:reportId/dismiss', requireRole(...ROLES_MODERATOR), async (req, res) => {
     const { reportId } = reportParams.parse(req.params);
     const { note } = dismissListingReportSchema.parse(req.body ?? {});
     const decision = await moderation.dismissReport(currentUser(req), Number(reportId), note);
@@ -183,7 +184,7 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
     await moderation.reportListing(currentUser(req), idOf(req), reason);
     res.status(201).json({ data: { reported: true } });
   });
-  r.post('/:listingId/hide', requireRole('moderator'), async (req, res) => {
+  r.post('/:listingId/hide', requireRole(...ROLES_MODERATOR), async (req, res) => {
     const id = idOf(req);
     const { decision } = await moderation.hideListing(
       ctx,
@@ -193,7 +194,7 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
     );
     res.json({ data: { ...(await show(req, id)), decisionId: decision.id } });
   });
-  r.post('/:listingId/unhide', requireRole('moderator'), async (req, res) => {
+  r.post('/:listingId/unhide', requireRole(...ROLES_MODERATOR), async (req, res) => {
     const id = idOf(req);
     await moderation.unhideListing(currentUser(req), id);
     res.json({ data: await show(req, id) });

@@ -12,14 +12,15 @@ import {
   User,
 } from '../../models';
 import type { Logger } from '../../logger';
-import { getSetting } from '../club/club.service';
-import { isPaidUp, membershipPaidUp } from '../dues/paid-up';
+import { assertMayTrade } from '../dues/may-trade';
+import { membershipPaidUp } from '../dues/paid-up';
 import { actionEmail } from '../mail/templates';
 import { enqueueEmail } from '../mail/outbox.service';
 import { notify } from '../posts/notifications.service';
 import { notifySavedSearches } from '../saved-searches/saved-searches.service';
-import { refreshListing } from './listing-index';
+import { matchesCriteria, refreshListing } from './listing-index';
 import { checkSpecs, sizeMmOf, type ParsedListing } from './listing-specs';
+import { canEditListing, canSeeListing } from '../../policies/listings';
 
 export interface ExchangeContext {
   publicUrl: string;
@@ -31,8 +32,6 @@ const DAY_MS = 86_400_000;
 const expiryFrom = (at: Date) => new Date(at.getTime() + LISTING_LIFETIME_DAYS * DAY_MS);
 export const listingUrl = (ctx: ExchangeContext, id: number) =>
   `${ctx.publicUrl}/exchange/listings/${id}`;
-
-const isModerator = (u: User | null) => !!u && (u.hasRole('moderator') || u.hasRole('admin'));
 
 const LISTING_INCLUDE = [
   { model: Harbor, as: 'harbor' },
@@ -83,15 +82,13 @@ export async function getVisibleListingPage(
 }
 
 function assertVisible(viewer: User | null, listing: Listing) {
-  const mine = viewer?.id === listing.sellerId;
-  const isPublic = ['active', 'sold'].includes(listing.status) && listing.hiddenAt === null;
-  if (!isPublic && !mine && !isModerator(viewer)) throw notFound('Listing');
+  if (!canSeeListing(viewer, listing)) throw notFound('Listing');
 }
 
 /** The actor's own listing; anyone else's is reported as not found. */
 export async function getOwnListing(actor: User, id: number): Promise<Listing> {
   const listing = await loadListing(id);
-  if (!listing || listing.sellerId !== actor.id) throw notFound('Listing');
+  if (!listing || !canEditListing(actor, listing)) throw notFound('Listing');
   return listing;
 }
 
@@ -132,25 +129,6 @@ export async function sellerOf(sellerId: number, at = new Date()): Promise<Selle
   return sellerDtoOf(user, at, true);
 }
 
-const PAID_UP_NEEDED = {
-  list: 'The club asks for a paid-up membership before gear is listed. Pay your dues, then publish; your draft is kept.',
-  message:
-    'The club asks for a paid-up membership before members message sellers. Pay your dues on the Dues page, then send your message again.',
-} as const;
-
-/**
- * Throws FORBIDDEN when the club's trading policy (`listingRequiresPaidUp`, an admin setting) is on and the actor
- * is not paid up: it covers publishing a listing and opening a conversation with a seller.
- */
-export async function assertMayTrade(
-  actor: User,
-  action: keyof typeof PAID_UP_NEEDED,
-  at = new Date(),
-) {
-  if (!(await getSetting('listingRequiresPaidUp'))) return;
-  if (!(await isPaidUp(actor.id, at))) throw new AppError('FORBIDDEN', PAID_UP_NEEDED[action]);
-}
-
 /** Throws FORBIDDEN when the club requires a paid-up membership to list and the actor is not paid up. */
 export const assertMayList = (actor: User, at = new Date()) => assertMayTrade(actor, 'list', at);
 
@@ -181,7 +159,7 @@ function fieldsOf(input: ParsedListing) {
 async function afterActivated(ctx: ExchangeContext, listing: Listing) {
   await refreshListing(listing.id);
   try {
-    await notifySavedSearches(ctx, listing);
+    await notifySavedSearches(ctx, listing, matchesCriteria);
   } catch (err) {
     ctx.logger?.error({ err, listingId: listing.id }, 'saved-search alerts not queued');
   }

@@ -20,7 +20,7 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from './exchange-testing';
+} from '../../testing/exchange';
 import { sweepExpiredListings } from './listing-expiry';
 
 const dir = mkdtempSync(join(tmpdir(), 'rw-listings-'));

@@ -8,7 +8,7 @@ import {
   inbox,
   resetDb,
 } from '../../testing/test-app';
-import { chainListing, exchangeFixture, grantPaidUp } from './exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../../testing/exchange';
 
 const built = createTestApp();
 afterAll(() => built.close());

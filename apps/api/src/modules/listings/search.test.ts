@@ -3,7 +3,7 @@ import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import type { ListingInput } from '@app/shared';
 import { Boat } from '../../models';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
-import { chainListing, exchangeFixture, grantPaidUp } from './exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../../testing/exchange';
 import { rebuildListingIndex, searchIndex } from './listing-index';
 import { listingSearchSchema } from '@app/shared';
 

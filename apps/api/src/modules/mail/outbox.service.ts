@@ -1,7 +1,6 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import { Op, type Sequelize, type Transaction } from 'sequelize';
 import type { Env } from '../../config/env';
-import { acquireLease } from '../../lib/job-lease';
 import type { Logger } from '../../logger';
 import { OutboxEmail } from '../../models';
 
@@ -183,39 +182,4 @@ export async function drainOutbox(
     }
   }
   return { sent, failed, claimed: claimed.length };
-}
-
-/** How long the `outbox` lease lasts; the worker renews it before each round, so a dead sender is replaced this fast. */
-export const OUTBOX_LEASE_MS = 15_000;
-
-/**
- * Polls the outbox every `intervalMs`; returns a stop function. Errors (database or SMTP down) are logged and
- * retried. Only the process holding the `outbox` lease sends (on Galera, SKIP LOCKED holds on one node only).
- */
-export function startOutboxWorker(
-  sequelize: Sequelize,
-  transport: Transporter,
-  env: Env,
-  logger: Logger,
-) {
-  let stopped = false;
-  let timer: NodeJS.Timeout | undefined;
-  const tick = async () => {
-    if (stopped) return;
-    try {
-      let r;
-      do {
-        if (!(await acquireLease(sequelize, 'outbox', OUTBOX_LEASE_MS))) break;
-        r = await drainOutbox(sequelize, transport, env.MAIL_FROM, logger);
-      } while (!stopped && r.claimed > 0 && r.failed === 0);
-    } catch (err) {
-      logger.debug({ err }, 'outbox round skipped');
-    }
-    if (!stopped) timer = setTimeout(() => void tick(), env.OUTBOX_INTERVAL_MS);
-  };
-  timer = setTimeout(() => void tick(), 200);
-  return () => {
-    stopped = true;
-    if (timer) clearTimeout(timer);
-  };
 }

@@ -1,125 +1,16 @@
-import { Op, type Model, type ModelStatic, type Transaction } from 'sequelize';
+import { Op, type Model, type Transaction } from 'sequelize';
 import { UNDO_WINDOW_MS } from '@app/shared';
 import { AppError, notFound } from '../../errors/app-error';
-import {
-  Comment,
-  Listing,
-  ListingReport,
-  ModerationDecision,
-  Notification,
-  OutboxEmail,
-  Post,
-  Report,
-  User,
-  type DecisionNotices,
-  type RowChange,
-} from '../../models';
+import { ModerationDecision, Notification, OutboxEmail, User, type RowChange } from '../../models';
 import type { AuditArea } from '../../models/audit-event.model';
 import { recordAudit } from '../audit/audit.service';
+import { canon, fromJson, MODELS, toJson } from '../audit/decision-record';
 import { refreshListing } from '../listings/listing-index';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { notify } from '../posts/notifications.service';
-import { indexPost } from '../search/post-index';
-
-type Kind = RowChange['kind'];
-const MODELS: Record<Kind, ModelStatic<Model>> = {
-  post: Post,
-  comment: Comment,
-  report: Report,
-  listing: Listing,
-  'listing-report': ListingReport,
-};
-
-/** Column values as JSON (dates tagged so they come back as dates). */
-const toJson = (v: unknown): unknown =>
-  v instanceof Date ? { $date: v.toISOString() } : (v ?? null);
-const fromJson = (v: unknown): unknown =>
-  v !== null && typeof v === 'object' && '$date' in v && typeof v.$date === 'string'
-    ? new Date(v.$date)
-    : v;
-/** A canonical text of a value (object keys sorted), to compare a column now with what a decision left. */
-function canon(v: unknown): string {
-  if (Array.isArray(v)) return `[${v.map(canon).join(',')}]`;
-  if (v !== null && typeof v === 'object')
-    return `{${Object.keys(v)
-      .sort()
-      .map((k) => `${JSON.stringify(k)}:${canon((v as Record<string, unknown>)[k])}`)
-      .join(',')}}`;
-  return JSON.stringify(v ?? null);
-}
-
-/** Who a notice went to: the in-app notice and e-mail ids a decision queued. */
-export interface Told {
-  userId: number;
-  notificationId?: number | null;
-  emailId?: number | null;
-}
-
-/**
- * Collects what one decision changes, inside its transaction: `update()` instead of `row.update()` remembers
- * the columns' values before; `told()` remembers the notices; `save()` stores the decision for Undo.
- */
-export class DecisionRecord {
-  private rows = new Map<string, { kind: Kind; id: number; before: Record<string, unknown> }>();
-  private notices: DecisionNotices = { notifications: [], emails: [], emailTo: [] };
-
-  constructor(readonly transaction: Transaction) {}
-
-  async update<M extends Model>(kind: Kind, row: M, values: Record<string, unknown>) {
-    const id = Number(row.get('id'));
-    const key = `${kind}:${id}`;
-    const entry = this.rows.get(key) ?? { kind, id, before: {} };
-    this.rows.set(key, entry);
-    for (const f of Object.keys(values))
-      if (!(f in entry.before)) entry.before[f] = toJson(row.get(f));
-    await row.update(values, { transaction: this.transaction });
-  }
-
-  told(t: Told | null | undefined) {
-    if (!t) return;
-    if (t.notificationId) this.notices.notifications.push(t.notificationId);
-    if (t.emailId) {
-      this.notices.emails.push(t.emailId);
-      this.notices.emailTo.push({ emailId: t.emailId, userId: t.userId });
-    }
-  }
-
-  async save(
-    actor: User,
-    meta: {
-      area: AuditArea;
-      action: string;
-      subjectType: string;
-      subjectId: number;
-      title: string;
-      /** Where a correction links to (inside the app), e.g. /knowledge/12. */
-      path: string | null;
-    },
-  ) {
-    const { path, ...rest } = meta;
-    const changes: RowChange[] = [];
-    for (const e of this.rows.values()) {
-      // Read back what the database holds (its date precision), so a later comparison is exact.
-      const fresh = await MODELS[e.kind].findByPk(e.id, { transaction: this.transaction });
-      const after: Record<string, unknown> = {};
-      for (const f of Object.keys(e.before)) after[f] = toJson(fresh?.get(f));
-      changes.push({ kind: e.kind, id: e.id, before: e.before, after });
-    }
-    return ModerationDecision.create(
-      {
-        actorId: actor.id,
-        ...rest,
-        title: meta.title.slice(0, 200),
-        changes,
-        notices: { ...this.notices, path },
-        undoneAt: null,
-        undoneById: null,
-      },
-      { transaction: this.transaction },
-    );
-  }
-}
+import { indexPost } from '../posts/post-index';
+import { canUndoDecision } from '../../policies/moderation';
 
 export interface UndoContext {
   publicUrl: string;
@@ -167,7 +58,7 @@ export async function undoDecision(ctx: UndoContext, actor: User, decisionId: nu
       lock: t.LOCK.UPDATE,
     });
     if (!d) throw notFound('Decision');
-    if (d.actorId !== actor.id && !actor.hasRole('admin'))
+    if (!canUndoDecision(actor, d))
       throw new AppError(
         'FORBIDDEN',
         'Only the moderator who made this decision, or an admin, can undo it',

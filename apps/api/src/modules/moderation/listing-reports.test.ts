@@ -1,7 +1,8 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, ListingReport } from '../../models';
-import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
-import { chainListing, exchangeFixture, grantPaidUp } from '../listings/exchange-testing';
+import { createTestApp, resetDb } from '../../testing/test-app';
+import { chainListing, exchangeFixture } from '../../testing/exchange';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -11,25 +12,17 @@ beforeEach(async () => {
   harborId = (await exchangeFixture()).harbors[0]?.id ?? 0;
 });
 
-async function signedIn(roles: Array<'member' | 'moderator'> = ['member']) {
-  const user = await buildUser({ roles });
-  await grantPaidUp(user);
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return { user, c };
-}
-
 /** A published chain listing, reported once by another member. */
 async function reportedListing() {
-  const seller = await signedIn();
+  const seller = await signedInAs(built, 'member', { paidUp: true });
   const listingId = (
     await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
   ).body.data.id as number;
-  const reporter = await signedIn();
+  const reporter = await signedInAs(built, 'member', { paidUp: true });
   await reporter.c.post(`/api/listings/${listingId}/reports`, {
     reason: 'The photos show a different chain',
   });
-  const mod = await signedIn(['member', 'moderator']);
+  const mod = await signedInAs(built, ['member', 'moderator'], { paidUp: true });
   const reports = (await mod.c.get('/api/listings/reports')).body.data as Array<{
     id: number;
     reason: string;

@@ -3,7 +3,7 @@ import { User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { notify } from '../posts/notifications.service';
-import type { Told } from './decisions.service';
+import type { Told } from '../audit/decision-record';
 
 export interface OutcomeNotice {
   userId: number;

@@ -17,6 +17,7 @@ import { toAuditEntryDto, toQueueCommentDto, toReportDto } from './moderation.pr
 import { undoDecision } from './decisions.service';
 import * as mod from './moderation.service';
 import { createReport, resolveReport } from './reports.service';
+import { ROLES_MODERATOR, ROLES_MODERATOR_OR_ADMIN } from '../../policies/roles';
 
 const pageQuery = z.object({ page: z.coerce.number().int().min(1).max(1000).default(1) });
 const id = (name: string, p: unknown) => Number(idParam(name).parse(p)[name]);
@@ -25,17 +26,21 @@ const id = (name: string, p: unknown) => Number(idParam(name).parse(p)[name]);
 export function moderationRouter(ctx: mod.ModContext) {
   const r = Router();
   // Undo is also open to admins (who may undo any moderator's decision); the rest is moderators only.
-  r.post('/decisions/:decisionId/undo', requireRole('moderator', 'admin'), async (req, res) => {
-    const d = await undoDecision(ctx, currentUser(req), id('decisionId', req.params));
-    const data: UndoResultDto = {
-      id: d.id,
-      subjectType: d.subjectType,
-      subjectId: d.subjectId,
-      undoneAt: (d.undoneAt ?? new Date()).toISOString(),
-    };
-    res.json({ data });
-  });
-  r.use(requireRole('moderator'));
+  r.post(
+    '/decisions/:decisionId/undo',
+    requireRole(...ROLES_MODERATOR_OR_ADMIN),
+    async (req, res) => {
+      const d = await undoDecision(ctx, currentUser(req), id('decisionId', req.params));
+      const data: UndoResultDto = {
+        id: d.id,
+        subjectType: d.subjectType,
+        subjectId: d.subjectId,
+        undoneAt: (d.undoneAt ?? new Date()).toISOString(),
+      };
+      res.json({ data });
+    },
+  );
+  r.use(requireRole(...ROLES_MODERATOR));
   r.get('/queue', async (_req, res) => {
     const q = await mod.queue();
     const counts = await approvedCommentCounts(q.posts.map((p) => p.id));

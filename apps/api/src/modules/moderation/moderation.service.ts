@@ -16,8 +16,8 @@ import {
 import { recordAudit } from '../audit/audit.service';
 import { notifyReply, postPath } from '../posts/comments.service';
 import { POST_INCLUDE } from '../posts/post-access';
-import { indexPost } from '../search/post-index';
-import { DecisionRecord } from './decisions.service';
+import { indexPost } from '../posts/post-index';
+import { DecisionRecord } from '../audit/decision-record';
 import { tellAuthor } from './moderation-mail';
 
 type Decision = z.output<typeof decisionSchema>;

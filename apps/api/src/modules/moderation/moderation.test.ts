@@ -1,15 +1,9 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Comment, Post, Report } from '../../models';
 import { docOf, seedTopics } from '../posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../search/post-index';
-import {
-  buildUser,
-  client,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  resetDb,
-} from '../../testing/test-app';
+import { resetPostIndex } from '../posts/post-index';
+import { client, createTestApp, flushOutbox, inbox, resetDb } from '../../testing/test-app';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -20,15 +14,8 @@ beforeEach(async () => {
   topicId = (await seedTopics())[0]?.id ?? 0;
 });
 
-async function signedIn(roles: Array<'member' | 'moderator'> = ['member']) {
-  const user = await buildUser({ roles });
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return { user, c };
-}
-
 async function publishedPost() {
-  const mod = await signedIn(['member', 'moderator']);
+  const mod = await signedInAs(built, ['member', 'moderator']);
   const res = await mod.c.post('/api/posts', {
     kind: 'article',
     title: 'Storm lines at the club moorings',
@@ -47,7 +34,7 @@ const actions = async () =>
 describe('moderation routes', () => {
   it('answer 401 to a visitor and 403 to a plain member', async () => {
     const visitor = await client(built.app);
-    const { c } = await signedIn();
+    const { c } = await signedInAs(built);
     for (const [method, url] of [
       ['get', '/api/moderation/queue'],
       ['get', '/api/moderation/count'],
@@ -69,9 +56,9 @@ describe('moderation routes', () => {
 describe('reports', () => {
   it('report → queue → resolve by hiding: target hidden, reporters told, every step in the audit log', async () => {
     const { mod, postId } = await publishedPost();
-    const reporter = await signedIn();
-    const second = await signedIn();
-    const author = await signedIn();
+    const reporter = await signedInAs(built);
+    const second = await signedInAs(built);
+    const author = await signedInAs(built);
     const commentId = (
       await author.c.post(`/api/posts/${postId}/comments`, { body: 'Buy my mooring lines cheap!' })
     ).body.data.id as number;
@@ -136,7 +123,7 @@ describe('reports', () => {
 
   it('dismissing a report leaves the post alone', async () => {
     const { mod, postId } = await publishedPost();
-    const reporter = await signedIn();
+    const reporter = await signedInAs(built);
     const r = await reporter.c.post('/api/reports', {
       targetType: 'post',
       targetId: postId,
@@ -152,7 +139,7 @@ describe('reports', () => {
 
 describe('pin, lock, hide and send back', () => {
   it('logs each flag, blocks comments on a locked post, and tells the author of a hidden post', async () => {
-    const member = await signedIn();
+    const member = await signedInAs(built);
     const post = await member.c.post('/api/posts', {
       kind: 'article',
       title: 'Windlass gypsy wear',
@@ -161,7 +148,7 @@ describe('pin, lock, hide and send back', () => {
       submit: true,
     });
     const postId = post.body.data.id as number;
-    const mod = await signedIn(['member', 'moderator']);
+    const mod = await signedInAs(built, ['member', 'moderator']);
     const back = await mod.c.post(`/api/moderation/posts/${postId}/decision`, {
       action: 'request-changes',
       reason: 'Add a photo of the wear',

@@ -4,9 +4,10 @@ import { AppError, notFound } from '../../errors/app-error';
 import { Comment, Post, Report, type User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { notify } from '../posts/notifications.service';
-import { canSeeComment, loadVisiblePost } from '../posts/post-access';
-import { indexPost } from '../search/post-index';
-import { DecisionRecord } from './decisions.service';
+import { loadVisiblePost } from '../posts/post-access';
+import { canSeeComment } from '../../policies/posts';
+import { indexPost } from '../posts/post-index';
+import { DecisionRecord } from '../audit/decision-record';
 
 type ReportInput = z.output<typeof reportInputSchema>;
 type Resolve = z.output<typeof resolveReportSchema>;
@@ -30,7 +31,7 @@ export async function createReport(actor: User, input: ReportInput) {
   if (input.targetType === 'post') await loadVisiblePost(actor, input.targetId);
   else {
     const comment = await Comment.findByPk(input.targetId);
-    if (!comment || !canSeeComment(comment, actor)) throw notFound('Comment');
+    if (!comment || !canSeeComment(actor, comment)) throw notFound('Comment');
     await loadVisiblePost(actor, comment.postId);
   }
   const dup = await Report.count({

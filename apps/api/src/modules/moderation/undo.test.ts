@@ -1,18 +1,11 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { UNDO_WINDOW_MS } from '@app/shared';
 import { AuditEvent, Listing, ListingReport, ModerationDecision, Post } from '../../models';
-import { chainListing, exchangeFixture, grantPaidUp } from '../listings/exchange-testing';
+import { chainListing, exchangeFixture, grantPaidUp } from '../../testing/exchange';
 import { docOf, seedTopics } from '../posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../search/post-index';
-import {
-  buildUser,
-  client,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  resetDb,
-  testDb,
-} from '../../testing/test-app';
+import { resetPostIndex } from '../posts/post-index';
+import { client, createTestApp, flushOutbox, inbox, resetDb, testDb } from '../../testing/test-app';
+import { signedInAs, type SignedIn } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -25,18 +18,11 @@ beforeEach(async () => {
   harborId = (await exchangeFixture()).harbors[0]?.id ?? 0;
 });
 
-async function signedIn(roles: Array<'member' | 'moderator' | 'admin'> = ['member']) {
-  const user = await buildUser({ roles });
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return { user, c };
-}
-
 const TITLE = 'Riding sail for a swinging mooring';
 
 /** A member's post waiting for a moderator, and a moderator. */
 async function waitingPost() {
-  const author = await signedIn();
+  const author = await signedInAs(built);
   const res = await author.c.post('/api/posts', {
     kind: 'article',
     title: TITLE,
@@ -44,11 +30,11 @@ async function waitingPost() {
     body: docOf('Why', 'A small riding sail stops the bow sheering about at anchor.'),
     submit: true,
   });
-  const mod = await signedIn(['member', 'moderator']);
+  const mod = await signedInAs(built, ['member', 'moderator']);
   return { author, mod, postId: res.body.data.id as number };
 }
 
-const undo = (c: Awaited<ReturnType<typeof signedIn>>['c'], decisionId: number) =>
+const undo = (c: SignedIn['c'], decisionId: number) =>
   c.post(`/api/moderation/decisions/${decisionId}/undo`);
 
 describe('undo a moderation decision', () => {
@@ -141,7 +127,7 @@ describe('undo a moderation decision', () => {
     const decided = await mod.c.post(`/api/moderation/posts/${postId}/decision`, {
       action: 'publish',
     });
-    const other = await signedIn(['member', 'moderator']);
+    const other = await signedInAs(built, ['member', 'moderator']);
     await other.c.patch(`/api/moderation/posts/${postId}/flags`, {
       hidden: true,
       reason: 'Checking a complaint',
@@ -162,13 +148,13 @@ describe('undo a moderation decision', () => {
     });
     const decisionId = decided.body.data.decisionId as number;
     expect((await undo(author.c, decisionId)).status).toBe(403);
-    const other = await signedIn(['member', 'moderator']);
+    const other = await signedInAs(built, ['member', 'moderator']);
     const refused = await undo(other.c, decisionId);
     expect(refused.status).toBe(403);
     expect(refused.body.error.message).toMatch(/moderator who made this decision, or an admin/);
     expect((await Post.findByPk(postId))?.status).toBe('rejected');
-    expect((await undo((await signedIn(['member'])).c, 99999)).status).toBe(403);
-    const admin = await signedIn(['member', 'admin']);
+    expect((await undo((await signedInAs(built, 'member')).c, 99999)).status).toBe(403);
+    const admin = await signedInAs(built, ['member', 'admin']);
     expect((await undo(admin.c, 99999)).status).toBe(404);
     expect((await undo(admin.c, decisionId)).status).toBe(200);
     expect((await Post.findByPk(postId))?.status).toBe('pending');
@@ -200,15 +186,15 @@ describe('undo a moderation decision', () => {
   });
 
   it('shows a hidden listing again, reopens its report and withdraws the unsent mail to the seller', async () => {
-    const seller = await signedIn();
+    const seller = await signedInAs(built);
     await grantPaidUp(seller.user);
     const listingId = (
       await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
     ).body.data.id as number;
-    const reporter = await signedIn();
+    const reporter = await signedInAs(built);
     await grantPaidUp(reporter.user);
     await reporter.c.post(`/api/listings/${listingId}/reports`, { reason: 'Wrong chain grade' });
-    const mod = await signedIn(['member', 'moderator']);
+    const mod = await signedInAs(built, ['member', 'moderator']);
     const hidden = await mod.c.post(`/api/listings/${listingId}/hide`, {
       reason: 'The grade stamp is not shown',
     });
@@ -231,15 +217,15 @@ describe('undo a moderation decision', () => {
   });
 
   it('reopens a dismissed listing report', async () => {
-    const seller = await signedIn();
+    const seller = await signedInAs(built);
     await grantPaidUp(seller.user);
     const listingId = (
       await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
     ).body.data.id as number;
-    const reporter = await signedIn();
+    const reporter = await signedInAs(built);
     await grantPaidUp(reporter.user);
     await reporter.c.post(`/api/listings/${listingId}/reports`, { reason: 'Looks rusty' });
-    const mod = await signedIn(['member', 'moderator']);
+    const mod = await signedInAs(built, ['member', 'moderator']);
     const [report] = (await mod.c.get('/api/listings/reports')).body.data as Array<{ id: number }>;
     const dismissed = await mod.c.post(`/api/listings/reports/${report?.id}/dismiss`, {
       note: 'Surface rust only',

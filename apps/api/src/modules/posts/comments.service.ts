@@ -5,7 +5,9 @@ import { AppError, invalid, notFound } from '../../errors/app-error';
 import { Comment, Post, User, Vote } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { notify } from './notifications.service';
-import { canSeeComment, isModerator, loadVisiblePost } from './post-access';
+import { loadVisiblePost } from './post-access';
+import { canAcceptAnswer, canSeeComment, canVoteOn, isPostAuthor } from '../../policies/posts';
+import { hasModeratorRole } from '../../policies/roles';
 import { toCommentDto } from './posts.presenter';
 
 type CommentInput = z.output<typeof commentInputSchema>;
@@ -49,11 +51,11 @@ export async function addComment(actor: User, postId: number, input: CommentInpu
   if (post.lockedAt) throw new AppError('CONFLICT', 'This post is locked: no new comments');
   if (input.parentId) {
     const parent = await Comment.findByPk(input.parentId);
-    if (!parent || parent.postId !== post.id || !canSeeComment(parent, actor))
+    if (!parent || parent.postId !== post.id || !canSeeComment(actor, parent))
       throw invalid({ parentId: 'That comment is not on this post' });
     if (parent.parentId !== null) throw invalid({ parentId: 'Reply to the top-level comment' });
   }
-  const mod = isModerator(actor);
+  const mod = hasModeratorRole(actor);
   const comment = await Comment.create({
     postId: post.id,
     authorId: actor.id,
@@ -83,7 +85,7 @@ export async function commentThread(viewer: User | null, post: Post): Promise<Co
     include: [{ model: User, as: 'author', attributes: ['id', 'displayName'] }],
     order: [['id', 'ASC']],
   });
-  const visible = rows.filter((c) => canSeeComment(c, viewer));
+  const visible = rows.filter((c) => canSeeComment(viewer, c));
   const top = new Map<number, CommentDto>();
   for (const c of visible)
     if (c.parentId === null) top.set(c.id, toCommentDto(c, post.acceptedCommentId));
@@ -98,8 +100,7 @@ export async function commentThread(viewer: User | null, post: Post): Promise<Co
  */
 export async function acceptAnswer(actor: User, postId: number, commentId: number | null) {
   const post = await loadVisiblePost(actor, postId);
-  const mod = isModerator(actor);
-  if (post.authorId !== actor.id && !mod)
+  if (!canAcceptAnswer(actor, post))
     throw new AppError('FORBIDDEN', 'Only the asker or a moderator can accept an answer');
   if (post.kind !== 'question') throw new AppError('CONFLICT', 'Only questions have answers');
   let answer: Comment | null = null;
@@ -109,7 +110,7 @@ export async function acceptAnswer(actor: User, postId: number, commentId: numbe
       throw invalid({ commentId: 'Choose a published answer on this question' });
   }
   await post.update({ acceptedCommentId: commentId });
-  if (post.authorId !== actor.id)
+  if (!isPostAuthor(actor, post))
     await recordAudit({
       actorId: actor.id,
       area: 'moderation',
@@ -137,7 +138,7 @@ async function recount(post: Post) {
 export async function vote(actor: User, postId: number) {
   const post = await loadVisiblePost(actor, postId);
   if (post.status !== 'approved') throw notFound('Post');
-  if (post.authorId === actor.id)
+  if (!canVoteOn(actor, post))
     throw new AppError('CONFLICT', 'You cannot mark your own post helpful');
   try {
     await Vote.create({ postId: post.id, userId: actor.id });

@@ -3,7 +3,7 @@ import { seedDemo } from '../../../seeders/demo';
 import { Comment, Notification, OutboxEmail, Post, Report, Topic, User } from '../../models';
 import { sendNotificationDigests } from './notification-digest';
 import { client, createTestApp, resetDb } from '../../testing/test-app';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 
 const built = createTestApp();
 afterAll(() => built.close());

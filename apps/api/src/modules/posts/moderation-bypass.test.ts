@@ -1,9 +1,10 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { Post } from '../../models';
 import { setSetting } from '../club/club.service';
-import { resetPostIndex } from '../search/post-index';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
+import { resetPostIndex } from '../posts/post-index';
+import { client, createTestApp, resetDb, type Client } from '../../testing/test-app';
 import { SETUP, docOf, seedTopics } from './testing/knowledge-fixtures';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -14,13 +15,6 @@ beforeEach(async () => {
   topics = (await seedTopics()).map((t) => t.id);
   await setSetting('substantialEditRatio', 0.3);
 });
-
-async function signedIn(roles: Array<'member' | 'moderator'> = ['member']) {
-  const user = await buildUser({ roles });
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return { user, c };
-}
 
 const WORDS =
   'Our plow anchor set first time in sand with forty metres of chain out in thirty knots';
@@ -41,8 +35,8 @@ const withLink = (href: string) => ({
 
 /** A published post by a member, and a moderator's client. */
 async function published(body: object = docOf('Notes', WORDS)) {
-  const author = await signedIn();
-  const mod = (await signedIn(['member', 'moderator'])).c;
+  const author = await signedInAs(built);
+  const mod = (await signedInAs(built, ['member', 'moderator'])).c;
   const res = await author.c.post('/api/posts', {
     kind: 'article',
     title: 'A night at anchor in the sound',

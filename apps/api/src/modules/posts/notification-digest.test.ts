@@ -1,6 +1,6 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { Notification, OutboxEmail, User } from '../../models';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import {
   buildUser,
   client,

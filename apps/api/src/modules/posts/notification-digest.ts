@@ -1,8 +1,6 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
 import { Op } from 'sequelize';
 import { invalid } from '../../errors/app-error';
-import { runWithLease } from '../../lib/job-lease';
-import type { Logger } from '../../logger';
 import { Notification, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
@@ -129,31 +127,4 @@ export async function sendNotificationDigests(ctx: DigestContext, at = new Date(
     if (mailed) sent += 1;
   }
   return { sent, considered: users.length };
-}
-
-/**
- * Runs the digest every `intervalMs` (hourly by default); returns a stop function. Errors are logged and retried.
- * The `notification-digest` lease makes one process of a cluster run each round.
- */
-export function startDigestJob(ctx: DigestContext, logger: Logger, intervalMs = 3_600_000) {
-  const tick = () => {
-    const db = User.sequelize;
-    if (!db) return;
-    runWithLease(db, 'notification-digest', intervalMs * 0.9, () =>
-      sendNotificationDigests(ctx),
-    ).then(
-      (r) => {
-        if (r.ran && r.result.sent) logger.info(r.result, 'notification digests queued');
-      },
-      (err: unknown) => logger.debug({ err }, 'digest round skipped'),
-    );
-  };
-  const timer = setInterval(tick, intervalMs);
-  timer.unref();
-  const first = setTimeout(tick, 15_000);
-  first.unref();
-  return () => {
-    clearInterval(timer);
-    clearTimeout(first);
-  };
 }

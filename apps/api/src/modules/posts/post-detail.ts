@@ -1,7 +1,7 @@
 import type { PostDetailDto } from '@app/shared';
 import { Boat, type Post, type User } from '../../models';
 import { commentThread } from './comments.service';
-import { isModerator } from './post-access';
+import { hasModeratorRole } from '../../policies/roles';
 import { toPostSummaryDto } from './posts.presenter';
 import { hasVoted } from './posts.service';
 import { computeSetupCard } from './setup-card';
@@ -20,7 +20,7 @@ export async function toPostDetailDto(post: Post, viewer: User | null): Promise<
       c.replies.filter((r) => r.status === 'approved').length,
     0,
   );
-  const mod = isModerator(viewer);
+  const mod = hasModeratorRole(viewer);
   const isAuthor = viewer?.id === post.authorId;
   let setupCard = null;
   if (post.setup) {

@@ -5,12 +5,14 @@ import { AppError, invalid, notFound } from '../../errors/app-error';
 import { Boat, Post, Topic, Vote, type PostRevision, type User } from '../../models';
 import { recordAudit } from '../audit/audit.service';
 import { getSetting } from '../club/club.service';
-import { indexPost } from '../search/post-index';
+import { indexPost } from './post-index';
 import { renderBody } from './body-render';
 import { editRatio } from './edit-size';
-import { POST_INCLUDE, isModerator, loadOwnPost, publicWhere } from './post-access';
+import { POST_INCLUDE, loadOwnPost, publicWhere } from './post-access';
+import { publishesWithoutReview } from '../../policies/posts';
 import { computeSetupCard } from './setup-card';
 import { trackPostImages } from '../uploads/image-quota';
+import { ownsBoat } from '../../policies/boats';
 
 type CreateInput = z.output<typeof createPostSchema>;
 type PatchInput = z.output<typeof postPatchSchema>;
@@ -28,7 +30,7 @@ async function checkRefs(actor: User, input: PatchInput, currentTopicId?: number
   }
   if (input.boatId) {
     const boat = await Boat.findByPk(input.boatId);
-    if (!boat || boat.ownerId !== actor.id) throw invalid({ boatId: 'Choose one of your boats' });
+    if (!boat || !ownsBoat(actor, boat)) throw invalid({ boatId: 'Choose one of your boats' });
   }
   if (input.visibility === 'members' && !(await getSetting('membersOnlyPostsAllowed')))
     throw invalid({ visibility: 'This club publishes every post publicly' });
@@ -53,7 +55,7 @@ async function selfPublishAudit(actor: User, post: Post, action: string) {
 export async function createPost(actor: User, input: CreateInput): Promise<Post> {
   await checkRefs(actor, input);
   const { html, text } = renderBody(input.body);
-  const publishNow = input.submit && isModerator(actor);
+  const publishNow = input.submit && publishesWithoutReview(actor);
   const post = await Post.create({
     authorId: actor.id,
     topicId: input.topicId,
@@ -143,7 +145,7 @@ export async function updatePost(actor: User, postId: number, input: PatchInput)
   }
   if (post.status !== 'approved') {
     await post.update(next);
-  } else if (isModerator(actor)) {
+  } else if (publishesWithoutReview(actor)) {
     await post.update({
       ...next,
       approvedText: next.bodyText,
@@ -174,7 +176,7 @@ export async function submitPost(actor: User, postId: number): Promise<Post> {
   }
   if (!['draft', 'rejected', 'changes-requested'].includes(post.status))
     throw new AppError('CONFLICT', `This post is ${post.status}; there is nothing to submit`);
-  if (isModerator(actor)) {
+  if (publishesWithoutReview(actor)) {
     await post.update({
       status: 'approved',
       approvedText: post.bodyText,

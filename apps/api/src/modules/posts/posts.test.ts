@@ -2,9 +2,8 @@ import { tacklePlan } from '@app/calc';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Post } from '../../models';
 import { setSetting } from '../club/club.service';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import {
-  buildUser,
   client,
   createTestApp,
   flushOutbox,
@@ -15,6 +14,7 @@ import {
 import { SETUP, docOf, seedTopics } from './testing/knowledge-fixtures';
 import { OWASP_XSS_FILTER_EVASION_PAYLOADS } from './testing/owasp-xss-payloads';
 import { scriptVectors } from './testing/html-safety';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -24,13 +24,6 @@ beforeEach(async () => {
   resetPostIndex();
   topicId = (await seedTopics())[0]?.id ?? 0;
 });
-
-async function signedIn(roles: Array<'member' | 'moderator'> = ['member']) {
-  const user = await buildUser({ roles });
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return { user, c };
-}
 
 const article = (title: string, ...text: string[]) => ({
   kind: 'article',
@@ -47,15 +40,15 @@ async function submitted(c: Client, title: string, ...text: string[]) {
 
 describe('posts through moderation', () => {
   it('member post → pending and invisible → moderator approves → visible and searchable', async () => {
-    const { user, c } = await signedIn();
+    const { user, c } = await signedInAs(built);
     const id = await submitted(
       c,
       'Chafe on the bow roller',
       'The nylon snubber chafed through overnight.',
     );
     const visitor = await client(built.app);
-    const other = (await signedIn()).c;
-    const mod = (await signedIn(['member', 'moderator'])).c;
+    const other = (await signedInAs(built)).c;
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
 
     expect((await c.get(`/api/posts/${id}`)).body.data.status).toBe('pending');
     expect((await visitor.get(`/api/posts/${id}`)).status).toBe(404);
@@ -91,9 +84,9 @@ describe('posts through moderation', () => {
   });
 
   it('reject with a reason: author mail in the fake inbox, text kept, resubmission goes back to pending', async () => {
-    const { user, c } = await signedIn();
+    const { user, c } = await signedInAs(built);
     const id = await submitted(c, 'My chain story', 'Forty metres of chain and a plow anchor.');
-    const mod = (await signedIn(['member', 'moderator'])).c;
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
     const noReason = await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'decline' });
     expect(noReason.status).toBe(400);
     expect(noReason.body.error.fields.reason).toMatch(/say why/i);
@@ -117,7 +110,7 @@ describe('posts through moderation', () => {
   });
 
   it('a moderator’s own post publishes at once and is logged', async () => {
-    const { user, c } = await signedIn(['member', 'moderator']);
+    const { user, c } = await signedInAs(built, ['member', 'moderator']);
     const id = await submitted(c, 'Club mooring notes', 'Check the riser chain each spring.');
     expect((await c.get(`/api/posts/${id}`)).body.data.status).toBe('approved');
     const log = await AuditEvent.findOne({ where: { action: 'post.self-publish' } });
@@ -126,10 +119,10 @@ describe('posts through moderation', () => {
 
   it('an approved post edited a little stays approved; a substantial edit waits for a moderator', async () => {
     await setSetting('substantialEditRatio', 0.3);
-    const { c } = await signedIn();
+    const { c } = await signedInAs(built);
     const words = 'one two three four five six seven eight nine ten';
     const id = await submitted(c, 'Ten words', words);
-    const mod = (await signedIn(['member', 'moderator'])).c;
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
     await mod.post(`/api/moderation/posts/${id}/decision`, { action: 'publish' });
     const small = await c.patch(`/api/posts/${id}`, {
       body: docOf('Ten words', `${words} eleven`),
@@ -148,7 +141,7 @@ describe('posts through moderation', () => {
   });
 
   it('drafts autosave, are private, and another member cannot edit them', async () => {
-    const { c } = await signedIn();
+    const { c } = await signedInAs(built);
     const draft = await c.post('/api/posts', article('Half written', 'first line'));
     expect(draft.body.data.status).toBe('draft');
     const id = draft.body.data.id as number;
@@ -157,16 +150,16 @@ describe('posts through moderation', () => {
     });
     expect(saved.body.data.bodyHtml).toContain('second line');
     expect((await c.get('/api/posts/mine')).body.data[0].status).toBe('draft');
-    const other = (await signedIn()).c;
+    const other = (await signedInAs(built)).c;
     expect((await other.patch(`/api/posts/${id}`, { title: 'Mine now' })).status).toBe(404);
-    const mod = (await signedIn(['member', 'moderator'])).c;
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
     expect((await mod.get(`/api/posts/${id}`)).status).toBe(200);
   });
 });
 
 describe('post bodies and bad input', () => {
   it('rejects an unknown node type with 400, and a body over the size cap with a clear message', async () => {
-    const { c } = await signedIn();
+    const { c } = await signedInAs(built);
     const res = await c.post('/api/posts', {
       ...article('Embed'),
       body: { type: 'doc', content: [{ type: 'iframe', attrs: { src: 'https://x.example' } }] },
@@ -182,8 +175,8 @@ describe('post bodies and bad input', () => {
 
   // OWASP XSS Filter Evasion Cheat Sheet payload list (fixture: testing/owasp-xss-payloads.ts)
   it('neutralises OWASP XSS Filter Evasion Cheat Sheet payloads in titles, bodies, comments and mail', async () => {
-    const { user, c } = await signedIn();
-    const mod = (await signedIn(['member', 'moderator'])).c;
+    const { user, c } = await signedInAs(built);
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
     const sample = OWASP_XSS_FILTER_EVASION_PAYLOADS.filter((_, i) => i % 6 === 0);
     for (const payload of sample) {
       const title = `T ${payload}`.slice(0, 160);
@@ -215,7 +208,7 @@ describe('post bodies and bad input', () => {
 
 describe('setup block, questions and engagement', () => {
   it('shows the setup card with the figures @app/calc computes, and rejects an impossible setup', async () => {
-    const { c } = await signedIn();
+    const { c } = await signedInAs(built);
     const res = await c.post('/api/posts', { ...article('My setup'), setup: SETUP, submit: true });
     expect(res.status).toBe(201);
     const card = res.body.data.setupCard;
@@ -239,7 +232,7 @@ describe('setup block, questions and engagement', () => {
   });
 
   it('a question takes answers; the asker accepts one; votes count once per member', async () => {
-    const asker = await signedIn();
+    const asker = await signedInAs(built);
     const boatId = (
       await asker.c.post('/api/boats', { name: 'Q boat', hull: 'sail', loaM: 9, bowHeightM: 1 })
     ).body.data.id as number;
@@ -252,11 +245,11 @@ describe('setup block, questions and engagement', () => {
       submit: true,
     });
     const id = q.body.data.id as number;
-    const mod = await signedIn(['member', 'moderator']);
+    const mod = await signedInAs(built, ['member', 'moderator']);
     await mod.c.post(`/api/moderation/posts/${id}/decision`, { action: 'publish' });
     expect((await asker.c.get(`/api/posts/${id}`)).body.data.boat.name).toBe('Q boat');
 
-    const answerer = await signedIn();
+    const answerer = await signedInAs(built);
     const answer = await answerer.c.post(`/api/posts/${id}/comments`, { body: 'A 16 kg scoop.' });
     const answerId = answer.body.data.id as number;
     expect(answer.body.data.status).toBe('pending');
@@ -289,8 +282,8 @@ describe('setup block, questions and engagement', () => {
   });
 
   it('members-only posts need a sign-in, and the club setting can forbid them', async () => {
-    const { c } = await signedIn();
-    const mod = (await signedIn(['member', 'moderator'])).c;
+    const { c } = await signedInAs(built);
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
     const res = await mod.post('/api/posts', {
       ...article('Members only'),
       visibility: 'members',

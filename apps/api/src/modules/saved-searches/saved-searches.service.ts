@@ -5,7 +5,6 @@ import { withParentLocked } from '../../lib/serialize';
 import { SavedSearch, SavedSearchHit, User, type Listing } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
-import { matchesCriteria } from '../listings/listing-index';
 
 export const MAX_SAVED = 20;
 
@@ -34,7 +33,14 @@ export async function deleteSavedSearch(actor: User, id: number) {
  * (a unique hit row is the guard, so relisting or editing never repeats the e-mail). Each alert goes into the
  * outbox in the same transaction as its hit row, and the outbox sends it after commit.
  */
-export async function notifySavedSearches(ctx: { publicUrl: string }, listing: Listing) {
+/** Whether listing `listingId` matches a saved search's criteria (the listing index answers it). */
+export type CriteriaMatcher = (listingId: number, criteria: SavedSearchCriteria) => boolean;
+
+export async function notifySavedSearches(
+  ctx: { publicUrl: string },
+  listing: Listing,
+  matchesCriteria: CriteriaMatcher,
+) {
   const searches = await SavedSearch.findAll({
     where: { userId: { [Op.ne]: listing.sellerId } },
     include: [{ model: User, as: 'user' }],

@@ -1,10 +1,11 @@
 import { Router } from 'express';
 import { searchQuerySchema, type SearchHitDto } from '@app/shared';
 import type { Logger } from '../../logger';
-import { approvedCommentCounts, canSeePost } from '../posts/post-access';
+import { approvedCommentCounts } from '../posts/post-access';
+import { canSeePost } from '../../policies/posts';
 import { toPostSummaryDto } from '../posts/posts.presenter';
 import { postsByIds } from '../posts/posts.service';
-import { ensurePostIndex, highlight, searchPosts, snippet } from './post-index';
+import { ensurePostIndex, highlight, searchPosts, snippet } from '../posts/post-index';
 
 /** Search over published posts; the index is built from MariaDB when the app starts. */
 export function searchRouter(logger: Logger) {
@@ -19,7 +20,7 @@ export function searchRouter(logger: Logger) {
     const counts = await approvedCommentCounts(posts.map((p) => p.id));
     const data: SearchHitDto[] = results.flatMap((x) => {
       const post = byId.get(Number(x.id));
-      if (!post || post.status !== 'approved' || !canSeePost(post, viewer)) return [];
+      if (!post || post.status !== 'approved' || !canSeePost(viewer, post)) return [];
       return [
         {
           post: toPostSummaryDto(post, counts.get(post.id) ?? 0),

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, seedDemo } from '../../../seeders/demo';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import { client, createTestApp, resetDb } from '../../testing/test-app';
 
 const built = createTestApp();

@@ -11,7 +11,10 @@ import { Boat, StormReadiness, TacklePlan, User, UserRole, type StormWatch } fro
 import { recordAudit } from '../audit/audit.service';
 import { notify } from '../posts/notifications.service';
 import { stormCheck } from './storm-check';
-import { getOpenWatch, getWatch, isStormManager } from './storm.service';
+import { getOpenWatch, getWatch } from './storm.service';
+import { canManageStormWatch } from '../../policies/moderation';
+import { ownsBoat } from '../../policies/boats';
+import { ownsTacklePlan } from '../../policies/tackle-plans';
 
 type ReadinessInput = z.output<typeof readinessInputSchema>;
 
@@ -42,9 +45,9 @@ interface Row {
 /** Whether `viewer` may see the details of this boat's readiness, not only its name and status. */
 function seesDetails(viewer: User, watch: StormWatch, row: Row) {
   return (
-    row.boat.ownerId === viewer.id ||
+    ownsBoat(viewer, row.boat) ||
     row.readiness?.buddyUserId === viewer.id ||
-    isStormManager(viewer) ||
+    canManageStormWatch(viewer) ||
     watch.shareDetails
   );
 }
@@ -152,9 +155,9 @@ export async function getReadiness(viewer: User, watchId: number, boatId: number
   const [row] = await rowsFor(watch, [boat]);
   if (!row) throw notFound('Boat');
   const allowed =
-    boat.ownerId === viewer.id ||
+    ownsBoat(viewer, boat) ||
     row.readiness?.buddyUserId === viewer.id ||
-    isStormManager(viewer);
+    canManageStormWatch(viewer);
   if (!allowed) throw notFound('Boat');
   return { watch, readiness: toReadinessDto(viewer, watch, row) };
 }
@@ -168,10 +171,10 @@ export async function saveReadiness(
 ) {
   const watch = await getOpenWatch(watchId);
   const boat = await Boat.findByPk(boatId);
-  if (!boat || boat.ownerId !== actor.id) throw notFound('Boat');
+  if (!boat || !ownsBoat(actor, boat)) throw notFound('Boat');
   if (input.planId !== null) {
     const plan = await TacklePlan.findByPk(input.planId);
-    if (!plan || plan.boatId !== boat.id || plan.ownerId !== actor.id)
+    if (!plan || plan.boatId !== boat.id || !ownsTacklePlan(actor, plan))
       throw invalid({ planId: 'Choose one of this boat’s saved tackle plans' });
   }
   const known = new Set(watch.checklist.map((i) => i.id));

@@ -16,12 +16,13 @@ import { STORM_CAUTIONS } from './storm-check';
 import { boardCsv, toStormWatchDto } from './storm.presenter';
 import * as readiness from './storm-readiness.service';
 import * as storm from './storm.service';
+import { ROLES_MODERATOR_OR_ADMIN } from '../../policies/roles';
 
 const watchParams = z.object({ watchId: z.coerce.number().int().positive('Unknown watch') });
 const boatParams = watchParams.extend({
   boatId: z.coerce.number().int().positive('Unknown boat'),
 });
-const manage = requireRole('moderator', 'admin');
+const manage = requireRole(...ROLES_MODERATOR_OR_ADMIN);
 
 /** Storm watches: moderators and admins open and close them; members fill in their boats. */
 export function stormRouter(deps: { sequelize: Sequelize; publicUrl: string }) {

@@ -20,8 +20,6 @@ type WatchInput = z.output<typeof stormWatchInputSchema>;
 type CloseInput = z.output<typeof stormCloseSchema>;
 type ChecklistInput = z.output<typeof stormChecklistSchema>;
 
-export const isStormManager = (user: User) => user.hasRole('moderator') || user.hasRole('admin');
-
 const WATCH_INCLUDE = [{ model: User, as: 'openedBy', attributes: ['id', 'displayName'] }];
 
 /** Every watch, open ones first (by arrival), then closed ones, newest first. */

@@ -3,7 +3,6 @@ import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Harbor, Notification, OutboxEmail, Post, StormReadiness } from '../../models';
 import { seedTopics } from '../posts/testing/knowledge-fixtures';
 import {
-  buildUser,
   client,
   createTestApp,
   flushOutbox,
@@ -11,6 +10,7 @@ import {
   resetDb,
   type Client,
 } from '../../testing/test-app';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -43,13 +43,6 @@ const watchBody = (harborIds: number[]) => ({
   note: 'Double your snubbers.',
 });
 
-async function signedIn(roles?: Array<'member' | 'moderator' | 'admin' | 'treasurer'>) {
-  const user = await buildUser(roles ? { roles } : {});
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return { user, c };
-}
-
 async function boatWithPlan(c: Client, boat: object, components: object, harborId: number) {
   const boatId = (await c.post('/api/boats', { ...boat, homeHarborId: harborId })).body.data
     .id as number;
@@ -69,9 +62,9 @@ async function boatWithPlan(c: Client, boat: object, components: object, harborI
 async function scene() {
   const harbor = await Harbor.create({ name: 'Test Cove', slug: 'test-cove' });
   const other = await Harbor.create({ name: 'Far Pool', slug: 'far-pool' });
-  const mod = await signedIn(['member', 'moderator']);
-  const a = await signedIn();
-  const b = await signedIn();
+  const mod = await signedInAs(built, ['member', 'moderator']);
+  const a = await signedInAs(built);
+  const b = await signedInAs(built);
   const aBoat = await boatWithPlan(a.c, SLOOP, SMALL_SHACKLE, harbor.id);
   const bBoat = await boatWithPlan(b.c, SMALL, GENEROUS, harbor.id);
   const opened = await mod.c.post('/api/storm-watches', watchBody([harbor.id]));
@@ -84,7 +77,7 @@ const allTicks = (checklist: Array<{ id: string }>) => checklist.map((i) => i.id
 describe('storm watch: opening', () => {
   it('lets moderators and admins open a watch, and gives every member a notice and a mail', async () => {
     const s = await scene();
-    const admin = await signedIn(['member', 'admin']);
+    const admin = await signedInAs(built, ['member', 'admin']);
     const again = await admin.c.post('/api/storm-watches', watchBody([s.harbor.id]));
     expect(again.status).toBe(201);
     expect(again.body.data.checklist.length).toBeGreaterThan(3);
@@ -102,8 +95,8 @@ describe('storm watch: opening', () => {
 
   it('refuses members and treasurers (403) and visitors (401)', async () => {
     const harbor = await Harbor.create({ name: 'Test Cove', slug: 'test-cove' });
-    const member = await signedIn();
-    const treasurer = await signedIn(['member', 'treasurer']);
+    const member = await signedInAs(built);
+    const treasurer = await signedInAs(built, ['member', 'treasurer']);
     const visitor = await client(built.app);
     expect((await member.c.post('/api/storm-watches', watchBody([harbor.id]))).status).toBe(403);
     expect((await treasurer.c.post('/api/storm-watches', watchBody([harbor.id]))).status).toBe(403);
@@ -122,7 +115,7 @@ describe('storm watch: opening', () => {
     ['a negative surge', { surgeM: -1 }, 'surgeM'],
   ])('rejects %s with a field message and stores nothing', async (_label, patch, field) => {
     const harbor = await Harbor.create({ name: 'Test Cove', slug: 'test-cove' });
-    const mod = await signedIn(['member', 'moderator']);
+    const mod = await signedInAs(built, ['member', 'moderator']);
     const res = await mod.c.post('/api/storm-watches', { ...watchBody([harbor.id]), ...patch });
     expect(res.status).toBe(400);
     expect(res.body.error.fields[field]).toEqual(expect.any(String));
@@ -131,7 +124,7 @@ describe('storm watch: opening', () => {
   });
 
   it('rejects a harbour the club does not have', async () => {
-    const mod = await signedIn(['member', 'moderator']);
+    const mod = await signedInAs(built, ['member', 'moderator']);
     const res = await mod.c.post('/api/storm-watches', watchBody([9999]));
     expect(res.status).toBe(400);
     expect(res.body.error.fields.harborIds).toMatch(/harbours/);

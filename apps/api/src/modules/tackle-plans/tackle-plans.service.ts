@@ -6,6 +6,7 @@ import { withParentLocked } from '../../lib/serialize';
 import { Boat, TacklePlan, type User } from '../../models';
 import { getOwnBoat } from '../boats/boats.service';
 import { computePlan } from './plan-compute';
+import { ownsTacklePlan } from '../../policies/tackle-plans';
 
 type PlanInput = z.output<typeof tacklePlanInputSchema>;
 type PlanPatch = z.output<typeof tacklePlanPatchSchema>;
@@ -40,7 +41,7 @@ export async function listPlans(actor: User, boatId?: number) {
 /** One of the actor's plans with its boat; another member's plan reads as not found. */
 export async function getOwnPlan(actor: User, planId: number) {
   const plan = await TacklePlan.findByPk(planId);
-  if (!plan || plan.ownerId !== actor.id) throw notFound('Tackle plan');
+  if (!plan || !ownsTacklePlan(actor, plan)) throw notFound('Tackle plan');
   const boat = await getOwnBoat(actor, plan.boatId);
   return { plan, boat };
 }

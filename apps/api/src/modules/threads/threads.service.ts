@@ -4,7 +4,8 @@ import { AppError, notFound } from '../../errors/app-error';
 import { Listing, ListingMessage, ListingThread, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
-import { assertMayTrade } from '../listings/listings.service';
+import { assertMayTrade } from '../dues/may-trade';
+import { canOpenThreadOn, isThreadParty } from '../../policies/threads';
 
 const PREVIEW = 140;
 
@@ -51,7 +52,7 @@ export async function openThread(publicUrl: string, buyer: User, listingId: numb
   const listing = await Listing.findByPk(listingId);
   if (!listing || listing.hiddenAt !== null || listing.status !== 'active')
     throw notFound('Listing');
-  if (listing.sellerId === buyer.id)
+  if (!canOpenThreadOn(buyer, listing))
     throw new AppError('CONFLICT', 'This is your own listing: buyers start the conversation');
   await assertMayTrade(buyer, 'message');
   const now = new Date();
@@ -84,8 +85,7 @@ export async function getOwnThread(actor: User, id: number): Promise<ListingThre
       { model: User, as: 'seller' },
     ],
   });
-  if (!thread || (thread.buyerId !== actor.id && thread.sellerId !== actor.id))
-    throw notFound('Conversation');
+  if (!thread || !isThreadParty(actor, thread)) throw notFound('Conversation');
   return thread;
 }
 

@@ -1,15 +1,9 @@
 import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { ListingMessage, ListingThread, OutboxEmail } from '../../models';
 import { setSetting } from '../club/club.service';
-import {
-  buildUser,
-  client,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  resetDb,
-} from '../../testing/test-app';
-import { chainListing, exchangeFixture, grantPaidUp } from '../listings/exchange-testing';
+import { createTestApp, flushOutbox, inbox, resetDb } from '../../testing/test-app';
+import { chainListing, exchangeFixture, grantPaidUp } from '../../testing/exchange';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -19,18 +13,10 @@ beforeEach(async () => {
   harborId = (await exchangeFixture()).harbors[0]?.id ?? 0;
 });
 
-async function signedIn(paid = false) {
-  const user = await buildUser();
-  if (paid) await grantPaidUp(user);
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return { user, c };
-}
-
 describe('buyer–seller messages', () => {
   it('opens a thread, both inboxes show it, each message e-mails the other side, seller sells to the thread', async () => {
-    const seller = await signedIn(true);
-    const buyer = await signedIn(true);
+    const seller = await signedInAs(built, 'member', { paidUp: true });
+    const buyer = await signedInAs(built, 'member', { paidUp: true });
     const listingId = (
       await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
     ).body.data.id as number;
@@ -78,9 +64,9 @@ describe('buyer–seller messages', () => {
   });
 
   it('keeps threads private (404), refuses the seller’s own listing and empty messages', async () => {
-    const seller = await signedIn(true);
-    const buyer = await signedIn(true);
-    const nosy = await signedIn(true);
+    const seller = await signedInAs(built, 'member', { paidUp: true });
+    const buyer = await signedInAs(built, 'member', { paidUp: true });
+    const nosy = await signedInAs(built, 'member', { paidUp: true });
     const listingId = (
       await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
     ).body.data.id as number;
@@ -103,8 +89,8 @@ describe('buyer–seller messages', () => {
   });
 
   it('lets only paid-up buyers write to a seller while the club policy is on, and anyone when it is off', async () => {
-    const seller = await signedIn(true);
-    const behind = await signedIn();
+    const seller = await signedInAs(built, 'member', { paidUp: true });
+    const behind = await signedInAs(built);
     const listingId = (
       await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
     ).body.data.id as number;
@@ -125,7 +111,7 @@ describe('buyer–seller messages', () => {
     );
 
     await setSetting('listingRequiresPaidUp', false);
-    const unpaid = await signedIn();
+    const unpaid = await signedInAs(built);
     expect((await unpaid.c.post('/api/threads', { listingId, body: 'Hello' })).status).toBe(201);
     expect(await ListingThread.count()).toBe(2);
   });
@@ -134,8 +120,8 @@ describe('buyer–seller messages', () => {
     afterEach(() => vi.restoreAllMocks());
 
     it('stores neither the thread, the message nor the mail, so the writer can simply send again', async () => {
-      const seller = await signedIn(true);
-      const buyer = await signedIn(true);
+      const seller = await signedInAs(built, 'member', { paidUp: true });
+      const buyer = await signedInAs(built, 'member', { paidUp: true });
       const listingId = (
         await seller.c.post('/api/listings', { ...chainListing(harborId), publish: true })
       ).body.data.id as number;

@@ -9,6 +9,7 @@ import {
 import { currentUser, requireRole } from '../../middleware/require-auth';
 import type { Topic } from '../../models';
 import * as topics from './topics.service';
+import { ROLES_ADMIN } from '../../policies/roles';
 
 const params = idParam('topicId');
 const toTopicDto = (t: Topic, postCount = 0): TopicDto => ({
@@ -27,15 +28,15 @@ export function topicsRouter() {
   r.get('/', async (_req, res) => {
     res.json({ data: (await topics.listTopics()).map((x) => toTopicDto(x.topic, x.postCount)) });
   });
-  r.post('/', requireRole('admin'), async (req, res) => {
+  r.post('/', requireRole(...ROLES_ADMIN), async (req, res) => {
     const t = await topics.createTopic(currentUser(req), topicInputSchema.parse(req.body));
     res.status(201).json({ data: toTopicDto(t) });
   });
-  r.put('/order', requireRole('admin'), async (req, res) => {
+  r.put('/order', requireRole(...ROLES_ADMIN), async (req, res) => {
     const list = await topics.reorderTopics(currentUser(req), topicOrderSchema.parse(req.body));
     res.json({ data: list.map((x) => toTopicDto(x.topic, x.postCount)) });
   });
-  r.patch('/:topicId', requireRole('admin'), async (req, res) => {
+  r.patch('/:topicId', requireRole(...ROLES_ADMIN), async (req, res) => {
     const { topicId } = params.parse(req.params);
     const t = await topics.updateTopic(
       currentUser(req),
@@ -44,7 +45,7 @@ export function topicsRouter() {
     );
     res.json({ data: toTopicDto(t) });
   });
-  r.delete('/:topicId', requireRole('admin'), async (req, res) => {
+  r.delete('/:topicId', requireRole(...ROLES_ADMIN), async (req, res) => {
     const { topicId } = params.parse(req.params);
     await topics.deleteTopic(currentUser(req), Number(topicId));
     res.status(204).end();

@@ -2,8 +2,9 @@ import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import type { TopicDto } from '@app/shared';
 import { AuditEvent, Topic } from '../../models';
 import { docOf, seedTopics } from '../posts/testing/knowledge-fixtures';
-import { resetPostIndex } from '../search/post-index';
-import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
+import { resetPostIndex } from '../posts/post-index';
+import { client, createTestApp, resetDb } from '../../testing/test-app';
+import { signedInAs } from '../../testing/sign-in';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -13,13 +14,6 @@ beforeEach(async () => {
   resetPostIndex();
   topics = await seedTopics();
 });
-
-async function signedIn(roles: Array<'member' | 'moderator' | 'admin'>) {
-  const user = await buildUser({ roles });
-  const c = await client(built.app);
-  await c.signIn(user.email);
-  return c;
-}
 
 const list = async () =>
   (await (await client(built.app)).get('/api/topics')).body.data as TopicDto[];
@@ -32,8 +26,8 @@ const auditActions = async () =>
 describe('topic editing routes', () => {
   it('answer 401 to a visitor and 403 to a member or moderator', async () => {
     const visitor = await client(built.app);
-    const member = await signedIn(['member']);
-    const mod = await signedIn(['member', 'moderator']);
+    const member = (await signedInAs(built, 'member')).c;
+    const mod = (await signedInAs(built, ['member', 'moderator'])).c;
     const calls = [
       ['post', '/api/topics', { name: 'Mooring gear' }],
       ['put', '/api/topics/order', { topicIds: topics.map((t) => t.id) }],
@@ -51,7 +45,7 @@ describe('topic editing routes', () => {
 
 describe('POST /api/topics', () => {
   it('adds a topic with a slug, refuses a short or duplicate name with the field named', async () => {
-    const admin = await signedIn(['member', 'admin']);
+    const admin = (await signedInAs(built, ['member', 'admin'])).c;
     const created = await admin.post('/api/topics', {
       name: 'Mooring gear',
       description: 'Pennants, swivels and ground chain',
@@ -72,7 +66,7 @@ describe('POST /api/topics', () => {
 
 describe('PATCH /api/topics/:topicId', () => {
   it('renames without touching the description, position or slug, and logs the old name', async () => {
-    const admin = await signedIn(['member', 'admin']);
+    const admin = (await signedInAs(built, ['member', 'admin'])).c;
     await topics[1]?.update({ description: 'Chain, rope and splices', position: 7 });
     const res = await admin.patch(`/api/topics/${idOf(1)}`, { name: 'Rode, chain and rope' });
     expect(res.status).toBe(200);
@@ -90,7 +84,7 @@ describe('PATCH /api/topics/:topicId', () => {
   });
 
   it('refuses an empty patch, a name another topic holds, and an unknown id', async () => {
-    const admin = await signedIn(['member', 'admin']);
+    const admin = (await signedInAs(built, ['member', 'admin'])).c;
     expect((await admin.patch(`/api/topics/${idOf(0)}`, {})).status).toBe(400);
     const taken = await admin.patch(`/api/topics/${idOf(0)}`, { name: 'Storm preparation' });
     expect(taken.status).toBe(409);
@@ -99,8 +93,8 @@ describe('PATCH /api/topics/:topicId', () => {
   });
 
   it('retires a topic: its posts keep it, new posts cannot use it, until it is restored', async () => {
-    const admin = await signedIn(['member', 'admin']);
-    const member = await signedIn(['member']);
+    const admin = (await signedInAs(built, ['member', 'admin'])).c;
+    const member = (await signedInAs(built, 'member')).c;
     const post = (topicId: number) =>
       member.post('/api/posts', {
         kind: 'article',
@@ -136,7 +130,7 @@ describe('PATCH /api/topics/:topicId', () => {
 
 describe('PUT /api/topics/order', () => {
   it('puts the topics in the given order and logs it', async () => {
-    const admin = await signedIn(['member', 'admin']);
+    const admin = (await signedInAs(built, ['member', 'admin'])).c;
     const order = [idOf(3), idOf(0), idOf(2), idOf(1)];
     const res = await admin.put('/api/topics/order', { topicIds: order });
     expect(res.status).toBe(200);
@@ -146,7 +140,7 @@ describe('PUT /api/topics/order', () => {
   });
 
   it('refuses a list that leaves a topic out, repeats one or names an unknown one', async () => {
-    const admin = await signedIn(['member', 'admin']);
+    const admin = (await signedInAs(built, ['member', 'admin'])).c;
     for (const topicIds of [
       [idOf(0), idOf(1), idOf(2)],
       [idOf(0), idOf(0), idOf(1), idOf(2)],
@@ -163,7 +157,7 @@ describe('PUT /api/topics/order', () => {
 
 describe('DELETE /api/topics/:topicId', () => {
   it('removes a topic no post uses', async () => {
-    const admin = await signedIn(['member', 'admin']);
+    const admin = (await signedInAs(built, ['member', 'admin'])).c;
     expect((await admin.delete(`/api/topics/${idOf(3)}`)).status).toBe(204);
     expect((await list()).map((t) => t.id)).not.toContain(idOf(3));
     expect(await auditActions()).toEqual(['topic.delete']);

@@ -32,7 +32,7 @@ import {
 } from '../dues/ledger-effects';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
-import { stripeClient } from '../payments/stripe-client';
+import { stripeClient } from '../../lib/stripe-client';
 
 type OfflineInput = z.output<typeof offlinePaymentSchema>;
 type RefundInput = z.output<typeof refundInputSchema>;

@@ -1,7 +1,8 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
-import { AuditEvent, Membership, MembershipPlan, Payment } from '../../models';
+import { AuditEvent, Membership, MembershipPlan } from '../../models';
 import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
 import { calendarView } from './calendar.service';
+import { buildPayment, buildPlan } from '../../testing/builders';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -86,24 +87,16 @@ describe('PATCH /api/treasury/plans/:planId', () => {
       joinedOn: '2019-04-01',
       paidThrough: '2021-03-31',
     });
-    const paid = await Payment.create({
-      userId: member.id,
-      planId,
-      method: 'cheque',
-      status: 'succeeded',
-      amountMinor: 12000,
-      currency: 'EUR',
-      expectedMinor: 12000,
-      coversFrom: '2020-04-01',
-      coversTo: '2021-03-31',
-      providerSessionId: null,
-      providerPaymentIntentId: null,
-      reference: 'CHQ 1',
-      note: null,
-      heldReason: null,
-      recordedById: null,
-      paidAt: new Date('2020-04-03T10:00:00Z'),
-    });
+    const paid = await buildPayment(
+      member,
+      { id: planId },
+      {
+        coversFrom: '2020-04-01',
+        coversTo: '2021-03-31',
+        reference: 'CHQ 1',
+        paidAt: new Date('2020-04-03T10:00:00Z'),
+      },
+    );
     return { c, planId, member, paid };
   }
 
@@ -176,13 +169,7 @@ describe('dues calendar', () => {
       ['quarterly', 'quarterly'],
       ['none', 'none'],
     ] as const)
-      await MembershipPlan.create({
-        code,
-        name: code,
-        amountMinor: 12000,
-        currency: 'EUR',
-        proration,
-      });
+      await buildPlan({ code, name: code, proration });
     // Year from 15 July; 10 January is in the sixth fiscal month, so the second quarter (hand-worked from the
     // rules in calendar.ts: 7 of 12 months, 3 of 4 quarters left).
     const view = await calendarView(

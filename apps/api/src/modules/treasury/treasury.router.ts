@@ -23,6 +23,7 @@ import * as ledger from './ledger.service';
 import * as plans from './plans.service';
 import { previewReminders, sendReminders } from './reminders.service';
 import { roster, summary } from './roster.service';
+import { ROLES_TREASURER } from '../../policies/roles';
 
 const planParam = idParam('planId');
 const paymentParam = idParam('paymentId');
@@ -30,7 +31,7 @@ const paymentParam = idParam('paymentId');
 /** The treasurer's desk: plans, roster, ledger entries, refunds, reminders, CSV export and the summary. */
 export function treasuryRouter(deps: { env: Env; sequelize: Sequelize }) {
   const r = Router();
-  r.use(requireRole('treasurer'));
+  r.use(requireRole(...ROLES_TREASURER));
   r.get('/plans', async (_req, res) => {
     res.json({ data: (await plans.listPlans()).map(toPlanDto) });
   });

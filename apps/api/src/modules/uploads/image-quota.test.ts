@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import sharp from 'sharp';
 import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { UploadedImage } from '../../models';
-import { resetPostIndex } from '../search/post-index';
+import { resetPostIndex } from '../posts/post-index';
 import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
 import {
   chainListing,
@@ -12,7 +12,7 @@ import {
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from '../listings/exchange-testing';
+} from '../../testing/exchange';
 import { seedTopics } from '../posts/testing/knowledge-fixtures';
 import {
   configureImageQuota,

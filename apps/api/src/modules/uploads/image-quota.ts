@@ -1,8 +1,6 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { AppError } from '../../errors/app-error';
-import { runWithLease } from '../../lib/job-lease';
 import { withParentLocked } from '../../lib/serialize';
-import type { Logger } from '../../logger';
 import { UploadedImage, User } from '../../models';
 import { processImage } from './image';
 import { getStorage, isSafeKey, newKey, thumbKey, UPLOADS_PUBLIC_PATH } from './storage';
@@ -208,30 +206,4 @@ export async function sweepUnusedImages(at = new Date(), batch = 500) {
     removed += 1;
   }
   return { removed, kept };
-}
-
-/**
- * Runs the sweep every `intervalMs` (default hourly) under the `image-sweep` lease, so one process of a cluster
- * sweeps per interval; returns a stop function. Errors are logged and retried next time.
- */
-export function startImageSweeper(logger: Logger, intervalMs = 3_600_000) {
-  const tick = () => {
-    const db = UploadedImage.sequelize;
-    if (!db) return;
-    runWithLease(db, 'image-sweep', intervalMs * 0.9, () => sweepUnusedImages()).then(
-      (r) => {
-        if (r.ran && (r.result.removed || r.result.kept))
-          logger.info(r.result, 'unused images swept');
-      },
-      (err: unknown) => logger.debug({ err }, 'image sweep skipped'),
-    );
-  };
-  const timer = setInterval(tick, intervalMs);
-  timer.unref();
-  const first = setTimeout(tick, 30_000);
-  first.unref();
-  return () => {
-    clearInterval(timer);
-    clearTimeout(first);
-  };
 }

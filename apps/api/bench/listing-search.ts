@@ -18,12 +18,16 @@ import {
 } from '@app/devkit/mariadb';
 import { freshSecrets } from '@app/devkit/secrets';
 import { listingSearchSchema, type ListingInput } from '@app/shared';
-import { loadEnv } from '../../config/env';
-import { createSequelize } from '../../db';
-import { migrateUp } from '../../migrator';
-import { Harbor, initModels, Listing, User } from '../../models';
-import { clearListingSearchCache, rebuildListingIndex, searchIndex } from './listing-index';
-import { sizeMmOf } from './listing-specs';
+import { loadEnv } from '../src/config/env';
+import { createSequelize } from '../src/db';
+import { migrateUp } from '../src/migrator';
+import { Harbor, initModels, Listing, User } from '../src/models';
+import {
+  clearListingSearchCache,
+  rebuildListingIndex,
+  searchIndex,
+} from '../src/modules/listings/listing-index';
+import { sizeMmOf } from '../src/modules/listings/listing-specs';
 
 const COUNT = 10_000;
 const PORT = 4790;

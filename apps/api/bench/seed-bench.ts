@@ -1,9 +1,9 @@
-import { loadEnv } from '../config/env';
-import { createSequelize } from '../db';
-import { migrateUp } from '../migrator';
-import { initModels } from '../models';
-import { enlargeDemo } from '../../seeders/bench-enlarge';
-import { seedDemo } from '../../seeders/demo';
+import { loadEnv } from '../src/config/env';
+import { createSequelize } from '../src/db';
+import { migrateUp } from '../src/migrator';
+import { initModels } from '../src/models';
+import { enlargeDemo } from './bench-enlarge';
+import { seedDemo } from '../seeders/demo';
 
 // Benchmark data set (scripts/bench-api.mjs): migrations, the demo club, then invented members, listings and
 // posts up to benchmark size. Safe to run again: it only adds what is missing.

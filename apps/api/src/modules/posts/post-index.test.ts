@@ -1,9 +1,10 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import type { User } from '../../models';
 import { Post } from '../../models';
-import { seedTopics } from '../posts/testing/knowledge-fixtures';
+import { seedTopics } from './testing/knowledge-fixtures';
 import { buildUser, createTestApp, resetDb } from '../../testing/test-app';
 import { highlight, resetPostIndex, searchPosts, snippet } from './post-index';
+import { buildPost } from '../../testing/builders';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -56,25 +57,7 @@ beforeEach(async () => {
   const author: User = await buildUser();
   ids = [];
   for (const [title, text, t] of CORPUS) {
-    const p = await Post.create({
-      authorId: author.id,
-      topicId: topics[t]?.id ?? null,
-      boatId: null,
-      kind: 'article',
-      title,
-      bodyJson: { type: 'doc' },
-      bodyHtml: `<p>${text}</p>`,
-      bodyText: text,
-      approvedText: text,
-      status: 'approved',
-      visibility: 'public',
-      setup: null,
-      moderationNote: null,
-      acceptedCommentId: null,
-      pinnedAt: null,
-      lockedAt: null,
-      publishedAt: new Date(),
-    });
+    const p = await buildPost(author, { topicId: topics[t]?.id ?? null, title, bodyText: text });
     ids.push(p.id);
   }
 });

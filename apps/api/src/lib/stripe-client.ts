@@ -1,5 +1,5 @@
 import Stripe from 'stripe';
-import type { Env } from '../../config/env';
+import type { Env } from '../config/env';
 
 const clients = new Map<string, Stripe>();
 

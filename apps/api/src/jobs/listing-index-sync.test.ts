@@ -1,15 +1,16 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { listingSearchSchema } from '@app/shared';
-import { Listing } from '../../models';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
+import { Listing } from '../models';
+import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
 import {
   chainListing,
   exchangeFixture,
   grantPaidUp,
   postPhotos,
   testJpeg,
-} from './exchange-testing';
-import { catchUpListingIndex, searchIndex } from './listing-index';
+} from '../testing/exchange';
+import { catchUpListingIndex, searchIndex } from '../modules/listings/listing-index';
+import { buildListing } from '../testing/builders';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -31,20 +32,7 @@ beforeEach(async () => {
 const ids = (q: string) => searchIndex(listingSearchSchema.parse({ q })).hits.map((h) => h.doc.id);
 
 /** What another API process does: writes the row and refreshes only its own index, not this one. */
-const writtenElsewhere = (title: string) =>
-  Listing.create({
-    ...chainListing(harborId, { title }),
-    specs: { grade: 'G43', tradeSizeIn: 0.375, lengthM: 30, galvanizing: 'good' },
-    sellerId,
-    status: 'active',
-    sizeMm: 9.5,
-    publishedAt: new Date(),
-    expiresAt: new Date(Date.now() + 30 * 86_400_000),
-    soldAt: null,
-    soldThreadId: null,
-    hiddenAt: null,
-    hiddenReason: null,
-  });
+const writtenElsewhere = (title: string) => buildListing({ id: sellerId }, harborId, { title });
 
 describe('catchUpListingIndex', () => {
   it('indexes listings another process created and drops ones it withdrew or hid', async () => {

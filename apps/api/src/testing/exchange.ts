@@ -1,9 +1,9 @@
 import sharp from 'sharp';
 import type { ListingInput } from '@app/shared';
-import { Harbor, Membership, MembershipPlan, type User } from '../../models';
-import { setSetting } from '../club/club.service';
-import type { Client } from '../../testing/test-app';
-import { rebuildListingIndex } from './listing-index';
+import { Harbor, Membership, MembershipPlan, type User } from '../models';
+import { setSetting } from '../modules/club/club.service';
+import type { Client } from './test-app';
+import { rebuildListingIndex } from '../modules/listings/listing-index';
 
 let planSeq = 0;
 

@@ -1,0 +1,107 @@
+import type { InferCreationAttributes, Model } from 'sequelize';
+import { Boat, Listing, MembershipPlan, Payment, Post, type User } from '../models';
+import { chainListing } from './exchange';
+
+let seq = 0;
+const next = () => (seq += 1);
+
+type Over<M extends Model> = Partial<InferCreationAttributes<M>>;
+
+/** A sailing boat of `owner` (9 m, 1 m bow height), overrides last. */
+export const buildBoat = (owner: Pick<User, 'id'>, over: Over<Boat> = {}) =>
+  Boat.create({
+    ownerId: owner.id,
+    name: `Test Boat ${next()}`,
+    hull: 'sail',
+    loaM: 9,
+    beamM: null,
+    displacementKg: null,
+    draftM: null,
+    bowHeightM: 1,
+    gypsy: null,
+    homeHarborId: null,
+    ...over,
+  });
+
+/** An approved public article by `author`, written straight to the table (no index, no moderation). */
+export function buildPost(author: Pick<User, 'id'>, over: Over<Post> = {}) {
+  const text = over.bodyText ?? `Test post text ${next()}`;
+  return Post.create({
+    authorId: author.id,
+    topicId: null,
+    boatId: null,
+    kind: 'article',
+    title: `Test post ${seq}`,
+    bodyJson: { type: 'doc' },
+    bodyHtml: `<p>${text}</p>`,
+    bodyText: text,
+    approvedText: text,
+    status: 'approved',
+    visibility: 'public',
+    setup: null,
+    moderationNote: null,
+    acceptedCommentId: null,
+    pinnedAt: null,
+    lockedAt: null,
+    publishedAt: new Date(),
+    ...over,
+  });
+}
+
+/** An active chain listing of `seller` in `harborId`, written straight to the table (the index is not told). */
+export const buildListing = (
+  seller: Pick<User, 'id'>,
+  harborId: number,
+  over: Over<Listing> = {},
+) =>
+  Listing.create({
+    ...chainListing(harborId),
+    specs: { grade: 'G43', tradeSizeIn: 0.375, lengthM: 30, galvanizing: 'good' },
+    sellerId: seller.id,
+    status: 'active',
+    sizeMm: 9.5,
+    publishedAt: new Date(),
+    expiresAt: new Date(Date.now() + 30 * 86_400_000),
+    soldAt: null,
+    soldThreadId: null,
+    hiddenAt: null,
+    hiddenReason: null,
+    ...over,
+  });
+
+/** A yearly membership plan: €120.00, no proration, overrides last. */
+export const buildPlan = (over: Over<MembershipPlan> = {}) =>
+  MembershipPlan.create({
+    code: `plan-${next()}`,
+    name: 'Individual',
+    amountMinor: 12000,
+    currency: 'EUR',
+    proration: 'none',
+    ...over,
+  });
+
+/** A cheque payment of €120.00 by `member` for `plan`, succeeded; overrides last. */
+export const buildPayment = (
+  member: Pick<User, 'id'>,
+  plan: Pick<MembershipPlan, 'id'>,
+  over: Over<Payment> = {},
+) =>
+  Payment.create({
+    userId: member.id,
+    planId: plan.id,
+    method: 'cheque',
+    status: 'succeeded',
+    amountMinor: 12000,
+    currency: 'EUR',
+    expectedMinor: 12000,
+    coversFrom: null,
+    coversTo: null,
+    providerSessionId: null,
+    providerPaymentIntentId: null,
+    reference: null,
+    note: null,
+    heldReason: null,
+    recordedById: null,
+    paidAt: new Date(),
+    ...over,
+  });
