@@ -2,7 +2,8 @@ import '@/testing/setup';
 import { render, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
-import { SearchFilters, type FilterParams } from './search-filters';
+import type { FilterParams } from '../utils/filter-draft';
+import { SearchFilters } from './search-filters';
 
 const harbors = [{ id: 3, name: 'Test Harbour North' }];
 

@@ -1,4 +1,3 @@
-import { parseSizeText, sizeTextOf } from '@app/calc';
 import {
   LISTING_CATEGORIES,
   LISTING_CATEGORY_LABELS,
@@ -10,9 +9,10 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { cn } from '@/lib/cn';
 import { activeFilterCount } from '../utils/filters';
+import { draftOf, keyOf, paramsOf, type Draft, type FilterParams } from '../utils/filter-draft';
 import { ExchangeSelect } from './select';
 
-export type FilterParams = Record<string, string | number | undefined>;
+const ANY = { value: '', label: 'Any' };
 
 export interface SearchFiltersProps {
   /** Current filters as they stand in the address bar. */
@@ -26,90 +26,6 @@ export interface SearchFiltersProps {
   /** How long typing must pause before text filters apply, ms. */
   debounceMs?: number;
 }
-
-interface Draft {
-  q: string;
-  category: string;
-  harborId: string;
-  condition: string;
-  sort: string;
-  priceMin: string;
-  priceMax: string;
-  sizeMin: string;
-  sizeMax: string;
-  fitsBoat: string;
-  windKn: string;
-  fitsOnly: boolean;
-}
-
-const ANY = { value: '', label: 'Any' };
-const price = (v: string | undefined) => (v ? String(Number(v) / 100) : '');
-const size = (v: string | undefined) => (v && Number(v) > 0 ? sizeTextOf(Number(v)) : (v ?? ''));
-
-function draftOf(value: Record<string, string>): Draft {
-  return {
-    q: value.q ?? '',
-    category: value.category ?? '',
-    harborId: value.harborId ?? '',
-    condition: value.condition ?? '',
-    sort: value.sort ?? '',
-    priceMin: price(value.priceMin),
-    priceMax: price(value.priceMax),
-    sizeMin: size(value.sizeMinMm),
-    sizeMax: size(value.sizeMaxMm),
-    fitsBoat: value.fitsBoat ?? '',
-    windKn: value.windKn ?? '30',
-    fitsOnly: value.fitsOnly === 'true',
-  };
-}
-
-const blank = (v: string) => (v.trim() === '' ? undefined : v.trim());
-const cents = (v: string) => {
-  const t = blank(v);
-  return t === undefined || !Number.isFinite(Number(t)) ? t : Math.round(Number(t) * 100);
-};
-
-/** A typed size as the API's millimetres, or the message to show under the field. */
-function sizeParam(text: string): { mm?: string; error?: string } {
-  if (text.trim() === '') return {};
-  const parsed = parseSizeText(text);
-  if (!parsed.ok) return { error: parsed.message };
-  return { mm: String(Math.round(parsed.mm * 10_000) / 10_000) };
-}
-
-function paramsOf(d: Draft): { params: FilterParams; errors: Record<string, string> } {
-  const min = sizeParam(d.sizeMin);
-  const max = sizeParam(d.sizeMax);
-  const errors: Record<string, string> = {};
-  if (min.error) errors.sizeMinMm = min.error;
-  if (max.error) errors.sizeMaxMm = max.error;
-  const fitsBoat = blank(d.fitsBoat);
-  return {
-    errors,
-    params: {
-      q: blank(d.q),
-      category: blank(d.category),
-      harborId: blank(d.harborId),
-      condition: blank(d.condition),
-      priceMin: cents(d.priceMin),
-      priceMax: cents(d.priceMax),
-      sizeMinMm: min.mm,
-      sizeMaxMm: max.mm,
-      sort: blank(d.sort),
-      fitsBoat,
-      windKn: fitsBoat ? blank(d.windKn) : undefined,
-      fitsOnly: fitsBoat && d.fitsOnly ? 'true' : undefined,
-    },
-  };
-}
-
-const keyOf = (p: FilterParams) =>
-  JSON.stringify(
-    Object.entries(p)
-      .filter(([k, v]) => v !== undefined && v !== '' && k !== 'page')
-      .map(([k, v]) => [k, String(v)])
-      .sort(([a], [b]) => (a ?? '').localeCompare(b ?? '')),
-  );
 
 /**
  * The search box and facet filters. Lists, the checkbox and the boat apply at once; the search text, prices and
