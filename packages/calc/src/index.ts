@@ -187,7 +187,6 @@ export {
 export {
   DEFAULT_BOW_HEIGHT_M,
   UPLIFT_WARN_DEG,
-  planComponentsFrom,
   recommendTackle,
   scopeForWind,
   sizeLabel,
@@ -195,6 +194,7 @@ export {
   type RecommendTackleInput,
   type TackleRecommendation,
 } from './recommend/recommend-tackle';
+export { planComponentsFrom } from './recommend/plan-components';
 export {
   chainFloorIn,
   nylonChoiceLabel,

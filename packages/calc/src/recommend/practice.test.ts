@@ -9,7 +9,8 @@ import { ropeSpec } from '../ratings/rope-spec';
 import { chainSpec } from '../ratings/chain-spec';
 import { ANCHOR_TYPES } from '../tables/anchor-holding';
 import { ftToM, inToMm, kgToLb, lbfToN, lbToKg, N_PER_LBF } from '../units/units';
-import { planComponentsFrom, recommendTackle, type RecommendTackleInput } from './recommend-tackle';
+import { planComponentsFrom } from './plan-components';
+import { recommendTackle, type RecommendTackleInput } from './recommend-tackle';
 
 const lbOf = (kg: number | null) => kgToLb(kg ?? Number.NaN);
 const rec = (patch: Partial<RecommendTackleInput>) =>

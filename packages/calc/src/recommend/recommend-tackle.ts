@@ -13,120 +13,27 @@ import {
   requireObject,
   requireOneOf,
 } from '../internal/validate';
-import { anchorSuggestion, type AnchorSuggestionResult } from '../advice/anchor-suggestion';
-import {
-  rodeSuggestion,
-  type ChainChoice,
-  type RodeSuggestionResult,
-} from '../advice/rode-suggestion';
-import { snubberSuggestion, type SnubberSuggestionResult } from '../advice/snubber-suggestion';
+import { anchorSuggestion } from '../advice/anchor-suggestion';
+import { rodeSuggestion, type ChainChoice } from '../advice/rode-suggestion';
+import { snubberSuggestion } from '../advice/snubber-suggestion';
 import { catenary, type CatenaryResult } from '../geometry/catenary';
-import { scopeRung, type ScopeRung } from '../geometry/scope';
-import { designLoad, type DesignLoadResult } from '../loads/design-load';
+import { scopeRung } from '../geometry/scope';
+import { designLoad } from '../loads/design-load';
 import { chainSpec } from '../ratings/chain-spec';
 import { shackleForWll } from '../ratings/shackle-spec';
-import { HULL_TYPES, type HullType } from '../tables/abyc-h40';
-import {
-  ANCHOR_TYPE_LABELS,
-  ANCHOR_TYPES,
-  BOTTOM_TYPES,
-  type AnchorType,
-  type BottomType,
-} from '../tables/anchor-holding';
+import { HULL_TYPES } from '../tables/abyc-h40';
+import { ANCHOR_TYPE_LABELS, ANCHOR_TYPES, BOTTOM_TYPES } from '../tables/anchor-holding';
 import { CHAIN_GRADES, CHAIN_GRADE_LABELS, CHAIN_ROWS, type ChainGrade } from '../tables/chain-cfr';
 import { inchFractionLabel, tradeSizeMm } from '../units/format';
-import type { PlanComponents, PlanConnector } from '../plan/plan-input';
+
+import type { ReasoningStep, RecommendTackleInput, TackleRecommendation } from './recommendation';
+
+export type { ReasoningStep, RecommendTackleInput, TackleRecommendation } from './recommendation';
 
 /** Pull angle above the seabed at the anchor beyond which Rodewise warns, degrees (about 5°, from memory). */
 export const UPLIFT_WARN_DEG = 5;
 /** Bow-roller height taken when none is given, m. */
 export const DEFAULT_BOW_HEIGHT_M = 1;
-
-/** Input of {@link recommendTackle}. */
-export interface RecommendTackleInput {
-  loaM: number;
-  beamM?: number;
-  hull: HullType;
-  displacementKg?: number;
-  /** Bow-roller height above the water, m (default 1). */
-  bowHeightM?: number;
-  /** Wind to plan for, kn (above 0, at most 100). */
-  windKn: number;
-  anchorType: AnchorType;
-  bottom?: BottomType;
-  /** Depth at low water where the boat anchors, m. */
-  depthM: number;
-  /** Tidal rise (and surge) still to come, m (default 0). */
-  tideM?: number;
-  /** Chain grade to size (default: the gypsy's, else G43). */
-  chainGrade?: ChainGrade;
-  /** The windlass gypsy's chain, when the boat has one. */
-  gypsy?: { grade: ChainGrade; tradeSizeIn?: number };
-  /** Allow boats and winds beyond the tables (results are flagged). */
-  extrapolate?: boolean;
-}
-
-/** One line of the reasoning, for the boat and plan pages. */
-export interface ReasoningStep {
-  topic: 'load' | 'anchor' | 'chain' | 'nylon' | 'snubber' | 'shackle' | 'scope' | 'uplift';
-  text: string;
-}
-
-/** Everything the boat, plan, post and exchange screens show for one boat and one wind. */
-export interface TackleRecommendation {
-  windKn: number;
-  /** Wind above 42 kn: the rode becomes chain plus nylon. */
-  storm: boolean;
-  /** Table load at the plan's wind. */
-  designLoad: DesignLoadResult;
-  /** Table load at 30 kn, the working load a snubber is sized on. */
-  workingLoadN: number;
-  /** Wind the working gear is sized for: max(wind, 42 kn). */
-  sizingKn: number;
-  /** Table load at sizingKn, N. */
-  sizingLoadN: number;
-  /** Peak-load factor on the rode: 0.7 for a storm rode with its nylon section, else 1. */
-  peakFactor: number;
-  /** Load the chain, nylon and shackle are sized for: sizingLoadN × peakFactor, N. */
-  rodeLoadN: number;
-  anchor: {
-    type: AnchorType;
-    /** The anchor to carry, kg (suggested mass rounded up to a whole kg), or null on rock and weed. */
-    massKg: number | null;
-    minKg: number | null;
-    suggestedKg: number | null;
-    softMud: AnchorSuggestionResult['softMud'];
-    suggestion: AnchorSuggestionResult;
-  };
-  chain: (ChainChoice & { lengthM: number; massKg: number; marginOnWll: number }) | null;
-  nylon: {
-    sizeIn: number;
-    sizeMm: number;
-    metricMm: number;
-    lengthM: number;
-    minBreakN: number;
-    workingLimitN: number;
-    /** `storm-rode`: part of this plan's rode; `alternative`: the size if the rode is chain and rope. */
-    role: 'storm-rode' | 'alternative';
-    governedBy: 'handbook-rule' | 'strength';
-  } | null;
-  snubber: SnubberSuggestionResult;
-  /** Smallest table shackle with WLL at least the chain's (one rule), or null. */
-  shackle: { nominalIn: number; wllN: number; minBreakN: number } | null;
-  scope: {
-    ratio: number;
-    rung: ScopeRung | null;
-    /** Seabed to bow roller at high water, m. */
-    heightM: number;
-    rodeLengthM: number;
-  };
-  catenary: CatenaryResult | null;
-  rode: RodeSuggestionResult;
-  reasoning: ReasoningStep[];
-  warnings: string[];
-  basis: string;
-  cautions: readonly string[];
-}
 
 /** Scope for the wind, from the ladder 5:1 most weather, 7:1 storms, 10:1 severe (Boat Mechanical Systems Handbook, seen); the wind steps are common practice. */
 export function scopeForWind(windKn: number): number {
@@ -425,50 +332,4 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
 /** Imperial trade fraction of a nylon or chain size with its mm: "3/4 in (19.1 mm)". */
 export function sizeLabel(sizeIn: number): string {
   return `${inchFractionLabel(sizeIn)} (${tradeSizeMm(sizeIn)} mm)`;
-}
-
-/**
- * The recommendation as a plan's components, so a saved plan carries exactly what was shown:
- * the anchor, the chain at its length, the storm rode's nylon (spliced to the chain), the
- * snubber (two when it says to rig two or a bridle), the anchor shackle, and the nylon it offers
- * for a chain-and-rope rode when the rode it sizes is all chain.
- */
-export function planComponentsFrom(rec: TackleRecommendation): PlanComponents {
-  const connectors: PlanConnector[] = [];
-  if (rec.shackle !== null)
-    connectors.push({ label: 'anchor shackle', kind: 'shackle', nominalIn: rec.shackle.nominalIn });
-  const components: PlanComponents = {
-    snubber: {
-      material: 'nylon',
-      diameterMm: rec.snubber.diameterMm,
-      lengthM: rec.snubber.lengthM,
-      ...(rec.snubber.bridle ? { count: 2 as const } : {}),
-    },
-    connectors,
-  };
-  if (rec.anchor.massKg !== null)
-    components.anchor = { type: rec.anchor.type, massKg: rec.anchor.massKg };
-  if (rec.chain !== null)
-    components.chain = {
-      grade: rec.chain.grade,
-      tradeSizeIn: rec.chain.tradeSizeIn,
-      lengthM: rec.chain.lengthM,
-    };
-  if (rec.nylon !== null && rec.nylon.role === 'storm-rode') {
-    components.rode = {
-      material: 'nylon',
-      construction: 'three-strand',
-      diameterMm: rec.nylon.sizeMm,
-      lengthM: rec.nylon.lengthM,
-    };
-    connectors.push({ label: 'chain-to-rope splice', kind: 'splice' });
-  } else if (rec.nylon !== null) {
-    components.nylonAlternative = {
-      material: 'nylon',
-      construction: 'three-strand',
-      diameterMm: rec.nylon.sizeMm,
-      lengthM: rec.nylon.lengthM,
-    };
-  }
-  return components;
 }
