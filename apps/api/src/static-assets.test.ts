@@ -3,8 +3,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { brotliCompressSync, gzipSync } from 'node:zlib';
 import request from 'supertest';
-import { afterAll, describe, expect, it } from 'vitest';
-import { createTestApp } from './testing/test-app';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, resetDb } from './testing/test-app';
 
 // A built client with the .br and .gz files the build writes beside each asset (vite.config.ts precompress()).
 const webDist = mkdtempSync(join(tmpdir(), 'rw-static-'));
@@ -18,6 +18,8 @@ writeFileSync(join(webDist, 'assets', 'route-abc123.js'), script);
 writeFileSync(join(webDist, 'assets', 'route-abc123.js.br'), brotliCompressSync(script));
 writeFileSync(join(webDist, 'assets', 'route-abc123.js.gz'), gzipSync(script));
 const built = createTestApp({ WEB_DIST: webDist });
+// The locale test expects the default club settings, whatever an earlier test file left in the tables.
+beforeAll(() => resetDb());
 afterAll(() => {
   built.close();
   rmSync(webDist, { recursive: true, force: true });

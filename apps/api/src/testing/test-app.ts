@@ -10,9 +10,7 @@ import { createLogger } from '../logger';
 import { initModels, User, UserRole } from '../models';
 import { settleBackground } from '../lib/background';
 import { createTransport, drainOutbox } from '../modules/mail/outbox.service';
-import { clearClubCache } from '../modules/club/club-cache';
-import { clearAnonymousListingCache } from '../modules/listings/listing-read-cache';
-import { clearAnonymousPostCache } from '../modules/posts/post-read-cache';
+import { clearReadCaches } from '../caches';
 
 let shared: { sequelize: Sequelize; env: Env } | undefined;
 
@@ -60,9 +58,7 @@ export async function resetDb() {
   for (const t of tables) await sequelize.query(`TRUNCATE TABLE \`${t}\``);
   await sequelize.query('SET FOREIGN_KEY_CHECKS = 1');
   // TRUNCATE runs no model hooks, so in-process read caches are emptied here (ids start again at 1).
-  clearAnonymousPostCache();
-  clearAnonymousListingCache();
-  clearClubCache();
+  clearReadCaches();
 }
 
 export const TEST_PASSWORD = 'correct-horse-battery';

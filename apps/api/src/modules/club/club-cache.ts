@@ -1,7 +1,5 @@
 import { LRUCache } from 'lru-cache';
-import { clearOnWrites } from '../../lib/clear-on-writes';
 import { setDisplayLocale, type ClubDto } from '@app/shared';
-import { ClubSetting, Harbor } from '../../models';
 import { getSetting, listHarbors } from './club.service';
 
 /** How long the club's name and harbours may be reused; writes in this process clear them at once. */
@@ -38,8 +36,3 @@ export async function cachedClub(): Promise<ClubDto> {
 }
 
 export const clearClubCache = () => cache.clear();
-
-/** Clears the cache on any write to club settings or harbours. */
-export function clearClubCacheOnWrites() {
-  clearOnWrites([ClubSetting, Harbor], 'club-cache', clearClubCache);
-}

@@ -2,13 +2,12 @@ import { clubLocaleSchema } from '@app/shared';
 import { Router } from 'express';
 import { currentUser, requireRole } from '../../middleware/require-auth';
 import { recordAudit } from '../audit/audit.service';
-import { cachedClub, clearClubCache, clearClubCacheOnWrites } from './club-cache';
+import { cachedClub, clearClubCache } from './club-cache';
 import { getSetting, setSetting } from './club.service';
 import { ROLES_ADMIN } from '../../policies/roles';
 
 export function clubRouter() {
   const r = Router();
-  clearClubCacheOnWrites();
   r.get('/', async (_req, res) => {
     res.json({ data: await cachedClub() });
   });

@@ -1,8 +1,6 @@
 import { LRUCache } from 'lru-cache';
 import type { ListingDto } from '@app/shared';
 import { AppError } from '../../errors/app-error';
-import { clearOnWrites } from '../../lib/clear-on-writes';
-import { Harbor, Listing, ListingPhoto, Membership, MembershipPlan, User } from '../../models';
 import { toListingDto } from './listings.presenter';
 import { getVisibleListingPage } from './listings.service';
 
@@ -38,15 +36,3 @@ export async function anonymousListingDetail(listingId: number): Promise<Listing
 }
 
 export const clearAnonymousListingCache = () => cache.clear();
-
-/**
- * Clears the cache on any write to what a listing page shows: listings, photos, harbours, sellers, and what
- * decides the paid-up badge (memberships and their plans' grace days).
- */
-export function clearAnonymousListingCacheOnWrites() {
-  clearOnWrites(
-    [Listing, ListingPhoto, Harbor, User, Membership, MembershipPlan],
-    'anonymous-listing-cache',
-    clearAnonymousListingCache,
-  );
-}

@@ -18,7 +18,7 @@ import { getOwnBoat } from '../boats/boats.service';
 import { imageUpload } from '../uploads/uploads.router';
 import { DEFAULT_FIT_WIND_KN, boatNeeds, fitOf } from './fit';
 import { ensureListingIndex } from './listing-index';
-import { anonymousListingDetail, clearAnonymousListingCacheOnWrites } from './listing-read-cache';
+import { anonymousListingDetail } from './listing-read-cache';
 import * as moderation from './listing-moderation.service';
 import * as photos from './listing-photos.service';
 import { ratingOf } from './listing-specs';
@@ -46,7 +46,6 @@ const idOf = (req: Request) => Number(listingParams.parse(req.params).listingId)
 /** `/api/listings`: the gear exchange (search, listing life-cycle, photos, reports, moderation). */
 export function listingsRouter(ctx: listings.ExchangeContext) {
   const r = Router();
-  clearAnonymousListingCacheOnWrites();
   const show = async (req: Request, id: number) => {
     const viewer = viewerOf(req);
     const { listing, seller } = await listings.getVisibleListingPage(viewer, id);

@@ -1,8 +1,6 @@
 import { LRUCache } from 'lru-cache';
-import { clearOnWrites } from '../../lib/clear-on-writes';
 import type { PostDetailDto } from '@app/shared';
 import { AppError } from '../../errors/app-error';
-import { Boat, Comment, Post, Topic, User, Vote } from '../../models';
 import { loadVisiblePost } from './post-access';
 import { toPostDetailDto } from './post-detail';
 
@@ -31,12 +29,3 @@ export async function anonymousPostDetail(postId: number): Promise<PostDetailDto
 }
 
 export const clearAnonymousPostCache = () => cache.clear();
-
-/** Clears the cache on any write to what a post page shows (posts, comments, votes, topics, authors, boats). */
-export function clearAnonymousPostCacheOnWrites() {
-  clearOnWrites(
-    [Post, Comment, Vote, Topic, User, Boat],
-    'anonymous-post-cache',
-    clearAnonymousPostCache,
-  );
-}

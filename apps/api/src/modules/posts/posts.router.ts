@@ -11,7 +11,7 @@ import { currentUser, requireAuth } from '../../middleware/require-auth';
 import { acceptAnswer, addComment, unvote, vote } from './comments.service';
 import { approvedCommentCounts, loadOwnPost, loadVisiblePost } from './post-access';
 import { toPostDetailDto } from './post-detail';
-import { anonymousPostDetail, clearAnonymousPostCacheOnWrites } from './post-read-cache';
+import { anonymousPostDetail } from './post-read-cache';
 import { toCommentDto, toPostSummaryDto } from './posts.presenter';
 import * as posts from './posts.service';
 
@@ -21,7 +21,6 @@ const postId = (p: unknown) => Number(params.parse(p).postId);
 /** Posts: list, read, write (drafts autosave through PATCH), submit, comments, helpful votes, answers. */
 export function postsRouter() {
   const r = Router();
-  clearAnonymousPostCacheOnWrites();
   r.get('/', async (req, res) => {
     const q = postListQuerySchema.parse(req.query);
     const { rows, total } = await posts.listPosts(req.user ?? null, q);
