@@ -16,7 +16,5 @@ export class AppError extends Error {
 }
 
 export const notFound = (what: string) => new AppError('NOT_FOUND', `${what} not found`);
-export const forbidden = (message = 'You do not have permission to do that') =>
-  new AppError('FORBIDDEN', message);
 export const invalid = (fields: Record<string, string>, message = 'Some fields need attention') =>
   new AppError('VALIDATION_FAILED', message, fields);

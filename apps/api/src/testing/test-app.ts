@@ -80,8 +80,6 @@ export async function buildUser(
   return user;
 }
 
-export type Agent = ReturnType<typeof request.agent>;
-
 /** A cookie-keeping client with the CSRF token handling the web client does. */
 export async function client(app: BuiltApp['app']) {
   const agent = request.agent(app);

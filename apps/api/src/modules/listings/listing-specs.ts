@@ -12,7 +12,6 @@ import {
 import type { z } from 'zod';
 import {
   LISTING_CATEGORY_LABELS,
-  LISTING_CONDITION_LABELS,
   type ListingCategory,
   type ListingCondition,
   type listingInputSchema,
@@ -189,6 +188,3 @@ export function specsText(category: ListingCategory, specs: Specs): string {
   }
   return parts.filter(Boolean).join(' ');
 }
-
-export const conditionLabel = (c: keyof typeof LISTING_CONDITION_LABELS) =>
-  LISTING_CONDITION_LABELS[c];

@@ -4,7 +4,16 @@ import { withParentLocked } from '../../lib/serialize';
 import { UploadedImage, User } from '../../models';
 import { processImage } from './image';
 import { getStorage, isSafeKey, newKey, thumbKey, UPLOADS_PUBLIC_PATH } from './storage';
-import type { StoredImage } from './uploads.service';
+
+/** One stored image and its thumbnail, with their keys and public addresses. */
+export interface StoredImage {
+  key: string;
+  thumbKey: string;
+  url: string;
+  thumbUrl: string;
+  width: number;
+  height: number;
+}
 
 /**
  * Per-member limits on uploaded images. `quotaBytes` covers everything a member keeps in storage: images in
@@ -30,8 +39,6 @@ let quota: ImageQuota = DEFAULT_IMAGE_QUOTA;
 export function configureImageQuota(next: Partial<ImageQuota>) {
   quota = { ...DEFAULT_IMAGE_QUOTA, ...next };
 }
-
-export const imageQuota = () => quota;
 
 const mb = (bytes: number) => `${(bytes / 1_000_000).toFixed(1)} MB`;
 
