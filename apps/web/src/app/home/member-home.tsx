@@ -7,6 +7,7 @@ import { MyListingsCard } from './my-listings-card';
 import { NoticesCard } from './notices-card';
 import { ModeratorQueue, TreasurerQueue } from './officer-queues';
 import { PostsCard } from './posts-card';
+import { hasModeratorRole, hasRole } from '@/lib/roles';
 
 /** Gear on the exchange that fits the member's first boat, near its home harbour when it has one. */
 function FitsMyBoat() {
@@ -27,19 +28,19 @@ function FitsMyBoat() {
 
 /** The signed-in home: the officer's queues first, then the member's boats, dues, notices and finds. */
 export function MemberHome({ user }: { user: UserDto }) {
-  const isModerator = user.roles.includes('moderator');
-  const isTreasurer = user.roles.includes('treasurer');
+  const hasModeratorDesk = hasModeratorRole(user);
+  const isTreasurer = hasRole(user, 'treasurer');
   return (
     <>
-      {(isModerator || isTreasurer) && (
+      {(hasModeratorDesk || isTreasurer) && (
         <div className="grid gap-4 md:grid-cols-2" aria-label="Your desks" role="group">
-          {isModerator && <ModeratorQueue />}
+          {hasModeratorDesk && <ModeratorQueue />}
           {isTreasurer && <TreasurerQueue />}
         </div>
       )}
       <div className="grid gap-4 md:grid-cols-2">
         <MyBoatsCard />
-        {user.roles.includes('member') && <DuesCard />}
+        {hasRole(user, 'member') && <DuesCard />}
         <NoticesCard />
         <FitsMyBoat />
         <MyListingsCard />

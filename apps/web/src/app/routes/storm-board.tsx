@@ -19,6 +19,7 @@ import { BoardPrintStyles } from '@/features/storm/components/board-print-styles
 import { BoardTable } from '@/features/storm/components/board-table';
 import { BuddySelect } from '@/features/storm/components/buddy-select';
 import { countOf } from '@/lib/plural';
+import { isModeratorOrAdmin } from '@/lib/roles';
 
 function BoardScreen({ watchId }: { watchId: number }) {
   const [search, setSearch] = useSearchParams();
@@ -26,7 +27,7 @@ function BoardScreen({ watchId }: { watchId: number }) {
   const board = useBoard(watchId, harborId);
   const club = useClub();
   const { user } = useCurrentUser();
-  const manages = !!user && (user.roles.includes('moderator') || user.roles.includes('admin'));
+  const manages = isModeratorOrAdmin(user);
   const buddies = useBuddies(watchId, manages);
   const setBuddy = useSetBuddy(watchId);
   if (board.isPending) return <Spinner label="Loading the board…" />;

@@ -17,6 +17,7 @@ import { CloseForm } from '@/features/storm/components/close-form';
 import { MarginBadge } from '@/features/storm/components/margin-badge';
 import { StatusBadge } from '@/features/storm/components/status-badge';
 import { StormCautions } from '@/features/storm/components/storm-cautions';
+import { isModeratorOrAdmin } from '@/lib/roles';
 
 const when = (iso: string) => formatDateTime(iso);
 
@@ -85,7 +86,7 @@ function WatchScreen({ watchId }: { watchId: number }) {
   const club = useClub();
   const close = useCloseWatch(watchId);
   const { user } = useCurrentUser();
-  const manages = !!user && (user.roles.includes('moderator') || user.roles.includes('admin'));
+  const manages = isModeratorOrAdmin(user);
   if (query.isPending) return <Spinner label="Loading the storm watch…" />;
   if (query.isError)
     return (

@@ -10,6 +10,7 @@ import { errorMessage } from '@/lib/form-errors';
 import { useCurrentUser } from '@/features/auth/api/get-session';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useWatches } from '@/features/storm/api/get-watches';
+import { isModeratorOrAdmin } from '@/lib/roles';
 
 const day = (iso: string) => formatDateTime(iso);
 
@@ -31,7 +32,7 @@ function WatchItem({ watch }: { watch: StormWatchDto }) {
 function StormScreen() {
   const watches = useWatches();
   const { user } = useCurrentUser();
-  const manages = !!user && (user.roles.includes('moderator') || user.roles.includes('admin'));
+  const manages = isModeratorOrAdmin(user);
   const open = watches.data?.filter((w) => w.status === 'open') ?? [];
   const closed = watches.data?.filter((w) => w.status === 'closed') ?? [];
   return (
