@@ -5,6 +5,8 @@ export * from './errors';
 export * from './patch';
 export * from './dues';
 export * from './knowledge';
+export * from './post-body';
+export * from './moderation';
 export * from './exchange';
 export * from './storm';
 export * from './locale';

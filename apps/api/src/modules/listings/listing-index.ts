@@ -1,95 +1,19 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
-import type {
-  Currency,
-  FitDto,
-  ListingCategory,
-  ListingCondition,
-  ListingSearch,
-  SavedSearchCriteria,
-} from '@app/shared';
+import type { FitDto, ListingSearch, SavedSearchCriteria } from '@app/shared';
 import { Listing } from '../../models';
-import { getStorage } from '../uploads/storage';
 import { fitOf, type BoatNeeds } from './fit';
 import { ListingSearchEngine } from './listing-search-engine';
-import { parseQuery, termsOf } from './search-terms';
-import { ratingOf, specsText, type ListingRating } from './listing-specs';
-
-/** One searchable (active, visible) listing as the index keeps it, with what the result card shows. */
-export interface IndexedListing {
-  id: number;
-  category: ListingCategory;
-  title: string;
-  description: string;
-  specsText: string;
-  specs: Record<string, unknown>;
-  condition: ListingCondition;
-  priceCents: number;
-  currency: Currency;
-  harborId: number;
-  harborName: string;
-  sizeMm: number | null;
-  /** The stated length (chain, rope, snubber), m, or null. */
-  lengthM: number | null;
-  thumbUrl: string | null;
-  sellerName: string;
-  publishedAtMs: number;
-  expiresAtMs: number;
-  rating: ListingRating;
-}
-
-interface Row {
-  id: number;
-  category: ListingCategory;
-  title: string;
-  description: string;
-  specs: string | Record<string, unknown>;
-  condition: ListingCondition;
-  price_cents: number;
-  currency: Currency;
-  harbor_id: number;
-  harbor_name: string;
-  size_mm: number | null;
-  thumb_key: string | null;
-  seller_name: string;
-  published_at: Date | string;
-  expires_at: Date | string;
-  updated_at: Date | string;
-}
-
-const SELECT_SEARCHABLE = `
-  SELECT l.id, l.category, l.title, l.description, l.specs, l.\`condition\`, l.price_cents, l.currency,
-         l.harbor_id, h.name AS harbor_name, l.size_mm, l.published_at, l.expires_at, l.updated_at,
-         u.display_name AS seller_name,
-         (SELECT p.thumb_key FROM listing_photos p WHERE p.listing_id = l.id ORDER BY p.position, p.id LIMIT 1) AS thumb_key
-    FROM listings l
-    JOIN users u ON u.id = l.seller_id
-    JOIN harbors h ON h.id = l.harbor_id
-   WHERE l.status = 'active' AND l.hidden_at IS NULL`;
-
-function toDoc(r: Row): IndexedListing {
-  const specs =
-    typeof r.specs === 'string' ? (JSON.parse(r.specs) as Record<string, unknown>) : r.specs;
-  return {
-    id: r.id,
-    category: r.category,
-    title: r.title,
-    description: r.description,
-    specsText: specsText(r.category, specs),
-    specs,
-    condition: r.condition,
-    priceCents: Number(r.price_cents),
-    currency: r.currency,
-    harborId: r.harbor_id,
-    harborName: r.harbor_name,
-    sizeMm: r.size_mm === null ? null : Number(r.size_mm),
-    lengthM: typeof specs.lengthM === 'number' ? specs.lengthM : null,
-    thumbUrl: r.thumb_key ? getStorage().url(r.thumb_key) : null,
-    sellerName: r.seller_name,
-    publishedAtMs: new Date(r.published_at).getTime(),
-    expiresAtMs: new Date(r.expires_at).getTime(),
-    rating: ratingOf(r.category, specs, r.condition),
-  };
-}
+import { termsOf } from './search-terms';
+import { SELECT_SEARCHABLE, toDoc, type IndexedListing, type Row } from './indexed-listing';
+import {
+  longEnough,
+  ORDERS,
+  passes,
+  planOf,
+  topK,
+  type QueryPlan,
+  type Scored,
+} from './listing-query';
 
 const newIndex = () =>
   new ListingSearchEngine<IndexedListing>({
@@ -204,25 +128,6 @@ export async function listingChanged(id: number): Promise<void> {
   await refreshListing(id);
 }
 
-type Filters = Pick<
-  ListingSearch,
-  'category' | 'harborId' | 'condition' | 'priceMin' | 'priceMax' | 'sizeMinMm' | 'sizeMaxMm'
->;
-
-function passes(d: IndexedListing, f: Filters, nowMs: number): boolean {
-  if (d.expiresAtMs <= nowMs) return false;
-  if (f.category && d.category !== f.category) return false;
-  if (f.harborId && d.harborId !== f.harborId) return false;
-  if (f.condition && d.condition !== f.condition) return false;
-  if (f.priceMin !== undefined && d.priceCents < f.priceMin) return false;
-  if (f.priceMax !== undefined && d.priceCents > f.priceMax) return false;
-  if (f.sizeMinMm !== undefined && (d.sizeMm === null || d.sizeMm < f.sizeMinMm - 0.05))
-    return false;
-  if (f.sizeMaxMm !== undefined && (d.sizeMm === null || d.sizeMm > f.sizeMaxMm + 0.05))
-    return false;
-  return true;
-}
-
 export interface SearchHit {
   doc: IndexedListing;
   fit?: FitDto;
@@ -250,32 +155,6 @@ export function searchIndex(
   return { ...result, tookMs: performance.now() - started };
 }
 
-/** Adjacent-letter swaps of a word ("chian" → "hcian", "cihan", "chain", "china"). */
-function swaps(term: string): string[] {
-  const out: string[] = [];
-  for (let i = 0; i < term.length - 1; i += 1)
-    out.push(term.slice(0, i) + term.charAt(i + 1) + term.charAt(i) + term.slice(i + 2));
-  return out;
-}
-
-interface QueryPlan {
-  /** One group per query term: the term, or (`withSwaps`) a word with its swapped-letter spellings. */
-  groups: string[][];
-  minLengthM?: number;
-}
-
-/** The query's term groups and its minimum length (`parseQuery`: a length in the query is a minimum). */
-function planOf(q: string, withSwaps: boolean): QueryPlan {
-  const { terms, minLengthM } = parseQuery(q);
-  const groups = terms.map((t) =>
-    withSwaps && t.kind === 'word' && t.text.length >= 4 ? [t.text, ...swaps(t.text)] : [t.text],
-  );
-  return minLengthM === undefined ? { groups } : { groups, minLengthM };
-}
-
-const longEnough = (d: IndexedListing, minLengthM: number | undefined) =>
-  minLengthM === undefined || (d.lengthM !== null && d.lengthM >= minLengthM - 0.005);
-
 /** Hits of a planned query over the index (every document passing `keep` when it has no terms). */
 function searchPlan(plan: QueryPlan, keep: (d: IndexedListing) => boolean): Scored[] {
   const ok = (d: IndexedListing) => longEnough(d, plan.minLengthM) && keep(d);
@@ -283,39 +162,6 @@ function searchPlan(plan: QueryPlan, keep: (d: IndexedListing) => boolean): Scor
   const out: Scored[] = [];
   for (const doc of index.all()) if (ok(doc)) out.push({ doc, score: 0 });
   return out;
-}
-
-type Order = (a: IndexedListing, b: IndexedListing) => number;
-const ORDERS: Record<'newest' | 'price-asc' | 'price-desc', Order> = {
-  newest: (a, b) => b.publishedAtMs - a.publishedAtMs || b.id - a.id,
-  'price-asc': (a, b) => a.priceCents - b.priceCents || b.id - a.id,
-  'price-desc': (a, b) => b.priceCents - a.priceCents || b.id - a.id,
-};
-
-/** The first `k` of `items` under `before` (negative: a comes first), without sorting the rest. */
-function topK<T>(items: T[], k: number, before: (a: T, b: T) => number): T[] {
-  if (k >= items.length / 4) return [...items].sort(before).slice(0, k);
-  const best: T[] = [];
-  for (const x of items) {
-    const worst = best[best.length - 1];
-    if (best.length === k && worst !== undefined && before(x, worst) >= 0) continue;
-    let lo = 0;
-    let hi = best.length;
-    while (lo < hi) {
-      const mid = (lo + hi) >> 1;
-      if (before(best[mid] as T, x) <= 0) lo = mid + 1;
-      else hi = mid;
-    }
-    best.splice(lo, 0, x);
-    if (best.length > k) best.pop();
-  }
-  return best;
-}
-
-interface Scored {
-  doc: IndexedListing;
-  score: number;
-  fit?: FitDto;
 }
 
 function runSearch(

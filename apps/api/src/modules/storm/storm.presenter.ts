@@ -6,7 +6,7 @@ import {
   type StormWatchDto,
 } from '@app/shared';
 import type { Harbor, StormWatch } from '../../models';
-import { csvField } from '../treasury/ledger.service';
+import { csvField } from '../../lib/csv';
 
 export function toStormWatchDto(w: StormWatch): StormWatchDto {
   return {

@@ -20,6 +20,8 @@ import { recordAudit } from '../audit/audit.service';
 import { toPaymentDto, toPlanDto, toRefundDto } from '../dues/dues.presenter';
 import { calendarView, updateCalendar } from './calendar.service';
 import * as ledger from './ledger.service';
+import { ledgerCsv } from './ledger-csv';
+import * as refunds from './refunds.service';
 import * as plans from './plans.service';
 import { previewReminders, sendReminders } from './reminders.service';
 import { roster, summary } from './roster.service';
@@ -75,7 +77,7 @@ export function treasuryRouter(deps: { env: Env; sequelize: Sequelize }) {
   });
   r.post('/payments/:paymentId/refunds', async (req, res) => {
     const { paymentId } = paymentParam.parse(req.params);
-    const refund = await ledger.refundPayment(
+    const refund = await refunds.refundPayment(
       currentUser(req),
       Number(paymentId),
       refundInputSchema.parse(req.body),
@@ -85,7 +87,7 @@ export function treasuryRouter(deps: { env: Env; sequelize: Sequelize }) {
   });
   r.post('/payments/:paymentId/returned', async (req, res) => {
     const { paymentId } = paymentParam.parse(req.params);
-    const { refund, replayed } = await ledger.recordReturned(
+    const { refund, replayed } = await refunds.recordReturned(
       currentUser(req),
       Number(paymentId),
       returnedInputSchema.parse(req.body),
@@ -112,7 +114,7 @@ export function treasuryRouter(deps: { env: Env; sequelize: Sequelize }) {
     res.status(201).json({ data: await sendReminders(currentUser(req), userIds, deps) });
   });
   r.get('/ledger.csv', async (req, res) => {
-    const csv = await ledger.ledgerCsv();
+    const csv = await ledgerCsv();
     await recordAudit({
       actorId: currentUser(req).id,
       area: 'treasury',

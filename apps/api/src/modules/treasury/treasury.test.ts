@@ -1,6 +1,6 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Membership, MembershipPlan, OutboxEmail, Payment } from '../../models';
-import { LEDGER_COLUMNS } from './ledger.service';
+import { LEDGER_COLUMNS } from './ledger-csv';
 import {
   buildUser,
   client,

@@ -1,0 +1,96 @@
+import { z } from 'zod';
+
+// Moderators' decisions on posts and comments, their undo, post flags and members' reports.
+
+const reason = z.string().trim().max(1000, 'Keep the reason under 1,000 characters');
+
+/**
+ * A moderator's decision on a waiting post: publish it, send it back to the author with a note, or decline it
+ * with a reason. The older action names (approve, request-changes, reject) are still accepted and mean the same.
+ */
+export const POST_DECISIONS = ['publish', 'send-back', 'decline'] as const;
+export type PostDecision = (typeof POST_DECISIONS)[number];
+const LEGACY_DECISION: Record<string, PostDecision> = {
+  approve: 'publish',
+  'request-changes': 'send-back',
+  reject: 'decline',
+};
+export const decisionSchema = z
+  .object({
+    action: z
+      .enum([...POST_DECISIONS, 'approve', 'request-changes', 'reject'], {
+        error: 'Choose publish, send-back or decline',
+      })
+      .transform((a): PostDecision => LEGACY_DECISION[a] ?? (a as PostDecision)),
+    reason: reason.default(''),
+  })
+  .refine((d) => d.action === 'publish' || d.reason.length >= 3, {
+    message: 'Say why, so the author knows what to change',
+    path: ['reason'],
+  });
+export type DecisionInput = z.input<typeof decisionSchema>;
+
+export const commentDecisionSchema = z
+  .object({
+    action: z
+      .enum(['publish', 'decline', 'approve', 'reject'], { error: 'Choose publish or decline' })
+      .transform((a) => (a === 'approve' ? 'publish' : a === 'reject' ? 'decline' : a)),
+    reason: reason.default(''),
+  })
+  .refine((d) => d.action === 'publish' || d.reason.length >= 3, {
+    message: 'Say why, so the author knows',
+    path: ['reason'],
+  });
+export type CommentDecisionInput = z.input<typeof commentDecisionSchema>;
+
+/** How long a moderator's decision can be undone (`POST /api/moderation/decisions/:id/undo`). */
+export const UNDO_WINDOW_MS = 10 * 60 * 1000;
+
+/** What a decision answers: the decision's id, for Undo. */
+export interface DecisionResultDto {
+  id: number;
+  status: string;
+  decisionId: number;
+}
+
+/** What an undo answers. */
+export interface UndoResultDto {
+  id: number;
+  subjectType: string;
+  subjectId: number;
+  undoneAt: string;
+}
+
+export const postFlagsSchema = z
+  .object({
+    pinned: z.boolean().optional(),
+    locked: z.boolean().optional(),
+    hidden: z.boolean().optional(),
+    reason: reason.default(''),
+  })
+  .refine((f) => f.pinned !== undefined || f.locked !== undefined || f.hidden !== undefined, {
+    message: 'Nothing to change',
+  })
+  .refine((f) => f.hidden !== true || f.reason.length >= 3, {
+    message: 'Say why the post is hidden',
+    path: ['reason'],
+  });
+export type PostFlagsInput = z.input<typeof postFlagsSchema>;
+
+export const REPORT_TARGETS = ['post', 'comment'] as const;
+export const reportInputSchema = z.object({
+  targetType: z.enum(REPORT_TARGETS),
+  targetId: z.number().int().positive(),
+  reason: z
+    .string({ error: 'Say what is wrong' })
+    .trim()
+    .min(3, 'Say what is wrong')
+    .max(1000, 'Keep it under 1,000 characters'),
+});
+export type ReportInput = z.input<typeof reportInputSchema>;
+
+export const resolveReportSchema = z.object({
+  outcome: z.enum(['dismiss', 'hide-target']),
+  note: reason.default(''),
+});
+export type ResolveReportInput = z.input<typeof resolveReportSchema>;
