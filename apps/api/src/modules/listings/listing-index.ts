@@ -217,8 +217,5 @@ export function matchesCriteria(id: number, c: SavedSearchCriteria, nowMs = Date
 /** Changes whenever the index does (a listing written, the index rebuilt). */
 export const listingIndexVersion = () => version;
 
-/** How many listings the index holds (for health and the benchmark). */
-export const indexedCount = () => index.size;
-
 /** Empties the result cache (the benchmark times uncached searches with it). */
 export const clearListingSearchCache = () => cache.clear();
