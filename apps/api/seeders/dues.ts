@@ -8,7 +8,7 @@ import {
   type DuesCalendar,
 } from '../src/modules/dues/calendar';
 import { amountMismatchReason, owedOn } from '../src/modules/dues/owed';
-import type { SeedContext } from './index';
+import type { SeedContext } from './seed-context';
 
 // Invented plans and a season of invented payments for the demo club; some members are behind on purpose.
 const CAL: DuesCalendar = { fiscalYearStartMonth: 4, renewalWindowDays: 30, lapseAfterDays: 90 };

@@ -12,7 +12,7 @@ import {
   newKey,
   thumbKey,
 } from '../src/modules/uploads/storage';
-import type { AreaSeeder } from './index';
+import type { AreaSeeder } from './seed-context';
 
 // Invented gear for the invented club. Prices, sizes and descriptions are demo data only.
 type Item = [ListingCategory, string, string, Record<string, unknown>, ListingCondition, number];

@@ -1,6 +1,6 @@
 import { planComponentsFrom, recommendTackle } from '@app/calc';
 import { Boat, Notification, TacklePlan } from '../src/models';
-import type { AreaSeeder } from './index';
+import type { AreaSeeder } from './seed-context';
 
 const DAY_MS = 86_400_000;
 const WIND_KN = 30;

@@ -12,7 +12,7 @@ import {
   Vote,
 } from '../src/models';
 import { renderBody } from '../src/modules/posts/body-render';
-import type { SeedContext } from './index';
+import type { SeedContext } from './seed-context';
 
 // Invented posts by the invented members of the demo club. Figures in setups are demo data.
 const p = (text: string) => ({ type: 'paragraph', content: [{ type: 'text', text }] });

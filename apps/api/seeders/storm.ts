@@ -1,6 +1,6 @@
 import { DEFAULT_STORM_CHECKLIST, type PlanComponents } from '@app/shared';
 import { Boat, StormReadiness, StormWatch, TacklePlan } from '../src/models';
-import type { AreaSeeder } from './index';
+import type { AreaSeeder } from './seed-context';
 
 const DAY_MS = 86_400_000;
 
