@@ -1,8 +1,9 @@
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { listRoutes } from '../lib/routes';
-import { MembershipPlan, Payment, Topic, type User } from '../models';
+import { MembershipPlan, Topic, type User } from '../models';
 import { chainListing, exchangeFixture } from '../testing/exchange';
+import { buildPayment } from '../testing/builders';
 import { signedInAs } from '../testing/sign-in';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
 import { resetPostIndex } from '../modules/posts/post-index';
@@ -175,23 +176,11 @@ beforeAll(async () => {
   ids.topicId = (await Topic.findOne())?.id ?? 0;
   const plan = await MembershipPlan.findOne();
   ids.paymentId = (
-    await Payment.create({
-      userId: user.id,
-      planId: plan?.id ?? null,
+    await buildPayment(user, plan, {
       method: 'cash',
-      status: 'succeeded',
       amountMinor: 5000,
-      currency: 'EUR',
       expectedMinor: 5000,
-      coversFrom: null,
-      coversTo: null,
-      providerSessionId: null,
-      providerPaymentIntentId: null,
-      reference: null,
-      note: null,
-      heldReason: null,
       recordedById: user.id,
-      paidAt: new Date(),
     })
   ).id;
   ids.watchId = (

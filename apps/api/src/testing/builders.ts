@@ -80,15 +80,15 @@ export const buildPlan = (over: Over<MembershipPlan> = {}) =>
     ...over,
   });
 
-/** A cheque payment of €120.00 by `member` for `plan`, succeeded; overrides last. */
+/** A cheque payment of €120.00 by `member` for `plan` (null: no plan), succeeded; overrides last. */
 export const buildPayment = (
   member: Pick<User, 'id'>,
-  plan: Pick<MembershipPlan, 'id'>,
+  plan: Pick<MembershipPlan, 'id'> | null,
   over: Over<Payment> = {},
 ) =>
   Payment.create({
     userId: member.id,
-    planId: plan.id,
+    planId: plan?.id ?? null,
     method: 'cheque',
     status: 'succeeded',
     amountMinor: 12000,

@@ -26,6 +26,7 @@ import {
   resetDb,
   type Client,
 } from '../../testing/test-app';
+import { buildPayment } from '../../testing/builders';
 
 const SECRET = 'whsec_dues_test_secret';
 const KEY = 'sk_test_dues_test_key';
@@ -567,22 +568,11 @@ describe('a member joining during the fiscal year', () => {
     const { user, plan: p } = await joiner();
     const fyEnd = `${fyStartYear + 1}-03-31`;
     // Older rows (and the demo seed before this rule) carry the plan's full-year price as the expected amount.
-    const pending = await Payment.create({
-      userId: user.id,
-      planId: p.id,
+    const pending = await buildPayment(user, p, {
       method: 'card',
       status: 'pending',
-      amountMinor: 12000,
-      currency: 'EUR',
-      expectedMinor: 12000,
       coversFrom: today,
       coversTo: fyEnd,
-      providerSessionId: null,
-      providerPaymentIntentId: null,
-      reference: null,
-      note: null,
-      heldReason: null,
-      recordedById: null,
       paidAt: null,
     });
     const stripe = new Stripe(KEY, { host: '127.0.0.1', port: fake.port, protocol: 'http' });

@@ -5,6 +5,7 @@ import { startFakePayments, type FakePayments } from '@app/fake-payments';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, seedDemo } from '../../../seeders/demo';
 import { AuditEvent, Membership, Payment, Refund, User } from '../../models';
+import { buildPayment } from '../../testing/builders';
 import { client, createTestApp, resetDb } from '../../testing/test-app';
 
 const KEY = 'sk_test_seeded_refunds_key';
@@ -87,23 +88,10 @@ describe('seeded card payments', () => {
     const c = await treasurer();
     const member = await User.findOne({ where: { email: 'maren@larkspit.example' } });
     if (!member) throw new Error('the demo seed has this member');
-    const bare = await Payment.create({
-      userId: member.id,
-      planId: null,
+    const bare = await buildPayment(member, null, {
       method: 'card',
-      status: 'succeeded',
       amountMinor: 500,
-      currency: 'EUR',
       expectedMinor: 500,
-      coversFrom: null,
-      coversTo: null,
-      providerSessionId: null,
-      providerPaymentIntentId: null,
-      reference: null,
-      note: null,
-      heldReason: null,
-      recordedById: null,
-      paidAt: new Date(),
     });
     const ledger = await c.get(`/api/treasury/payments?userId=${member.id}`);
     const row = (ledger.body.data as { id: number; cardRefundBlocked: string | null }[]).find(

@@ -9,6 +9,7 @@ import {
   inbox,
   resetDb,
 } from '../../testing/test-app';
+import { buildPayment } from '../../testing/builders';
 
 const built = createTestApp();
 afterAll(() => built.close());
@@ -246,23 +247,10 @@ describe('treasurer desk', () => {
     // Monthly proration: months left including the joining month, over 12 (the plan's rule).
     const prorated = Math.round((12000 * (12 - ((y - start) * 12 + m - 4))) / 12);
     const pay = (userId: number, extra: object) =>
-      Payment.create({
-        userId,
-        planId: plan.id,
-        method: 'cheque',
-        status: 'succeeded',
-        amountMinor: 12000,
-        currency: 'EUR',
-        expectedMinor: 12000,
+      buildPayment({ id: userId }, plan, {
         coversFrom: fyStart,
         coversTo: fyEnd,
-        providerSessionId: null,
-        providerPaymentIntentId: null,
         reference: 'CHQ 1',
-        note: null,
-        heldReason: null,
-        recordedById: null,
-        paidAt: new Date(),
         ...extra,
       });
     const paid = await buildUser();
