@@ -46,6 +46,11 @@ export const BOUNDARY_ZONES = [
   },
   { target: './packages', from: './apps', message: 'Packages never import apps.' },
   { target: './apps', from: './scripts', message: 'Apps never import the orchestration scripts.' },
+  {
+    target: './apps/api/seeders',
+    from: './apps/api/migrations',
+    message: 'A seeder never imports a migration: share the data from src/ instead.',
+  },
 ];
 
 export default tseslint.config(

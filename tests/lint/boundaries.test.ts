@@ -58,6 +58,11 @@ describe('architecture lint', () => {
       'apps/api/src/lib/lint-probe.ts',
       "import { CLUSTER_DIR } from '../../../../scripts/lib/cluster.mjs';\nexport const probe = CLUSTER_DIR;\n",
     ],
+    [
+      'a seeder importing a migration',
+      'apps/api/seeders/lint-probe.ts',
+      "import { up } from '../migrations/20261201-0003-knowledge';\nexport const probe = up;\n",
+    ],
   ])('refuses %s', async (_name, filePath, code) => {
     expect(await ruleIds(filePath, code)).toContain('import-x/no-restricted-paths');
   });

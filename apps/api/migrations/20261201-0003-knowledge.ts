@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { STARTING_TOPICS } from '../src/modules/topics/starting-topics';
 
 const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
 const ts = { type: DataTypes.DATE, allowNull: false };
@@ -8,21 +9,6 @@ const fk = (table: string, onDelete: 'CASCADE' | 'SET NULL', allowNull: boolean)
   references: { model: table, key: 'id' },
   onDelete,
 });
-
-/** The topics a club starts with; admins edit the list afterwards. */
-export const STARTING_TOPICS = [
-  ['anchoring', 'Anchoring', 'Setting, holding and weighing anchor; choosing an anchor type.'],
-  ['rode-and-chain', 'Rode and chain', 'Chain grades and sizes, rope rodes, splices and scope.'],
-  [
-    'snubbers-and-bridles',
-    'Snubbers and bridles',
-    'Taking the shock load off the windlass and bow.',
-  ],
-  ['storm-preparation', 'Storm preparation', 'Getting boat and ground tackle ready for a blow.'],
-  ['rigging-and-splicing', 'Rigging and splicing', 'Shackles, swivels, eye splices and seizing.'],
-  ['maintenance', 'Maintenance', 'Inspecting, regalvanising and replacing worn gear.'],
-  ['passage-planning', 'Passage planning', 'Anchorages, weather windows and tides on the way.'],
-] as const;
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('topics', {

@@ -1,5 +1,5 @@
 import type { PostSetup, PostStatus } from '@app/shared';
-import { STARTING_TOPICS } from '../migrations/20261201-0003-knowledge';
+import { STARTING_TOPICS } from '../src/modules/topics/starting-topics';
 import {
   AuditEvent,
   Boat,
