@@ -50,6 +50,27 @@ describe('the exchange tokenizer', () => {
     expect(parseQuery('8mm chain').minLengthM).toBeUndefined();
   });
 
+  it('reads a grade mark glued to a number as a grade, as it reads on its own', () => {
+    // A counterexample fast-check found: "0G3" gave the word "g3", which alone reads as grade 30.
+    expect(texts('0G3')).toEqual(['0', 'g30']);
+    expect(texts('g3')).toEqual(['g30']);
+    expect(texts('12gr43')).toEqual(['12', 'g43']);
+    expect(texts('5g12')).toEqual(['5', 'g12']);
+  });
+
+  it('writes a fraction that rounds to a 64th as that fraction', () => {
+    // 408100/41855 in is 9.7503 in: its decimal form would be 9.75in, which reads back as 9-3/4in.
+    expect(texts('408100/41855')).toEqual(['9-3/4in']);
+    expect(texts('9-3/4in')).toEqual(['9-3/4in']);
+  });
+
+  it('keeps a run of digits too long for a measure as written, not in exponent form', () => {
+    expect(texts('grade 4310010010010010010010')).toEqual(['grade', '4310010010010010010010']);
+    expect(texts('4310010010010010010010')).toEqual(['4310010010010010010010']);
+    expect(texts('1131001001001001 1/8 in')).toEqual(['1131001001001001', '1', '8']);
+    expect(texts('0/00')).toEqual(['0', '0']);
+  });
+
   it('reads each of its own terms back as that one term (terms are fixed points)', () => {
     fc.assert(
       fc.property(

@@ -69,13 +69,21 @@ const TOKEN = new RegExp(
 );
 
 const round = (v: number, places = 3) => Number(v.toFixed(places));
+/** Numbers from here up are no measure anyone lists (and print in exponent form), so they stay digits. */
+const TOO_LARGE = 1e15;
+/** Digits as written, without leading zeros ("007" → "7"). */
+const digitText = (digits: string) => digits.replace(/^0+(?=\d)/, '');
 const numText = (v: number) => String(round(v));
 const gcd = (a: number, b: number): number => (b === 0 ? a : gcd(b, a % b));
 
 /** An inch size as its canonical term: `5/16in`, `1-1/8in`, `2in`, or decimal when not a 64th. */
 export function inchTerm(valueIn: number): string {
-  const sixtyFourths = valueIn * 64;
-  if (Math.abs(sixtyFourths - Math.round(sixtyFourths)) > 1e-6) return `${numText(valueIn)}in`;
+  const isSixtyFourth = (v: number) => Math.abs(v * 64 - Math.round(v * 64)) <= 1e-6;
+  // Not a 64th: the value as its decimal form is written (3 places), so that form reads back as the same term;
+  // it may round to a 64th (9.7503 → 9.75 → 9-3/4in).
+  const value = isSixtyFourth(valueIn) ? valueIn : round(valueIn);
+  const sixtyFourths = value * 64;
+  if (!isSixtyFourth(value)) return `${numText(value)}in`;
   const total = Math.round(sixtyFourths);
   const whole = Math.floor(total / 64);
   const rest = total % 64;
@@ -105,17 +113,23 @@ export function searchTerms(text: string): SearchTerm[] {
     const g = m.groups ?? {};
     if (g.num !== undefined && g.den !== undefined) {
       const den = Number(g.den);
-      if (den > 0) {
-        const whole = g.whole === undefined ? 0 : Number(g.whole.trim().replace('-', ''));
-        out.push({ kind: 'size', text: inchTerm(whole + Number(g.num) / den) });
+      const whole = g.whole === undefined ? 0 : Number(g.whole.trim().replace('-', ''));
+      const inches = den > 0 ? whole + Number(g.num) / den : Number.NaN;
+      if (inches < TOO_LARGE) {
+        out.push({ kind: 'size', text: inchTerm(inches) });
         continue;
       }
-      // "5/0": not a size; keep the numbers as they are.
-      for (const n of m[0].match(/\d+/g) ?? []) out.push({ kind: 'number', text: n });
+      // "5/0" or an absurd size: not a size; keep the numbers.
+      for (const n of m[0].match(/\d+/g) ?? []) out.push({ kind: 'number', text: digitText(n) });
       continue;
     }
     if (g.value !== undefined) {
       const value = Number(g.value);
+      if (value >= TOO_LARGE) {
+        // Past what a size or a length can be (and where numbers print as 4.3e+21): the digits as written.
+        out.push({ kind: 'number', text: digitText(g.value) });
+        continue;
+      }
       out.push(
         g.unit === undefined ? { kind: 'number', text: numText(value) } : unitTerm(value, g.unit),
       );
@@ -130,6 +144,14 @@ export function searchTerms(text: string): SearchTerm[] {
       // "G12": not a chain grade, so it is just a word.
       const word = processTerm(m[0].replace(/[\s.-]+/g, ''));
       if (word) out.push({ kind: 'word', text: word });
+      continue;
+    }
+    // A grade mark glued to what comes before ("0G3") is matched as a word; read on its own it is a grade, so it
+    // is a grade here too (each term reads back as itself).
+    const glued = /^(?:grade|gr|g)(\d{1,3})$/i.exec(m[0]);
+    const gluedGrade = glued?.[1] === undefined ? undefined : GRADE_OF[String(Number(glued[1]))];
+    if (gluedGrade) {
+      out.push({ kind: 'grade', text: gluedGrade });
       continue;
     }
     const word = processTerm(m[0]);
