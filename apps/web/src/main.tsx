@@ -1,8 +1,8 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import { RouterProvider } from 'react-router-dom';
+import { BrowserRouter } from 'react-router-dom';
 import { AppProvider } from '@/app/provider';
-import { createAppRouter } from '@/app/router';
+import { AppRoutes } from '@/app/app-routes';
 import { readClubLocaleFromPage } from '@/lib/club-locale';
 import '@/styles/index.css';
 
@@ -14,7 +14,9 @@ if (!rootElement) throw new Error('index.html has no #root element');
 createRoot(rootElement).render(
   <StrictMode>
     <AppProvider>
-      <RouterProvider router={createAppRouter()} />
+      <BrowserRouter>
+        <AppRoutes />
+      </BrowserRouter>
     </AppProvider>
   </StrictMode>,
 );

@@ -17,9 +17,9 @@ describe('old addresses', () => {
   ])('%s goes to %s', async (from, toPath, search) => {
     mockApi({});
     const session = buildSession(buildUser({ roles: ['member', 'treasurer'] }));
-    const { router } = renderApp({ route: from, session });
-    await waitFor(() => expect(router.state.location.pathname).toBe(toPath));
-    expect(router.state.location.search).toBe(search);
+    const { location } = renderApp({ route: from, session });
+    await waitFor(() => expect(location.current.pathname).toBe(toPath));
+    expect(location.current.search).toBe(search);
   });
 
   it('covers every old address the router knows', () => {

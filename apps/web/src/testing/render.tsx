@@ -1,12 +1,13 @@
 import type { SessionDto } from '@app/shared';
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
-import { createMemoryRouter, RouterProvider, type RouteObject } from 'react-router-dom';
+import { MemoryRouter, type RouteObject } from 'react-router-dom';
 import { AppProvider } from '@/app/provider';
 import { APP_ROUTES } from '@/app/router';
 import { authKeys } from '@/features/auth/api/keys';
 import { setCsrfToken } from '@/lib/api-client';
 import { createQueryClient } from '@/lib/query-client';
+import { RoutesWithProbe, type LocationRef } from './routes-with-probe';
 
 export interface RenderOptions {
   /** Where the memory router starts. */
@@ -22,13 +23,15 @@ function setup(routes: RouteObject[], { route = '/', session }: RenderOptions) {
     queryClient.setQueryData(authKeys.session(), session);
     setCsrfToken(session.csrfToken);
   }
-  const router = createMemoryRouter(routes, { initialEntries: [route] });
+  const location = {} as LocationRef;
   const view = render(
     <AppProvider queryClient={queryClient}>
-      <RouterProvider router={router} />
+      <MemoryRouter initialEntries={[route]}>
+        <RoutesWithProbe routes={routes} locationRef={location} />
+      </MemoryRouter>
     </AppProvider>,
   );
-  return { ...view, router, queryClient };
+  return { ...view, location, queryClient };
 }
 
 /** Renders `ui` as the only screen of a memory router, with a fresh query cache. */

@@ -85,10 +85,10 @@ describe('app shell', () => {
 
   it('sends a visitor from a members-only page to sign in, with the way back', async () => {
     api();
-    const { router } = renderApp({ route: '/account' });
+    const { location } = renderApp({ route: '/account' });
     expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeInTheDocument();
-    expect(router.state.location.pathname).toBe('/sign-in');
-    expect(router.state.location.search).toBe('?next=%2Faccount');
+    expect(location.current.pathname).toBe('/sign-in');
+    expect(location.current.search).toBe('?next=%2Faccount');
   });
 
   it('tells a member without the admin role that the admin page is not for them', async () => {

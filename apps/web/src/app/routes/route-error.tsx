@@ -1,11 +1,10 @@
-import { isRouteErrorResponse, Link, useRouteError } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/form-errors';
 
 function describe(error: unknown): string {
-  if (isRouteErrorResponse(error)) return `${error.status} ${error.statusText}`.trim();
   // A screen's code failed to download, usually after a new release or when offline.
   if (
     error instanceof TypeError &&
@@ -17,8 +16,7 @@ function describe(error: unknown): string {
 }
 
 /** Shown when a screen throws: a plain message and a way on, never a stack trace. */
-export function RouteErrorBoundary() {
-  const error = useRouteError();
+export function RouteErrorScreen({ error }: { error: unknown }) {
   return (
     <Page title="Something went wrong" width="narrow">
       <Alert tone="error">

@@ -97,7 +97,7 @@ describe('Stop-digest page', () => {
       const { requests, fetchMock } = mockApi({
         'POST /api/account/digest/stop': () => ({ body: { data: { stopped: true } } }),
       });
-      const { router } = renderApp({
+      const { location } = renderApp({
         route: `${address}?token=12.abc_def-ghi`,
         session: buildSession(null),
       });
@@ -111,7 +111,7 @@ describe('Stop-digest page', () => {
       expect(requests.filter((r) => r.method === 'POST')).toMatchObject([
         { url: '/api/account/digest/stop', body: { token: '12.abc_def-ghi' } },
       ]);
-      expect(router.state.location.pathname).toBe('/notices/stop-digest');
+      expect(location.current.pathname).toBe('/notices/stop-digest');
     },
   );
 
