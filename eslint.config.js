@@ -122,6 +122,37 @@ export default tseslint.config(
     },
   },
   {
+    // Schemas (and zod with them) stay out of every first load: screens import vocabulary from
+    // '@app/shared/values' and check forms through lib/lazy-schema.ts, which loads lib/form-schemas.ts.
+    files: ['apps/web/src/**/*.{ts,tsx}'],
+    ignores: ['apps/web/src/lib/form-schemas.ts', '**/*.test.{ts,tsx}', 'apps/web/src/testing/**'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          paths: [
+            {
+              name: '@app/shared',
+              allowTypeImports: true,
+              message:
+                "Import values from '@app/shared/values' or '@app/shared/locale'; check forms with lazyResolver / loadFormSchemas (lib/lazy-schema.ts).",
+            },
+            {
+              name: 'zod',
+              allowTypeImports: true,
+              message:
+                'zod loads with the form schemas: use lazyResolver / loadFormSchemas (lib/lazy-schema.ts).',
+            },
+            {
+              name: '@hookform/resolvers/zod',
+              message: 'Use lazyResolver from lib/lazy-schema.ts.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
     // Tests read untyped HTTP bodies (supertest's `res.body` is `any`); `no-explicit-any` still applies.
     files: ['**/*.test.ts', '**/*.test.tsx', 'tests/**/*.ts', '**/testing/**/*.ts'],
     rules: {

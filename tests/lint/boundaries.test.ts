@@ -67,6 +67,35 @@ describe('architecture lint', () => {
     expect(await ruleIds(filePath, code)).toContain('import-x/no-restricted-paths');
   });
 
+  it.each([
+    [
+      'a schema imported into a screen',
+      'apps/web/src/features/boats/lint-probe.ts',
+      "import { boatInputSchema } from '@app/shared';\nexport const probe = boatInputSchema;\n",
+    ],
+    [
+      'zod imported into a screen',
+      'apps/web/src/features/boats/lint-probe.ts',
+      "import { z } from 'zod';\nexport const probe = z.string();\n",
+    ],
+    [
+      'the zod resolver imported into a screen',
+      'apps/web/src/components/ui/lint-probe.ts',
+      "import { zodResolver } from '@hookform/resolvers/zod';\nexport const probe = zodResolver;\n",
+    ],
+  ])('keeps schemas out of first loads: refuses %s', async (_name, filePath, code) => {
+    expect(await ruleIds(filePath, code)).toContain('@typescript-eslint/no-restricted-imports');
+  });
+
+  it('lets a screen import shared types, vocabulary and the lazy schema loader', async () => {
+    expect(
+      await ruleIds(
+        'apps/web/src/features/boats/lint-probe.ts',
+        "import type { BoatDto } from '@app/shared';\nimport type { z } from 'zod';\nimport { HULLS } from '@app/shared/values';\nimport { lazyResolver } from '@/lib/lazy-schema';\nexport const probe = [HULLS, lazyResolver((s) => s.boatInputSchema)] as const;\nexport type Probe = BoatDto | z.ZodType;\n",
+      ),
+    ).toEqual([]);
+  });
+
   it('allows a feature to use its own files, shared code and workspace packages', async () => {
     const code = [
       "import { STANDARD_CAUTIONS } from '@app/calc';",

@@ -1,11 +1,16 @@
 import { z } from 'zod';
+import {
+  HIDDEN_CHARACTERS,
+  PASSWORD_MAX_BYTES,
+  ROLES,
+  UNIT_SYSTEMS,
+  type Role,
+  type UnitSystem,
+} from './values/auth';
 
-export const ROLES = ['member', 'moderator', 'treasurer', 'admin'] as const;
-export type Role = (typeof ROLES)[number];
+export * from './values/auth';
+
 export const roleSchema = z.enum(ROLES);
-
-export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
 const email = z
   .string({ error: 'E-mail is required' })
@@ -15,8 +20,6 @@ const email = z
   .max(254, 'E-mail is too long')
   .pipe(z.email('Enter a valid e-mail address'));
 
-/** bcrypt reads only a password's first 72 bytes (UTF-8): longer ones are refused rather than cut short. */
-export const PASSWORD_MAX_BYTES = 72;
 const utf8Bytes = (s: string) => new TextEncoder().encode(s).length;
 
 /** Password rules shared by sign-up, reset and change. */
@@ -27,14 +30,6 @@ export const passwordSchema = z
   .refine((v) => utf8Bytes(v) <= PASSWORD_MAX_BYTES, {
     message: 'Use at most 72 characters (accented letters and symbols count as two to four)',
   });
-
-/**
- * Characters a reader cannot see but that change what they see: control characters (C0, DEL, C1), line and
- * paragraph separators, zero-width spaces and the byte-order mark, and the bidirectional marks, embeddings,
- * overrides and isolates (Unicode UAX #9) that can make a name read as someone else's.
- */
-export const HIDDEN_CHARACTERS =
-  /[\p{Cc}\u061C\u200B\u200E\u200F\u2028-\u202E\u2060\u2066-\u2069\uFEFF]/u;
 
 export const signupSchema = z.object({
   email,

@@ -1,14 +1,16 @@
 import { z } from 'zod';
 import { nonEmptyPatchOf, patchOf } from './patch';
-
-export const HULLS = ['sail', 'power', 'multihull'] as const;
-export type Hull = (typeof HULLS)[number];
-export const CHAIN_GRADE_IDS = ['G30', 'G43', 'G70', 'G80', 'G100'] as const;
-export const ANCHOR_KINDS = ['plow', 'claw', 'fluke', 'scoop', 'grapnel', 'fisherman'] as const;
-export const BOTTOMS = ['sand', 'mixed', 'mud', 'clay', 'weed', 'rock'] as const;
-export const CONNECTOR_KINDS = ['shackle', 'swivel', 'link', 'splice', 'other'] as const;
-export const PLAN_CONDITIONS = ['everyday', 'storm', 'hurricane-hole', 'custom'] as const;
-export type PlanCondition = (typeof PLAN_CONDITIONS)[number];
+export * from './values/boats';
+import {
+  ANCHOR_KINDS,
+  BOTTOMS,
+  CHAIN_GRADE_IDS,
+  CONNECTOR_KINDS,
+  HULLS,
+  PLAN_CONDITIONS,
+  type Hull,
+  type PlanCondition,
+} from './values/boats';
 
 const num = (label: string, min: number, max: number, unit: string) =>
   z

@@ -116,3 +116,9 @@ export { excerptOf } from './excerpt';
 export function countOf(n: number, one: string, other: string, locale = current): string {
   return `${formatNumber(n, 0, locale)} ${pluralWord(n, one, other)}`;
 }
+
+/** Integer minor units as a plain decimal string: 12050 EUR → "120.50", −3000 → "-30.00". */
+export function minorToDecimal(amountMinor: number, currency: string): string {
+  const digits = currencyDigits(currency);
+  return (amountMinor / 10 ** digits).toFixed(digits);
+}

@@ -1,15 +1,12 @@
 import { z } from 'zod';
+import { POST_DECISIONS, REPORT_TARGETS, type PostDecision } from './values/moderation';
+
+export * from './values/moderation';
 
 // Moderators' decisions on posts and comments, their undo, post flags and members' reports.
 
 const reason = z.string().trim().max(1000, 'Keep the reason under 1,000 characters');
 
-/**
- * A moderator's decision on a waiting post: publish it, send it back to the author with a note, or decline it
- * with a reason. The older action names (approve, request-changes, reject) are still accepted and mean the same.
- */
-export const POST_DECISIONS = ['publish', 'send-back', 'decline'] as const;
-export type PostDecision = (typeof POST_DECISIONS)[number];
 const LEGACY_DECISION: Record<string, PostDecision> = {
   approve: 'publish',
   'request-changes': 'send-back',
@@ -43,9 +40,6 @@ export const commentDecisionSchema = z
   });
 export type CommentDecisionInput = z.input<typeof commentDecisionSchema>;
 
-/** How long a moderator's decision can be undone (`POST /api/moderation/decisions/:id/undo`). */
-export const UNDO_WINDOW_MS = 10 * 60 * 1000;
-
 /** What a decision answers: the decision's id, for Undo. */
 export interface DecisionResultDto {
   id: number;
@@ -77,7 +71,6 @@ export const postFlagsSchema = z
   });
 export type PostFlagsInput = z.input<typeof postFlagsSchema>;
 
-export const REPORT_TARGETS = ['post', 'comment'] as const;
 export const reportInputSchema = z.object({
   targetType: z.enum(REPORT_TARGETS),
   targetId: z.number().int().positive(),

@@ -13,7 +13,7 @@ import {
   type PaymentStatus,
   type RefundStatus,
 } from './dues-terms';
-import { currencyDigits } from './locale-format';
+export { minorToDecimal } from './locale-format';
 
 export interface PaymentDto {
   id: number;
@@ -220,10 +220,4 @@ export interface SummaryBreakdownDto {
   heldMinor: number;
   /** Expected − collected this year − outstanding dues: late fees paid, amounts above or below the quote, waived dues. */
   differenceMinor: number;
-}
-
-/** Integer minor units as a plain decimal string: 12050 EUR → "120.50", −3000 → "-30.00". */
-export function minorToDecimal(amountMinor: number, currency: string): string {
-  const digits = currencyDigits(currency);
-  return (amountMinor / 10 ** digits).toFixed(digits);
 }

@@ -1,9 +1,9 @@
-// The entry chunk carries no schema library: only zod's core config, so that every later zod parse runs
-// without JIT (zod would otherwise probe `new Function`, which our Content-Security-Policy, script-src 'self',
-// forbids). The full zod loads with the screens that need forms.
-import { config } from 'zod/v4/core';
-
-config({ jitless: true });
+// The entry chunk carries no schema library. Zod reads its global config from `globalThis.__zod_globalConfig`
+// (created once, shared by every copy), so setting it here, before any zod module loads, makes every later parse run without
+// JIT: zod would otherwise probe `new Function`, which our Content-Security-Policy (script-src 'self') forbids
+// and reports. env.test.ts checks that zod sees the setting.
+const zodHolder = globalThis as { __zod_globalConfig?: Record<string, unknown> };
+(zodHolder.__zod_globalConfig ??= {}).jitless = true;
 
 const API_BASE = /^(\/|https?:\/\/)/;
 

@@ -1,4 +1,4 @@
-import { formatMoney } from '@app/shared';
+import { formatMoney } from '@app/shared/locale';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { useMyDues } from '@/features/dues/api/get-my-dues';

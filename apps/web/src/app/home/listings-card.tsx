@@ -1,4 +1,5 @@
-import { formatMoney, type ListingSummaryDto } from '@app/shared';
+import type { ListingSummaryDto } from '@app/shared';
+import { formatMoney } from '@app/shared/locale';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { useListingSearch, type ListingFilters } from '@/features/exchange/api/search-listings';

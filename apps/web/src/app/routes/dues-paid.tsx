@@ -1,5 +1,5 @@
 import { Link, useSearchParams } from 'react-router-dom';
-import { formatMoney } from '@app/shared';
+import { formatMoney } from '@app/shared/locale';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
 import { Spinner } from '@/components/ui/spinner';

@@ -1,4 +1,4 @@
-import { READINESS_STATUS_LABELS, READINESS_STATUSES } from '@app/shared';
+import { READINESS_STATUS_LABELS, READINESS_STATUSES } from '@app/shared/values';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';

@@ -1,4 +1,4 @@
-import { STORM_LOCATION_LABELS } from '@app/shared';
+import { STORM_LOCATION_LABELS } from '@app/shared/values';
 import { Link, useParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';

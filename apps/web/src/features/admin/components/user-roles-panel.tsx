@@ -1,4 +1,5 @@
-import { ROLES, type Role, type UserDto } from '@app/shared';
+import type { Role, UserDto } from '@app/shared';
+import { ROLES } from '@app/shared/values';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';

@@ -1,5 +1,4 @@
-import { updateAccountSchema, type UserDto } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { UserDto } from '@app/shared';
 import { useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
@@ -8,6 +7,9 @@ import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateAccount } from '../api/update-account';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.updateAccountSchema);
 
 export interface AccountProfileFormProps {
   user: UserDto;
@@ -29,7 +31,7 @@ export function AccountProfileForm({ user }: AccountProfileFormProps) {
     formState: { errors, isDirty },
     reset,
   } = useForm({
-    resolver: zodResolver(updateAccountSchema),
+    resolver,
     defaultValues: { displayName: user.displayName, unitSystem: user.unitSystem },
   });
 

@@ -1,20 +1,20 @@
-import { changePasswordSchema } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { z } from 'zod';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useChangePassword } from '../api/change-password';
+import { lazyResolver } from '@/lib/lazy-schema';
 
-const changePasswordFormSchema = changePasswordSchema
-  .extend({ confirmNewPassword: z.string() })
-  .refine((values) => values.newPassword === values.confirmNewPassword, {
-    path: ['confirmNewPassword'],
-    message: "The two new passwords don't match",
-  });
+const resolver = lazyResolver(({ changePasswordSchema, z }) =>
+  changePasswordSchema
+    .extend({ confirmNewPassword: z.string() })
+    .refine((values) => values.newPassword === values.confirmNewPassword, {
+      path: ['confirmNewPassword'],
+      message: "The two new passwords don't match",
+    }),
+);
 
 const EMPTY = { currentPassword: '', newPassword: '', confirmNewPassword: '' };
 
@@ -27,7 +27,7 @@ export function ChangePasswordForm() {
     setError,
     reset,
     formState: { errors },
-  } = useForm({ resolver: zodResolver(changePasswordFormSchema), defaultValues: EMPTY });
+  } = useForm({ resolver, defaultValues: EMPTY });
 
   const onSubmit = handleSubmit(async ({ currentPassword, newPassword }) => {
     try {

@@ -1,11 +1,12 @@
-import { resetRequestSchema } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.resetRequestSchema);
 
 export interface EmailRequestFormProps {
   /** Sends the request; resolves when the server accepted it. */
@@ -35,7 +36,7 @@ export function EmailRequestForm({
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(resetRequestSchema),
+    resolver,
     defaultValues: { email: defaultEmail },
   });
 

@@ -1,8 +1,5 @@
-import { passwordSchema } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
-import { z } from 'zod';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
@@ -11,13 +8,16 @@ import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
+import { lazyResolver } from '@/lib/lazy-schema';
 
-const newPasswordFormSchema = z
-  .object({ password: passwordSchema, confirmPassword: z.string() })
-  .refine((values) => values.password === values.confirmPassword, {
-    path: ['confirmPassword'],
-    message: "The two passwords don't match",
-  });
+const resolver = lazyResolver(({ passwordSchema, z }) =>
+  z
+    .object({ password: passwordSchema, confirmPassword: z.string() })
+    .refine((values) => values.password === values.confirmPassword, {
+      path: ['confirmPassword'],
+      message: "The two passwords don't match",
+    }),
+);
 
 export interface ResetPasswordFormProps {
   token: string;
@@ -39,7 +39,7 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(newPasswordFormSchema),
+    resolver,
     defaultValues: { password: '', confirmPassword: '' },
   });
 

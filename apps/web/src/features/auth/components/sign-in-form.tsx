@@ -1,5 +1,4 @@
-import { loginSchema, type SessionDto } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { SessionDto } from '@app/shared';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
@@ -12,6 +11,9 @@ import { ApiError } from '@/lib/api-client';
 import { applyServerErrors, errorMessage } from '@/lib/form-errors';
 import { useLogin } from '../api/login';
 import { useResendVerification } from '../api/resend-verification';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.loginSchema);
 
 export interface SignInFormProps {
   onSignedIn: (session: SessionDto) => void;
@@ -29,7 +31,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
     handleSubmit,
     setError,
     formState: { errors },
-  } = useForm({ resolver: zodResolver(loginSchema), defaultValues: { email: '', password: '' } });
+  } = useForm({ resolver, defaultValues: { email: '', password: '' } });
 
   const onSubmit = handleSubmit(async (input) => {
     setUnverifiedEmail(null);

@@ -1,5 +1,3 @@
-import { signupSchema } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
@@ -9,6 +7,9 @@ import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useSignup } from '../api/signup';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.signupSchema);
 
 const FIELDS = ['email', 'password', 'displayName'] as const;
 
@@ -21,7 +22,7 @@ export function SignUpForm() {
     setError,
     formState: { errors },
   } = useForm({
-    resolver: zodResolver(signupSchema),
+    resolver,
     defaultValues: { email: '', password: '', displayName: '' },
   });
 

@@ -1,13 +1,6 @@
 import { CHAIN_TRADE_SIZES_IN, inchFractionLabel } from '@app/calc';
-import {
-  boatInputSchema,
-  CHAIN_GRADE_IDS,
-  HULLS,
-  type BoatDto,
-  type BoatInput,
-  type HarborDto,
-} from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { BoatDto, BoatInput, HarborDto } from '@app/shared';
+import { CHAIN_GRADE_IDS, HULLS } from '@app/shared/values';
 import { Controller, useForm, useWatch, type Control, type FieldPath } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
@@ -16,6 +9,9 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { QuantityField } from '@/components/units/quantity-field';
 import { SelectField } from '@/components/ui/select-field';
 import type { QuantityKind } from '@/lib/units/parse-quantity';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.boatInputSchema);
 
 export interface BoatFormProps {
   /** The boat to edit; left out for a new one. */
@@ -113,7 +109,7 @@ export function BoatForm({ boat, harbors, submitLabel, isPending, onSubmit }: Bo
     setValue,
     formState: { errors },
   } = useForm<FormValues>({
-    resolver: zodResolver(boatInputSchema),
+    resolver,
     defaultValues: defaults(boat),
   });
   const gypsy = useWatch({ control, name: 'gypsy' });

@@ -1,10 +1,11 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { messageInputSchema } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useSendMessage } from '../api/send-message';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.messageInputSchema);
 
 export interface MessageFormProps {
   /** Reply in this thread… */
@@ -20,7 +21,7 @@ export interface MessageFormProps {
 export function MessageForm({ threadId, listingId, label, submitLabel, onSent }: MessageFormProps) {
   const send = useSendMessage();
   const { register, handleSubmit, reset, setError, formState } = useForm({
-    resolver: zodResolver(messageInputSchema),
+    resolver,
     defaultValues: { body: '' },
   });
   const onSubmit = handleSubmit((v) =>

@@ -1,4 +1,6 @@
-import { formatMoney, METHOD_LABELS, type PaymentDto } from '@app/shared';
+import type { PaymentDto } from '@app/shared';
+import { METHOD_LABELS } from '@app/shared/values';
+import { formatMoney } from '@app/shared/locale';
 import { readableDate } from '@/lib/format-date';
 
 const STATUS_WORDS: Record<PaymentDto['status'], string> = {

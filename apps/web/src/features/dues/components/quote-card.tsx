@@ -1,4 +1,5 @@
-import { formatMoney, type DuesQuoteDto } from '@app/shared';
+import type { DuesQuoteDto } from '@app/shared';
+import { formatMoney } from '@app/shared/locale';
 import { Button } from '@/components/ui/button';
 
 /** What is owed and why, line by line, with the pay button. */

@@ -1,4 +1,5 @@
-import { DUES_STATUS_LABELS, type DuesStatus } from '@app/shared';
+import type { DuesStatus } from '@app/shared';
+import { DUES_STATUS_LABELS } from '@app/shared/values';
 import { cn } from '@/lib/cn';
 
 const TONES: Record<DuesStatus, string> = {

@@ -1,4 +1,4 @@
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { ListingInput } from '@app/shared';
 import {
   ANCHOR_KINDS,
   CHAIN_GRADE_IDS,
@@ -13,14 +13,16 @@ import {
   ROPE_CONSTRUCTION_IDS,
   ROPE_MATERIAL_IDS,
   WINDLASS_PARTS,
-  type ListingInput,
-} from '@app/shared';
+} from '@app/shared/values';
 import { useRef, type ReactNode } from 'react';
 import { useForm, useWatch, type FieldErrors } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button, type ButtonVariant } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
+import { lazyResolver } from '@/lib/lazy-schema';
 import { formSchema, type ListingFormValues } from '../utils/listing-form-values';
+
+const resolver = lazyResolver(formSchema);
 import { ExchangeSelect } from './select';
 
 const opts = (values: readonly string[], labels?: Record<string, string>) =>
@@ -71,7 +73,7 @@ export function ListingForm({
 }: ListingFormProps) {
   const intent = useRef('save');
   const buttons = actions ?? [{ intent: 'save', label: submitLabel }];
-  const form = useForm({ resolver: zodResolver(formSchema), defaultValues: initial });
+  const form = useForm({ resolver, defaultValues: initial });
   const { register, handleSubmit, control, formState } = form;
   const category = useWatch({ control, name: 'category' });
   const server = serverError?.fields ?? {};

@@ -1,4 +1,4 @@
-import { MAX_LISTING_PHOTOS } from '@app/shared';
+import { MAX_LISTING_PHOTOS } from '@app/shared/values';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { countOf } from '@/lib/plural';

@@ -1,4 +1,5 @@
-import { MAX_LISTING_PHOTOS, type ListingPhotoDto } from '@app/shared';
+import type { ListingPhotoDto } from '@app/shared';
+import { MAX_LISTING_PHOTOS } from '@app/shared/values';
 import { useQueryClient } from '@tanstack/react-query';
 import { useRef, useState, type DragEvent } from 'react';
 import { Alert } from '@/components/ui/alert';

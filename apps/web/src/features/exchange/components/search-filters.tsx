@@ -3,7 +3,7 @@ import {
   LISTING_CATEGORY_LABELS,
   LISTING_CONDITIONS,
   LISTING_CONDITION_LABELS,
-} from '@app/shared';
+} from '@app/shared/values';
 import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';

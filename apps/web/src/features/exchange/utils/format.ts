@@ -1,11 +1,7 @@
 import { CHAIN_GRADE_LABELS, chainGradeWords, inchFractionLabel } from '@app/calc';
 import { formatMoney } from '@app/shared/locale';
-import {
-  LISTING_CATEGORY_LABELS,
-  LISTING_CONDITION_LABELS,
-  type ListingCategory,
-  type ListingCondition,
-} from '@app/shared';
+import type { ListingCategory, ListingCondition } from '@app/shared';
+import { LISTING_CATEGORY_LABELS, LISTING_CONDITION_LABELS } from '@app/shared/values';
 
 /** Money in minor units as the club's region writes it (and with the currency's own digits). */
 export const formatPrice = (priceCents: number, currency: string): string =>

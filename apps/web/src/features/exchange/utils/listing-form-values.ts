@@ -1,6 +1,6 @@
 import { inchFractionLabel, parseInchText } from '@app/calc';
-import { listingInputSchema, type ListingDto } from '@app/shared';
-import { z } from 'zod';
+import type { ListingDto } from '@app/shared';
+import type { FormSchemaModule } from '@/lib/lazy-schema';
 
 /** What the form holds: strings as typed; converted to the shared listing schema on submit. */
 export interface ListingFormValues {
@@ -89,10 +89,11 @@ export function toListingInput(v: ListingFormValues): Record<string, unknown> {
 }
 
 /** The shared listing schema behind a converter from typed strings. */
-export const formSchema = z
-  .custom<ListingFormValues>((v) => typeof v === 'object' && v !== null)
-  .transform(toListingInput)
-  .pipe(listingInputSchema);
+export const formSchema = ({ listingInputSchema, z }: FormSchemaModule) =>
+  z
+    .custom<ListingFormValues>((v) => typeof v === 'object' && v !== null)
+    .transform(toListingInput)
+    .pipe(listingInputSchema);
 
 /** An inch size as the seller would type it: "5/16", "1 1/8", or the decimal when it is not a 16th. */
 const inchText = (v: number) =>

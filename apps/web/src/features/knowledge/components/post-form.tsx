@@ -1,10 +1,5 @@
 import { formatTime } from '@app/shared/locale';
-import {
-  createPostSchema,
-  type CreatePostInput,
-  type PostDetailDto,
-  type TopicDto,
-} from '@app/shared';
+import type { CreatePostInput, PostDetailDto, TopicDto } from '@app/shared';
 import type { JSONContent } from '@tiptap/react';
 import { useEffect, useId, useRef, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
@@ -16,6 +11,9 @@ import { useSavePost } from '../api/save-post';
 import { RichTextEditor } from './rich-text-editor';
 import { SetupFields } from './setup-fields';
 import { EMPTY_SETUP, fromSetup, toSetupInput, type SetupValues } from './setup-values';
+import { loadFormSchemas, preloadFormSchemas } from '@/lib/lazy-schema';
+
+preloadFormSchemas();
 
 export interface PostFormProps {
   post: PostDetailDto | null;
@@ -75,7 +73,7 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
 
   const persist = async (submit: boolean) => {
     const value = input();
-    const parsed = createPostSchema.safeParse(value);
+    const parsed = (await loadFormSchemas()).createPostSchema.safeParse(value);
     if (!parsed.success) {
       const f: Record<string, string> = {};
       for (const i of parsed.error.issues) f[i.path.join('.') || '_'] ??= i.message;

@@ -1,4 +1,4 @@
-import { ANCHOR_KINDS, CHAIN_GRADE_IDS, HULLS } from '@app/shared';
+import { ANCHOR_KINDS, CHAIN_GRADE_IDS, HULLS } from '@app/shared/values';
 import { TextField } from '@/components/ui/text-field';
 import type { SetupValues } from './setup-values';
 

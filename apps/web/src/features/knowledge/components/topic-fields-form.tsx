@@ -1,15 +1,18 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { topicInputSchema } from '@app/shared';
+import type { topicInputSchema } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
+import { lazyResolver } from '@/lib/lazy-schema';
 
-const fieldsSchema = topicInputSchema.pick({ name: true, description: true });
-type FieldsInput = z.input<typeof fieldsSchema>;
-type FieldsOutput = z.output<typeof fieldsSchema>;
+type FieldsSchema = ReturnType<typeof topicInputSchema.pick<{ name: true; description: true }>>;
+type FieldsInput = z.input<FieldsSchema>;
+type FieldsOutput = z.output<FieldsSchema>;
+const resolver = lazyResolver(({ topicInputSchema }) =>
+  topicInputSchema.pick({ name: true, description: true }),
+);
 const FIELD_NAMES = ['name', 'description'] as const;
 
 export interface TopicFieldsFormProps {
@@ -34,7 +37,7 @@ export function TopicFieldsForm({
     reset,
     formState: { errors, isSubmitting },
   } = useForm<FieldsInput, unknown, FieldsOutput>({
-    resolver: zodResolver(fieldsSchema),
+    resolver,
     defaultValues: initial ?? { name: '', description: '' },
   });
   const submit = handleSubmit(async (values) => {

@@ -1,4 +1,4 @@
-import { UNDO_WINDOW_MS } from '@app/shared';
+import { UNDO_WINDOW_MS } from '@app/shared/values';
 import { useEffect, useState, type CSSProperties, type MouseEvent } from 'react';
 import { useModerate, useUndoDecision, type ModerationAction } from '../api/decide';
 

@@ -1,4 +1,5 @@
-import { STORM_LOCATION_LABELS, type HarborDto, type ReadinessDto } from '@app/shared';
+import type { HarborDto, ReadinessDto } from '@app/shared';
+import { STORM_LOCATION_LABELS } from '@app/shared/values';
 import { Link } from 'react-router-dom';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { paths } from '@/config/paths';

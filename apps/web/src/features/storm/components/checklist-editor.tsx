@@ -1,9 +1,12 @@
-import { stormChecklistSchema, type StormChecklistItem } from '@app/shared';
+import type { StormChecklistItem } from '@app/shared';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { errorMessage } from '@/lib/form-errors';
+import { loadFormSchemas, preloadFormSchemas } from '@/lib/lazy-schema';
+
+preloadFormSchemas();
 
 const slug = (label: string) =>
   label
@@ -43,7 +46,7 @@ export function ChecklistEditor({ items: initial, isPending, onSave }: Checklist
     setAdded('');
   };
   const save = async () => {
-    const parsed = stormChecklistSchema.safeParse({ items });
+    const parsed = (await loadFormSchemas()).stormChecklistSchema.safeParse({ items });
     if (!parsed.success) {
       setError(parsed.error.issues[0]?.message);
       return;

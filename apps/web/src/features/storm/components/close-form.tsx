@@ -1,9 +1,11 @@
-import { stormCloseSchema, type StormCloseInput } from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { StormCloseInput } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { applyServerErrors } from '@/lib/form-errors';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.stormCloseSchema);
 
 export interface CloseFormProps {
   isPending: boolean;
@@ -13,7 +15,7 @@ export interface CloseFormProps {
 /** Closing a watch with a short lessons note, optionally started as a draft knowledge post. */
 export function CloseForm({ isPending, onSubmit }: CloseFormProps) {
   const { register, handleSubmit, setError, formState } = useForm<StormCloseInput>({
-    resolver: zodResolver(stormCloseSchema),
+    resolver,
     defaultValues: { lessons: '', makePost: true },
   });
   const submit = handleSubmit(async (v) => {

@@ -1,4 +1,5 @@
-import { MARGIN_BAND_LABELS, type MarginBand } from '@app/shared';
+import type { MarginBand } from '@app/shared';
+import { MARGIN_BAND_LABELS } from '@app/shared/values';
 import { cn } from '@/lib/cn';
 
 const BAND_STYLE: Record<MarginBand, { mark: string; className: string }> = {

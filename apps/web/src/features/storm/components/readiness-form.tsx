@@ -1,18 +1,14 @@
-import {
-  readinessInputSchema,
-  STORM_LOCATION_LABELS,
-  STORM_LOCATIONS,
-  type ReadinessDto,
-  type ReadinessInput,
-  type StormChecklistItem,
-  type StormLocation,
-} from '@app/shared';
+import type { ReadinessDto, ReadinessInput, StormChecklistItem, StormLocation } from '@app/shared';
+import { STORM_LOCATION_LABELS, STORM_LOCATIONS } from '@app/shared/values';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
+import { loadFormSchemas, preloadFormSchemas } from '@/lib/lazy-schema';
+
+preloadFormSchemas();
 
 interface FormValues {
   location: StormLocation | '';
@@ -63,7 +59,7 @@ export function ReadinessForm({
       helpWanted: v.helpWanted,
       helpNote: v.helpNote,
     };
-    const parsed = readinessInputSchema.safeParse(input);
+    const parsed = (await loadFormSchemas()).readinessInputSchema.safeParse(input);
     if (!parsed.success) {
       for (const issue of parsed.error.issues) {
         const field = FIELDS.find((f) => f === issue.path[0]);

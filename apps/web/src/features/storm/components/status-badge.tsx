@@ -1,4 +1,5 @@
-import { READINESS_STATUS_LABELS, type ReadinessStatus } from '@app/shared';
+import type { ReadinessStatus } from '@app/shared';
+import { READINESS_STATUS_LABELS } from '@app/shared/values';
 import { cn } from '@/lib/cn';
 
 const STATUS_CLASS: Record<ReadinessStatus, string> = {

@@ -1,9 +1,12 @@
-import { stormWatchInputSchema, type HarborDto, type StormWatchInput } from '@app/shared';
+import type { HarborDto, StormWatchInput } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
+import { loadFormSchemas, preloadFormSchemas } from '@/lib/lazy-schema';
+
+preloadFormSchemas();
 
 interface FormValues {
   name: string;
@@ -71,7 +74,7 @@ export function WatchForm({ harbors, isPending, onSubmit }: WatchFormProps) {
       shareDetails: v.shareDetails,
     };
     // The same schema the server uses, so the messages match.
-    const parsed = stormWatchInputSchema.safeParse(input);
+    const parsed = (await loadFormSchemas()).stormWatchInputSchema.safeParse(input);
     if (!parsed.success) {
       let first = true;
       for (const issue of parsed.error.issues) {

@@ -1,5 +1,6 @@
 import { CONNECTOR_KIND_LABELS, SHACKLE_SIZES_IN, inchFractionLabel } from '@app/calc';
-import { CONNECTOR_KINDS, type PlanComponents } from '@app/shared';
+import type { PlanComponents } from '@app/shared';
+import { CONNECTOR_KINDS } from '@app/shared/values';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';

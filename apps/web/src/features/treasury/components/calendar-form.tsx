@@ -1,11 +1,6 @@
-import {
-  duesCalendarSchema,
-  formatMoney,
-  PRORATION_LABELS,
-  type DuesCalendarDto,
-  type DuesCalendarInput,
-} from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { DuesCalendarDto, DuesCalendarInput } from '@app/shared';
+import { PRORATION_LABELS } from '@app/shared/values';
+import { formatMoney } from '@app/shared/locale';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
@@ -15,6 +10,9 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useCalendarPreview } from '../api/dues-calendar';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { readableDate } from '@/lib/format-date';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.duesCalendarSchema);
 
 /** A calendar date as the club's region writes it, with the ISO date kept for machines. */
 const Day = ({ iso }: { iso: string }) => <time dateTime={iso}>{readableDate(iso)}</time>;
@@ -130,7 +128,7 @@ export function CalendarForm({
     control,
     formState: { errors },
   } = useForm<DuesCalendarInput>({
-    resolver: zodResolver(duesCalendarSchema),
+    resolver,
     defaultValues: saved.calendar,
   });
   const month = Number(useWatch({ control, name: 'fiscalYearStartMonth' }));

@@ -1,62 +1,58 @@
-import {
-  PLAN_KIND_LABELS,
-  PLAN_KINDS,
-  planInputSchema,
-  PRORATION_LABELS,
-  PRORATIONS,
-  type PlanDto,
-  type PlanInput,
-} from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { PlanDto, PlanInput } from '@app/shared';
+import { PLAN_KIND_LABELS, PLAN_KINDS, PRORATION_LABELS, PRORATIONS } from '@app/shared/values';
 import { useForm, type Path } from 'react-hook-form';
-import { z } from 'zod';
+import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
+import { lazyResolver, type FormSchemaModule } from '@/lib/lazy-schema';
 import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
 
-const shape = planInputSchema.shape;
 // The shared plan schema, with money typed as decimals (120.50) and converted to minor units on submit.
-const formSchema = z
-  .object({
-    code: shape.code,
-    name: shape.name,
-    kind: z.enum(PLAN_KINDS, { error: 'Choose who the plan is for' }),
-    description: z.string().trim().max(500, 'Keep the description under 500 characters'),
-    amount: z.string(),
-    currency: shape.currency,
-    proration: shape.proration,
-    lateFee: z.string(),
-    graceDays: z
-      .number({ error: 'Give the grace period in whole days' })
-      .pipe(shape.graceDays.unwrap()),
-    active: z.boolean(),
-  })
-  .superRefine((v, ctx) => {
-    const money = [
-      ['amount', 'Amount', shape.amountMinor],
-      ['lateFee', 'Late fee', shape.lateFeeMinor],
-    ] as const;
-    for (const [field, label, rule] of money) {
-      const minor = parseMoney(v[field], v.currency);
-      if (minor === null) {
-        ctx.addIssue({ code: 'custom', path: [field], message: moneyMessage(label, v.currency) });
-        continue;
+const formSchema = ({ planInputSchema, z }: FormSchemaModule) => {
+  const shape = planInputSchema.shape;
+  return z
+    .object({
+      code: shape.code,
+      name: shape.name,
+      kind: z.enum(PLAN_KINDS, { error: 'Choose who the plan is for' }),
+      description: z.string().trim().max(500, 'Keep the description under 500 characters'),
+      amount: z.string(),
+      currency: shape.currency,
+      proration: shape.proration,
+      lateFee: z.string(),
+      graceDays: z
+        .number({ error: 'Give the grace period in whole days' })
+        .pipe(shape.graceDays.unwrap()),
+      active: z.boolean(),
+    })
+    .superRefine((v, ctx) => {
+      const money = [
+        ['amount', 'Amount', shape.amountMinor],
+        ['lateFee', 'Late fee', shape.lateFeeMinor],
+      ] as const;
+      for (const [field, label, rule] of money) {
+        const minor = parseMoney(v[field], v.currency);
+        if (minor === null) {
+          ctx.addIssue({ code: 'custom', path: [field], message: moneyMessage(label, v.currency) });
+          continue;
+        }
+        const checked = rule.safeParse(minor);
+        if (!checked.success)
+          ctx.addIssue({
+            code: 'custom',
+            path: [field],
+            message: checked.error.issues[0]?.message ?? `Check the ${label.toLowerCase()}`,
+          });
       }
-      const checked = rule.safeParse(minor);
-      if (!checked.success)
-        ctx.addIssue({
-          code: 'custom',
-          path: [field],
-          message: checked.error.issues[0]?.message ?? `Check the ${label.toLowerCase()}`,
-        });
-    }
-  });
-type FormIn = z.input<typeof formSchema>;
-type FormOut = z.output<typeof formSchema>;
+    });
+};
+const resolver = lazyResolver(formSchema);
+type FormIn = z.input<ReturnType<typeof formSchema>>;
+type FormOut = z.output<ReturnType<typeof formSchema>>;
 
 /** Server field names → the form's own (money is typed as decimals here). */
 const SERVER_FIELD: Record<string, Path<FormIn>> = {
@@ -124,7 +120,7 @@ export function MembershipPlanForm({
     setError,
     formState: { errors },
   } = useForm<FormIn, unknown, FormOut>({
-    resolver: zodResolver(formSchema),
+    resolver,
     defaultValues: defaultsFor(plan),
   });
   const submit = handleSubmit(async ({ amount, lateFee, ...rest }) => {

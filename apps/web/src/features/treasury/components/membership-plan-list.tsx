@@ -1,4 +1,6 @@
-import { formatMoney, PLAN_KIND_LABELS, PRORATION_LABELS, type PlanDto } from '@app/shared';
+import type { PlanDto } from '@app/shared';
+import { PLAN_KIND_LABELS, PRORATION_LABELS } from '@app/shared/values';
+import { formatMoney } from '@app/shared/locale';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';

@@ -1,32 +1,27 @@
-import {
-  currencyDigits,
-  formatMoney,
-  METHOD_LABELS,
-  OFFLINE_METHODS,
-  offlinePaymentSchema,
-  type OfflinePaymentInput,
-  type PlanDto,
-  type RosterRowDto,
-} from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { OfflinePaymentInput, PlanDto, RosterRowDto } from '@app/shared';
+import { METHOD_LABELS, OFFLINE_METHODS } from '@app/shared/values';
+import { currencyDigits, formatMoney } from '@app/shared/locale';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/form-errors';
 import { minorToInput } from '../utils/money';
+import type { z } from 'zod';
+import { lazyResolver, type FormSchemaModule } from '@/lib/lazy-schema';
 
 // The shared schema, with the amount typed as a decimal (120.50) instead of minor units.
-const formSchema = offlinePaymentSchema.omit({ amountMinor: true }).extend({
-  amount: z
-    .string()
-    .trim()
-    .regex(/^\d+([.,]\d{1,2})?$/, 'Give an amount such as 120 or 120.50 (no minus sign)'),
-});
-type FormValues = z.input<typeof formSchema>;
+const formSchema = ({ offlinePaymentSchema, z }: FormSchemaModule) =>
+  offlinePaymentSchema.omit({ amountMinor: true }).extend({
+    amount: z
+      .string()
+      .trim()
+      .regex(/^\d+([.,]\d{1,2})?$/, 'Give an amount such as 120 or 120.50 (no minus sign)'),
+  });
+const resolver = lazyResolver(formSchema);
+type FormValues = z.input<ReturnType<typeof formSchema>>;
 const FIELDS = [
   'userId',
   'planId',
@@ -60,7 +55,7 @@ export function OfflinePaymentForm({
     reset,
     formState: { errors },
   } = useForm<FormValues>({
-    resolver: zodResolver(formSchema),
+    resolver,
     defaultValues: {
       method: 'cheque',
       currency: plans[0]?.currency ?? 'EUR',

@@ -82,8 +82,11 @@ describe('PaymentRowActions', () => {
     await user.type(amount, '130.01');
     await user.type(within(dialog).getByLabelText(/^Reason/), 'Moved away mid-season');
     await user.click(within(dialog).getByRole('button', { name: 'Refund' }));
-    expect(amount).toHaveAccessibleDescription(
-      expect.stringContaining('At most €130.00 is left to refund'),
+    // The first check waits for the form schemas to load (they are not part of the first load).
+    await waitFor(() =>
+      expect(amount).toHaveAccessibleDescription(
+        expect.stringContaining('At most €130.00 is left to refund'),
+      ),
     );
     expect(requests).toHaveLength(0);
 

@@ -1,4 +1,5 @@
-import { formatMoney, type PaymentDto } from '@app/shared';
+import type { PaymentDto } from '@app/shared';
+import { formatMoney } from '@app/shared/locale';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { usePromptDialog } from '@/components/ui/prompt-dialog';

@@ -1,4 +1,6 @@
-import { formatMoney, METHOD_LABELS, PAYMENT_STATUS_LABELS, type PaymentDto } from '@app/shared';
+import type { PaymentDto } from '@app/shared';
+import { METHOD_LABELS, PAYMENT_STATUS_LABELS } from '@app/shared/values';
+import { formatMoney } from '@app/shared/locale';
 import { readableDate } from '@/lib/format-date';
 import { PaymentRowActions } from './payment-row-actions';
 import { ScrollRegion } from '@/components/ui/scroll-region';

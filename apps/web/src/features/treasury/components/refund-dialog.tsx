@@ -1,14 +1,7 @@
-import {
-  formatMoney,
-  refundInputSchema,
-  type PaymentDto,
-  type RefundInput,
-  type ReturnedInput,
-} from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useId, useRef, useState } from 'react';
+import type { PaymentDto, RefundInput, ReturnedInput } from '@app/shared';
+import { formatMoney } from '@app/shared/locale';
+import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
@@ -17,8 +10,9 @@ import { errorMessage } from '@/lib/form-errors';
 import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
 import { refundableMinor } from '../utils/refundable';
 import { ReturnedForm } from './returned-form';
+import { lazyResolver, type FormSchemaModule } from '@/lib/lazy-schema';
 
-function schemaFor(payment: PaymentDto, left: number) {
+function schemaFor({ refundInputSchema, z }: FormSchemaModule, payment: PaymentDto, left: number) {
   return z
     .object({ amount: z.string(), reason: refundInputSchema.shape.reason })
     .superRefine((v, ctx) => {
@@ -68,7 +62,10 @@ export function RefundDialog({
     setFocus,
     formState: { errors, isSubmitting },
   } = useForm<FormValues>({
-    resolver: zodResolver(schemaFor(payment, left)),
+    resolver: useMemo(
+      () => lazyResolver((schemas) => schemaFor(schemas, payment, left)),
+      [payment, left],
+    ),
     defaultValues: { amount: minorToInput(left, payment.currency), reason: '' },
   });
 

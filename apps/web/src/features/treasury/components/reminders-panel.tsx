@@ -1,4 +1,5 @@
-import { DUES_STATUS_LABELS, formatMoney } from '@app/shared';
+import { DUES_STATUS_LABELS } from '@app/shared/values';
+import { formatMoney } from '@app/shared/locale';
 import { useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';

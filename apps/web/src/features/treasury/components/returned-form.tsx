@@ -1,12 +1,6 @@
-import {
-  formatMoney,
-  METHOD_LABELS,
-  OFFLINE_METHODS,
-  returnedInputSchema,
-  type PaymentDto,
-  type ReturnedInput,
-} from '@app/shared';
-import { zodResolver } from '@hookform/resolvers/zod';
+import type { returnedInputSchema, PaymentDto, ReturnedInput } from '@app/shared';
+import { METHOD_LABELS, OFFLINE_METHODS } from '@app/shared/values';
+import { formatMoney } from '@app/shared/locale';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
@@ -14,6 +8,9 @@ import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
+import { lazyResolver } from '@/lib/lazy-schema';
+
+const resolver = lazyResolver((schemas) => schemas.returnedInputSchema);
 
 type FormValues = z.input<typeof returnedInputSchema>;
 
@@ -38,7 +35,7 @@ export function ReturnedForm({
     setError,
     formState: { errors, isSubmitting },
   } = useForm<FormValues>({
-    resolver: zodResolver(returnedInputSchema),
+    resolver,
     defaultValues: { method: 'transfer', note: '' },
   });
   const submit = handleSubmit(async (input) => {

@@ -1,10 +1,6 @@
-import {
-  DUES_STATUSES,
-  DUES_STATUS_LABELS,
-  formatMoney,
-  type DuesStatus,
-  type RosterRowDto,
-} from '@app/shared';
+import type { DuesStatus, RosterRowDto } from '@app/shared';
+import { DUES_STATUSES, DUES_STATUS_LABELS } from '@app/shared/values';
+import { formatMoney } from '@app/shared/locale';
 import {
   columnFilteringFeature,
   createColumnHelper,

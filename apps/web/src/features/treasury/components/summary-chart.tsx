@@ -1,4 +1,5 @@
-import { formatMoney, type SummaryDto } from '@app/shared';
+import type { SummaryDto } from '@app/shared';
+import { formatMoney } from '@app/shared/locale';
 
 const W = 640;
 const H = 260;

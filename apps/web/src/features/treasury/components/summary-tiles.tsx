@@ -1,4 +1,5 @@
-import { formatMoney, type SummaryDto } from '@app/shared';
+import type { SummaryDto } from '@app/shared';
+import { formatMoney } from '@app/shared/locale';
 import { countOf } from '@/lib/plural';
 
 /**

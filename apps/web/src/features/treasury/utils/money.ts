@@ -1,4 +1,4 @@
-import { currencyDigits, minorToDecimal } from '@app/shared';
+import { currencyDigits, minorToDecimal } from '@app/shared/locale';
 
 /**
  * Money typed by a person ("120", "120.50", "120,5") in minor units of `currency`, or null when it is not a
