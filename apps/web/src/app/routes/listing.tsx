@@ -1,3 +1,4 @@
+import { Suspense } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
@@ -8,9 +9,21 @@ import { errorMessage } from '@/lib/form-errors';
 import { useCurrentUser } from '@/features/auth/api/get-session';
 import { useListing } from '@/features/exchange/api/get-listing';
 import { ListingDetail } from '@/features/exchange/components/listing-detail';
-import { OwnerActions } from '@/features/exchange/components/owner-actions';
-import { ReportListingForm } from '@/features/exchange/components/report-listing-form';
-import { MessageForm } from '@/features/conversations/components/message-form';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// Only members see these, so a visitor's first load leaves them (and the form library) out.
+const OwnerActions = lazyNamed(
+  () => import('@/features/exchange/components/owner-actions'),
+  'OwnerActions',
+);
+const ReportListingForm = lazyNamed(
+  () => import('@/features/exchange/components/report-listing-form'),
+  'ReportListingForm',
+);
+const MessageForm = lazyNamed(
+  () => import('@/features/conversations/components/message-form'),
+  'MessageForm',
+);
 
 /** One listing: details, the seller's controls or the buyer's message box, and a report link. */
 export function ListingRoute() {
@@ -47,30 +60,32 @@ export function ListingRoute() {
         </Alert>
       )}
       <ListingDetail listing={l} />
-      {l.isMine && <OwnerActions listing={l} editHref={paths.listingEdit.href(l.id)} />}
-      {!l.isMine && l.status === 'active' && user && (
-        <section
-          aria-labelledby="contact-heading"
-          className="flex flex-col gap-2 rounded-lg border border-sand-300 p-4"
-        >
-          <h2 id="contact-heading" className="text-lg">
-            Message {l.seller.displayName}
-          </h2>
-          <MessageForm
-            listingId={l.id}
-            label="Your message"
-            submitLabel="Send message"
-            onSent={(threadId) => void navigate(paths.conversation.href(threadId))}
-          />
-        </section>
-      )}
-      {!user && l.status === 'active' && (
-        <p>
-          <Link to={paths.signIn.href(paths.listing.href(l.id))}>Sign in</Link> to message the
-          seller.
-        </p>
-      )}
-      {user && !l.isMine && <ReportListingForm listingId={l.id} />}
+      <Suspense fallback={<Spinner label="Loading…" />}>
+        {l.isMine && <OwnerActions listing={l} editHref={paths.listingEdit.href(l.id)} />}
+        {!l.isMine && l.status === 'active' && user && (
+          <section
+            aria-labelledby="contact-heading"
+            className="flex flex-col gap-2 rounded-lg border border-sand-300 p-4"
+          >
+            <h2 id="contact-heading" className="text-lg">
+              Message {l.seller.displayName}
+            </h2>
+            <MessageForm
+              listingId={l.id}
+              label="Your message"
+              submitLabel="Send message"
+              onSent={(threadId) => void navigate(paths.conversation.href(threadId))}
+            />
+          </section>
+        )}
+        {!user && l.status === 'active' && (
+          <p>
+            <Link to={paths.signIn.href(paths.listing.href(l.id))}>Sign in</Link> to message the
+            seller.
+          </p>
+        )}
+        {user && !l.isMine && <ReportListingForm listingId={l.id} />}
+      </Suspense>
     </Page>
   );
 }

@@ -1,3 +1,4 @@
+import { Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
@@ -5,16 +6,22 @@ import { Spinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { apiUrl } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
+import { lazyNamed } from '@/lib/lazy-named';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { usePayments } from '@/features/treasury/api/get-payments';
 import { useMembershipPlans } from '@/features/treasury/api/get-membership-plans';
 import { useRoster } from '@/features/treasury/api/get-roster';
 import { useSummary } from '@/features/treasury/api/get-summary';
 import { useRecordPayment } from '@/features/treasury/api/record-payment';
-import { OfflinePaymentForm } from '@/features/treasury/components/offline-payment-form';
 import { PaymentsTable } from '@/features/treasury/components/payments-table';
 import { SummaryChart } from '@/features/treasury/components/summary-chart';
 import { SummaryTiles } from '@/features/treasury/components/summary-tiles';
+
+// The form (and the form library) arrives just after the summary it sits below.
+const OfflinePaymentForm = lazyNamed(
+  () => import('@/features/treasury/components/offline-payment-form'),
+  'OfflinePaymentForm',
+);
 
 function TreasuryScreen() {
   const summary = useSummary();
@@ -86,12 +93,14 @@ function TreasuryScreen() {
           </Alert>
         )}
         {roster.data && plans.data && (
-          <OfflinePaymentForm
-            members={roster.data}
-            plans={plans.data}
-            isPending={record.isPending}
-            onSubmit={(input) => record.mutateAsync(input)}
-          />
+          <Suspense fallback={<Spinner label="Loading the form…" />}>
+            <OfflinePaymentForm
+              members={roster.data}
+              plans={plans.data}
+              isPending={record.isPending}
+              onSubmit={(input) => record.mutateAsync(input)}
+            />
+          </Suspense>
         )}
       </section>
       <section aria-labelledby="ledger-heading" className="flex flex-col gap-2">

@@ -75,7 +75,8 @@ describe('PaymentRowActions', () => {
     renderWithProviders(<PaymentRowActions payment={payment} />, { session });
     const user = userEvent.setup();
     await user.click(screen.getByRole('button', { name: /^Refund Invented Member/ }));
-    const dialog = screen.getByRole('dialog', { name: 'Refund Invented Member' });
+    // The dialog's code loads when it is first opened.
+    const dialog = await screen.findByRole('dialog', { name: 'Refund Invented Member' });
     const amount = within(dialog).getByLabelText(/^Amount to refund/);
     expect(amount).toHaveValue('130.00');
     await user.clear(amount);
@@ -108,7 +109,7 @@ describe('PaymentRowActions', () => {
     });
     const user = userEvent.setup();
     await user.click(screen.getByRole('button', { name: /^Refund Invented Member/ }));
-    const dialog = screen.getByRole('dialog');
+    const dialog = await screen.findByRole('dialog');
     await user.type(within(dialog).getByLabelText(/^Reason/), 'Duplicate payment');
     await user.click(within(dialog).getByRole('button', { name: 'Refund' }));
     expect(await within(dialog).findByRole('alert')).toHaveTextContent(/no record of this card/);
@@ -175,7 +176,7 @@ describe('PaymentRowActions', () => {
     });
     const user = userEvent.setup();
     await user.click(screen.getByRole('button', { name: /^Refund Invented Member/ }));
-    const dialog = screen.getByRole('dialog');
+    const dialog = await screen.findByRole('dialog');
     await user.type(within(dialog).getByLabelText(/^Reason/), 'Duplicate payment');
     await user.click(within(dialog).getByRole('button', { name: 'Refund' }));
     await user.click(await within(dialog).findByRole('button', { name: 'Record money returned' }));

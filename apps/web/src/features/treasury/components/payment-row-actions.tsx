@@ -1,6 +1,6 @@
 import type { PaymentDto } from '@app/shared';
 import { formatMoney } from '@app/shared/locale';
-import { useState } from 'react';
+import { Suspense, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { usePromptDialog } from '@/components/ui/prompt-dialog';
 import { errorMessage } from '@/lib/form-errors';
@@ -8,7 +8,10 @@ import { useRecordReturned } from '../api/record-returned';
 import { useRefundPayment } from '../api/refund-payment';
 import { useResolveHeld } from '../api/resolve-held';
 import { refundableMinor } from '../utils/refundable';
-import { RefundDialog } from './refund-dialog';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// Opened from a row's button, so it loads then, not with the ledger.
+const RefundDialog = lazyNamed(() => import('./refund-dialog'), 'RefundDialog');
 
 const REFUNDABLE = ['succeeded', 'held', 'dismissed'];
 
@@ -97,25 +100,27 @@ export function PaymentRowActions({ payment }: { payment: PaymentDto }) {
         </Button>
       )}
       {isRefunding && (
-        <RefundDialog
-          payment={payment}
-          startReturned={startReturned}
-          onClose={() => setIsRefunding(false)}
-          onReturned={async (input) => {
-            const r = await returned.mutateAsync({ paymentId: payment.id, ...input });
-            setMessage(
-              `Recorded ${formatMoney(r.amountMinor, r.currency)} returned; the member is told by e-mail.`,
-            );
-          }}
-          onSubmit={async (input) => {
-            const r = await refund.mutateAsync({ paymentId: payment.id, ...input });
-            setMessage(
-              r.status === 'pending'
-                ? `Refund of ${formatMoney(r.amountMinor, r.currency)} requested; waiting for the provider.`
-                : `Refunded ${formatMoney(r.amountMinor, r.currency)}.`,
-            );
-          }}
-        />
+        <Suspense fallback={null}>
+          <RefundDialog
+            payment={payment}
+            startReturned={startReturned}
+            onClose={() => setIsRefunding(false)}
+            onReturned={async (input) => {
+              const r = await returned.mutateAsync({ paymentId: payment.id, ...input });
+              setMessage(
+                `Recorded ${formatMoney(r.amountMinor, r.currency)} returned; the member is told by e-mail.`,
+              );
+            }}
+            onSubmit={async (input) => {
+              const r = await refund.mutateAsync({ paymentId: payment.id, ...input });
+              setMessage(
+                r.status === 'pending'
+                  ? `Refund of ${formatMoney(r.amountMinor, r.currency)} requested; waiting for the provider.`
+                  : `Refunded ${formatMoney(r.amountMinor, r.currency)}.`,
+              );
+            }}
+          />
+        </Suspense>
       )}
       {dialog}
       {message && (
