@@ -17,6 +17,16 @@ const script = `export const n = ${JSON.stringify('x'.repeat(4000))};\n`;
 writeFileSync(join(webDist, 'assets', 'route-abc123.js'), script);
 writeFileSync(join(webDist, 'assets', 'route-abc123.js.br'), brotliCompressSync(script));
 writeFileSync(join(webDist, 'assets', 'route-abc123.js.gz'), gzipSync(script));
+// What the build writes for each screen (vite.config.ts routePreloads()): static patterns first.
+writeFileSync(
+  join(webDist, 'route-chunks.json'),
+  JSON.stringify([
+    { pattern: '/', files: ['/assets/home-1.js'] },
+    { pattern: '/knowledge/new', files: ['/assets/post-edit-2.js', '/assets/editor-3.js'] },
+    { pattern: '/knowledge/:postId', files: ['/assets/post-4.js'] },
+    { pattern: '/evil', files: ['"><script>alert(1)</script>'] },
+  ]),
+);
 const built = createTestApp({ WEB_DIST: webDist });
 // The locale test expects the default club settings, whatever an earlier test file left in the tables.
 beforeAll(() => resetDb());
@@ -78,5 +88,23 @@ describe('pages', () => {
     expect(res.status).toBe(200);
     expect(res.headers['cache-control']).toBe('no-cache');
     expect(res.text).toContain('<meta name="rw-locale" content="en-GB|EUR|metric"></head>');
+  });
+
+  it('name the screen’s own script files as modulepreload links, so they load beside the entry', async () => {
+    const links = (html: string) =>
+      [...html.matchAll(/<link rel="modulepreload" crossorigin href="([^"]+)">/g)].map((m) => m[1]);
+    expect(links((await request(built.app).get('/knowledge/new')).text)).toEqual([
+      '/assets/post-edit-2.js',
+      '/assets/editor-3.js',
+    ]);
+    expect(links((await request(built.app).get('/knowledge/1413')).text)).toEqual([
+      '/assets/post-4.js',
+    ]);
+    expect(links((await request(built.app).get('/')).text)).toEqual(['/assets/home-1.js']);
+    // A path no screen claims, one level too deep, or an entry that is not a plain asset path gets no links.
+    expect(links((await request(built.app).get('/knowledge/1413/extra/more')).text)).toEqual([]);
+    const evil = (await request(built.app).get('/evil')).text;
+    expect(links(evil)).toEqual([]);
+    expect(evil).not.toContain('<script>alert');
   });
 });

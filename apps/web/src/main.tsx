@@ -1,4 +1,4 @@
-import { StrictMode } from 'react';
+import { startTransition, StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { BrowserRouter } from 'react-router-dom';
 import { AppProvider } from '@/app/provider';
@@ -11,12 +11,17 @@ readClubLocaleFromPage();
 const rootElement = document.getElementById('root');
 if (!rootElement) throw new Error('index.html has no #root element');
 
-createRoot(rootElement).render(
-  <StrictMode>
-    <AppProvider>
-      <BrowserRouter>
-        <AppRoutes />
-      </BrowserRouter>
-    </AppProvider>
-  </StrictMode>,
-);
+// The first render runs as a transition, so React yields to the browser between pieces of work instead of
+// holding the main thread for the whole tree (long tasks are what a phone on a slow CPU feels as a stall).
+const root = createRoot(rootElement);
+startTransition(() => {
+  root.render(
+    <StrictMode>
+      <AppProvider>
+        <BrowserRouter>
+          <AppRoutes />
+        </BrowserRouter>
+      </AppProvider>
+    </StrictMode>,
+  );
+});

@@ -34,13 +34,32 @@ export function serveWebApp(app: Express, env: Env) {
   // Every page is index.html with the club's locale in a meta tag, so the first render formats dates and
   // money the club's way (the values are a listed region, an ISO currency code and a unit system).
   const indexHtml = readFileSync(join(webDist, 'index.html'), 'utf8');
-  app.get('/{*splat}', async (_req, res) => {
+  const preloads = routePreloads(webDist);
+  app.get('/{*splat}', async (req, res) => {
     const club = await cachedClub().catch(() => null);
     const l = club?.locale ?? DEFAULT_CLUB_LOCALE;
     const meta = `<meta name="rw-locale" content="${l.region}|${l.currency}|${l.unitSystem}">`;
     res
       .set('Cache-Control', 'no-cache')
       .type('html')
-      .send(indexHtml.replace('</head>', `${meta}</head>`));
+      .send(indexHtml.replace('</head>', `${meta}${preloads(req.path)}</head>`));
   });
+}
+
+/**
+ * The modulepreload links for a page's own script files (route-chunks.json, written by the build: a screen's lazy
+ * chunk and its imports), so they download beside the entry instead of after it has run. Unknown paths get none.
+ */
+export function routePreloads(webDist: string): (path: string) => string {
+  const file = join(webDist, 'route-chunks.json');
+  if (!existsSync(file)) return () => '';
+  const routes = (
+    JSON.parse(readFileSync(file, 'utf8')) as Array<{ pattern: string; files: string[] }>
+  )
+    .filter((r) => r.files.every((f) => /^\/assets\/[\w.-]+\.js$/.test(f)))
+    .map((r) => ({
+      test: new RegExp(`^${r.pattern.replace(/:\w+/g, '[^/]+').replace(/\/$/, '')}/?$`),
+      links: r.files.map((f) => `<link rel="modulepreload" crossorigin href="${f}">`).join(''),
+    }));
+  return (path) => routes.find((r) => r.test.test(path))?.links ?? '';
 }
