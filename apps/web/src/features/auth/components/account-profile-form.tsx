@@ -4,10 +4,10 @@ import { useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateAccount } from '../api/update-account';
+import { AccountForm } from './account-form';
 
 export interface AccountProfileFormProps {
   user: UserDto;
@@ -43,8 +43,7 @@ export function AccountProfileForm({ user }: AccountProfileFormProps) {
   });
 
   return (
-    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
-      <FormError message={errors.root?.server?.message} />
+    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
       {update.isSuccess && !isDirty && <Alert tone="success">Your profile is saved.</Alert>}
       <TextField
         label="Your name"
@@ -85,6 +84,6 @@ export function AccountProfileForm({ user }: AccountProfileFormProps) {
       >
         Save profile
       </Button>
-    </form>
+    </AccountForm>
   );
 }

@@ -5,13 +5,12 @@ import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
-import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors, errorMessage } from '@/lib/form-errors';
 import { useLogin } from '../api/login';
 import { useResendVerification } from '../api/resend-verification';
+import { AccountForm, EmailField, PasswordField } from './account-form';
 
 export interface SignInFormProps {
   onSignedIn: (session: SessionDto) => void;
@@ -46,8 +45,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
   });
 
   return (
-    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
-      <FormError message={errors.root?.server?.message} />
+    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
       {unverifiedEmail && (
         <Alert
           tone="warning"
@@ -69,22 +67,8 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
           {resend.isError && <p className="mt-1 font-bold">{errorMessage(resend.error)}</p>}
         </Alert>
       )}
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        required
-        error={errors.email?.message}
-        {...register('email')}
-      />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="current-password"
-        required
-        error={errors.password?.message}
-        {...register('password')}
-      />
+      <EmailField error={errors.email?.message} {...register('email')} />
+      <PasswordField label="Password" error={errors.password?.message} {...register('password')} />
       <Button type="submit" isPending={login.isPending} pendingLabel="Signing in…">
         Sign in
       </Button>
@@ -94,6 +78,6 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
       <p className="text-sm">
         New to the club? <Link to={paths.signUp.href()}>Create an account</Link>
       </p>
-    </form>
+    </AccountForm>
   );
 }
