@@ -1,5 +1,6 @@
-import { useEffect, useId, useRef, type ReactNode } from 'react';
+import { useId, useRef, type ReactNode } from 'react';
 import { Button } from './button';
+import { useModal } from './use-modal';
 
 export interface ConfirmDialogProps {
   isOpen: boolean;
@@ -37,21 +38,7 @@ export function ConfirmDialog({
   const titleId = useId();
   const bodyId = useId();
 
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (!dialog || !isOpen) return;
-    const returnFocusTo =
-      document.activeElement instanceof HTMLElement ? document.activeElement : null;
-    // jsdom and a few old browsers lack showModal; the open attribute still shows the dialog there.
-    if (typeof dialog.showModal === 'function') dialog.showModal();
-    else dialog.setAttribute('open', '');
-    cancelRef.current?.focus();
-    return () => {
-      if (typeof dialog.close === 'function' && dialog.open) dialog.close();
-      else dialog.removeAttribute('open');
-      returnFocusTo?.focus();
-    };
-  }, [isOpen]);
+  useModal(dialogRef, () => cancelRef.current?.focus(), isOpen);
 
   if (!isOpen) return null;
   return (

@@ -1,5 +1,6 @@
 import { useCallback, useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Button } from './button';
+import { useModal } from './use-modal';
 
 export interface PromptOptions {
   title: string;
@@ -41,22 +42,10 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
   const [value, setValue] = useState(options.initial ?? '');
   const [error, setError] = useState<string | null>(null);
 
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (!dialog) return;
-    const returnFocusTo =
-      document.activeElement instanceof HTMLElement ? document.activeElement : null;
-    // jsdom lacks showModal; the open attribute still shows the dialog there.
-    if (typeof dialog.showModal === 'function') dialog.showModal();
-    else dialog.setAttribute('open', '');
+  useModal(dialogRef, () => {
     fieldRef.current?.focus();
     fieldRef.current?.select();
-    return () => {
-      if (typeof dialog.close === 'function' && dialog.open) dialog.close();
-      else dialog.removeAttribute('open');
-      returnFocusTo?.focus();
-    };
-  }, []);
+  });
 
   const minLength = options.minLength ?? 3;
   const describedBy = [options.hint ? hintId : null, error ? errorId : null]

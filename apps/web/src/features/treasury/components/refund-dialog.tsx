@@ -6,12 +6,13 @@ import {
   type ReturnedInput,
 } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useId, useRef, useState } from 'react';
+import { useId, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
+import { useModal } from '@/components/ui/use-modal';
 import { ApiError } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
 import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
@@ -72,21 +73,9 @@ export function RefundDialog({
     defaultValues: { amount: minorToInput(left, payment.currency), reason: '' },
   });
 
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (!dialog) return;
-    const returnFocusTo =
-      document.activeElement instanceof HTMLElement ? document.activeElement : null;
-    // jsdom lacks showModal; the open attribute still shows the dialog there.
-    if (typeof dialog.showModal === 'function') dialog.showModal();
-    else dialog.setAttribute('open', '');
+  useModal(dialogRef, () => {
     if (!startReturned) setFocus('amount', { shouldSelect: true });
-    return () => {
-      if (typeof dialog.close === 'function' && dialog.open) dialog.close();
-      else dialog.removeAttribute('open');
-      returnFocusTo?.focus();
-    };
-  }, [setFocus, startReturned]);
+  });
 
   const submit = handleSubmit(async ({ amount, reason }) => {
     try {
