@@ -1,6 +1,6 @@
 import { useId, useRef, type ReactNode } from 'react';
 import { Button } from './button';
-import { useModal } from './use-modal';
+import { Modal } from './modal';
 
 export interface ConfirmDialogProps {
   isOpen: boolean;
@@ -33,24 +33,18 @@ export function ConfirmDialog({
   onConfirm,
   onCancel,
 }: ConfirmDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
   const cancelRef = useRef<HTMLButtonElement>(null);
   const titleId = useId();
   const bodyId = useId();
 
-  useModal(dialogRef, () => cancelRef.current?.focus(), isOpen);
-
   if (!isOpen) return null;
   return (
-    <dialog
-      ref={dialogRef}
-      aria-labelledby={titleId}
-      aria-describedby={children ? bodyId : undefined}
-      onCancel={(event) => {
-        event.preventDefault();
-        onCancel();
-      }}
-      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-lg border border-sand-300 bg-sand-50 p-0 text-ink-900 shadow-card backdrop:bg-ink-950/50"
+    <Modal
+      labelledBy={titleId}
+      describedBy={children ? bodyId : undefined}
+      onShown={() => cancelRef.current?.focus()}
+      onCancel={onCancel}
+      width="narrow"
     >
       <div className="flex flex-col gap-4 p-5">
         <h2 id={titleId} className="text-xl">
@@ -75,6 +69,6 @@ export function ConfirmDialog({
           </Button>
         </div>
       </div>
-    </dialog>
+    </Modal>
   );
 }

@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Button } from './button';
-import { useModal } from './use-modal';
+import { Modal } from './modal';
 
 export interface PromptOptions {
   title: string;
@@ -33,7 +33,6 @@ export interface PromptDialogProps {
  * before the dialog closes, so the asker never receives an empty or too-short reason.
  */
 export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
   const fieldRef = useRef<HTMLInputElement & HTMLTextAreaElement>(null);
   const titleId = useId();
   const fieldId = useId();
@@ -41,11 +40,6 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
   const errorId = `${fieldId}-error`;
   const [value, setValue] = useState(options.initial ?? '');
   const [error, setError] = useState<string | null>(null);
-
-  useModal(dialogRef, () => {
-    fieldRef.current?.focus();
-    fieldRef.current?.select();
-  });
 
   const minLength = options.minLength ?? 3;
   const describedBy = [options.hint ? hintId : null, error ? errorId : null]
@@ -86,14 +80,13 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
   };
 
   return (
-    <dialog
-      ref={dialogRef}
-      aria-labelledby={titleId}
-      onCancel={(event) => {
-        event.preventDefault();
-        onAnswer(null);
+    <Modal
+      labelledBy={titleId}
+      onShown={() => {
+        fieldRef.current?.focus();
+        fieldRef.current?.select();
       }}
-      className="m-auto w-[min(30rem,calc(100vw-2rem))] rounded-lg border border-sand-300 bg-sand-50 p-0 text-ink-900 shadow-card backdrop:bg-ink-950/50"
+      onCancel={() => onAnswer(null)}
     >
       <form className="flex flex-col gap-4 p-5" onSubmit={handleSubmit} noValidate>
         <h2 id={titleId} className="text-xl">
@@ -140,7 +133,7 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
           </Button>
         </div>
       </form>
-    </dialog>
+    </Modal>
   );
 }
 

@@ -6,13 +6,13 @@ import {
   type ReturnedInput,
 } from '@app/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useId, useRef, useState } from 'react';
+import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
-import { useModal } from '@/components/ui/use-modal';
+import { Modal } from '@/components/ui/modal';
 import { ApiError } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
 import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
@@ -56,7 +56,6 @@ export function RefundDialog({
   startReturned = false,
   onClose,
 }: RefundDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   const left = refundableMinor(payment);
   const [mode, setMode] = useState<'refund' | 'returned'>(startReturned ? 'returned' : 'refund');
@@ -71,10 +70,6 @@ export function RefundDialog({
   } = useForm<FormValues>({
     resolver: zodResolver(schemaFor(payment, left)),
     defaultValues: { amount: minorToInput(left, payment.currency), reason: '' },
-  });
-
-  useModal(dialogRef, () => {
-    if (!startReturned) setFocus('amount', { shouldSelect: true });
   });
 
   const submit = handleSubmit(async ({ amount, reason }) => {
@@ -92,14 +87,12 @@ export function RefundDialog({
   });
 
   return (
-    <dialog
-      ref={dialogRef}
-      aria-labelledby={titleId}
-      onCancel={(event) => {
-        event.preventDefault();
-        onClose();
+    <Modal
+      labelledBy={titleId}
+      onShown={() => {
+        if (!startReturned) setFocus('amount', { shouldSelect: true });
       }}
-      className="m-auto w-[min(30rem,calc(100vw-2rem))] rounded-lg border border-sand-300 bg-sand-50 p-0 text-ink-900 shadow-card backdrop:bg-ink-950/50"
+      onCancel={onClose}
     >
       {mode === 'returned' && onReturned ? (
         <div className="flex flex-col gap-4 p-5">
@@ -172,6 +165,6 @@ export function RefundDialog({
           </div>
         </form>
       )}
-    </dialog>
+    </Modal>
   );
 }
