@@ -1,5 +1,6 @@
 import { useId, useRef, type ReactNode } from 'react';
 import { Button } from './button';
+import { DialogButtons } from './dialog-buttons';
 import { Modal } from './modal';
 
 export interface ConfirmDialogProps {
@@ -55,10 +56,12 @@ export function ConfirmDialog({
             {children}
           </div>
         )}
-        <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-          <Button ref={cancelRef} variant="secondary" onClick={onCancel} disabled={isPending}>
-            {cancelLabel}
-          </Button>
+        <DialogButtons
+          onCancel={onCancel}
+          cancelLabel={cancelLabel}
+          cancelRef={cancelRef}
+          isPending={isPending}
+        >
           <Button
             variant={isDestructive ? 'danger' : 'primary'}
             onClick={onConfirm}
@@ -67,7 +70,7 @@ export function ConfirmDialog({
           >
             {confirmLabel}
           </Button>
-        </div>
+        </DialogButtons>
       </div>
     </Modal>
   );

@@ -1,5 +1,6 @@
 import { useCallback, useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Button } from './button';
+import { DialogButtons } from './dialog-buttons';
 import { Modal } from './modal';
 
 export interface PromptOptions {
@@ -124,14 +125,11 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
             </p>
           )}
         </div>
-        <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-          <Button type="button" variant="secondary" onClick={() => onAnswer(null)}>
-            {options.cancelLabel ?? 'Cancel'}
-          </Button>
+        <DialogButtons onCancel={() => onAnswer(null)} cancelLabel={options.cancelLabel}>
           <Button type="submit" variant={options.isDestructive ? 'danger' : 'primary'}>
             {options.confirmLabel ?? 'Save'}
           </Button>
-        </div>
+        </DialogButtons>
       </form>
     </Modal>
   );

@@ -10,6 +10,7 @@ import { useId, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { Button } from '@/components/ui/button';
+import { DialogButtons } from '@/components/ui/dialog-buttons';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { Modal } from '@/components/ui/modal';
@@ -150,10 +151,7 @@ export function RefundDialog({
             error={errors.reason?.message}
             {...register('reason')}
           />
-          <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-            <Button variant="secondary" onClick={onClose} disabled={isSubmitting}>
-              Cancel
-            </Button>
+          <DialogButtons onCancel={onClose} isPending={isSubmitting}>
             <Button
               type="submit"
               variant="danger"
@@ -162,7 +160,7 @@ export function RefundDialog({
             >
               Refund
             </Button>
-          </div>
+          </DialogButtons>
         </form>
       )}
     </Modal>
