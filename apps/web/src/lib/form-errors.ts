@@ -1,4 +1,5 @@
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
+import type { ZodType } from 'zod';
 import { ApiError } from './api-client';
 
 const FALLBACK_MESSAGE = 'Something went wrong. Please try again.';
@@ -36,5 +37,34 @@ export function applyServerErrors<T extends FieldValues>(
       type: 'server',
       message: placed === 0 ? errorMessage(error) : unplaced,
     });
+  }
+}
+
+/**
+ * Checks `input` with the shared schema the server also uses (so the messages match) and sends it when it
+ * passes. The schema's issues, then the server's, go on the fields in `fieldNames` (the first one gets focus).
+ */
+export async function sendChecked<I, T extends FieldValues>(
+  schema: ZodType<I>,
+  input: I,
+  send: (input: I) => Promise<unknown>,
+  setError: UseFormSetError<T>,
+  fieldNames: readonly Path<T>[],
+): Promise<void> {
+  const parsed = schema.safeParse(input);
+  if (!parsed.success) {
+    let placed = 0;
+    for (const issue of parsed.error.issues) {
+      const field = fieldNames.find((candidate) => candidate === issue.path[0]);
+      if (!field) continue;
+      setError(field, { type: 'client', message: issue.message }, { shouldFocus: placed === 0 });
+      placed += 1;
+    }
+    return;
+  }
+  try {
+    await send(input);
+  } catch (err) {
+    applyServerErrors(err, setError, fieldNames);
   }
 }

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
@@ -23,6 +23,7 @@ import { useTacklePlans } from '@/features/tackle-plans/api/get-tackle-plans';
 import { Quantity } from '@/components/units/quantity';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
+import { IdParams } from '../id-params';
 
 function PlanList({ boatId }: { boatId: number }) {
   const plans = useTacklePlans(boatId);
@@ -130,29 +131,21 @@ function BoatScreen({ boatId }: { boatId: number }) {
   );
 }
 
-function BoatFromParams() {
-  const { boatId } = useParams();
-  const id = Number(boatId);
-  if (!Number.isInteger(id) || id <= 0) {
-    return (
-      <UnavailablePage
-        title="Boat not available"
-        reason="No such boat"
-        back={{ to: paths.boats.href(), label: 'Back to your boats' }}
-      >
-        Check the link and try again.
-      </UnavailablePage>
-    );
-  }
-  return <BoatScreen boatId={id} />;
-}
-
 /** One boat: its 30 kn and 60 kn recommendation, saved plans and profile. */
 export function BoatRoute() {
   return (
     <RequireAuth>
       <TackleUnits>
-        <BoatFromParams />
+        <IdParams
+          names={['boatId']}
+          unavailable={{
+            title: 'Boat not available',
+            reason: 'No such boat',
+            back: { to: paths.boats.href(), label: 'Back to your boats' },
+          }}
+        >
+          {({ boatId }) => <BoatScreen boatId={boatId} />}
+        </IdParams>
       </TackleUnits>
     </RequireAuth>
   );

@@ -24,3 +24,24 @@ describe('screens for rows that are not yours', () => {
     expect(screen.getByRole('link', { name: back })).toBeInTheDocument();
   });
 });
+
+// A malformed id in the address never reaches the API: the screen says the link is wrong.
+describe('screens addressed by a malformed id', () => {
+  it.each([
+    ['/boats/abc', 'Boat not available', 'No such boat', 'Back to your boats'],
+    ['/plans/0', 'Plan not available', 'No such plan', 'Back to your boats'],
+    ['/storm/1.5', 'Storm watch not available', 'No such storm watch', 'Back to storm watches'],
+    ['/storm/-2/board', 'Board not available', 'No such storm watch', 'Back to storm watches'],
+    ['/storm/3/boats/x', 'Boat not available', 'No such boat or watch', 'Back to storm watches'],
+  ])('%s says to check the link', async (route, title, reason, back) => {
+    mockApi({
+      'GET /api/threads/unread': () => ({ body: { data: { unread: 0 } } }),
+      'GET /api/notifications/unread': () => ({ body: { data: { unread: 0 } } }),
+    });
+    renderApp({ route, session: buildSession(buildUser()) });
+    expect(await screen.findByRole('heading', { level: 1, name: title })).toBeInTheDocument();
+    expect(screen.getByText(reason)).toBeInTheDocument();
+    expect(screen.getByText('Check the link and try again.')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: back })).toBeInTheDocument();
+  });
+});

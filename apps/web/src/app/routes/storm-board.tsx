@@ -1,5 +1,5 @@
 import { READINESS_STATUS_LABELS, READINESS_STATUSES } from '@app/shared/values';
-import { Link, useParams, useSearchParams } from 'react-router-dom';
+import { Link, useSearchParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -20,6 +20,7 @@ import { BoardTable } from '@/features/storm/components/board-table';
 import { BuddySelect } from '@/features/storm/components/buddy-select';
 import { countOf } from '@/lib/plural';
 import { isModeratorOrAdmin } from '@/lib/roles';
+import { IdParams } from '../id-params';
 
 function BoardScreen({ watchId }: { watchId: number }) {
   const [search, setSearch] = useSearchParams();
@@ -133,26 +134,20 @@ function BoardScreen({ watchId }: { watchId: number }) {
   );
 }
 
-function FromParams() {
-  const id = Number(useParams().watchId);
-  if (!Number.isInteger(id) || id <= 0)
-    return (
-      <UnavailablePage
-        title="Board not available"
-        reason="No such storm watch"
-        back={{ to: paths.storm.href(), label: 'Back to storm watches' }}
-      >
-        Check the link and try again.
-      </UnavailablePage>
-    );
-  return <BoardScreen watchId={id} />;
-}
-
 /** The club's board for a watch, filterable by harbour, printable, and as CSV for moderators. */
 export function StormBoardRoute() {
   return (
     <RequireAuth>
-      <FromParams />
+      <IdParams
+        names={['watchId']}
+        unavailable={{
+          title: 'Board not available',
+          reason: 'No such storm watch',
+          back: { to: paths.storm.href(), label: 'Back to storm watches' },
+        }}
+      >
+        {({ watchId }) => <BoardScreen watchId={watchId} />}
+      </IdParams>
     </RequireAuth>
   );
 }

@@ -1,5 +1,5 @@
 import { STORM_LOCATION_LABELS } from '@app/shared/values';
-import { Link, useParams } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
 import { Spinner } from '@/components/ui/spinner';
@@ -14,6 +14,7 @@ import { ReadinessForm } from '@/features/storm/components/readiness-form';
 import { StatusBadge } from '@/features/storm/components/status-badge';
 import { StormCautions } from '@/features/storm/components/storm-cautions';
 import { TackleUnits } from './calculators-units';
+import { IdParams } from '../id-params';
 
 function OwnerForm({ watchId, boatId }: { watchId: number; boatId: number }) {
   const query = useReadiness(watchId, boatId);
@@ -91,29 +92,21 @@ function BoatScreen({ watchId, boatId }: { watchId: number; boatId: number }) {
   );
 }
 
-function FromParams() {
-  const params = useParams();
-  const watchId = Number(params.watchId);
-  const boatId = Number(params.boatId);
-  if (![watchId, boatId].every((n) => Number.isInteger(n) && n > 0))
-    return (
-      <UnavailablePage
-        title="Boat not available"
-        reason="No such boat or watch"
-        back={{ to: paths.storm.href(), label: 'Back to storm watches' }}
-      >
-        Check the link and try again.
-      </UnavailablePage>
-    );
-  return <BoatScreen watchId={watchId} boatId={boatId} />;
-}
-
 /** One boat in a watch: its check against the forecast and, for its owner, the readiness form. */
 export function StormBoatRoute() {
   return (
     <RequireAuth>
       <TackleUnits>
-        <FromParams />
+        <IdParams
+          names={['watchId', 'boatId']}
+          unavailable={{
+            title: 'Boat not available',
+            reason: 'No such boat or watch',
+            back: { to: paths.storm.href(), label: 'Back to storm watches' },
+          }}
+        >
+          {(ids) => <BoatScreen {...ids} />}
+        </IdParams>
       </TackleUnits>
     </RequireAuth>
   );

@@ -1,6 +1,6 @@
 import { formatDateTime } from '@app/shared/locale';
 import type { ReadinessDto, StormWatchDto } from '@app/shared';
-import { Link, useParams } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Page } from '@/components/ui/page';
@@ -18,6 +18,7 @@ import { MarginBadge } from '@/features/storm/components/margin-badge';
 import { StatusBadge } from '@/features/storm/components/status-badge';
 import { StormCautions } from '@/features/storm/components/storm-cautions';
 import { isModeratorOrAdmin } from '@/lib/roles';
+import { IdParams } from '../id-params';
 
 const when = (iso: string) => formatDateTime(iso);
 
@@ -168,26 +169,20 @@ function WatchScreen({ watchId }: { watchId: number }) {
   );
 }
 
-function FromParams() {
-  const id = Number(useParams().watchId);
-  if (!Number.isInteger(id) || id <= 0)
-    return (
-      <UnavailablePage
-        title="Storm watch not available"
-        reason="No such storm watch"
-        back={{ to: paths.storm.href(), label: 'Back to storm watches' }}
-      >
-        Check the link and try again.
-      </UnavailablePage>
-    );
-  return <WatchScreen watchId={id} />;
-}
-
 /** One storm watch: the forecast, the member's boats and, for moderators, closing it. */
 export function StormWatchRoute() {
   return (
     <RequireAuth>
-      <FromParams />
+      <IdParams
+        names={['watchId']}
+        unavailable={{
+          title: 'Storm watch not available',
+          reason: 'No such storm watch',
+          back: { to: paths.storm.href(), label: 'Back to storm watches' },
+        }}
+      >
+        {({ watchId }) => <WatchScreen watchId={watchId} />}
+      </IdParams>
     </RequireAuth>
   );
 }

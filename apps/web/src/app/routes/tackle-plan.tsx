@@ -1,6 +1,6 @@
 import type { RatedComponent, TacklePlanResult } from '@app/calc';
 import { useState } from 'react';
-import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Link, useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { Page } from '@/components/ui/page';
@@ -20,6 +20,7 @@ import { TacklePlanCard } from '@/features/tackle-plans/components/tackle-plan-c
 import { PrintStyles } from '@/features/tackle-plans/components/print-styles';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
+import { IdParams } from '../id-params';
 
 /** The parts `tacklePlan` checked, in the order it passed them to `weakestLink`. */
 function linkParts(result: TacklePlanResult): RatedComponent[] {
@@ -150,29 +151,21 @@ function TacklePlanScreen({ planId }: { planId: number }) {
   );
 }
 
-function TacklePlanFromParams() {
-  const { planId } = useParams();
-  const id = Number(planId);
-  if (!Number.isInteger(id) || id <= 0) {
-    return (
-      <UnavailablePage
-        title="Plan not available"
-        reason="No such plan"
-        back={{ to: paths.boats.href(), label: 'Back to your boats' }}
-      >
-        Check the link and try again.
-      </UnavailablePage>
-    );
-  }
-  return <TacklePlanScreen planId={id} />;
-}
-
 /** A saved tackle plan: the printable card, the weakest-link check and the rode's shape. */
 export function TacklePlanRoute() {
   return (
     <RequireAuth>
       <TackleUnits>
-        <TacklePlanFromParams />
+        <IdParams
+          names={['planId']}
+          unavailable={{
+            title: 'Plan not available',
+            reason: 'No such plan',
+            back: { to: paths.boats.href(), label: 'Back to your boats' },
+          }}
+        >
+          {({ planId }) => <TacklePlanScreen planId={planId} />}
+        </IdParams>
       </TackleUnits>
     </RequireAuth>
   );

@@ -1,5 +1,7 @@
-import { useEffect, useId, useRef, type ReactNode } from 'react';
+import { useId, useRef, type ReactNode } from 'react';
 import { Button } from './button';
+import { DialogButtons } from './dialog-buttons';
+import { Modal } from './modal';
 
 export interface ConfirmDialogProps {
   isOpen: boolean;
@@ -32,38 +34,18 @@ export function ConfirmDialog({
   onConfirm,
   onCancel,
 }: ConfirmDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
   const cancelRef = useRef<HTMLButtonElement>(null);
   const titleId = useId();
   const bodyId = useId();
 
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (!dialog || !isOpen) return;
-    const returnFocusTo =
-      document.activeElement instanceof HTMLElement ? document.activeElement : null;
-    // jsdom and a few old browsers lack showModal; the open attribute still shows the dialog there.
-    if (typeof dialog.showModal === 'function') dialog.showModal();
-    else dialog.setAttribute('open', '');
-    cancelRef.current?.focus();
-    return () => {
-      if (typeof dialog.close === 'function' && dialog.open) dialog.close();
-      else dialog.removeAttribute('open');
-      returnFocusTo?.focus();
-    };
-  }, [isOpen]);
-
   if (!isOpen) return null;
   return (
-    <dialog
-      ref={dialogRef}
-      aria-labelledby={titleId}
-      aria-describedby={children ? bodyId : undefined}
-      onCancel={(event) => {
-        event.preventDefault();
-        onCancel();
-      }}
-      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-lg border border-sand-300 bg-sand-50 p-0 text-ink-900 shadow-card backdrop:bg-ink-950/50"
+    <Modal
+      labelledBy={titleId}
+      describedBy={children ? bodyId : undefined}
+      onShown={() => cancelRef.current?.focus()}
+      onCancel={onCancel}
+      width="narrow"
     >
       <div className="flex flex-col gap-4 p-5">
         <h2 id={titleId} className="text-xl">
@@ -74,10 +56,12 @@ export function ConfirmDialog({
             {children}
           </div>
         )}
-        <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-          <Button ref={cancelRef} variant="secondary" onClick={onCancel} disabled={isPending}>
-            {cancelLabel}
-          </Button>
+        <DialogButtons
+          onCancel={onCancel}
+          cancelLabel={cancelLabel}
+          cancelRef={cancelRef}
+          isPending={isPending}
+        >
           <Button
             variant={isDestructive ? 'danger' : 'primary'}
             onClick={onConfirm}
@@ -86,8 +70,8 @@ export function ConfirmDialog({
           >
             {confirmLabel}
           </Button>
-        </div>
+        </DialogButtons>
       </div>
-    </dialog>
+    </Modal>
   );
 }

@@ -1,5 +1,7 @@
 import { useCallback, useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Button } from './button';
+import { DialogButtons } from './dialog-buttons';
+import { Modal } from './modal';
 
 export interface PromptOptions {
   title: string;
@@ -32,7 +34,6 @@ export interface PromptDialogProps {
  * before the dialog closes, so the asker never receives an empty or too-short reason.
  */
 export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
   const fieldRef = useRef<HTMLInputElement & HTMLTextAreaElement>(null);
   const titleId = useId();
   const fieldId = useId();
@@ -40,23 +41,6 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
   const errorId = `${fieldId}-error`;
   const [value, setValue] = useState(options.initial ?? '');
   const [error, setError] = useState<string | null>(null);
-
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (!dialog) return;
-    const returnFocusTo =
-      document.activeElement instanceof HTMLElement ? document.activeElement : null;
-    // jsdom lacks showModal; the open attribute still shows the dialog there.
-    if (typeof dialog.showModal === 'function') dialog.showModal();
-    else dialog.setAttribute('open', '');
-    fieldRef.current?.focus();
-    fieldRef.current?.select();
-    return () => {
-      if (typeof dialog.close === 'function' && dialog.open) dialog.close();
-      else dialog.removeAttribute('open');
-      returnFocusTo?.focus();
-    };
-  }, []);
 
   const minLength = options.minLength ?? 3;
   const describedBy = [options.hint ? hintId : null, error ? errorId : null]
@@ -97,14 +81,13 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
   };
 
   return (
-    <dialog
-      ref={dialogRef}
-      aria-labelledby={titleId}
-      onCancel={(event) => {
-        event.preventDefault();
-        onAnswer(null);
+    <Modal
+      labelledBy={titleId}
+      onShown={() => {
+        fieldRef.current?.focus();
+        fieldRef.current?.select();
       }}
-      className="m-auto w-[min(30rem,calc(100vw-2rem))] rounded-lg border border-sand-300 bg-sand-50 p-0 text-ink-900 shadow-card backdrop:bg-ink-950/50"
+      onCancel={() => onAnswer(null)}
     >
       <form className="flex flex-col gap-4 p-5" onSubmit={handleSubmit} noValidate>
         <h2 id={titleId} className="text-xl">
@@ -142,16 +125,13 @@ export function PromptDialog({ options, onAnswer }: PromptDialogProps) {
             </p>
           )}
         </div>
-        <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-          <Button type="button" variant="secondary" onClick={() => onAnswer(null)}>
-            {options.cancelLabel ?? 'Cancel'}
-          </Button>
+        <DialogButtons onCancel={() => onAnswer(null)} cancelLabel={options.cancelLabel}>
           <Button type="submit" variant={options.isDestructive ? 'danger' : 'primary'}>
             {options.confirmLabel ?? 'Save'}
           </Button>
-        </div>
+        </DialogButtons>
       </form>
-    </dialog>
+    </Modal>
   );
 }
 

@@ -1,5 +1,6 @@
 import { useId, type SelectHTMLAttributes } from 'react';
-import { cn } from '@/lib/cn';
+import { controlClassName, describedByOf } from '@/lib/form-control';
+import { FieldFrame } from './field-frame';
 
 export interface SelectOption {
   value: string;
@@ -23,27 +24,13 @@ export function SelectField({
   ...selectProps
 }: SelectFieldProps) {
   const id = useId();
-  const hintId = `${id}-hint`;
-  const errorId = `${id}-error`;
-  const describedBy = [hint ? hintId : null, error ? errorId : null].filter(Boolean).join(' ');
   return (
-    <div className={cn('flex flex-col gap-1', className)}>
-      <label htmlFor={id} className="text-sm font-bold text-ink-900">
-        {label}
-      </label>
-      {hint && (
-        <p id={hintId} className="text-xs text-ink-600">
-          {hint}
-        </p>
-      )}
+    <FieldFrame id={id} label={label} hint={hint} error={error} className={className}>
       <select
         id={id}
         aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy || undefined}
-        className={cn(
-          'min-h-11 w-full rounded-md border bg-sand-50 px-3 text-base text-ink-950',
-          error ? 'border-2 border-flare-700' : 'border-sand-500',
-        )}
+        aria-describedby={describedByOf(id, hint, error)}
+        className={controlClassName(error)}
         {...selectProps}
       >
         {options.map((option) => (
@@ -52,11 +39,6 @@ export function SelectField({
           </option>
         ))}
       </select>
-      {error && (
-        <p id={errorId} className="text-sm font-bold text-flare-700">
-          {error}
-        </p>
-      )}
-    </div>
+    </FieldFrame>
   );
 }

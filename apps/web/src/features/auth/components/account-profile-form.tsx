@@ -3,13 +3,13 @@ import { useId } from 'react';
 import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateAccount } from '../api/update-account';
 import { lazyResolver } from '@/lib/lazy-schema';
 
 const resolver = lazyResolver((schemas) => schemas.updateAccountSchema);
+import { AccountForm } from './account-form';
 
 export interface AccountProfileFormProps {
   user: UserDto;
@@ -45,8 +45,7 @@ export function AccountProfileForm({ user }: AccountProfileFormProps) {
   });
 
   return (
-    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
-      <FormError message={errors.root?.server?.message} />
+    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
       {update.isSuccess && !isDirty && <Alert tone="success">Your profile is saved.</Alert>}
       <TextField
         label="Your name"
@@ -87,6 +86,6 @@ export function AccountProfileForm({ user }: AccountProfileFormProps) {
       >
         Save profile
       </Button>
-    </form>
+    </AccountForm>
   );
 }

@@ -1,11 +1,10 @@
 import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
-import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useChangePassword } from '../api/change-password';
 import { lazyResolver } from '@/lib/lazy-schema';
+import { AccountForm, PasswordField } from './account-form';
 
 const resolver = lazyResolver(({ changePasswordSchema, z }) =>
   changePasswordSchema
@@ -39,31 +38,23 @@ export function ChangePasswordForm() {
   });
 
   return (
-    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
-      <FormError message={errors.root?.server?.message} />
+    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
       {change.isSuccess && <Alert tone="success">Your password is changed.</Alert>}
-      <TextField
+      <PasswordField
         label="Current password"
-        type="password"
-        autoComplete="current-password"
-        required
         error={errors.currentPassword?.message}
         {...register('currentPassword')}
       />
-      <TextField
+      <PasswordField
         label="New password"
-        type="password"
-        autoComplete="new-password"
+        isNew
         hint="At least 10 characters."
-        required
         error={errors.newPassword?.message}
         {...register('newPassword')}
       />
-      <TextField
+      <PasswordField
         label="Repeat new password"
-        type="password"
-        autoComplete="new-password"
-        required
+        isNew
         error={errors.confirmNewPassword?.message}
         {...register('confirmNewPassword')}
       />
@@ -75,6 +66,6 @@ export function ChangePasswordForm() {
       >
         Change password
       </Button>
-    </form>
+    </AccountForm>
   );
 }

@@ -1,33 +1,32 @@
 import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
-import { TextField } from '@/components/ui/text-field';
 import { applyServerErrors } from '@/lib/form-errors';
 import { lazyResolver } from '@/lib/lazy-schema';
 
 const resolver = lazyResolver((schemas) => schemas.resetRequestSchema);
+import { AccountForm, EmailField } from './account-form';
 
 export interface EmailRequestFormProps {
-  /** Sends the request; resolves when the server accepted it. */
-  onRequest: (input: { email: string }) => Promise<unknown>;
-  isPending: boolean;
+  /** The request's mutation; `mutateAsync` resolves when the server accepted it. */
+  request: {
+    mutateAsync: (input: { email: string }) => Promise<unknown>;
+    isPending: boolean;
+    isSuccess: boolean;
+  };
   submitLabel: string;
   /** Shown (as a status message) once the server accepted the request. */
   doneTitle: string;
   doneText: string;
-  isDone: boolean;
   defaultEmail?: string;
 }
 
 /** One e-mail field that asks for a link (password reset, new verification link). */
 export function EmailRequestForm({
-  onRequest,
-  isPending,
+  request,
   submitLabel,
   doneTitle,
   doneText,
-  isDone,
   defaultEmail = '',
 }: EmailRequestFormProps) {
   const {
@@ -42,13 +41,13 @@ export function EmailRequestForm({
 
   const onSubmit = handleSubmit(async (input) => {
     try {
-      await onRequest(input);
+      await request.mutateAsync(input);
     } catch (error) {
       applyServerErrors(error, setError, ['email']);
     }
   });
 
-  if (isDone) {
+  if (request.isSuccess) {
     return (
       <Alert tone="success" title={doneTitle}>
         <p>{doneText}</p>
@@ -57,19 +56,11 @@ export function EmailRequestForm({
   }
 
   return (
-    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
-      <FormError message={errors.root?.server?.message} />
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        required
-        error={errors.email?.message}
-        {...register('email')}
-      />
-      <Button type="submit" isPending={isPending} pendingLabel="Sending…">
+    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
+      <EmailField error={errors.email?.message} {...register('email')} />
+      <Button type="submit" isPending={request.isPending} pendingLabel="Sending…">
         {submitLabel}
       </Button>
-    </form>
+    </AccountForm>
   );
 }

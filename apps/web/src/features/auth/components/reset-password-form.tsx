@@ -2,13 +2,12 @@ import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
-import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
 import { lazyResolver } from '@/lib/lazy-schema';
+import { AccountForm, PasswordField } from './account-form';
 
 const resolver = lazyResolver(({ passwordSchema, z }) =>
   z
@@ -72,28 +71,23 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   }
 
   return (
-    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
-      <FormError message={errors.root?.server?.message} />
-      <TextField
+    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
+      <PasswordField
         label="New password"
-        type="password"
-        autoComplete="new-password"
+        isNew
         hint="At least 10 characters."
-        required
         error={errors.password?.message}
         {...register('password')}
       />
-      <TextField
+      <PasswordField
         label="Repeat new password"
-        type="password"
-        autoComplete="new-password"
-        required
+        isNew
         error={errors.confirmPassword?.message}
         {...register('confirmPassword')}
       />
       <Button type="submit" isPending={confirm.isPending} pendingLabel="Saving…">
         Save new password
       </Button>
-    </form>
+    </AccountForm>
   );
 }

@@ -6,9 +6,7 @@ export function ResetRequestForm() {
   const request = useRequestPasswordReset();
   return (
     <EmailRequestForm
-      onRequest={request.mutateAsync}
-      isPending={request.isPending}
-      isDone={request.isSuccess}
+      request={request}
       submitLabel="Send reset link"
       doneTitle="Check your inbox"
       doneText="If an account exists for that address, a link to choose a new password is on its way. It works once and expires after a while."

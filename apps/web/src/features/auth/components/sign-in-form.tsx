@@ -4,8 +4,6 @@ import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
-import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { applyServerErrors, errorMessage } from '@/lib/form-errors';
@@ -14,6 +12,7 @@ import { useResendVerification } from '../api/resend-verification';
 import { lazyResolver } from '@/lib/lazy-schema';
 
 const resolver = lazyResolver((schemas) => schemas.loginSchema);
+import { AccountForm, EmailField, PasswordField } from './account-form';
 
 export interface SignInFormProps {
   onSignedIn: (session: SessionDto) => void;
@@ -48,8 +47,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
   });
 
   return (
-    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
-      <FormError message={errors.root?.server?.message} />
+    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
       {unverifiedEmail && (
         <Alert
           tone="warning"
@@ -71,22 +69,8 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
           {resend.isError && <p className="mt-1 font-bold">{errorMessage(resend.error)}</p>}
         </Alert>
       )}
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        required
-        error={errors.email?.message}
-        {...register('email')}
-      />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="current-password"
-        required
-        error={errors.password?.message}
-        {...register('password')}
-      />
+      <EmailField error={errors.email?.message} {...register('email')} />
+      <PasswordField label="Password" error={errors.password?.message} {...register('password')} />
       <Button type="submit" isPending={login.isPending} pendingLabel="Signing in…">
         Sign in
       </Button>
@@ -96,6 +80,6 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
       <p className="text-sm">
         New to the club? <Link to={paths.signUp.href()}>Create an account</Link>
       </p>
-    </form>
+    </AccountForm>
   );
 }

@@ -2,7 +2,6 @@ import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -10,6 +9,7 @@ import { useSignup } from '../api/signup';
 import { lazyResolver } from '@/lib/lazy-schema';
 
 const resolver = lazyResolver((schemas) => schemas.signupSchema);
+import { AccountForm, EmailField, PasswordField } from './account-form';
 
 const FIELDS = ['email', 'password', 'displayName'] as const;
 
@@ -46,8 +46,7 @@ export function SignUpForm() {
   }
 
   return (
-    <form noValidate onSubmit={(event) => void onSubmit(event)} className="flex flex-col gap-4">
-      <FormError message={errors.root?.server?.message} />
+    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
       <TextField
         label="Your name"
         hint="Shown to other members on posts and listings."
@@ -56,20 +55,11 @@ export function SignUpForm() {
         error={errors.displayName?.message}
         {...register('displayName')}
       />
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        required
-        error={errors.email?.message}
-        {...register('email')}
-      />
-      <TextField
+      <EmailField error={errors.email?.message} {...register('email')} />
+      <PasswordField
         label="Password"
-        type="password"
-        autoComplete="new-password"
+        isNew
         hint="At least 10 characters. A few unrelated words make a strong one."
-        required
         error={errors.password?.message}
         {...register('password')}
       />
@@ -79,6 +69,6 @@ export function SignUpForm() {
       <p className="text-sm">
         Already a member? <Link to={paths.signIn.href()}>Sign in</Link>
       </p>
-    </form>
+    </AccountForm>
   );
 }

@@ -6,7 +6,8 @@ import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
 import { useVerifyEmail } from '../api/verify-email';
-import { ResendVerificationForm } from './resend-verification-form';
+import { useResendVerification } from '../api/resend-verification';
+import { EmailRequestForm } from './email-request-form';
 
 export interface VerifyEmailStatusProps {
   token: string;
@@ -18,6 +19,7 @@ const isDeadLink = (error: unknown) =>
 /** Sends the token from the e-mailed link once, then says how it went; a dead link offers a new one. */
 export function VerifyEmailStatus({ token }: VerifyEmailStatusProps) {
   const verify = useVerifyEmail();
+  const resend = useResendVerification();
   const { mutate } = verify;
   // A token works once: never post the same one twice (StrictMode runs effects twice in development).
   const sentToken = useRef<string | null>(null);
@@ -39,7 +41,12 @@ export function VerifyEmailStatus({ token }: VerifyEmailStatusProps) {
           </p>
         </Alert>
         <h2 className="text-lg">Send a new link</h2>
-        <ResendVerificationForm />
+        <EmailRequestForm
+          request={resend}
+          submitLabel="Send a new link"
+          doneTitle="Check your inbox"
+          doneText="If that address belongs to an account that still needs confirming, a new link is on its way."
+        />
       </div>
     );
   }

@@ -1,6 +1,4 @@
 import {
-  ANCHOR_TYPES,
-  BOTTOM_TYPES,
   BOTTOM_TYPE_LABELS,
   STANDARD_CAUTIONS,
   anchorSuggestion,
@@ -11,8 +9,8 @@ import { useState } from 'react';
 import { useConditions, useLinkedState } from '../utils/conditions';
 import { LinkedNote } from './linked-note';
 import { Quantity } from '@/components/units/quantity';
-import { SelectField } from '@/components/ui/select-field';
-import { ANCHOR_OPTIONS, BOTTOM_OPTIONS, pick } from '../utils/options';
+import { ChoiceField } from '@/components/ui/choice-field';
+import { ANCHOR_OPTIONS, BOTTOM_OPTIONS } from '../utils/options';
 import { runCalc } from '../utils/run-calc';
 import { DEFAULT_BOAT_WIND, type BoatWind } from '../utils/boat-wind';
 import { BoatWindFields } from './boat-wind-fields';
@@ -67,20 +65,13 @@ export function AnchorCalculator() {
       <LinkedNote own={linked.own} onFollow={linked.follow} />
       <BoatWindFields value={boat} onChange={(b) => linked.set(b)} outcome={outcome} />
       <div className="grid gap-3 sm:grid-cols-2">
-        <SelectField
+        <ChoiceField
           label="Anchor type"
           options={ANCHOR_OPTIONS}
           value={anchorType}
-          onChange={(e) => setAnchorType(pick(e.target.value, ANCHOR_TYPES, 'plow'))}
+          onChoose={setAnchorType}
         />
-        <SelectField
-          label="Seabed"
-          options={BOTTOM_OPTIONS}
-          value={bottom}
-          onChange={(e) =>
-            setBottom(e.target.value === '' ? '' : pick(e.target.value, BOTTOM_TYPES, 'sand'))
-          }
-        />
+        <ChoiceField label="Seabed" options={BOTTOM_OPTIONS} value={bottom} onChoose={setBottom} />
       </div>
       {r && r.suggestedKg !== null && r.minKg !== null ? (
         <ResultList

@@ -1,7 +1,6 @@
-import { HULL_TYPES } from '@app/calc';
 import { QuantityField } from '@/components/units/quantity-field';
-import { SelectField } from '@/components/ui/select-field';
-import { HULL_OPTIONS, pick } from '../utils/options';
+import { ChoiceField } from '@/components/ui/choice-field';
+import { HULL_OPTIONS } from '../utils/options';
 import type { BoatWind } from '../utils/boat-wind';
 import { fieldError, type CalcOutcome } from '../utils/run-calc';
 
@@ -32,11 +31,11 @@ export function BoatWindFields({ value, onChange, outcome, prefix = '' }: BoatWi
         onValueChange={(beamM) => onChange({ ...value, beamM })}
         error={fieldError(outcome, path('beamM'))}
       />
-      <SelectField
+      <ChoiceField
         label="Hull"
         options={HULL_OPTIONS}
         value={value.hull}
-        onChange={(e) => onChange({ ...value, hull: pick(e.target.value, HULL_TYPES, 'sail') })}
+        onChoose={(hull) => onChange({ ...value, hull })}
         error={fieldError(outcome, path('hull'))}
       />
       <QuantityField

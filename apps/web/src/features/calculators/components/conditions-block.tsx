@@ -1,11 +1,14 @@
-import { BOTTOM_TYPES, HULL_TYPES } from '@app/calc';
 import type { BoatDto } from '@app/shared';
 import { useId, useState } from 'react';
+import { ChoiceField } from '@/components/ui/choice-field';
 import { SelectField } from '@/components/ui/select-field';
 import { Quantity } from '@/components/units/quantity';
 import { QuantityField } from '@/components/units/quantity-field';
-import { BOTTOM_OPTIONS, HULL_OPTIONS, pick } from '../utils/options';
+import type { QuantityKind } from '@/lib/units/parse-quantity';
+import { BOTTOM_OPTIONS, HULL_OPTIONS } from '../utils/options';
 import { conditionsFromBoat, useConditions, type CalcConditions } from '../utils/conditions';
+
+type FigureKey = 'loaM' | 'beamM' | 'windKn' | 'depthM' | 'bowHeightM' | 'tideM';
 
 /**
  * The boat and conditions at the top of the calculators page: pick a saved boat or type one. Every calculator
@@ -21,6 +24,14 @@ export function ConditionsBlock({ boats = [] }: { boats?: readonly BoatDto[] }) 
     if ('loaM' in patch || 'beamM' in patch || 'hull' in patch || 'bowHeightM' in patch)
       setBoatId('');
   };
+  const figure = (key: FigureKey, label: string, kind: QuantityKind) => (
+    <QuantityField
+      label={label}
+      kind={kind}
+      value={c[key]}
+      onValueChange={(value) => set({ [key]: value })}
+    />
+  );
   return (
     <section
       aria-labelledby={headingId}
@@ -51,55 +62,23 @@ export function ConditionsBlock({ boats = [] }: { boats?: readonly BoatDto[] }) 
         />
       )}
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-        <QuantityField
-          label="Length overall (LOA)"
-          kind="length"
-          value={c.loaM}
-          onValueChange={(loaM) => set({ loaM })}
-        />
-        <QuantityField
-          label="Beam (optional)"
-          kind="length"
-          value={c.beamM}
-          onValueChange={(beamM) => set({ beamM })}
-        />
-        <SelectField
+        {figure('loaM', 'Length overall (LOA)', 'length')}
+        {figure('beamM', 'Beam (optional)', 'length')}
+        <ChoiceField
           label="Hull"
           options={HULL_OPTIONS}
           value={c.hull}
-          onChange={(e) => set({ hull: pick(e.target.value, HULL_TYPES, 'sail') })}
+          onChoose={(hull) => set({ hull })}
         />
-        <QuantityField
-          label="Design wind"
-          kind="speed"
-          value={c.windKn}
-          onValueChange={(windKn) => set({ windKn })}
-        />
-        <QuantityField
-          label="Depth where you anchor"
-          kind="length"
-          value={c.depthM}
-          onValueChange={(depthM) => set({ depthM })}
-        />
-        <QuantityField
-          label="Bow roller above water"
-          kind="length"
-          value={c.bowHeightM}
-          onValueChange={(bowHeightM) => set({ bowHeightM })}
-        />
-        <QuantityField
-          label="Tide range"
-          kind="length"
-          value={c.tideM}
-          onValueChange={(tideM) => set({ tideM })}
-        />
-        <SelectField
+        {figure('windKn', 'Design wind', 'speed')}
+        {figure('depthM', 'Depth where you anchor', 'length')}
+        {figure('bowHeightM', 'Bow roller above water', 'length')}
+        {figure('tideM', 'Tide range', 'length')}
+        <ChoiceField
           label="Seabed"
           options={BOTTOM_OPTIONS}
           value={c.bottom}
-          onChange={(e) =>
-            set({ bottom: e.target.value === '' ? '' : pick(e.target.value, BOTTOM_TYPES, 'sand') })
-          }
+          onChoose={(bottom) => set({ bottom })}
         />
       </div>
       <p className="text-base" aria-live="polite">

@@ -1,16 +1,15 @@
-import { CHAIN_GRADES, CHAIN_TRADE_SIZES_IN, ROPE_CONSTRUCTIONS, ROPE_MATERIALS } from '@app/calc';
 import { TextField } from '@/components/ui/text-field';
 import { QuantityField } from '@/components/units/quantity-field';
+import { ChoiceField } from '@/components/ui/choice-field';
 import { SelectField } from '@/components/ui/select-field';
 import type { LinkPart } from '../utils/link-parts';
 import {
   CONSTRUCTION_OPTIONS,
-  GRADE_OPTIONS,
   MATERIAL_OPTIONS,
   SHACKLE_OPTIONS,
-  chainSizeOptions,
-  pick,
+  sizeInGrade,
 } from '../utils/options';
+import { ChainFields } from './chain-fields';
 
 export interface LinkPartEditorProps {
   part: LinkPart;
@@ -24,32 +23,22 @@ export interface LinkPartEditorProps {
 /** The fields of one part of the weakest-link builder. */
 export function LinkPartEditor({ part, onChange, error, name }: LinkPartEditorProps) {
   switch (part.kind) {
-    case 'chain': {
-      const sizes = CHAIN_TRADE_SIZES_IN[part.grade];
+    case 'chain':
       return (
         <div className="grid gap-3 sm:grid-cols-2">
-          <SelectField
-            label={`${name} chain grade`}
-            options={GRADE_OPTIONS}
-            value={part.grade}
-            onChange={(e) => {
-              const grade = pick(e.target.value, CHAIN_GRADES, 'G43');
-              const tradeSizeIn = CHAIN_TRADE_SIZES_IN[grade].includes(part.tradeSizeIn)
-                ? part.tradeSizeIn
-                : (CHAIN_TRADE_SIZES_IN[grade][0] ?? part.tradeSizeIn);
-              onChange({ ...part, grade, tradeSizeIn });
-            }}
-          />
-          <SelectField
-            label={`${name} chain size`}
-            options={chainSizeOptions(part.grade)}
-            value={String(sizes.includes(part.tradeSizeIn) ? part.tradeSizeIn : sizes[0])}
-            onChange={(e) => onChange({ ...part, tradeSizeIn: Number(e.target.value) })}
-            error={error}
+          <ChainFields
+            gradeLabel={`${name} chain grade`}
+            sizeLabel={`${name} chain size`}
+            grade={part.grade}
+            tradeSizeIn={sizeInGrade(part.grade, part.tradeSizeIn)}
+            onGradeChange={(grade) =>
+              onChange({ ...part, grade, tradeSizeIn: sizeInGrade(grade, part.tradeSizeIn) })
+            }
+            onSizeChange={(tradeSizeIn) => onChange({ ...part, tradeSizeIn })}
+            sizeError={error}
           />
         </div>
       );
-    }
     case 'shackle':
       return (
         <SelectField
@@ -63,24 +52,17 @@ export function LinkPartEditor({ part, onChange, error, name }: LinkPartEditorPr
     case 'rope':
       return (
         <div className="grid gap-3 sm:grid-cols-3">
-          <SelectField
+          <ChoiceField
             label={`${name} fibre`}
             options={MATERIAL_OPTIONS}
             value={part.material}
-            onChange={(e) =>
-              onChange({ ...part, material: pick(e.target.value, ROPE_MATERIALS, 'nylon') })
-            }
+            onChoose={(material) => onChange({ ...part, material })}
           />
-          <SelectField
+          <ChoiceField
             label={`${name} construction`}
             options={CONSTRUCTION_OPTIONS}
             value={part.construction}
-            onChange={(e) =>
-              onChange({
-                ...part,
-                construction: pick(e.target.value, ROPE_CONSTRUCTIONS, 'three-strand'),
-              })
-            }
+            onChoose={(construction) => onChange({ ...part, construction })}
           />
           <QuantityField
             label={`${name} diameter`}

@@ -1,8 +1,4 @@
 import {
-  CHAIN_GRADES,
-  CHAIN_TRADE_SIZES_IN,
-  ROPE_CONSTRUCTIONS,
-  ROPE_MATERIALS,
   STANDARD_CAUTIONS,
   chainSpec,
   ropeSpec,
@@ -14,17 +10,17 @@ import {
 import { useState } from 'react';
 import { Quantity } from '@/components/units/quantity';
 import { QuantityField } from '@/components/units/quantity-field';
+import { ChoiceField } from '@/components/ui/choice-field';
 import { SelectField } from '@/components/ui/select-field';
 import {
   CONSTRUCTION_OPTIONS,
-  GRADE_OPTIONS,
   MATERIAL_OPTIONS,
   SHACKLE_OPTIONS,
-  chainSizeOptions,
-  pick,
+  sizeInGrade,
 } from '../utils/options';
 import { fieldError, runCalc } from '../utils/run-calc';
 import { CalcCard } from './calc-card';
+import { ChainFields } from './chain-fields';
 import { NoResult, ResultList } from './result-list';
 
 function Ratings({ label, wllN, minBreakN }: { label: string; wllN: number; minBreakN: number }) {
@@ -49,8 +45,7 @@ export function RatingsCalculator() {
   const [ropeM, setRopeM] = useState<number | undefined>(0.0127);
   const [wet, setWet] = useState(true);
 
-  const sizes = CHAIN_TRADE_SIZES_IN[grade];
-  const size = sizes.includes(chainSize) ? chainSize : (sizes[0] ?? chainSize);
+  const size = sizeInGrade(grade, chainSize);
   const chain = runCalc(() => chainSpec({ grade, tradeSizeIn: size }));
   const shackleResult = runCalc(() => shackleSpec({ nominalIn: shackle }));
   const rope = runCalc(() =>
@@ -87,18 +82,14 @@ export function RatingsCalculator() {
       <div className="grid gap-4 lg:grid-cols-3">
         <fieldset className="flex flex-col gap-3">
           <legend className="mb-1 font-bold">Chain</legend>
-          <SelectField
-            label="Chain grade"
-            options={GRADE_OPTIONS}
-            value={grade}
-            onChange={(e) => setGrade(pick(e.target.value, CHAIN_GRADES, 'G43'))}
-          />
-          <SelectField
-            label="Chain trade size"
-            options={chainSizeOptions(grade)}
-            value={String(size)}
-            onChange={(e) => setChainSize(Number(e.target.value))}
-            error={fieldError(chain, 'tradeSizeIn')}
+          <ChainFields
+            gradeLabel="Chain grade"
+            sizeLabel="Chain trade size"
+            grade={grade}
+            tradeSizeIn={size}
+            onGradeChange={setGrade}
+            onSizeChange={setChainSize}
+            sizeError={fieldError(chain, 'tradeSizeIn')}
           />
           {chain.ok ? (
             <>
@@ -124,19 +115,17 @@ export function RatingsCalculator() {
         </fieldset>
         <fieldset className="flex flex-col gap-3">
           <legend className="mb-1 font-bold">Rope</legend>
-          <SelectField
+          <ChoiceField
             label="Fibre"
             options={MATERIAL_OPTIONS}
             value={material}
-            onChange={(e) => setMaterial(pick(e.target.value, ROPE_MATERIALS, 'nylon'))}
+            onChoose={setMaterial}
           />
-          <SelectField
+          <ChoiceField
             label="Construction"
             options={CONSTRUCTION_OPTIONS}
             value={construction}
-            onChange={(e) =>
-              setConstruction(pick(e.target.value, ROPE_CONSTRUCTIONS, 'three-strand'))
-            }
+            onChoose={setConstruction}
           />
           <QuantityField
             label="Rope diameter"

@@ -1,7 +1,5 @@
 import {
-  CHAIN_GRADES,
   CHAIN_ROWS,
-  CHAIN_TRADE_SIZES_IN,
   SCOPE_LADDER,
   STANDARD_CAUTIONS,
   catenary,
@@ -15,10 +13,10 @@ import { useConditions, useLinkedState } from '../utils/conditions';
 import { LinkedNote } from './linked-note';
 import { Quantity } from '@/components/units/quantity';
 import { QuantityField } from '@/components/units/quantity-field';
-import { SelectField } from '@/components/ui/select-field';
-import { GRADE_OPTIONS, chainSizeOptions, pick } from '../utils/options';
+import { sizeInGrade } from '../utils/options';
 import { fieldError, runCalc } from '../utils/run-calc';
 import { CalcCard } from './calc-card';
+import { ChainFields } from './chain-fields';
 import { CatenaryDrawing } from './catenary-drawing';
 import { NoResult, ResultList, WarningList } from './result-list';
 
@@ -57,8 +55,7 @@ export function ScopeCalculator() {
   const set = linked.set;
   const [grade, setGrade] = useState<ChainGrade>('G43');
   const [size, setSize] = useState(3 / 8);
-  const sizes = CHAIN_TRADE_SIZES_IN[grade];
-  const tradeSizeIn = sizes.includes(size) ? size : (sizes[0] ?? size);
+  const tradeSizeIn = sizeInGrade(grade, size);
   const { depthM, bowHeightM, tideM = 0, chainLengthM, ropeLengthM = 0, loadN } = v;
   const ready =
     depthM !== undefined &&
@@ -127,18 +124,14 @@ export function ScopeCalculator() {
           onValueChange={(tideM) => set({ tideM })}
           error={err('tideM')}
         />
-        <SelectField
-          label="Chain grade"
-          options={GRADE_OPTIONS}
-          value={grade}
-          onChange={(e) => setGrade(pick(e.target.value, CHAIN_GRADES, 'G43'))}
-        />
-        <SelectField
-          label="Chain size"
-          options={chainSizeOptions(grade)}
-          value={String(tradeSizeIn)}
-          onChange={(e) => setSize(Number(e.target.value))}
-          error={err('chainKgPerM')}
+        <ChainFields
+          gradeLabel="Chain grade"
+          sizeLabel="Chain size"
+          grade={grade}
+          tradeSizeIn={tradeSizeIn}
+          onGradeChange={setGrade}
+          onSizeChange={setSize}
+          sizeError={err('chainKgPerM')}
         />
         <QuantityField
           label="Chain let out"

@@ -4,17 +4,15 @@ import { useConditions, useLinkedState } from '../utils/conditions';
 import { LinkedNote } from './linked-note';
 import { Button } from '@/components/ui/button';
 import { QuantityField } from '@/components/units/quantity-field';
-import { SelectField } from '@/components/ui/select-field';
+import { ChoiceField } from '@/components/ui/choice-field';
 import { newPart, ratePart, type LinkPart, type LinkPartKind } from '../utils/link-parts';
-import { pick } from '../utils/options';
 import { fieldError, runCalc } from '../utils/run-calc';
 import { CalcCard } from './calc-card';
 import { LinkPartEditor } from './link-part-editor';
 import { NoResult, WarningList } from './result-list';
 import { WeakestLinkTable } from './weakest-link-table';
 
-const KINDS: readonly LinkPartKind[] = ['chain', 'shackle', 'rope', 'custom'];
-const KIND_OPTIONS = [
+const KIND_OPTIONS: readonly { value: LinkPartKind; label: string }[] = [
   { value: 'chain', label: 'chain' },
   { value: 'shackle', label: 'shackle' },
   { value: 'rope', label: 'rope' },
@@ -101,11 +99,11 @@ export function WeakestLinkBuilder() {
         })}
       </ol>
       <div className="flex flex-wrap items-end gap-3">
-        <SelectField
+        <ChoiceField
           label="Part to add"
           options={KIND_OPTIONS}
           value={addKind}
-          onChange={(e) => setAddKind(pick(e.target.value, KINDS, 'shackle'))}
+          onChoose={setAddKind}
         />
         <Button variant="secondary" onClick={() => setRows((list) => [...list, row(addKind)])}>
           Add part

@@ -14,13 +14,14 @@ import {
   ROPE_MATERIALS,
   SHACKLE_SIZES_IN,
   inchFractionLabel,
+  type BottomType,
   type ChainGrade,
 } from '@app/calc';
 
 /** Picker options built from the calc library's own label lists. */
 export const HULL_OPTIONS = HULL_TYPES.map((v) => ({ value: v, label: HULL_TYPE_LABELS[v] }));
 export const ANCHOR_OPTIONS = ANCHOR_TYPES.map((v) => ({ value: v, label: ANCHOR_TYPE_LABELS[v] }));
-export const BOTTOM_OPTIONS = [
+export const BOTTOM_OPTIONS: readonly { value: BottomType | ''; label: string }[] = [
   { value: '', label: 'not known (firm mud or mixed; soft mud shown too)' },
   ...BOTTOM_TYPES.map((v) => ({ value: v, label: BOTTOM_TYPE_LABELS[v] })),
 ];
@@ -41,6 +42,12 @@ export const SHACKLE_OPTIONS = SHACKLE_SIZES_IN.map((v) => ({
 /** Trade sizes the chain table holds for a grade. */
 export const chainSizeOptions = (grade: ChainGrade) =>
   CHAIN_TRADE_SIZES_IN[grade].map((v) => ({ value: String(v), label: inchFractionLabel(v) }));
+
+/** `tradeSizeIn` when the grade's table holds it, otherwise the grade's first size. */
+export function sizeInGrade(grade: ChainGrade, tradeSizeIn: number): number {
+  const sizes = CHAIN_TRADE_SIZES_IN[grade];
+  return sizes.includes(tradeSizeIn) ? tradeSizeIn : (sizes[0] ?? tradeSizeIn);
+}
 
 /** Narrows a select's string to one of `allowed`, falling back to the first. */
 export function pick<T extends string>(value: string, allowed: readonly T[], fallback: T): T {

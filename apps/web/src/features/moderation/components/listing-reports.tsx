@@ -2,9 +2,8 @@ import { formatDate } from '@app/shared/locale';
 import type { ListingReportDto } from '@app/shared';
 import type { MouseEvent } from 'react';
 import { Link } from 'react-router-dom';
-import { Button } from '@/components/ui/button';
-import { DecidedLine, DeskAlerts } from './decision-desk';
-import { cardHeight, keptHeight, useDecisionDesk, useKeptInPlace } from './use-decision-desk';
+import { DeskCard, DeskSection } from './desk-card';
+import { cardHeight, useDecisionDesk, useKeptInPlace } from './use-decision-desk';
 import { useReasonDialog } from './reason-dialog';
 
 export interface ListingReportsProps {
@@ -56,64 +55,50 @@ export function ListingReports({ reports, listingHref }: ListingReportsProps) {
       );
   };
   return (
-    <section aria-labelledby="q-listings" className="flex flex-col gap-2">
-      <h2 id="q-listings" className="text-xl">
-        Listings reported ({reports.length})
-      </h2>
-      <DeskAlerts desk={desk} />
-      {shown.length === 0 && <p>No open listing reports.</p>}
-      <ul className="flex flex-col gap-3">
-        {shown.map((r) => {
-          const key = keyOf(r);
-          const decided = desk.decidedOf(key);
-          return (
-            <li
-              key={key}
-              style={keptHeight(decided)}
-              className="flex min-w-0 flex-col gap-2 rounded-md border border-flare-700 bg-sand-50 p-3"
-            >
-              <p className="text-xs text-ink-600">
-                {r.reporterName} reported a listing on {formatDate(r.createdAt)}
-              </p>
-              <Link
-                to={listingHref(r.listingId)}
-                className="text-lg font-bold break-words underline"
-              >
-                {r.listingTitle}
-              </Link>
-              <p className="text-sm break-words">
-                <strong>Reason:</strong> {r.reason}
-              </p>
-              {decided ? (
-                <DecidedLine desk={desk} itemKey={key} title={r.listingTitle} />
-              ) : (
-                <div className="flex flex-wrap gap-2">
-                  <Button
-                    size="sm"
-                    variant="secondary"
-                    disabled={desk.isPending(key)}
-                    aria-label={`Dismiss the report on “${r.listingTitle}”`}
-                    onClick={(e) => void dismiss(r, e)}
-                  >
-                    Dismiss
-                  </Button>
-                  <Button
-                    size="sm"
-                    variant="refuse"
-                    className="sm:ml-auto"
-                    isPending={desk.isPending(key)}
-                    aria-label={`Hide listing “${r.listingTitle}”`}
-                    onClick={(e) => void hide(r, e)}
-                  >
-                    Hide listing
-                  </Button>
-                </div>
-              )}
-            </li>
-          );
-        })}
-      </ul>
+    <>
+      <DeskSection
+        id="q-listings"
+        heading={`Listings reported (${reports.length})`}
+        count={shown.length}
+        emptyText="No open listing reports."
+        ownDesk={desk}
+      >
+        {shown.map((r) => (
+          <DeskCard
+            key={keyOf(r)}
+            desk={desk}
+            itemKey={keyOf(r)}
+            title={r.listingTitle}
+            tone="report"
+            actions={[
+              {
+                label: 'Dismiss',
+                ariaLabel: `Dismiss the report on “${r.listingTitle}”`,
+                variant: 'secondary',
+                onClick: (e) => void dismiss(r, e),
+              },
+              {
+                label: 'Hide listing',
+                ariaLabel: `Hide listing “${r.listingTitle}”`,
+                variant: 'refuse',
+                showsPending: true,
+                onClick: (e) => void hide(r, e),
+              },
+            ]}
+          >
+            <p className="text-xs text-ink-600">
+              {r.reporterName} reported a listing on {formatDate(r.createdAt)}
+            </p>
+            <Link to={listingHref(r.listingId)} className="text-lg font-bold break-words underline">
+              {r.listingTitle}
+            </Link>
+            <p className="text-sm break-words">
+              <strong>Reason:</strong> {r.reason}
+            </p>
+          </DeskCard>
+        ))}
+      </DeskSection>
       {dialog}
-    </section>
+    </>
   );
 }

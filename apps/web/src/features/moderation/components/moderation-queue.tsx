@@ -7,9 +7,9 @@ import type {
 } from '@app/shared';
 import type { MouseEvent, ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { Button } from '@/components/ui/button';
-import { DecidedLine, DeskAlerts } from './decision-desk';
-import { cardHeight, keptHeight, useDecisionDesk, useKeptInPlace } from './use-decision-desk';
+import { DeskAlerts } from './decision-desk';
+import { DeskCard, DeskSection } from './desk-card';
+import { cardHeight, useDecisionDesk, useKeptInPlace } from './use-decision-desk';
 import { POST_DECISION_WORDS } from './decision-words';
 import { useReasonDialog } from './reason-dialog';
 
@@ -98,180 +98,128 @@ export function ModerationQueue({ queue, postHref, children }: ModerationQueuePr
   return (
     <div className="flex flex-col gap-6">
       <DeskAlerts desk={desk} />
-      <section aria-labelledby="q-posts" className="flex flex-col gap-2">
-        <h2 id="q-posts" className="text-xl">
-          Posts waiting ({waitingPosts})
-        </h2>
-        {posts.length === 0 && <p>Nothing waiting.</p>}
-        <ul className="flex flex-col gap-3">
-          {posts.map((p) => {
-            const key = postKey(p);
-            const decided = desk.decidedOf(key);
-            return (
-              <li
-                key={key}
-                style={keptHeight(decided)}
-                className="flex flex-col gap-2 rounded-md border border-sand-500 bg-sand-50 p-3"
-              >
-                <p className="text-xs text-ink-600">
-                  {p.kind} · {p.topic?.name} · by {p.author.displayName}
-                  {p.status === 'approved' ? ' · edit of a published post' : ''}
-                </p>
-                <Link to={postHref(p.id)} className="text-lg font-bold underline">
-                  {p.title}
-                </Link>
-                <p className="text-sm text-ink-700">{p.excerpt}</p>
-                {decided ? (
-                  <DecidedLine desk={desk} itemKey={key} title={p.title} />
-                ) : (
-                  <div className="flex flex-wrap gap-2">
-                    <Button
-                      size="sm"
-                      variant="primary"
-                      isPending={desk.isPending(key)}
-                      onClick={(e) => void decidePost(p, 'publish', e)}
-                      aria-label={`Publish “${p.title}”`}
-                    >
-                      {POST_DECISION_WORDS.publish.button}
-                    </Button>
-                    <Button
-                      size="sm"
-                      variant="secondary"
-                      disabled={desk.isPending(key)}
-                      onClick={(e) => void decidePost(p, 'send-back', e)}
-                      aria-label={`Send back “${p.title}”`}
-                    >
-                      {POST_DECISION_WORDS['send-back'].button}
-                    </Button>
-                    <Button
-                      size="sm"
-                      variant="refuse"
-                      className="sm:ml-auto"
-                      disabled={desk.isPending(key)}
-                      onClick={(e) => void decidePost(p, 'decline', e)}
-                      aria-label={`Decline “${p.title}”`}
-                    >
-                      {POST_DECISION_WORDS.decline.button}
-                    </Button>
-                  </div>
-                )}
-              </li>
-            );
-          })}
-        </ul>
-      </section>
-      <section aria-labelledby="q-comments" className="flex flex-col gap-2">
-        <h2 id="q-comments" className="text-xl">
-          Comments waiting ({queue.comments.length})
-        </h2>
-        {comments.length === 0 && <p>Nothing waiting.</p>}
-        <ul className="flex flex-col gap-3">
-          {comments.map((c) => {
-            const key = commentKey(c);
-            const decided = desk.decidedOf(key);
-            return (
-              <li
-                key={key}
-                style={keptHeight(decided)}
-                className="flex flex-col gap-2 rounded-md border border-sand-500 bg-sand-50 p-3"
-              >
-                <p className="text-xs text-ink-600">
-                  {c.author.displayName} on{' '}
-                  <Link to={postHref(c.postId)} className="underline">
-                    {c.postTitle}
+      <DeskSection id="q-posts" heading={`Posts waiting (${waitingPosts})`} count={posts.length}>
+        {posts.map((p) => (
+          <DeskCard
+            key={postKey(p)}
+            desk={desk}
+            itemKey={postKey(p)}
+            title={p.title}
+            actions={[
+              {
+                label: POST_DECISION_WORDS.publish.button,
+                ariaLabel: `Publish “${p.title}”`,
+                showsPending: true,
+                onClick: (e) => void decidePost(p, 'publish', e),
+              },
+              {
+                label: POST_DECISION_WORDS['send-back'].button,
+                ariaLabel: `Send back “${p.title}”`,
+                variant: 'secondary',
+                onClick: (e) => void decidePost(p, 'send-back', e),
+              },
+              {
+                label: POST_DECISION_WORDS.decline.button,
+                ariaLabel: `Decline “${p.title}”`,
+                variant: 'refuse',
+                onClick: (e) => void decidePost(p, 'decline', e),
+              },
+            ]}
+          >
+            <p className="text-xs text-ink-600">
+              {p.kind} · {p.topic?.name} · by {p.author.displayName}
+              {p.status === 'approved' ? ' · edit of a published post' : ''}
+            </p>
+            <Link to={postHref(p.id)} className="text-lg font-bold underline">
+              {p.title}
+            </Link>
+            <p className="text-sm text-ink-700">{p.excerpt}</p>
+          </DeskCard>
+        ))}
+      </DeskSection>
+      <DeskSection
+        id="q-comments"
+        heading={`Comments waiting (${queue.comments.length})`}
+        count={comments.length}
+      >
+        {comments.map((c) => (
+          <DeskCard
+            key={commentKey(c)}
+            desk={desk}
+            itemKey={commentKey(c)}
+            title={c.postTitle}
+            actions={[
+              {
+                label: 'Publish',
+                ariaLabel: `Publish the comment by ${c.author.displayName}`,
+                showsPending: true,
+                onClick: (e) => void decideComment(c, 'publish', e),
+              },
+              {
+                label: 'Decline…',
+                ariaLabel: `Decline the comment by ${c.author.displayName}`,
+                variant: 'refuse',
+                onClick: (e) => void decideComment(c, 'decline', e),
+              },
+            ]}
+          >
+            <p className="text-xs text-ink-600">
+              {c.author.displayName} on{' '}
+              <Link to={postHref(c.postId)} className="underline">
+                {c.postTitle}
+              </Link>
+            </p>
+            <p className="whitespace-pre-line">{c.body}</p>
+          </DeskCard>
+        ))}
+      </DeskSection>
+      <DeskSection
+        id="q-reports"
+        heading={`Reports (${queue.reports.length})`}
+        count={reports.length}
+        emptyText="No open reports."
+      >
+        {reports.map((r) => (
+          <DeskCard
+            key={reportKey(r)}
+            desk={desk}
+            itemKey={reportKey(r)}
+            title={r.targetTitle}
+            tone="report"
+            actions={[
+              {
+                label: 'Dismiss',
+                variant: 'secondary',
+                onClick: (e) => void resolve(r, 'dismiss', e),
+              },
+              {
+                label: `Hide the ${r.targetType}`,
+                variant: 'refuse',
+                onClick: (e) => void resolve(r, 'hide-target', e),
+              },
+            ]}
+          >
+            <p className="text-xs text-ink-600">
+              {r.reporter.displayName} reported a {r.targetType}
+              {r.postId ? (
+                <>
+                  {' '}
+                  on{' '}
+                  <Link to={postHref(r.postId)} className="underline">
+                    {r.targetTitle}
                   </Link>
-                </p>
-                <p className="whitespace-pre-line">{c.body}</p>
-                {decided ? (
-                  <DecidedLine desk={desk} itemKey={key} title={c.postTitle} />
-                ) : (
-                  <div className="flex flex-wrap gap-2">
-                    <Button
-                      size="sm"
-                      isPending={desk.isPending(key)}
-                      aria-label={`Publish the comment by ${c.author.displayName}`}
-                      onClick={(e) => void decideComment(c, 'publish', e)}
-                    >
-                      Publish
-                    </Button>
-                    <Button
-                      size="sm"
-                      variant="refuse"
-                      className="sm:ml-auto"
-                      disabled={desk.isPending(key)}
-                      aria-label={`Decline the comment by ${c.author.displayName}`}
-                      onClick={(e) => void decideComment(c, 'decline', e)}
-                    >
-                      Decline…
-                    </Button>
-                  </div>
-                )}
-              </li>
-            );
-          })}
-        </ul>
-      </section>
-      <section aria-labelledby="q-reports" className="flex flex-col gap-2">
-        <h2 id="q-reports" className="text-xl">
-          Reports ({queue.reports.length})
-        </h2>
-        {reports.length === 0 && <p>No open reports.</p>}
-        <ul className="flex flex-col gap-3">
-          {reports.map((r) => {
-            const key = reportKey(r);
-            const decided = desk.decidedOf(key);
-            return (
-              <li
-                key={key}
-                style={keptHeight(decided)}
-                className="flex flex-col gap-2 rounded-md border border-flare-700 bg-sand-50 p-3"
-              >
-                <p className="text-xs text-ink-600">
-                  {r.reporter.displayName} reported a {r.targetType}
-                  {r.postId ? (
-                    <>
-                      {' '}
-                      on{' '}
-                      <Link to={postHref(r.postId)} className="underline">
-                        {r.targetTitle}
-                      </Link>
-                    </>
-                  ) : null}
-                </p>
-                <blockquote className="border-l-4 border-sand-500 pl-2 text-sm">
-                  {r.targetExcerpt}
-                </blockquote>
-                <p className="text-sm">
-                  <strong>Reason:</strong> {r.reason}
-                </p>
-                {decided ? (
-                  <DecidedLine desk={desk} itemKey={key} title={r.targetTitle} />
-                ) : (
-                  <div className="flex flex-wrap gap-2">
-                    <Button
-                      size="sm"
-                      variant="secondary"
-                      disabled={desk.isPending(key)}
-                      onClick={(e) => void resolve(r, 'dismiss', e)}
-                    >
-                      Dismiss
-                    </Button>
-                    <Button
-                      size="sm"
-                      variant="refuse"
-                      className="sm:ml-auto"
-                      disabled={desk.isPending(key)}
-                      onClick={(e) => void resolve(r, 'hide-target', e)}
-                    >
-                      Hide the {r.targetType}
-                    </Button>
-                  </div>
-                )}
-              </li>
-            );
-          })}
-        </ul>
-      </section>
+                </>
+              ) : null}
+            </p>
+            <blockquote className="border-l-4 border-sand-500 pl-2 text-sm">
+              {r.targetExcerpt}
+            </blockquote>
+            <p className="text-sm">
+              <strong>Reason:</strong> {r.reason}
+            </p>
+          </DeskCard>
+        ))}
+      </DeskSection>
       {children}
       {dialog}
     </div>

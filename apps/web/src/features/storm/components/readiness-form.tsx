@@ -2,10 +2,11 @@ import type { ReadinessDto, ReadinessInput, StormChecklistItem, StormLocation } 
 import { STORM_LOCATION_LABELS, STORM_LOCATIONS } from '@app/shared/values';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
+import { CheckboxGroup } from '@/components/ui/checkbox-group';
 import { FormError } from '@/components/ui/form-error';
 import { SelectField } from '@/components/ui/select-field';
 import { TextField } from '@/components/ui/text-field';
-import { applyServerErrors } from '@/lib/form-errors';
+import { sendChecked } from '@/lib/form-errors';
 import { loadFormSchemas, preloadFormSchemas } from '@/lib/lazy-schema';
 
 preloadFormSchemas();
@@ -20,6 +21,15 @@ interface FormValues {
 }
 
 const FIELDS = ['location', 'planId', 'depthM', 'ticked', 'helpNote'] as const;
+
+const toInput = (v: FormValues): ReadinessInput => ({
+  location: v.location === '' ? null : v.location,
+  planId: v.planId ? Number(v.planId) : null,
+  depthM: v.depthM.trim() === '' ? null : Number(v.depthM),
+  ticked: v.ticked,
+  helpWanted: v.helpWanted,
+  helpNote: v.helpNote,
+});
 
 export interface ReadinessFormProps {
   readiness: ReadinessDto;
@@ -50,29 +60,15 @@ export function ReadinessForm({
   });
   const errors = formState.errors;
   const helpWanted = useWatch({ control, name: 'helpWanted' });
-  const submit = handleSubmit(async (v) => {
-    const input: ReadinessInput = {
-      location: v.location === '' ? null : v.location,
-      planId: v.planId ? Number(v.planId) : null,
-      depthM: v.depthM.trim() === '' ? null : Number(v.depthM),
-      ticked: v.ticked,
-      helpWanted: v.helpWanted,
-      helpNote: v.helpNote,
-    };
-    const parsed = (await loadFormSchemas()).readinessInputSchema.safeParse(input);
-    if (!parsed.success) {
-      for (const issue of parsed.error.issues) {
-        const field = FIELDS.find((f) => f === issue.path[0]);
-        if (field) setError(field, { type: 'client', message: issue.message });
-      }
-      return;
-    }
-    try {
-      await onSubmit(input);
-    } catch (err) {
-      applyServerErrors(err, setError, FIELDS);
-    }
-  });
+  const submit = handleSubmit(async (v) =>
+    sendChecked(
+      (await loadFormSchemas()).readinessInputSchema,
+      toInput(v),
+      onSubmit,
+      setError,
+      FIELDS,
+    ),
+  );
   return (
     <form onSubmit={(e) => void submit(e)} noValidate className="flex max-w-2xl flex-col gap-4">
       <SelectField
@@ -105,18 +101,12 @@ export function ReadinessForm({
         {...register('depthM')}
         error={errors.depthM?.message}
       />
-      <fieldset className="flex flex-col gap-1">
-        <legend className="text-sm font-bold">Checklist</legend>
-        {checklist.map((item) => (
-          <label key={item.id} className="flex min-h-11 items-center gap-2">
-            <input type="checkbox" value={item.id} {...register('ticked')} className="size-5" />
-            {item.label}
-          </label>
-        ))}
-        {errors.ticked && (
-          <p className="text-sm font-bold text-flare-700">{errors.ticked.message}</p>
-        )}
-      </fieldset>
+      <CheckboxGroup
+        legend="Checklist"
+        options={checklist.map((item) => ({ value: item.id, label: item.label }))}
+        {...register('ticked')}
+        error={errors.ticked?.message}
+      />
       <label className="flex min-h-11 items-center gap-2 font-bold">
         <input type="checkbox" {...register('helpWanted')} className="size-5" />
         Help wanted with this boat

@@ -1,9 +1,10 @@
 import type { HarborDto, StormWatchInput } from '@app/shared';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
+import { CheckboxGroup } from '@/components/ui/checkbox-group';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
-import { applyServerErrors } from '@/lib/form-errors';
+import { sendChecked } from '@/lib/form-errors';
 import { loadFormSchemas, preloadFormSchemas } from '@/lib/lazy-schema';
 
 preloadFormSchemas();
@@ -38,6 +39,18 @@ const toIso = (local: string) => {
 };
 const num = (s: string) => (s.trim() === '' ? Number.NaN : Number(s));
 
+const toInput = (v: FormValues): StormWatchInput => ({
+  name: v.name,
+  sustainedKn: num(v.sustainedKn),
+  gustKn: num(v.gustKn),
+  surgeM: num(v.surgeM || '0'),
+  arrivesAt: toIso(v.arrivesAt),
+  endsAt: toIso(v.endsAt),
+  harborIds: v.harborIds.map(Number),
+  note: v.note,
+  shareDetails: v.shareDetails,
+});
+
 export interface WatchFormProps {
   harbors: readonly HarborDto[];
   isPending: boolean;
@@ -61,37 +74,15 @@ export function WatchForm({ harbors, isPending, onSubmit }: WatchFormProps) {
   });
   const { register, handleSubmit, setError, formState } = form;
   const errors = formState.errors;
-  const submit = handleSubmit(async (v) => {
-    const input: StormWatchInput = {
-      name: v.name,
-      sustainedKn: num(v.sustainedKn),
-      gustKn: num(v.gustKn),
-      surgeM: num(v.surgeM || '0'),
-      arrivesAt: toIso(v.arrivesAt),
-      endsAt: toIso(v.endsAt),
-      harborIds: v.harborIds.map(Number),
-      note: v.note,
-      shareDetails: v.shareDetails,
-    };
-    // The same schema the server uses, so the messages match.
-    const parsed = (await loadFormSchemas()).stormWatchInputSchema.safeParse(input);
-    if (!parsed.success) {
-      let first = true;
-      for (const issue of parsed.error.issues) {
-        const field = FIELDS.find((f) => f === issue.path[0]);
-        if (field) {
-          setError(field, { type: 'client', message: issue.message }, { shouldFocus: first });
-          first = false;
-        }
-      }
-      return;
-    }
-    try {
-      await onSubmit(input);
-    } catch (err) {
-      applyServerErrors(err, setError, FIELDS);
-    }
-  });
+  const submit = handleSubmit(async (v) =>
+    sendChecked(
+      (await loadFormSchemas()).stormWatchInputSchema,
+      toInput(v),
+      onSubmit,
+      setError,
+      FIELDS,
+    ),
+  );
   return (
     <form onSubmit={(e) => void submit(e)} noValidate className="flex max-w-2xl flex-col gap-4">
       <TextField
@@ -140,28 +131,12 @@ export function WatchForm({ harbors, isPending, onSubmit }: WatchFormProps) {
           error={errors.endsAt?.message}
         />
       </div>
-      <fieldset
-        className="flex flex-col gap-1"
-        aria-describedby={errors.harborIds ? 'harbors-error' : undefined}
-      >
-        <legend className="text-sm font-bold">Harbours affected</legend>
-        {harbors.map((h) => (
-          <label key={h.id} className="flex min-h-11 items-center gap-2">
-            <input
-              type="checkbox"
-              value={String(h.id)}
-              {...register('harborIds')}
-              className="size-5"
-            />
-            {h.name}
-          </label>
-        ))}
-        {errors.harborIds && (
-          <p id="harbors-error" className="text-sm font-bold text-flare-700">
-            {errors.harborIds.message}
-          </p>
-        )}
-      </fieldset>
+      <CheckboxGroup
+        legend="Harbours affected"
+        options={harbors.map((h) => ({ value: String(h.id), label: h.name }))}
+        {...register('harborIds')}
+        error={errors.harborIds?.message}
+      />
       <div className="flex flex-col gap-1">
         <label htmlFor="watch-note" className="text-sm font-bold">
           Note to members

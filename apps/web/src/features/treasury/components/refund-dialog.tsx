@@ -1,10 +1,12 @@
 import type { PaymentDto, RefundInput, ReturnedInput } from '@app/shared';
 import { formatMoney } from '@app/shared/locale';
-import { useEffect, useId, useMemo, useRef, useState } from 'react';
+import { useId, useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
+import { DialogButtons } from '@/components/ui/dialog-buttons';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
+import { Modal } from '@/components/ui/modal';
 import { ApiError } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
 import { minorToInput, moneyMessage, parseMoney } from '../utils/money';
@@ -49,7 +51,6 @@ export function RefundDialog({
   startReturned = false,
   onClose,
 }: RefundDialogProps) {
-  const dialogRef = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   const left = refundableMinor(payment);
   const [mode, setMode] = useState<'refund' | 'returned'>(startReturned ? 'returned' : 'refund');
@@ -69,22 +70,6 @@ export function RefundDialog({
     defaultValues: { amount: minorToInput(left, payment.currency), reason: '' },
   });
 
-  useEffect(() => {
-    const dialog = dialogRef.current;
-    if (!dialog) return;
-    const returnFocusTo =
-      document.activeElement instanceof HTMLElement ? document.activeElement : null;
-    // jsdom lacks showModal; the open attribute still shows the dialog there.
-    if (typeof dialog.showModal === 'function') dialog.showModal();
-    else dialog.setAttribute('open', '');
-    if (!startReturned) setFocus('amount', { shouldSelect: true });
-    return () => {
-      if (typeof dialog.close === 'function' && dialog.open) dialog.close();
-      else dialog.removeAttribute('open');
-      returnFocusTo?.focus();
-    };
-  }, [setFocus, startReturned]);
-
   const submit = handleSubmit(async ({ amount, reason }) => {
     try {
       await onSubmit({ amountMinor: parseMoney(amount, payment.currency) ?? 0, reason });
@@ -100,14 +85,12 @@ export function RefundDialog({
   });
 
   return (
-    <dialog
-      ref={dialogRef}
-      aria-labelledby={titleId}
-      onCancel={(event) => {
-        event.preventDefault();
-        onClose();
+    <Modal
+      labelledBy={titleId}
+      onShown={() => {
+        if (!startReturned) setFocus('amount', { shouldSelect: true });
       }}
-      className="m-auto w-[min(30rem,calc(100vw-2rem))] rounded-lg border border-sand-300 bg-sand-50 p-0 text-ink-900 shadow-card backdrop:bg-ink-950/50"
+      onCancel={onClose}
     >
       {mode === 'returned' && onReturned ? (
         <div className="flex flex-col gap-4 p-5">
@@ -165,10 +148,7 @@ export function RefundDialog({
             error={errors.reason?.message}
             {...register('reason')}
           />
-          <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-            <Button variant="secondary" onClick={onClose} disabled={isSubmitting}>
-              Cancel
-            </Button>
+          <DialogButtons onCancel={onClose} isPending={isSubmitting}>
             <Button
               type="submit"
               variant="danger"
@@ -177,9 +157,9 @@ export function RefundDialog({
             >
               Refund
             </Button>
-          </div>
+          </DialogButtons>
         </form>
       )}
-    </dialog>
+    </Modal>
   );
 }

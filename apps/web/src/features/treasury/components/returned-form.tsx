@@ -4,6 +4,7 @@ import { formatMoney } from '@app/shared/locale';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
+import { DialogButtons } from '@/components/ui/dialog-buttons';
 import { FormError } from '@/components/ui/form-error';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
@@ -81,14 +82,11 @@ export function ReturnedForm({
         error={errors.note?.message}
         {...register('note')}
       />
-      <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-        <Button variant="secondary" onClick={onCancel} disabled={isSubmitting}>
-          Cancel
-        </Button>
+      <DialogButtons onCancel={onCancel} isPending={isSubmitting}>
         <Button type="submit" isPending={isSubmitting} pendingLabel="Recording…">
           Record {formatMoney(leftMinor, payment.currency)} returned
         </Button>
-      </div>
+      </DialogButtons>
     </form>
   );
 }
