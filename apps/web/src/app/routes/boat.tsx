@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { Suspense, useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -12,7 +12,6 @@ import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useDeleteBoat } from '@/features/boats/api/delete-boat';
 import { useBoat } from '@/features/boats/api/get-boat';
 import { useUpdateBoat } from '@/features/boats/api/update-boat';
-import { BoatForm } from '@/features/boats/components/boat-form';
 import {
   BoatRecommendation,
   type PlanDraft,
@@ -24,6 +23,10 @@ import { Quantity } from '@/components/units/quantity';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
 import { IdParams } from '../id-params';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// The profile form sits in a closed details box: it loads after the recommendation.
+const BoatForm = lazyNamed(() => import('@/features/boats/components/boat-form'), 'BoatForm');
 
 function PlanList({ boatId }: { boatId: number }) {
   const plans = useTacklePlans(boatId);
@@ -101,14 +104,16 @@ function BoatScreen({ boatId }: { boatId: number }) {
       <details className="rounded-lg border border-sand-300 bg-sand-50 p-4">
         <summary className="cursor-pointer font-bold">Edit the boat profile</summary>
         <div className="mt-3 max-w-2xl">
-          <BoatForm
-            key={boat.data.updatedAt}
-            boat={boat.data}
-            harbors={club.data?.harbors ?? []}
-            submitLabel="Save profile"
-            isPending={update.isPending}
-            onSubmit={(input) => update.mutateAsync(input)}
-          />
+          <Suspense fallback={<Spinner label="Loading the form…" />}>
+            <BoatForm
+              key={boat.data.updatedAt}
+              boat={boat.data}
+              harbors={club.data?.harbors ?? []}
+              submitLabel="Save profile"
+              isPending={update.isPending}
+              onSubmit={(input) => update.mutateAsync(input)}
+            />
+          </Suspense>
         </div>
         <Button variant="danger" className="mt-4" onClick={() => setConfirmDelete(true)}>
           Delete this boat

@@ -1,3 +1,4 @@
+import { Suspense } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -8,11 +9,14 @@ import { errorMessage } from '@/lib/form-errors';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useCreateBoat } from '@/features/boats/api/create-boat';
 import { useBoats } from '@/features/boats/api/get-boats';
-import { BoatForm } from '@/features/boats/components/boat-form';
 import { useClub } from '@/features/club/api/get-club';
 import { Quantity } from '@/components/units/quantity';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// The form (and the form library) arrives just after the list of boats above it.
+const BoatForm = lazyNamed(() => import('@/features/boats/components/boat-form'), 'BoatForm');
 
 function BoatsScreen() {
   const boats = useBoats();
@@ -62,15 +66,17 @@ function BoatsScreen() {
         <h2 id="new-boat-heading" className="text-xl">
           Add a boat
         </h2>
-        <BoatForm
-          harbors={club.data?.harbors ?? []}
-          submitLabel="Add boat"
-          isPending={create.isPending}
-          onSubmit={async (input) => {
-            const boat = await create.mutateAsync(input);
-            await navigate(paths.boat.href(boat.id));
-          }}
-        />
+        <Suspense fallback={<Spinner label="Loading the form…" />}>
+          <BoatForm
+            harbors={club.data?.harbors ?? []}
+            submitLabel="Add boat"
+            isPending={create.isPending}
+            onSubmit={async (input) => {
+              const boat = await create.mutateAsync(input);
+              await navigate(paths.boat.href(boat.id));
+            }}
+          />
+        </Suspense>
       </section>
     </Page>
   );

@@ -1,17 +1,38 @@
+import { Suspense } from 'react';
 import { Alert } from '@/components/ui/alert';
+import { Spinner } from '@/components/ui/spinner';
 import { Page } from '@/components/ui/page';
-import { AnchorCalculator } from '@/features/calculators/components/anchor-calculator';
 import { DesignLoadCalculator } from '@/features/calculators/components/design-load-calculator';
-import { RatingsCalculator } from '@/features/calculators/components/ratings-calculator';
-import { ScopeCalculator } from '@/features/calculators/components/scope-calculator';
-import { SwingCircleCalculator } from '@/features/calculators/components/swing-circle-calculator';
-import { WeakestLinkBuilder } from '@/features/calculators/components/weakest-link-builder';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import { useCurrentUser } from '@/features/auth/api/get-session';
 import { useBoats } from '@/features/boats/api/get-boats';
 import { ConditionsBlock } from '@/features/calculators/components/conditions-block';
 import { ConditionsProvider } from '@/features/calculators/components/conditions-provider';
+import { lazyNamed } from '@/lib/lazy-named';
 import { TackleUnits } from './calculators-units';
+
+// The boat block and the design load come with the page; the calculators below them follow at once, in
+// chunks of their own, so the first screenful on a phone does not wait for all six.
+const AnchorCalculator = lazyNamed(
+  () => import('@/features/calculators/components/anchor-calculator'),
+  'AnchorCalculator',
+);
+const RatingsCalculator = lazyNamed(
+  () => import('@/features/calculators/components/ratings-calculator'),
+  'RatingsCalculator',
+);
+const WeakestLinkBuilder = lazyNamed(
+  () => import('@/features/calculators/components/weakest-link-builder'),
+  'WeakestLinkBuilder',
+);
+const ScopeCalculator = lazyNamed(
+  () => import('@/features/calculators/components/scope-calculator'),
+  'ScopeCalculator',
+);
+const SwingCircleCalculator = lazyNamed(
+  () => import('@/features/calculators/components/swing-circle-calculator'),
+  'SwingCircleCalculator',
+);
 
 /** The signed-in member's boats for the conditions block (none for a visitor). */
 function MemberConditionsBlock() {
@@ -53,11 +74,13 @@ export function CalculatorsRoute() {
           <div className="grid gap-6">
             <MemberConditionsBlock />
             <DesignLoadCalculator />
-            <AnchorCalculator />
-            <RatingsCalculator />
-            <WeakestLinkBuilder />
-            <ScopeCalculator />
-            <SwingCircleCalculator />
+            <Suspense fallback={<Spinner label="Loading the calculators…" />}>
+              <AnchorCalculator />
+              <RatingsCalculator />
+              <WeakestLinkBuilder />
+              <ScopeCalculator />
+              <SwingCircleCalculator />
+            </Suspense>
           </div>
         </ConditionsProvider>
       </Page>

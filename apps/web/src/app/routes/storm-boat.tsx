@@ -1,3 +1,4 @@
+import { Suspense } from 'react';
 import { STORM_LOCATION_LABELS } from '@app/shared/values';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
@@ -10,11 +11,17 @@ import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useTacklePlans } from '@/features/tackle-plans/api/get-tackle-plans';
 import { useReadiness, useSaveReadiness } from '@/features/storm/api/readiness';
 import { CheckPanel } from '@/features/storm/components/check-panel';
-import { ReadinessForm } from '@/features/storm/components/readiness-form';
 import { StatusBadge } from '@/features/storm/components/status-badge';
 import { StormCautions } from '@/features/storm/components/storm-cautions';
 import { TackleUnits } from './calculators-units';
 import { IdParams } from '../id-params';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// Only the boat's owner sees the readiness form; it loads after the check above it.
+const ReadinessForm = lazyNamed(
+  () => import('@/features/storm/components/readiness-form'),
+  'ReadinessForm',
+);
 
 function OwnerForm({ watchId, boatId }: { watchId: number; boatId: number }) {
   const query = useReadiness(watchId, boatId);
@@ -28,14 +35,16 @@ function OwnerForm({ watchId, boatId }: { watchId: number; boatId: number }) {
         Your readiness
       </h2>
       {save.isSuccess && <Alert tone="success">Saved. The board shows it now.</Alert>}
-      <ReadinessForm
-        key={readiness.details?.updatedAt ?? 'new'}
-        readiness={readiness}
-        checklist={watch.checklist}
-        plans={plans.data ?? []}
-        isPending={save.isPending}
-        onSubmit={(input) => save.mutateAsync(input)}
-      />
+      <Suspense fallback={<Spinner label="Loading the form…" />}>
+        <ReadinessForm
+          key={readiness.details?.updatedAt ?? 'new'}
+          readiness={readiness}
+          checklist={watch.checklist}
+          plans={plans.data ?? []}
+          isPending={save.isPending}
+          onSubmit={(input) => save.mutateAsync(input)}
+        />
+      </Suspense>
     </section>
   );
 }

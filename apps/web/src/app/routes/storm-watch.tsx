@@ -1,3 +1,4 @@
+import { Suspense } from 'react';
 import { formatDateTime } from '@app/shared/locale';
 import type { ReadinessDto, StormWatchDto } from '@app/shared';
 import { Link } from 'react-router-dom';
@@ -13,12 +14,15 @@ import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useClub } from '@/features/club/api/get-club';
 import { useWatch } from '@/features/storm/api/get-watch';
 import { useCloseWatch } from '@/features/storm/api/manage-watch';
-import { CloseForm } from '@/features/storm/components/close-form';
 import { MarginBadge } from '@/features/storm/components/margin-badge';
 import { StatusBadge } from '@/features/storm/components/status-badge';
 import { StormCautions } from '@/features/storm/components/storm-cautions';
 import { isModeratorOrAdmin } from '@/lib/roles';
 import { IdParams } from '../id-params';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// Only the organiser sees the close form.
+const CloseForm = lazyNamed(() => import('@/features/storm/components/close-form'), 'CloseForm');
 
 const when = (iso: string) => formatDateTime(iso);
 
@@ -162,7 +166,9 @@ function WatchScreen({ watchId }: { watchId: number }) {
             Close the watch
           </h2>
           {close.isSuccess && <Alert tone="success">The watch is closed.</Alert>}
-          <CloseForm isPending={close.isPending} onSubmit={(input) => close.mutateAsync(input)} />
+          <Suspense fallback={<Spinner label="Loading the form…" />}>
+            <CloseForm isPending={close.isPending} onSubmit={(input) => close.mutateAsync(input)} />
+          </Suspense>
         </section>
       )}
     </Page>

@@ -1,3 +1,4 @@
+import { Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
@@ -7,8 +8,14 @@ import { errorMessage } from '@/lib/form-errors';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useDuesCalendar, useSaveCalendar } from '@/features/treasury/api/dues-calendar';
 import { useMembershipPlans } from '@/features/treasury/api/get-membership-plans';
-import { CalendarForm } from '@/features/treasury/components/calendar-form';
 import { MembershipPlanList } from '@/features/treasury/components/membership-plan-list';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// The calendar form loads after the plans above it.
+const CalendarForm = lazyNamed(
+  () => import('@/features/treasury/components/calendar-form'),
+  'CalendarForm',
+);
 
 function PlansScreen() {
   const plans = useMembershipPlans();
@@ -55,13 +62,15 @@ function PlansScreen() {
           </Alert>
         )}
         {calendar.data && (
-          <CalendarForm
-            // A fresh form after each save, so the saved values become the new baseline.
-            key={JSON.stringify(calendar.data.calendar)}
-            saved={calendar.data}
-            isPending={save.isPending}
-            onSubmit={(input) => save.mutateAsync(input)}
-          />
+          <Suspense fallback={<Spinner label="Loading the form…" />}>
+            <CalendarForm
+              // A fresh form after each save, so the saved values become the new baseline.
+              key={JSON.stringify(calendar.data.calendar)}
+              saved={calendar.data}
+              isPending={save.isPending}
+              onSubmit={(input) => save.mutateAsync(input)}
+            />
+          </Suspense>
         )}
       </section>
     </Page>

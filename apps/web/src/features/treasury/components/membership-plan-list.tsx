@@ -1,11 +1,15 @@
 import type { PlanDto } from '@app/shared';
 import { PLAN_KIND_LABELS, PRORATION_LABELS } from '@app/shared/values';
 import { formatMoney } from '@app/shared/locale';
-import { useState } from 'react';
+import { Suspense, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { useCreateMembershipPlan, useUpdateMembershipPlan } from '../api/save-membership-plan';
-import { MembershipPlanForm } from './membership-plan-form';
+import { Spinner } from '@/components/ui/spinner';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// Opened by Edit or New plan, so the form (and the form library) loads then.
+const MembershipPlanForm = lazyNamed(() => import('./membership-plan-form'), 'MembershipPlanForm');
 
 function PlanCard({ plan }: { plan: PlanDto }) {
   const update = useUpdateMembershipPlan();
@@ -53,16 +57,18 @@ function PlanCard({ plan }: { plan: PlanDto }) {
         </p>
       )}
       {isEditing ? (
-        <MembershipPlanForm
-          plan={plan}
-          isPending={update.isPending}
-          onCancel={() => setIsEditing(false)}
-          onSubmit={async ({ code: _code, ...patch }) => {
-            await update.mutateAsync({ planId: plan.id, ...patch });
-            setIsEditing(false);
-            setSaved(true);
-          }}
-        />
+        <Suspense fallback={<Spinner label="Loading the form…" />}>
+          <MembershipPlanForm
+            plan={plan}
+            isPending={update.isPending}
+            onCancel={() => setIsEditing(false)}
+            onSubmit={async ({ code: _code, ...patch }) => {
+              await update.mutateAsync({ planId: plan.id, ...patch });
+              setIsEditing(false);
+              setSaved(true);
+            }}
+          />
+        </Suspense>
       ) : (
         <div>
           <Button
@@ -102,15 +108,17 @@ export function MembershipPlanList({ plans }: { plans: PlanDto[] }) {
           <h3 id="new-plan-heading" className="mb-3 text-lg">
             New plan
           </h3>
-          <MembershipPlanForm
-            isPending={create.isPending}
-            onCancel={() => setIsAdding(false)}
-            onSubmit={async (input) => {
-              const plan = await create.mutateAsync(input);
-              setIsAdding(false);
-              setCreated(plan.active ? plan.name : null);
-            }}
-          />
+          <Suspense fallback={<Spinner label="Loading the form…" />}>
+            <MembershipPlanForm
+              isPending={create.isPending}
+              onCancel={() => setIsAdding(false)}
+              onSubmit={async (input) => {
+                const plan = await create.mutateAsync(input);
+                setIsAdding(false);
+                setCreated(plan.active ? plan.name : null);
+              }}
+            />
+          </Suspense>
         </section>
       ) : (
         <div>
