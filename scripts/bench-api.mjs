@@ -8,6 +8,8 @@
 //   BENCH_API_ROUTES=1 (also load each route of the mix alone, 5 s at 50 connections, to find a slow one)
 //   BENCH_API_SIGNINS=10 (connections signing in during the "reads + sign-ins" run at 50 read connections; 0 skips it)
 //   BENCH_LIGHTHOUSE=0 (skip the Lighthouse audits that run against the same server after the load)
+//   BENCH_API_PROFILE=1 (the API process writes a V8 CPU profile into .data/bench/profile/ when it stops; open the
+//   largest .cpuprofile in Chrome DevTools or speedscope)
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, openSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -68,22 +70,33 @@ if (!existsSync(join(WEB_DIST, 'index.html'))) {
 }
 
 const apiLog = join(OUT_DIR, 'api-server.log');
-const server = spawn(TSX, ['apps/api/src/server.ts'], {
-  cwd: ROOT,
-  env: {
-    ...process.env,
-    ...common,
-    // Production settings on loopback without TLS, as `npm start` runs it; warnings and errors go to a file.
-    LOG_LEVEL: 'warn',
-    PORT: String(PORT),
-    PUBLIC_URL: BASE,
-    COOKIE_SECURE: 'false',
-    WEB_DIST,
-    SMTP_PORT: String(PORT + 15),
-    OUTBOX_INTERVAL_MS: '60000',
+const profileDir = join(OUT_DIR, 'profile');
+const profile = process.env.BENCH_API_PROFILE === '1';
+if (profile) mkdirSync(profileDir, { recursive: true });
+// Node refuses --cpu-prof in NODE_OPTIONS, so a profiled run starts node itself with tsx as its loader.
+const server = spawn(
+  profile ? process.execPath : TSX,
+  [
+    ...(profile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`, '--import', 'tsx'] : []),
+    'apps/api/src/server.ts',
+  ],
+  {
+    cwd: ROOT,
+    env: {
+      ...process.env,
+      ...common,
+      // Production settings on loopback without TLS, as `npm start` runs it; warnings and errors go to a file.
+      LOG_LEVEL: 'warn',
+      PORT: String(PORT),
+      PUBLIC_URL: BASE,
+      COOKIE_SECURE: 'false',
+      WEB_DIST,
+      SMTP_PORT: String(PORT + 15),
+      OUTBOX_INTERVAL_MS: '60000',
+    },
+    stdio: ['ignore', openSync(apiLog, 'w'), openSync(apiLog, 'a')],
   },
-  stdio: ['ignore', openSync(apiLog, 'w'), openSync(apiLog, 'a')],
-});
+);
 const stop = () => stopService(server);
 process.on('SIGINT', () => void stop().then(() => process.exit(130)));
 
