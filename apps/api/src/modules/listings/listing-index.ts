@@ -87,6 +87,15 @@ export function ensureListingIndex(): Promise<void> {
   return ready;
 }
 
+const rereadListeners: ((ids: readonly number[]) => void)[] = [];
+/**
+ * Calls `fn` with the ids of listings re-read after a write, in this process or (through the catch-up) another
+ * one, so copies of those listings' pages can be dropped.
+ */
+export function onListingsReread(fn: (ids: readonly number[]) => void) {
+  rereadListeners.push(fn);
+}
+
 /**
  * Re-reads listings in one query: each indexed when active and visible, removed otherwise. The result cache is
  * emptied once, and only when the index changed (a listing that was neither indexed nor is now changes nothing).
@@ -113,6 +122,7 @@ async function reread(ids: readonly number[]): Promise<Row[]> {
     cache.clear();
     version += 1;
   }
+  for (const fn of rereadListeners) fn(ids);
   return rows;
 }
 
