@@ -8,6 +8,8 @@
 //   BENCH_API_ROUTES=1 (also load each route of the mix alone, 5 s at 50 connections, to find a slow one)
 //   BENCH_API_SIGNINS=10 (connections signing in during the "reads + sign-ins" run at 50 read connections; 0 skips it)
 //   BENCH_LIGHTHOUSE=0 (skip the Lighthouse audits that run against the same server after the load)
+//   BENCH_API_PROFILE=1 (the API process writes a V8 CPU profile into .data/bench/profile/ when it stops; open the
+//   largest .cpuprofile in Chrome DevTools or speedscope)
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, openSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -29,6 +31,9 @@ const DB = process.env.BENCH_API_DB ?? 'rodewise_bench_api';
 const SECONDS = Number(process.env.BENCH_API_SECONDS ?? 20);
 const LEVELS = (process.env.BENCH_API_CONNECTIONS ?? '50,200').split(',').map(Number);
 const SIGNINS = Number(process.env.BENCH_API_SIGNINS ?? 10);
+/** Targets: the mix's share of the ceiling at every level, and how far sign-ins may move the reads' p99. */
+const SHARE_TARGET = 50;
+const SIGNIN_P99_FACTOR = 2;
 const OUT_DIR = join(ROOT, '.data', 'bench');
 // Its own build (npm run bench empties .data/bench first), so a stale dist/web is never what gets measured.
 const WEB_DIST = process.env.BENCH_WEB_DIST ?? join(OUT_DIR, 'web');
@@ -68,22 +73,33 @@ if (!existsSync(join(WEB_DIST, 'index.html'))) {
 }
 
 const apiLog = join(OUT_DIR, 'api-server.log');
-const server = spawn(TSX, ['apps/api/src/server.ts'], {
-  cwd: ROOT,
-  env: {
-    ...process.env,
-    ...common,
-    // Production settings on loopback without TLS, as `npm start` runs it; warnings and errors go to a file.
-    LOG_LEVEL: 'warn',
-    PORT: String(PORT),
-    PUBLIC_URL: BASE,
-    COOKIE_SECURE: 'false',
-    WEB_DIST,
-    SMTP_PORT: String(PORT + 15),
-    OUTBOX_INTERVAL_MS: '60000',
+const profileDir = join(OUT_DIR, 'profile');
+const profile = process.env.BENCH_API_PROFILE === '1';
+if (profile) mkdirSync(profileDir, { recursive: true });
+// Node refuses --cpu-prof in NODE_OPTIONS, so a profiled run starts node itself with tsx as its loader.
+const server = spawn(
+  profile ? process.execPath : TSX,
+  [
+    ...(profile ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`, '--import', 'tsx'] : []),
+    'apps/api/src/server.ts',
+  ],
+  {
+    cwd: ROOT,
+    env: {
+      ...process.env,
+      ...common,
+      // Production settings on loopback without TLS, as `npm start` runs it; warnings and errors go to a file.
+      LOG_LEVEL: 'warn',
+      PORT: String(PORT),
+      PUBLIC_URL: BASE,
+      COOKIE_SECURE: 'false',
+      WEB_DIST,
+      SMTP_PORT: String(PORT + 15),
+      OUTBOX_INTERVAL_MS: '60000',
+    },
+    stdio: ['ignore', openSync(apiLog, 'w'), openSync(apiLog, 'a')],
   },
-  stdio: ['ignore', openSync(apiLog, 'w'), openSync(apiLog, 'a')],
-});
+);
 const stop = () => stopService(server);
 process.on('SIGINT', () => void stop().then(() => process.exit(130)));
 
@@ -291,9 +307,9 @@ try {
     if (!ceil || !mixed) continue;
     const share = (100 * mixed.rps) / ceil.rps;
     targets.push({
-      target: `mixed ≥ 40 % of ceiling throughput (${connections} connections)`,
+      target: `mixed ≥ ${SHARE_TARGET} % of ceiling throughput (${connections} connections)`,
       measured: `${fmt(share)} % (${fmt(mixed.rps)} of ${fmt(ceil.rps)} req/s)`,
-      pass: share >= 40,
+      pass: share >= SHARE_TARGET,
     });
     if (connections === 50)
       targets.push({
@@ -316,11 +332,13 @@ try {
     console.log(
       `p99 of the other routes (50 connections): ${fmt(plain?.p99 ?? 0)} ms without sign-ins, ${fmt(withSignIns.p99)} ms with`,
     );
+    // Reads keep their latency while members sign in: bcrypt runs in the worker pool, so the reads' p99 with
+    // sign-ins stays under twice the reads-only p99 of the same run (and at least one sign-in succeeds).
     if (plain)
       targets.push({
-        target: `sign-ins do not move the other routes' p99 (≤ 1.5× or ≤ +50 ms; ${SIGNINS} signing in)`,
-        measured: `${fmt(plain.p99)} → ${fmt(withSignIns.p99)} ms`,
-        pass: withSignIns.p99 <= Math.max(plain.p99 * 1.5, plain.p99 + 50) && ok > 0,
+        target: `reads' p99 with sign-ins < ${SIGNIN_P99_FACTOR}× reads-only p99 (50 connections, ${SIGNINS} signing in)`,
+        measured: `${fmt(plain.p99)} → ${fmt(withSignIns.p99)} ms (${fmt(withSignIns.p99 / Math.max(1, plain.p99), 2)}×), ${ok} signed in`,
+        pass: withSignIns.p99 < SIGNIN_P99_FACTOR * plain.p99 && ok > 0,
       });
   }
   console.log('');

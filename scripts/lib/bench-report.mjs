@@ -65,6 +65,7 @@ export function writeBenchmarksDoc({ startedAt, machine, texts = {} }) {
   const api = readJson('api.json');
   const bundle = readJson('bundle.json');
   const lh = readJson('lighthouse.json');
+  const growth = readJson('growth.json');
   const calc = calcRows();
   const targets = [];
   const out = [];
@@ -94,6 +95,10 @@ export function writeBenchmarksDoc({ startedAt, machine, texts = {} }) {
   out.push('');
   out.push(
     'Figures from a shared machine are noisy: the load generator, the API, MariaDB and Chromium share these cores with each other and with whatever else runs (the load averages above say how busy the machine was). Compare runs on the same idle machine; treat a single run as an indication, not a verdict.',
+  );
+  out.push('');
+  out.push(
+    'Step-by-step before/after figures of the speed work, with the load average beside each, are kept by hand in [benchmark-history.md](benchmark-history.md).',
   );
   out.push('');
   out.push('## How to rerun');
@@ -158,6 +163,46 @@ export function writeBenchmarksDoc({ startedAt, machine, texts = {} }) {
     }
     targets.push(...api.targets.map((t) => ({ area: 'API', ...t })));
   } else out.push('Not run (scripts/bench-api.mjs left no results).');
+  out.push('');
+
+  out.push('## Listings: growth run (1k, 10k, 100k active listings)');
+  out.push('');
+  if (growth) {
+    out.push(
+      `scripts/bench-listings.mjs bulk-inserts each size into its own database and starts the API on it; autocannon, ${growth.connections} connections, ${growth.seconds} s per endpoint and size. Every search carries its own price ceiling, so no answer comes from the result cache; the listing pages are the same number of distinct listings at every size (1,000), so the visitors' page cache hits equally often. Target: each 10× of data costs at most 2× in p95.`,
+    );
+    out.push('');
+    out.push(
+      table(
+        [
+          'active listings',
+          'start + index s',
+          'search p50 ms',
+          'search p95 ms',
+          'search req/s',
+          'listing page p50 ms',
+          'listing page p95 ms',
+          'listing page req/s',
+          'load (1 min)',
+        ],
+        growth.rows.map((r) => [
+          r.size,
+          (r.readyMs / 1000).toFixed(1),
+          r.search.p50.toFixed(1),
+          r.search.p95.toFixed(1),
+          r.search.rps.toFixed(0),
+          r.listing.p50.toFixed(1),
+          r.listing.p95.toFixed(1),
+          r.listing.rps.toFixed(0),
+          r.load.toFixed(1),
+        ]),
+      ),
+    );
+    targets.push(...growth.targets.map((t) => ({ area: 'growth', ...t })));
+  } else
+    out.push(
+      'Not run (scripts/bench-listings.mjs left no growth results; BENCH_GROWTH=0 skips it).',
+    );
   out.push('');
 
   out.push('## Front end: JavaScript per route');

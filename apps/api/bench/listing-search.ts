@@ -1,7 +1,7 @@
 // Listing search benchmark (run by scripts/bench-listings.mjs): seeds 10,000 invented listings into its own database (rodewise_bench on the test
 // MariaDB), times in-process index queries, then loads GET /api/listings?q=… with autocannon (50 connections)
 // beside the trivial /api/health/ping route of the same server, on port 4790. Figures only, never pass/fail.
-// LISTING_BENCH_DB names another database (parallel runs); BENCH_NO_LOAD=1 stops after the in-process figures;
+// LISTING_BENCH_DB names another database and LISTING_BENCH_PORT another port (parallel runs); BENCH_NO_LOAD=1 stops after the in-process figures;
 // BENCH_DETAIL=1 adds a p50 per query kind.
 import { spawn } from 'node:child_process';
 import { cpus, loadavg } from 'node:os';
@@ -30,7 +30,7 @@ import {
 import { sizeMmOf } from '../src/modules/listings/listing-specs';
 
 const COUNT = 10_000;
-const PORT = 4790;
+const PORT = Number(process.env.LISTING_BENCH_PORT ?? 4790);
 const DB = process.env.LISTING_BENCH_DB ?? 'rodewise_bench';
 
 const cfg = profileConfig('test');

@@ -7,6 +7,7 @@ import { mountRawRoutes } from './http/raw-routes';
 import { requestLogger } from './http/request-logger';
 import { applySecurity } from './http/security';
 import { createSessions } from './http/sessions';
+import { sessionUnlessCookieless } from './http/visitor-session';
 import { serveUploads, serveWebApp } from './http/static-assets';
 import { configureUploads } from './http/uploads-config';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
@@ -47,9 +48,13 @@ export function createApp(deps: AppDeps): BuiltApp {
     next();
   });
   app.use('/api', express.json({ limit: '200kb' }));
-  app.use('/api', sessions.middleware);
+  app.use('/api', passport.initialize());
+  // A cookieless visitor's safe request skips the session store (see visitor-session.ts).
   // @types/passport types session() as `any`; it is a plain Express middleware.
-  app.use('/api', passport.initialize(), passport.session() as RequestHandler);
+  app.use(
+    '/api',
+    sessionUnlessCookieless([sessions.middleware, passport.session() as RequestHandler]),
+  );
   app.use('/api', csrf.check);
   mountApiRoutes(app, { ...deps, authDeps, passport, newCsrfToken: csrf.newCsrfToken });
 

@@ -3,6 +3,7 @@ import session from 'express-session';
 import type { Sequelize } from 'sequelize';
 import type { Env } from '../config/env';
 import { throttleSessionTouch } from '../lib/session-touch';
+import { SESSION_COOKIE } from './visitor-session';
 
 /** The session store (MariaDB, shared by every API process) and the cookie session middleware over it. */
 export function createSessions(env: Env, sequelize: Sequelize) {
@@ -24,7 +25,7 @@ export function createSessions(env: Env, sequelize: Sequelize) {
   // Expiry refreshes cost an UPDATE each; once per session per 10 minutes is plenty for a 14-day lifetime.
   throttleSessionTouch(store, 10 * 60_000);
   const middleware = session({
-    name: 'rw.sid',
+    name: SESSION_COOKIE,
     secret: env.SESSION_SECRET,
     store,
     resave: false,

@@ -65,6 +65,12 @@ export async function rebuildListingIndex(): Promise<number> {
   version += 1;
   watermarkMs = newest?.at ? new Date(newest.at).getTime() : 0;
   applied.clear();
+  // What this read already holds is applied: the first catch-up re-reads none of it (a bulk import writes
+  // thousands of rows within the overlap, and re-reading them one by one emptied the result cache each time).
+  for (const r of rows) {
+    const atMs = new Date(r.updated_at).getTime();
+    if (atMs >= watermarkMs - OVERLAP_MS) applied.set(r.id, atMs);
+  }
   ready = Promise.resolve();
   return all.length;
 }
@@ -81,20 +87,50 @@ export function ensureListingIndex(): Promise<void> {
   return ready;
 }
 
+const rereadListeners: ((ids: readonly number[]) => void)[] = [];
+/**
+ * Calls `fn` with the ids of listings re-read after a write, in this process or (through the catch-up) another
+ * one, so copies of those listings' pages can be dropped.
+ */
+export function onListingsReread(fn: (ids: readonly number[]) => void) {
+  rereadListeners.push(fn);
+}
+
+/**
+ * Re-reads listings in one query: each indexed when active and visible, removed otherwise. The result cache is
+ * emptied once, and only when the index changed (a listing that was neither indexed nor is now changes nothing).
+ */
+async function reread(ids: readonly number[]): Promise<Row[]> {
+  if (!ids.length) return [];
+  const rows = await sequelizeOf().query<Row>(`${SELECT_SEARCHABLE} AND l.id IN (?)`, {
+    type: QueryTypes.SELECT,
+    replacements: [ids],
+  });
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  let changed = false;
+  for (const id of ids) {
+    const row = byId.get(id);
+    if (row) {
+      index.upsert(toDoc(row));
+      changed = true;
+    } else if (index.get(id)) {
+      index.remove(id);
+      changed = true;
+    }
+  }
+  if (changed) {
+    cache.clear();
+    version += 1;
+  }
+  for (const fn of rereadListeners) fn(ids);
+  return rows;
+}
+
 /** Re-reads one listing after a write: indexed when active and visible, removed otherwise. */
 export async function refreshListing(id: number): Promise<void> {
   await ensureListingIndex();
-  const rows = await sequelizeOf().query<Row>(`${SELECT_SEARCHABLE} AND l.id = ?`, {
-    type: QueryTypes.SELECT,
-    replacements: [id],
-  });
-  cache.clear();
-  version += 1;
-  const row = rows[0];
-  if (row) {
-    index.upsert(toDoc(row));
-    applied.set(id, new Date(row.updated_at).getTime());
-  } else index.remove(id);
+  const [row] = await reread([id]);
+  if (row) applied.set(id, new Date(row.updated_at).getTime());
 }
 
 /**
@@ -107,17 +143,16 @@ export async function catchUpListingIndex(): Promise<number> {
     'SELECT id, updated_at FROM listings WHERE updated_at >= ? ORDER BY updated_at LIMIT 1000',
     { type: QueryTypes.SELECT, replacements: [new Date(watermarkMs - OVERLAP_MS)] },
   );
-  let reread = 0;
+  const due = new Map<number, number>();
   for (const r of rows) {
     const atMs = new Date(r.updated_at).getTime();
     if (atMs > watermarkMs) watermarkMs = atMs;
-    if (applied.get(r.id) === atMs) continue;
-    await refreshListing(r.id);
-    applied.set(r.id, atMs);
-    reread += 1;
+    if (applied.get(r.id) !== atMs) due.set(r.id, atMs);
   }
+  await reread([...due.keys()]);
+  for (const [id, atMs] of due) applied.set(id, atMs);
   for (const [id, atMs] of applied) if (atMs < watermarkMs - OVERLAP_MS) applied.delete(id);
-  return reread;
+  return due.size;
 }
 
 /** Records a change kept outside the listing row (its photos), so other processes re-read the listing too. */

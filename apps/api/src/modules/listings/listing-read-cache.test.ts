@@ -9,6 +9,7 @@ import {
   testJpeg,
 } from '../../testing/exchange';
 import { sweepExpiredListings } from './listing-expiry';
+import { catchUpListingIndex } from './listing-index';
 import { anonymousListingDetail, clearAnonymousListingCache } from './listing-read-cache';
 import { signedInAs } from '../../testing/sign-in';
 
@@ -118,6 +119,22 @@ describe('GET /api/listings/:listingId for visitors (read cache)', () => {
     expect((await visitor.get(`/api/listings/${id}`)).status).toBe(200);
     await Listing.update({ hiddenAt: new Date(), hiddenReason: 'test' }, { where: { id } });
     expect((await visitor.get(`/api/listings/${id}`)).status).toBe(404);
+  });
+
+  it('drops the copy once the catch-up re-reads a listing another process changed', async () => {
+    const { id } = await publishedListing();
+    const visitor = await client(built.app);
+    const before = await visitor.get(`/api/listings/${id}`);
+    expect(before.status).toBe(200);
+    // What another API process does: a plain UPDATE, no model hooks in this one.
+    await Listing.sequelize?.query('UPDATE listings SET title = ?, updated_at = ? WHERE id = ?', {
+      replacements: ['Chain changed elsewhere', new Date(), id],
+    });
+    expect((await visitor.get(`/api/listings/${id}`)).body.data.title).toBe(before.body.data.title);
+    await catchUpListingIndex();
+    expect((await visitor.get(`/api/listings/${id}`)).body.data.title).toBe(
+      'Chain changed elsewhere',
+    );
   });
 
   it('answers 404 for an unknown listing and does not remember the miss', async () => {

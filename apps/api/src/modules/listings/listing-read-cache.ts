@@ -1,11 +1,16 @@
 import { LRUCache } from 'lru-cache';
 import type { ListingDto } from '@app/shared';
 import { AppError } from '../../errors/app-error';
+import { onListingsReread } from './listing-index';
 import { toListingDto } from './listings.presenter';
 import { getVisibleListingPage } from './listings.service';
 
-/** How long a visitor's copy of a listing page may be reused. Writes in this process clear it at once. */
-export const ANONYMOUS_LISTING_TTL_MS = 5000;
+/**
+ * How long a visitor's copy of a listing page may be reused. Writes in this process clear it at once; a change
+ * another process makes to the listing itself (edit, photos, status, hiding) drops it at the next index catch-up
+ * (1.5 s), so only the seller's name and membership date can be this old.
+ */
+export const ANONYMOUS_LISTING_TTL_MS = 30_000;
 
 /** The page as a visitor sees it, read now (throws NOT_FOUND for a listing a visitor may not see). */
 async function buildVisitorCopy(listingId: number): Promise<ListingDto> {
@@ -34,5 +39,9 @@ export async function anonymousListingDetail(listingId: number): Promise<Listing
     return buildVisitorCopy(listingId);
   }
 }
+
+onListingsReread((ids) => {
+  for (const id of ids) cache.delete(id);
+});
 
 export const clearAnonymousListingCache = () => cache.clear();
