@@ -359,7 +359,9 @@ describe('webhook', () => {
       reason: 'Leaving the club',
     });
     expect(res.status).toBe(201);
-    expect(res.body.data.status).toBe('pending');
+    // Pending until the provider's webhook lands; on a busy machine the webhook can land before this answer is
+    // written, so the answer may already say succeeded. Either way the webhook is what completes it (below).
+    expect(['pending', 'succeeded']).toContain(res.body.data.status);
     const done = await waitFor(async () => {
       const r = await Refund.findByPk(res.body.data.id as number);
       return r?.status === 'succeeded' ? r : null;
