@@ -356,6 +356,11 @@ try {
       { name: 'listing', path: `/exchange/listings/${listingIds[0]}` },
       { name: 'post', path: `/knowledge/${postIds[0]}` },
       { name: 'calculators', path: '/calculators' },
+      // The rest of what a visitor can open without signing in.
+      { name: 'knowledge', path: '/knowledge' },
+      { name: 'exchange', path: '/exchange' },
+      { name: 'sign-in', path: '/sign-in' },
+      { name: 'join', path: '/join' },
     ];
     const rows = await runLighthouse(BASE, pages);
     const lhTargets = reportLighthouse(rows);
