@@ -130,6 +130,11 @@ describe('keyboard only', () => {
     await navTo(page, /^Calculators$/);
     await page.waitForURL(/\/calculators$/);
     await page.getByRole('heading', { name: 'Ground-tackle calculators' }).waitFor();
+    // The calculators below the boat block arrive in their own chunks, a moment after the page.
+    await page
+      .getByLabel(/^Horizontal load/)
+      .first()
+      .waitFor();
     await tabTo(page, /^Horizontal load/);
     await typeOver(page, '2000 lbf');
     await expect
@@ -210,6 +215,8 @@ describe('keyboard only', () => {
         throw err;
       });
 
+    // The address changes first; the new-listing form stays on view until the editor's code has loaded.
+    await page.getByRole('heading', { name: `Edit: ${title}` }).waitFor();
     await page.getByRole('button', { name: 'Publish' }).waitFor();
     await tabTo(page, /^Publish$/, { max: 80 });
     await page.keyboard.press('Space');

@@ -34,7 +34,8 @@ function NewListingScreen() {
           { intent: 'draft', label: 'Save draft', variant: 'secondary' },
           { intent: 'publish', label: 'Publish' },
         ]}
-        isPending={create.isPending}
+        // Still pending once saved: the form stays on view until the editor opens, and must not save twice.
+        isPending={create.isPending || create.isSuccess}
         serverError={serverError}
         onSubmit={(input, intent) => {
           const publish = intent === 'publish';
