@@ -8,6 +8,7 @@ export {
   SHOCK_REDUCTION_FACTOR,
   SNUBBER_WORKING_FACTOR,
   STORM_WIND_KN,
+  UPLIFT_WARN_DEG,
   FRESH_WATER_DENSITY_KGPM3,
   SEA_WATER_DENSITY_KGPM3,
   STANDARD_GRAVITY_MPS2,
@@ -186,7 +187,6 @@ export {
 } from './advice/anchor-holding';
 export {
   DEFAULT_BOW_HEIGHT_M,
-  UPLIFT_WARN_DEG,
   recommendTackle,
   scopeForWind,
   sizeLabel,
@@ -229,4 +229,5 @@ export {
   type PlanRopeRating,
   type RatingSource,
 } from './plan/rate-components';
-export { tacklePlan, type PlanAnchorCheck, type TacklePlanResult } from './plan/tackle-plan';
+export { type PlanAnchorCheck } from './plan/plan-anchor-check';
+export { tacklePlan, type TacklePlanResult } from './plan/tackle-plan';

@@ -2,7 +2,7 @@ import { LRUCache } from 'lru-cache';
 import type { ListingDto } from '@app/shared';
 import { AppError } from '../../errors/app-error';
 import { toListingDto } from './listings.presenter';
-import { getVisibleListingPage } from './listings.service';
+import { getVisibleListingPage } from './listing-reads.service';
 
 /** How long a visitor's copy of a listing page may be reused. Writes in this process clear it at once. */
 export const ANONYMOUS_LISTING_TTL_MS = 5000;
