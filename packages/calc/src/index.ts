@@ -16,29 +16,8 @@ export {
 } from './constants';
 export { STANDARD_CAUTIONS } from './cautions';
 
-export {
-  KG_PER_LB,
-  LBF_PER_SHORT_TON,
-  M_PER_FT,
-  MM_PER_IN,
-  MPS_PER_KN,
-  N_PER_LBF,
-  N_PER_SHORT_TON,
-  ftToM,
-  inToMm,
-  kgToLb,
-  kgToN,
-  knToMps,
-  lbToKg,
-  lbfToN,
-  mmToIn,
-  mpsToKn,
-  mToFt,
-  nToKg,
-  nToLbf,
-  nToShortTon,
-  shortTonToN,
-} from './units/units';
+// Every conversion constant and function (ftToM, MM_PER_IN, …); `units` below groups them.
+export * from './units/units';
 export {
   UNIT_SYSTEMS,
   formatForce,

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BOTTOMS, HULLS, planComponentsSchema } from './boats';
+import { numberField } from './fields';
 import { nonEmptyPatchOf } from './patch';
 import { tiptapDocSchema } from './post-body';
 
@@ -19,26 +20,19 @@ export type PostVisibility = (typeof POST_VISIBILITIES)[number];
 export const COMMENT_STATUSES = ['pending', 'approved', 'rejected', 'hidden'] as const;
 export type CommentStatus = (typeof COMMENT_STATUSES)[number];
 
-const num = (label: string, min: number, max: number, unit: string) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .finite(`${label} must be a number`)
-    .min(min, `${label} must be at least ${min} ${unit}`)
-    .max(max, `${label} must be at most ${max} ${unit}`);
-
 /** A tackle setup carried by a post: the boat, the conditions and the gear (SI units). */
 export const postSetupSchema = z.object({
   boat: z.object({
     label: z.string().trim().max(80).default(''),
     hull: z.enum(HULLS, { error: 'Choose sail, power or multihull' }),
-    loaM: num('Length overall', 2, 60, 'm'),
-    beamM: num('Beam', 0.5, 20, 'm').optional(),
-    displacementKg: num('Displacement', 50, 500000, 'kg').optional(),
-    bowHeightM: num('Bow-roller height', 0, 8, 'm').default(1),
+    loaM: numberField('Length overall', 2, 60, 'm'),
+    beamM: numberField('Beam', 0.5, 20, 'm').optional(),
+    displacementKg: numberField('Displacement', 50, 500000, 'kg').optional(),
+    bowHeightM: numberField('Bow-roller height', 0, 8, 'm').default(1),
   }),
-  windKn: num('Design wind', 5, 100, 'kn'),
-  depthM: num('Depth', 0.5, 100, 'm'),
-  tideM: num('Tidal rise', 0, 15, 'm').default(0),
+  windKn: numberField('Design wind', 5, 100, 'kn'),
+  depthM: numberField('Depth', 0.5, 100, 'm'),
+  tideM: numberField('Tidal rise', 0, 15, 'm').default(0),
   bottom: z.enum(BOTTOMS).optional(),
   components: planComponentsSchema,
 });

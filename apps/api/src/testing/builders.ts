@@ -1,5 +1,6 @@
 import type { InferCreationAttributes, Model } from 'sequelize';
-import { Boat, Listing, MembershipPlan, Payment, Post, type User } from '../models';
+import { Boat, Listing, MembershipPlan, Post, type Payment, type User } from '../models';
+import { createPayment } from '../modules/payments/new-payment';
 import { chainListing } from './exchange';
 
 let seq = 0;
@@ -86,7 +87,7 @@ export const buildPayment = (
   plan: Pick<MembershipPlan, 'id'> | null,
   over: Over<Payment> = {},
 ) =>
-  Payment.create({
+  createPayment({
     userId: member.id,
     planId: plan?.id ?? null,
     method: 'cheque',
@@ -94,14 +95,6 @@ export const buildPayment = (
     amountMinor: 12000,
     currency: 'EUR',
     expectedMinor: 12000,
-    coversFrom: null,
-    coversTo: null,
-    providerSessionId: null,
-    providerPaymentIntentId: null,
-    reference: null,
-    note: null,
-    heldReason: null,
-    recordedById: null,
     paidAt: new Date(),
     ...over,
   });

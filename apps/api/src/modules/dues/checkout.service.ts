@@ -12,6 +12,7 @@ import { AppError, invalid, notFound } from '../../errors/app-error';
 import { withNamedLock } from '../../lib/serialize';
 import { Membership, MembershipPlan, Payment, type User } from '../../models';
 import { cachedClub } from '../club/club-cache';
+import { createPayment } from '../payments/new-payment';
 import { stripeClient } from '../../lib/stripe-client';
 import { toIsoDate } from './calendar';
 import { describeQuote, duesCalendar } from './dues.service';
@@ -126,7 +127,7 @@ async function openCheckout(
   env: Env,
   now: Date,
 ): Promise<CheckoutDto> {
-  const payment = await Payment.create({
+  const payment = await createPayment({
     userId: actor.id,
     planId: plan.id,
     method: 'card',
@@ -136,13 +137,6 @@ async function openCheckout(
     expectedMinor: quote.amountMinor,
     coversFrom: quote.coversFrom,
     coversTo: quote.coversTo,
-    providerSessionId: null,
-    providerPaymentIntentId: null,
-    reference: null,
-    note: null,
-    heldReason: null,
-    recordedById: null,
-    paidAt: null,
   });
   const stripe = stripeClient(env);
   const metadata = {

@@ -49,20 +49,48 @@ async function afterActivated(ctx: ExchangeContext, listing: Listing) {
   }
 }
 
+/** The states a seller's change starts from, and what they read when the listing is in another. */
+interface Move {
+  from: readonly ListingStatus[];
+  message: string;
+}
+const MOVES = {
+  edit: {
+    from: ['draft', 'active', 'expired', 'withdrawn'],
+    message: 'A sold listing cannot be edited',
+  },
+  publish: {
+    from: ['draft'],
+    message: 'Only a draft can be published; use relist for the others',
+  },
+  relist: {
+    from: ['sold', 'expired', 'withdrawn'],
+    message: 'Only a sold, expired or withdrawn listing can be relisted',
+  },
+  withdraw: {
+    from: ['draft', 'active'],
+    message: 'Only a draft or active listing can be withdrawn',
+  },
+} as const satisfies Record<string, Move>;
+
+/** Throws CONFLICT (with the move's message) unless the listing is in one of the move's starting states. */
+function assertCanMove(listing: Listing, move: Move) {
+  if (!move.from.includes(listing.status)) throw new AppError('CONFLICT', move.message);
+}
+
 /**
- * Moves a listing from one of `from` to the new state with one conditional UPDATE, so two concurrent changes
- * (sold and withdraw, say) cannot both apply: the loser gets CONFLICT and the row keeps the winner's state.
+ * Moves a listing from one of the move's states to the new state with one conditional UPDATE, so two concurrent
+ * changes (sold and withdraw, say) cannot both apply: the loser gets CONFLICT and the row keeps the winner's state.
  */
 async function transition(
   listing: Listing,
-  from: readonly ListingStatus[],
+  move: Move,
   changes: Partial<InferAttributes<Listing>>,
-  message: string,
 ) {
   const [affected] = await Listing.update(changes, {
-    where: { id: listing.id, status: { [Op.in]: from } },
+    where: { id: listing.id, status: { [Op.in]: move.from } },
   });
-  if (affected === 0) throw new AppError('CONFLICT', message);
+  if (affected === 0) throw new AppError('CONFLICT', move.message);
   await listing.reload();
   return listing;
 }
@@ -96,15 +124,10 @@ export async function createListing(
 /** Replaces the seller's own listing's fields (not once sold). */
 export async function updateListing(actor: User, id: number, input: ParsedListing) {
   const listing = await getOwnListing(actor, id);
-  if (listing.status === 'sold') throw new AppError('CONFLICT', 'A sold listing cannot be edited');
+  assertCanMove(listing, MOVES.edit);
   checkSpecs(input);
   await checkHarbor(input.harborId);
-  await transition(
-    listing,
-    ['draft', 'active', 'expired', 'withdrawn'],
-    fieldsOf(input),
-    'A sold listing cannot be edited',
-  );
+  await transition(listing, MOVES.edit, fieldsOf(input));
   await refreshListing(id);
   return listing;
 }
@@ -117,15 +140,13 @@ export async function publishListing(
   at = new Date(),
 ) {
   const listing = await getOwnListing(actor, id);
-  if (listing.status !== 'draft')
-    throw new AppError('CONFLICT', 'Only a draft can be published; use relist for the others');
+  assertCanMove(listing, MOVES.publish);
   await assertMayList(actor, at);
-  await transition(
-    listing,
-    ['draft'],
-    { status: 'active', publishedAt: at, expiresAt: expiryFrom(at) },
-    'Only a draft can be published; use relist for the others',
-  );
+  await transition(listing, MOVES.publish, {
+    status: 'active',
+    publishedAt: at,
+    expiresAt: expiryFrom(at),
+  });
   await afterActivated(ctx, listing);
   return listing;
 }
@@ -138,22 +159,16 @@ export async function relistListing(
   at = new Date(),
 ) {
   const listing = await getOwnListing(actor, id);
-  if (!['sold', 'expired', 'withdrawn'].includes(listing.status))
-    throw new AppError('CONFLICT', 'Only a sold, expired or withdrawn listing can be relisted');
+  assertCanMove(listing, MOVES.relist);
   await assertMayList(actor, at);
   const soldThreadId = listing.status === 'sold' ? listing.soldThreadId : null;
-  await transition(
-    listing,
-    ['sold', 'expired', 'withdrawn'],
-    {
-      status: 'active',
-      publishedAt: at,
-      expiresAt: expiryFrom(at),
-      soldAt: null,
-      soldThreadId: null,
-    },
-    'Only a sold, expired or withdrawn listing can be relisted',
-  );
+  await transition(listing, MOVES.relist, {
+    status: 'active',
+    publishedAt: at,
+    expiresAt: expiryFrom(at),
+    soldAt: null,
+    soldThreadId: null,
+  });
   const soldThread = soldThreadId === null ? null : await ListingThread.findByPk(soldThreadId);
   if (soldThread)
     await notify(
@@ -169,14 +184,8 @@ export async function relistListing(
 /** Takes a draft or active listing off the exchange. */
 export async function withdrawListing(actor: User, id: number) {
   const listing = await getOwnListing(actor, id);
-  if (!['draft', 'active'].includes(listing.status))
-    throw new AppError('CONFLICT', 'Only a draft or active listing can be withdrawn');
-  await transition(
-    listing,
-    ['draft', 'active'],
-    { status: 'withdrawn' },
-    'Only a draft or active listing can be withdrawn',
-  );
+  assertCanMove(listing, MOVES.withdraw);
+  await transition(listing, MOVES.withdraw, { status: 'withdrawn' });
   await refreshListing(id);
   return listing;
 }

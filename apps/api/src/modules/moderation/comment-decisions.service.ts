@@ -3,11 +3,15 @@ import type { commentDecisionSchema } from '@app/shared';
 
 import { AppError, notFound } from '../../errors/app-error';
 import { Comment, Post, type User } from '../../models';
-import { recordAudit } from '../audit/audit.service';
 import { DecisionRecord } from '../audit/decision-record';
 import { notifyReply, postPath } from '../posts/comments.service';
 import { tellAuthor } from './moderation-mail';
-import { inTransaction, type Decided, type ModContext } from './moderation.service';
+import {
+  inTransaction,
+  moderationAudit,
+  type Decided,
+  type ModContext,
+} from './moderation.service';
 
 type CommentDecision = z.output<typeof commentDecisionSchema>;
 
@@ -33,16 +37,13 @@ export async function decideComment(
       status: publish ? 'approved' : 'rejected',
       moderationNote: publish ? null : d.reason,
     });
-    await recordAudit(
-      {
-        actorId: actor.id,
-        area: 'moderation',
-        action,
-        subjectType: 'comment',
-        subjectId: String(comment.id),
-        reason: d.reason || null,
-        details: { postId: comment.postId },
-      },
+    await moderationAudit(
+      actor,
+      action,
+      'comment',
+      comment.id,
+      d.reason,
+      { postId: comment.postId },
       t,
     );
     if (publish) for (const n of await notifyReply(comment, t)) rec.told(n);

@@ -45,13 +45,16 @@ export const inTransaction = <T>(work: (t: Transaction) => Promise<T>): Promise<
   return sequelize.transaction(work);
 };
 
+/** Posts waiting for a moderator: new ones, and published ones with an edit waiting. */
+const WAITING_POSTS = {
+  [Op.or]: [{ status: 'pending' }, { status: 'approved', revisionStatus: 'pending' }],
+};
+
 /** Pending posts and comments, oldest first, and open reports. */
 export async function queue() {
   const [posts, comments, reports] = await Promise.all([
     Post.findAll({
-      where: {
-        [Op.or]: [{ status: 'pending' }, { status: 'approved', revisionStatus: 'pending' }],
-      },
+      where: WAITING_POSTS,
       include: POST_INCLUDE,
       order: [['updatedAt', 'ASC']],
     }),
@@ -80,9 +83,7 @@ const LISTING_AREA_UNDO = { area: 'exchange', action: 'decision.undo' };
 export async function counts() {
   const [pendingPosts, pendingComments, openReports, openListingReports] = await Promise.all([
     Post.count({
-      where: {
-        [Op.or]: [{ status: 'pending' }, { status: 'approved', revisionStatus: 'pending' }],
-      },
+      where: WAITING_POSTS,
     }),
     Comment.count({ where: { status: 'pending' } }),
     Report.count({ where: { status: 'open' } }),

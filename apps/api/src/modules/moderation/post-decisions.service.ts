@@ -3,12 +3,16 @@ import type { decisionSchema } from '@app/shared';
 
 import { AppError, notFound } from '../../errors/app-error';
 import { Post, type PostRevision, type User } from '../../models';
-import { recordAudit } from '../audit/audit.service';
 import { DecisionRecord } from '../audit/decision-record';
 import { postPath } from '../posts/comments.service';
 import { indexPost } from '../posts/post-index';
 import { tellAuthor } from './moderation-mail';
-import { inTransaction, type Decided, type ModContext } from './moderation.service';
+import {
+  inTransaction,
+  moderationAudit,
+  type Decided,
+  type ModContext,
+} from './moderation.service';
 
 type Decision = z.output<typeof decisionSchema>;
 
@@ -52,11 +56,15 @@ export async function decidePost(
   if (post.status !== 'pending')
     throw new AppError('CONFLICT', `This post is ${post.status}, not waiting for a moderator`);
   const o = POST_OUTCOME[d.action];
-  const decision = await inTransaction(async (t) => {
-    const rec = new DecisionRecord(t);
-    await rec.update(
-      'post',
-      post,
+  const lines = [`“${post.title}”`];
+  if (d.action === 'publish') lines.push(o.line);
+  else lines.push(`${o.line} ${d.reason}`, 'Your text is kept: change it and send it again.');
+  return recordPostDecision(ctx, actor, post, d, {
+    action: o.action,
+    subject: o.subject,
+    title: post.title,
+    lines,
+    changes: () =>
       d.action === 'publish'
         ? {
             status: o.status,
@@ -65,40 +73,7 @@ export async function decidePost(
             moderationNote: null,
           }
         : { status: o.status, moderationNote: d.reason },
-    );
-    await recordAudit(
-      {
-        actorId: actor.id,
-        area: 'moderation',
-        action: o.action,
-        subjectType: 'post',
-        subjectId: String(post.id),
-        reason: d.reason || null,
-        details: { title: post.title },
-      },
-      t,
-    );
-    const lines = [`“${post.title}”`];
-    if (d.action === 'publish') lines.push(o.line);
-    else lines.push(`${o.line} ${d.reason}`, 'Your text is kept: change it and send it again.');
-    rec.told(
-      await tellAuthor(
-        ctx.publicUrl,
-        { userId: post.authorId, subject: o.subject, lines, path: postPath(post.id) },
-        t,
-      ),
-    );
-    return rec.save(actor, {
-      area: 'moderation',
-      action: o.action,
-      subjectType: 'post',
-      subjectId: post.id,
-      title: post.title,
-      path: postPath(post.id),
-    });
   });
-  await indexPost(post.id);
-  return { row: post, decision };
 }
 
 const REVISION_OUTCOME = {
@@ -123,7 +98,7 @@ const REVISION_OUTCOME = {
  * Decides an edit of a published post: publishing makes the revision the published version; declining or
  * sending it back keeps the published version and the author's revision, with the note.
  */
-async function decideRevision(
+function decideRevision(
   ctx: ModContext,
   actor: User,
   post: Post,
@@ -131,11 +106,19 @@ async function decideRevision(
   d: Decision,
 ): Promise<Decided<Post>> {
   const o = REVISION_OUTCOME[d.action];
-  const decision = await inTransaction(async (t) => {
-    const rec = new DecisionRecord(t);
-    await rec.update(
-      'post',
-      post,
+  const lines = [`“${revision.title}”`];
+  if (d.action === 'publish') lines.push(o.line);
+  else
+    lines.push(
+      `${o.line} ${d.reason}`,
+      'Readers still see the published version. Your edit is kept: change it and send it again.',
+    );
+  return recordPostDecision(ctx, actor, post, d, {
+    action: o.action,
+    subject: o.subject,
+    title: revision.title,
+    lines,
+    changes: () =>
       d.action === 'publish'
         ? {
             ...revision,
@@ -149,40 +132,50 @@ async function decideRevision(
             revisionStatus: d.action === 'decline' ? 'rejected' : 'changes-requested',
             moderationNote: d.reason,
           },
-    );
-    await recordAudit(
-      {
-        actorId: actor.id,
-        area: 'moderation',
-        action: o.action,
-        subjectType: 'post',
-        subjectId: String(post.id),
-        reason: d.reason || null,
-        details: { title: revision.title },
-      },
-      t,
-    );
-    const lines = [`“${revision.title}”`];
-    if (d.action === 'publish') lines.push(o.line);
-    else
-      lines.push(
-        `${o.line} ${d.reason}`,
-        'Readers still see the published version. Your edit is kept: change it and send it again.',
-      );
+  });
+}
+
+/** One decision on a post: its audit action, what the author reads, and the columns it changes. */
+interface PostDecisionStep {
+  action: string;
+  subject: string;
+  /** The title the log, the notice and the decision name. */
+  title: string;
+  lines: string[];
+  /** The new column values, read inside the transaction. */
+  changes: () => Record<string, unknown>;
+}
+
+/**
+ * Applies a decision on a post in one transaction: the row change (kept for Undo), the audit entry and the
+ * author's notice; then refreshes the post's search entry.
+ */
+async function recordPostDecision(
+  ctx: ModContext,
+  actor: User,
+  post: Post,
+  d: Decision,
+  step: PostDecisionStep,
+): Promise<Decided<Post>> {
+  const path = postPath(post.id);
+  const decision = await inTransaction(async (t) => {
+    const rec = new DecisionRecord(t);
+    await rec.update('post', post, step.changes());
+    await moderationAudit(actor, step.action, 'post', post.id, d.reason, { title: step.title }, t);
     rec.told(
       await tellAuthor(
         ctx.publicUrl,
-        { userId: post.authorId, subject: o.subject, lines, path: postPath(post.id) },
+        { userId: post.authorId, subject: step.subject, lines: step.lines, path },
         t,
       ),
     );
     return rec.save(actor, {
       area: 'moderation',
-      action: o.action,
+      action: step.action,
       subjectType: 'post',
       subjectId: post.id,
-      title: revision.title,
-      path: postPath(post.id),
+      title: step.title,
+      path,
     });
   });
   await indexPost(post.id);
