@@ -49,6 +49,81 @@ const PLANS = [
   },
 ];
 
+type SeasonYear = 'fy' | 'prev' | 'older';
+type Method = 'card' | 'cheque' | 'cash' | 'transfer';
+interface MemberRow {
+  email: string;
+  plan: string;
+  joinedOn: string;
+  /** The fiscal year whose end the membership is paid through. */
+  paidThrough: SeasonYear;
+  /** [year, days into it (never later than today), method, reference]. */
+  payments: ReadonlyArray<readonly [SeasonYear, number, Method, string | null]>;
+}
+
+/** Members paid up for this year (idris also pays this year with the late fee by mistake, below). */
+const PAID_UP: readonly MemberRow[] = [
+  {
+    email: 'admin@larkspit.example',
+    plan: 'individual',
+    joinedOn: '2016-04-01',
+    paidThrough: 'fy',
+    payments: [
+      ['prev', 3, 'transfer', 'TRF-LS-0412'],
+      ['fy', 2, 'transfer', 'TRF-LS-1187'],
+    ],
+  },
+  {
+    email: 'moderator@larkspit.example',
+    plan: 'family',
+    joinedOn: '2018-06-01',
+    paidThrough: 'fy',
+    payments: [
+      ['prev', 20, 'cheque', 'CHQ 004417'],
+      ['fy', 12, 'cheque', 'CHQ 004590'],
+    ],
+  },
+  {
+    email: 'treasurer@larkspit.example',
+    plan: 'individual',
+    joinedOn: '2015-04-01',
+    paidThrough: 'fy',
+    payments: [['fy', 1, 'cash', 'Receipt book 7, no. 12']],
+  },
+  {
+    email: 'idris@larkspit.example',
+    plan: 'family',
+    joinedOn: '2021-09-01',
+    paidThrough: 'fy',
+    payments: [['prev', 40, 'card', null]],
+  },
+];
+
+/** Members who paid last year only, and one lapsed two years back. */
+const BEHIND: readonly MemberRow[] = [
+  {
+    email: 'maren@larkspit.example',
+    plan: 'individual',
+    joinedOn: '2020-05-01',
+    paidThrough: 'prev',
+    payments: [['prev', 8, 'card', null]],
+  },
+  {
+    email: 'oriel@larkspit.example',
+    plan: 'individual',
+    joinedOn: '2023-05-01',
+    paidThrough: 'prev',
+    payments: [['prev', 12, 'card', null]],
+  },
+  {
+    email: 'saoirse@larkspit.example',
+    plan: 'junior',
+    joinedOn: '2022-04-01',
+    paidThrough: 'older',
+    payments: [['older', 15, 'cash', 'Receipt book 5, no. 3']],
+  },
+];
+
 const ID_ALPHABET = 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789';
 /** A random id shaped like the provider's (and our fake's): `cs_test_` + 58 characters, `pi_` + 24. */
 function providerId(prefix: 'cs_test' | 'pi', length: number) {
@@ -129,52 +204,18 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
       );
   };
 
+  const years = { fy, prev, older };
+  /** Each member's membership, then their payments in order: [year, days into it, method, reference]. */
+  const seedMembers = async (rows: readonly MemberRow[]) => {
+    for (const r of rows) {
+      await member(r.email, r.plan, r.joinedOn, years[r.paidThrough].end);
+      for (const [year, days, method, reference] of r.payments)
+        await pay(r.email, r.plan, years[year], dayIn(years[year].start, days), method, reference);
+    }
+  };
+
   // Paid up for this year.
-  await member('admin@larkspit.example', 'individual', '2016-04-01', fy.end);
-  await pay(
-    'admin@larkspit.example',
-    'individual',
-    prev,
-    dayIn(prev.start, 3),
-    'transfer',
-    'TRF-LS-0412',
-  );
-  await pay(
-    'admin@larkspit.example',
-    'individual',
-    fy,
-    dayIn(fy.start, 2),
-    'transfer',
-    'TRF-LS-1187',
-  );
-  await member('moderator@larkspit.example', 'family', '2018-06-01', fy.end);
-  await pay(
-    'moderator@larkspit.example',
-    'family',
-    prev,
-    dayIn(prev.start, 20),
-    'cheque',
-    'CHQ 004417',
-  );
-  await pay(
-    'moderator@larkspit.example',
-    'family',
-    fy,
-    dayIn(fy.start, 12),
-    'cheque',
-    'CHQ 004590',
-  );
-  await member('treasurer@larkspit.example', 'individual', '2015-04-01', fy.end);
-  await pay(
-    'treasurer@larkspit.example',
-    'individual',
-    fy,
-    dayIn(fy.start, 1),
-    'cash',
-    'Receipt book 7, no. 12',
-  );
-  await member('idris@larkspit.example', 'family', '2021-09-01', fy.end);
-  await pay('idris@larkspit.example', 'family', prev, dayIn(prev.start, 40), 'card', null);
+  await seedMembers(PAID_UP);
   const idrisNow = await pay(
     'idris@larkspit.example',
     'family',
@@ -202,19 +243,7 @@ export async function seedDues({ transaction, users, now }: SeedContext) {
     );
 
   // Behind: paid last year only (due or overdue now), and lapsed two years back.
-  await member('maren@larkspit.example', 'individual', '2020-05-01', prev.end);
-  await pay('maren@larkspit.example', 'individual', prev, dayIn(prev.start, 8), 'card', null);
-  await member('oriel@larkspit.example', 'individual', '2023-05-01', prev.end);
-  await pay('oriel@larkspit.example', 'individual', prev, dayIn(prev.start, 12), 'card', null);
-  await member('saoirse@larkspit.example', 'junior', '2022-04-01', older.end);
-  await pay(
-    'saoirse@larkspit.example',
-    'junior',
-    older,
-    dayIn(older.start, 15),
-    'cash',
-    'Receipt book 5, no. 3',
-  );
+  await seedMembers(BEHIND);
 
   // Joined recently and never paid (overdue); one mismatched card payment is held for the treasurer: the
   // full-year price paid through an old link where the prorated join was owed (or half when the two are equal).

@@ -8,7 +8,8 @@ import {
   isTreasurer,
   type Actor,
 } from './policies/roles';
-import { buildUser, client, createTestApp, resetDb } from './testing/test-app';
+import { buildUser } from './testing/builders';
+import { client, createTestApp, resetDb } from './testing/test-app';
 
 type Who = 'visitor' | Role;
 /** 'ok' = the role gets past authorization (any status but 401/403); otherwise the exact status expected. */

@@ -1,4 +1,4 @@
-import { escapeHtml } from './html';
+import escapeHtml from 'escape-html';
 import type { MessageDto } from './message-store';
 
 const STYLE = `

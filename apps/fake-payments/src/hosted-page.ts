@@ -1,6 +1,6 @@
 import { TEST_CARDS } from './card-payment';
 import type { CardField } from './card-payment';
-import { escapeHtml } from './html';
+import escapeHtml from 'escape-html';
 import type { StoredSession } from './types';
 
 // Rodewise's own palette and type (apps/web/src/styles/index.css): ink on sand, the signal orange for the

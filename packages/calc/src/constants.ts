@@ -44,3 +44,5 @@ export const SHOCK_REDUCTION_FACTOR = 0.7;
 export const SHOCK_NYLON_MIN_M = 6.096;
 /** Winds above this are storm plans (the ABYC table's last column), kn. */
 export const STORM_WIND_KN = 42;
+/** Pull angle above the seabed at the anchor beyond which Rodewise warns, degrees (about 5°, from memory). */
+export const UPLIFT_WARN_DEG = 5;

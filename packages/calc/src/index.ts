@@ -8,6 +8,7 @@ export {
   SHOCK_REDUCTION_FACTOR,
   SNUBBER_WORKING_FACTOR,
   STORM_WIND_KN,
+  UPLIFT_WARN_DEG,
   FRESH_WATER_DENSITY_KGPM3,
   SEA_WATER_DENSITY_KGPM3,
   STANDARD_GRAVITY_MPS2,
@@ -15,29 +16,8 @@ export {
 } from './constants';
 export { STANDARD_CAUTIONS } from './cautions';
 
-export {
-  KG_PER_LB,
-  LBF_PER_SHORT_TON,
-  M_PER_FT,
-  MM_PER_IN,
-  MPS_PER_KN,
-  N_PER_LBF,
-  N_PER_SHORT_TON,
-  ftToM,
-  inToMm,
-  kgToLb,
-  kgToN,
-  knToMps,
-  lbToKg,
-  lbfToN,
-  mmToIn,
-  mpsToKn,
-  mToFt,
-  nToKg,
-  nToLbf,
-  nToShortTon,
-  shortTonToN,
-} from './units/units';
+// Every conversion constant and function (ftToM, MM_PER_IN, …); `units` below groups them.
+export * from './units/units';
 export {
   UNIT_SYSTEMS,
   formatForce,
@@ -186,7 +166,6 @@ export {
 } from './advice/anchor-holding';
 export {
   DEFAULT_BOW_HEIGHT_M,
-  UPLIFT_WARN_DEG,
   recommendTackle,
   scopeForWind,
   sizeLabel,
@@ -229,4 +208,5 @@ export {
   type PlanRopeRating,
   type RatingSource,
 } from './plan/rate-components';
-export { tacklePlan, type PlanAnchorCheck, type TacklePlanResult } from './plan/tackle-plan';
+export { type PlanAnchorCheck } from './plan/plan-anchor-check';
+export { tacklePlan, type TacklePlanResult } from './plan/tackle-plan';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { numberField } from './fields';
 import { nonEmptyPatchOf, patchOf } from './patch';
 export * from './values/boats';
 import {
@@ -12,19 +13,12 @@ import {
   type PlanCondition,
 } from './values/boats';
 
-const num = (label: string, min: number, max: number, unit: string) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .finite(`${label} must be a number`)
-    .min(min, `${label} must be at least ${min} ${unit}`)
-    .max(max, `${label} must be at most ${max} ${unit}`);
-
 /** Chain size: a trade size in inches or a metric nominal size in mm (exactly one). */
 export const chainSizeSchema = z
   .object({
     grade: z.enum(CHAIN_GRADE_IDS, { error: 'Choose a chain grade' }),
-    tradeSizeIn: num('Trade size', 0.1, 2, 'in').optional(),
-    nominalMm: num('Nominal size', 3, 50, 'mm').optional(),
+    tradeSizeIn: numberField('Trade size', 0.1, 2, 'in').optional(),
+    nominalMm: numberField('Nominal size', 3, 50, 'mm').optional(),
   })
   .refine((c) => (c.tradeSizeIn === undefined) !== (c.nominalMm === undefined), {
     message: 'Give either a trade size (in) or a metric size (mm)',
@@ -39,11 +33,11 @@ export const boatInputSchema = z.object({
     .min(1, 'Name is required')
     .max(80, 'Name is too long'),
   hull: z.enum(HULLS, { error: 'Choose sail, power or multihull' }),
-  loaM: num('Length overall', 2, 60, 'm'),
-  beamM: num('Beam', 0.5, 20, 'm').nullable().optional(),
-  displacementKg: num('Displacement', 50, 500000, 'kg').nullable().optional(),
-  draftM: num('Draft', 0.1, 10, 'm').nullable().optional(),
-  bowHeightM: num('Bow-roller height', 0, 8, 'm').default(1),
+  loaM: numberField('Length overall', 2, 60, 'm'),
+  beamM: numberField('Beam', 0.5, 20, 'm').nullable().optional(),
+  displacementKg: numberField('Displacement', 50, 500000, 'kg').nullable().optional(),
+  draftM: numberField('Draft', 0.1, 10, 'm').nullable().optional(),
+  bowHeightM: numberField('Bow-roller height', 0, 8, 'm').default(1),
   gypsy: chainSizeSchema.nullable().optional(),
   homeHarborId: z.number().int().positive().nullable().optional(),
 });
@@ -70,23 +64,25 @@ export const planComponentsSchema = z.object({
   anchor: z
     .object({
       type: z.enum(ANCHOR_KINDS, { error: 'Choose an anchor type' }),
-      massKg: num('Anchor mass', 0.5, 500, 'kg'),
+      massKg: numberField('Anchor mass', 0.5, 500, 'kg'),
     })
     .optional(),
-  chain: chainSizeSchema.and(z.object({ lengthM: num('Chain length', 0, 500, 'm') })).optional(),
+  chain: chainSizeSchema
+    .and(z.object({ lengthM: numberField('Chain length', 0, 500, 'm') }))
+    .optional(),
   rode: z
     .object({
       material: z.enum(['nylon', 'polyester']),
       construction: z.enum(['three-strand', 'double-braid']),
-      diameterMm: num('Rope diameter', 6, 40, 'mm'),
-      lengthM: num('Rope length', 0, 500, 'm'),
+      diameterMm: numberField('Rope diameter', 6, 40, 'mm'),
+      lengthM: numberField('Rope length', 0, 500, 'm'),
     })
     .optional(),
   snubber: z
     .object({
       material: z.enum(['nylon', 'polyester']),
-      diameterMm: num('Snubber diameter', 6, 40, 'mm'),
-      lengthM: num('Snubber length', 0.5, 60, 'm'),
+      diameterMm: numberField('Snubber diameter', 6, 40, 'mm'),
+      lengthM: numberField('Snubber length', 0.5, 60, 'm'),
       count: z.union([z.literal(1), z.literal(2)], { error: 'One or two snubbers' }).optional(),
     })
     .optional(),
@@ -95,8 +91,8 @@ export const planComponentsSchema = z.object({
     .object({
       material: z.literal('nylon'),
       construction: z.literal('three-strand'),
-      diameterMm: num('Rope diameter', 6, 40, 'mm'),
-      lengthM: num('Rope length', 0, 500, 'm'),
+      diameterMm: numberField('Rope diameter', 6, 40, 'mm'),
+      lengthM: numberField('Rope length', 0, 500, 'm'),
     })
     .optional(),
   connectors: z
@@ -104,9 +100,9 @@ export const planComponentsSchema = z.object({
       z.object({
         label: z.string().trim().min(1, 'Name the connector').max(60),
         kind: z.enum(CONNECTOR_KINDS),
-        nominalIn: num('Shackle size', 0.1, 2, 'in').optional(),
-        wllN: num('Working load limit', 1, 2_000_000, 'N').optional(),
-        minBreakN: num('Breaking strength', 1, 10_000_000, 'N').optional(),
+        nominalIn: numberField('Shackle size', 0.1, 2, 'in').optional(),
+        wllN: numberField('Working load limit', 1, 2_000_000, 'N').optional(),
+        minBreakN: numberField('Breaking strength', 1, 10_000_000, 'N').optional(),
       }),
     )
     .max(12, 'At most 12 connectors')
@@ -118,9 +114,9 @@ export const tacklePlanInputSchema = z.object({
   boatId: z.number({ error: 'Choose a boat' }).int().positive('Choose a boat'),
   name: z.string().trim().min(1, 'Name the plan').max(80),
   condition: z.enum(PLAN_CONDITIONS),
-  windKn: num('Design wind', 5, 120, 'kn'),
-  depthM: num('Depth', 0.5, 100, 'm'),
-  tideM: num('Tidal rise', 0, 15, 'm').default(0),
+  windKn: numberField('Design wind', 5, 120, 'kn'),
+  depthM: numberField('Depth', 0.5, 100, 'm'),
+  tideM: numberField('Tidal rise', 0, 15, 'm').default(0),
   bottom: z.enum(BOTTOMS).optional(),
   components: planComponentsSchema,
   notes: z.string().max(4000, 'Notes are too long').default(''),

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { BOTTOMS, HULLS, planComponentsSchema } from './boats';
+import { numberField } from './fields';
 import { nonEmptyPatchOf } from './patch';
-import type { REPORT_TARGETS } from './moderation';
 import { tiptapDocSchema } from './post-body';
 
 export const POST_KINDS = ['article', 'question'] as const;
@@ -20,26 +20,19 @@ export type PostVisibility = (typeof POST_VISIBILITIES)[number];
 export const COMMENT_STATUSES = ['pending', 'approved', 'rejected', 'hidden'] as const;
 export type CommentStatus = (typeof COMMENT_STATUSES)[number];
 
-const num = (label: string, min: number, max: number, unit: string) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .finite(`${label} must be a number`)
-    .min(min, `${label} must be at least ${min} ${unit}`)
-    .max(max, `${label} must be at most ${max} ${unit}`);
-
 /** A tackle setup carried by a post: the boat, the conditions and the gear (SI units). */
 export const postSetupSchema = z.object({
   boat: z.object({
     label: z.string().trim().max(80).default(''),
     hull: z.enum(HULLS, { error: 'Choose sail, power or multihull' }),
-    loaM: num('Length overall', 2, 60, 'm'),
-    beamM: num('Beam', 0.5, 20, 'm').optional(),
-    displacementKg: num('Displacement', 50, 500000, 'kg').optional(),
-    bowHeightM: num('Bow-roller height', 0, 8, 'm').default(1),
+    loaM: numberField('Length overall', 2, 60, 'm'),
+    beamM: numberField('Beam', 0.5, 20, 'm').optional(),
+    displacementKg: numberField('Displacement', 50, 500000, 'kg').optional(),
+    bowHeightM: numberField('Bow-roller height', 0, 8, 'm').default(1),
   }),
-  windKn: num('Design wind', 5, 100, 'kn'),
-  depthM: num('Depth', 0.5, 100, 'm'),
-  tideM: num('Tidal rise', 0, 15, 'm').default(0),
+  windKn: numberField('Design wind', 5, 100, 'kn'),
+  depthM: numberField('Depth', 0.5, 100, 'm'),
+  tideM: numberField('Tidal rise', 0, 15, 'm').default(0),
   bottom: z.enum(BOTTOMS).optional(),
   components: planComponentsSchema,
 });
@@ -122,188 +115,3 @@ export const topicOrderSchema = z.object({
     .refine((ids) => new Set(ids).size === ids.length, 'Each topic once'),
 });
 export type TopicOrderInput = z.input<typeof topicOrderSchema>;
-
-export interface TopicDto {
-  id: number;
-  slug: string;
-  name: string;
-  description: string;
-  position: number;
-  /** Retired topics keep their posts but are not offered for new ones. */
-  retired: boolean;
-  postCount: number;
-}
-
-export interface PostAuthorDto {
-  id: number;
-  displayName: string;
-}
-
-export interface PostSummaryDto {
-  id: number;
-  kind: PostKind;
-  title: string;
-  excerpt: string;
-  status: PostStatus;
-  visibility: PostVisibility;
-  topic: {
-    id: number;
-    slug: string;
-    name: string; /** In the moderation queue: this entry is an edit of a published post (readers still see the published one). */
-    editOfPublished?: boolean;
-  } | null;
-  author: PostAuthorDto;
-  hasSetup: boolean;
-  helpfulCount: number;
-  commentCount: number;
-  answered: boolean;
-  pinned: boolean;
-  locked: boolean;
-  publishedAt: string | null;
-  updatedAt: string;
-}
-
-/** The figures computed for a post's setup by @app/calc. */
-export interface SetupCardDto {
-  setup: PostSetup;
-  loadN: number;
-  heightM: number;
-  rodeLengthM: number;
-  scopeRatio: number | null;
-  scopeLabel: string | null;
-  weakest: { label: string; marginOnWll: number; breakFactor: number } | null;
-  withinWll: boolean | null;
-  catenary: {
-    suspendedM: number;
-    onBottomM: number;
-    bowAngleDeg: number;
-    anchorAngleDeg: number;
-    liftsAtAnchor: boolean;
-  } | null;
-  /** The setup's anchor against the holding model at the design wind (null without an anchor). */
-  anchor: {
-    massKg: number;
-    neededKg: number | null;
-    meetsMinimum: boolean;
-    meetsSuggested: boolean;
-  } | null;
-  /** What Rodewise recommends for the same boat and wind, the same function as the boat page. */
-  recommendation: {
-    anchorType: string;
-    anchorKg: number | null;
-    chain: string | null;
-    nylon: string | null;
-    snubber: string;
-  } | null;
-  warnings: string[];
-  cautions: string[];
-  basis: string;
-}
-
-export interface CommentDto {
-  id: number;
-  postId: number;
-  parentId: number | null;
-  author: PostAuthorDto;
-  body: string;
-  status: CommentStatus;
-  accepted: boolean;
-  createdAt: string;
-  replies: CommentDto[];
-}
-
-/** Where an edit of a published post stands: waiting, sent back with a note, or turned down. */
-export type RevisionStatus = 'pending' | 'changes-requested' | 'rejected';
-
-/** An edit of a published post that waits for a moderator (shown to its author and moderators only). */
-export interface PostRevisionDto {
-  status: RevisionStatus;
-  kind: PostKind;
-  title: string;
-  topicId: number | null;
-  boatId: number | null;
-  visibility: PostVisibility;
-  body: unknown;
-  bodyHtml: string;
-  setup: PostSetup | null;
-}
-
-export interface PostDetailDto extends PostSummaryDto {
-  body: unknown;
-  bodyHtml: string;
-  /** The author's edit waiting for a moderator; the fields above stay what readers see until it is approved. */
-  revision: PostRevisionDto | null;
-  moderationNote: string | null;
-  boat: { id: number; name: string; hull: string; loaM: number } | null;
-  setupCard: SetupCardDto | null;
-  acceptedCommentId: number | null;
-  comments: CommentDto[];
-  viewer: {
-    canEdit: boolean;
-    canModerate: boolean;
-    canAccept: boolean;
-    hasVoted: boolean;
-    canComment: boolean;
-  };
-}
-
-/** One piece of highlighted text: `match` pieces are the words that matched the search. */
-export interface HighlightPiece {
-  text: string;
-  match: boolean;
-}
-export interface SearchHitDto {
-  post: PostSummaryDto;
-  score: number;
-  title: HighlightPiece[];
-  snippet: HighlightPiece[];
-  terms: string[];
-}
-
-export interface QueueCommentDto extends CommentDto {
-  postTitle: string;
-}
-export interface ReportDto {
-  id: number;
-  targetType: (typeof REPORT_TARGETS)[number];
-  targetId: number;
-  postId: number | null;
-  targetTitle: string;
-  targetExcerpt: string;
-  reason: string;
-  reporter: PostAuthorDto;
-  status: 'open' | 'dismissed' | 'actioned';
-  resolution: string | null;
-  createdAt: string;
-}
-export interface ModerationQueueDto {
-  posts: PostSummaryDto[];
-  comments: QueueCommentDto[];
-  reports: ReportDto[];
-}
-export interface ModerationCountDto {
-  pendingPosts: number;
-  pendingComments: number;
-  openReports: number;
-  /** Open reports on exchange listings. */
-  openListingReports: number;
-  total: number;
-}
-export interface AuditEntryDto {
-  id: number;
-  actor: PostAuthorDto | null;
-  action: string;
-  subjectType: string;
-  subjectId: string | null;
-  reason: string | null;
-  details: unknown;
-  createdAt: string;
-}
-export interface NotificationDto {
-  id: number;
-  kind: string;
-  message: string;
-  link: string | null;
-  readAt: string | null;
-  createdAt: string;
-}

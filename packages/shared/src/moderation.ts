@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { POST_DECISIONS, REPORT_TARGETS, type PostDecision } from './values/moderation';
 
 export * from './values/moderation';
+import type { CommentDto, PostAuthorDto, PostSummaryDto } from './knowledge-dtos';
 
 // Moderators' decisions on posts and comments, their undo, post flags and members' reports.
 
@@ -87,3 +88,43 @@ export const resolveReportSchema = z.object({
   note: reason.default(''),
 });
 export type ResolveReportInput = z.input<typeof resolveReportSchema>;
+
+export interface QueueCommentDto extends CommentDto {
+  postTitle: string;
+}
+export interface ReportDto {
+  id: number;
+  targetType: (typeof REPORT_TARGETS)[number];
+  targetId: number;
+  postId: number | null;
+  targetTitle: string;
+  targetExcerpt: string;
+  reason: string;
+  reporter: PostAuthorDto;
+  status: 'open' | 'dismissed' | 'actioned';
+  resolution: string | null;
+  createdAt: string;
+}
+export interface ModerationQueueDto {
+  posts: PostSummaryDto[];
+  comments: QueueCommentDto[];
+  reports: ReportDto[];
+}
+export interface ModerationCountDto {
+  pendingPosts: number;
+  pendingComments: number;
+  openReports: number;
+  /** Open reports on exchange listings. */
+  openListingReports: number;
+  total: number;
+}
+export interface AuditEntryDto {
+  id: number;
+  actor: PostAuthorDto | null;
+  action: string;
+  subjectType: string;
+  subjectId: string | null;
+  reason: string | null;
+  details: unknown;
+  createdAt: string;
+}

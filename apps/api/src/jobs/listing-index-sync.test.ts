@@ -1,7 +1,7 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { listingSearchSchema } from '@app/shared';
 import { Listing } from '../models';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
+import { client, createTestApp, resetDb, type Client } from '../testing/test-app';
 import {
   chainListing,
   exchangeFixture,
@@ -15,7 +15,7 @@ import {
   rebuildListingIndex,
   searchIndex,
 } from '../modules/listings/listing-index';
-import { buildListing } from '../testing/builders';
+import { buildListing, buildUser } from '../testing/builders';
 
 const built = createTestApp();
 afterAll(() => built.close());

@@ -1,6 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
-import { buildUser, client, createTestApp, resetDb, testDb } from '../testing/test-app';
+import { buildUser } from '../testing/builders';
+import { client, createTestApp, resetDb, testDb } from '../testing/test-app';
 import { SequelizeRateLimitStore } from './rate-limit-store';
 
 const { sequelize } = testDb();

@@ -5,7 +5,7 @@ import { ListingMessage, initListingMessage } from './listing-message.model';
 import { ListingPhoto, initListingPhoto } from './listing-photo.model';
 import { ListingReport, initListingReport } from './listing-report.model';
 import { ListingThread, initListingThread } from './listing-thread.model';
-import { SavedSearch, SavedSearchHit, initSavedSearch } from './saved-search.model';
+import { SavedSearch, initSavedSearch } from './saved-search.model';
 import { User } from './user.model';
 
 /** Registers the exchange models and their associations (called from initModels). */
@@ -28,13 +28,3 @@ export function initExchangeModels(sequelize: Sequelize) {
   ListingReport.belongsTo(Listing, { as: 'listing', foreignKey: 'listingId' });
   ListingReport.belongsTo(User, { as: 'reporter', foreignKey: 'reporterId' });
 }
-
-export {
-  Listing,
-  ListingMessage,
-  ListingPhoto,
-  ListingReport,
-  ListingThread,
-  SavedSearch,
-  SavedSearchHit,
-};

@@ -110,14 +110,12 @@ export {
   UploadedImage,
   ModerationDecision,
 };
-export {
-  Listing,
-  ListingMessage,
-  ListingPhoto,
-  ListingReport,
-  ListingThread,
-  SavedSearch,
-  SavedSearchHit,
-} from './exchange.models';
+// The exchange's models, registered by initExchangeModels.
+export { Listing } from './listing.model';
+export { ListingMessage } from './listing-message.model';
+export { ListingPhoto } from './listing-photo.model';
+export { ListingReport } from './listing-report.model';
+export { ListingThread } from './listing-thread.model';
+export { SavedSearch, SavedSearchHit } from './saved-search.model';
 export type { PostRevision } from './post.model';
 export type { DecisionNotices, RowChange } from './moderation-decision.model';

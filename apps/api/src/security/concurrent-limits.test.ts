@@ -15,8 +15,8 @@ import {
   postPhotos,
   testJpeg,
 } from '../testing/exchange';
-import { buildUser, client, createTestApp, resetDb } from '../testing/test-app';
-import { buildBoat } from '../testing/builders';
+import { client, createTestApp, resetDb } from '../testing/test-app';
+import { buildBoat, buildUser } from '../testing/builders';
 
 const uploadDir = mkdtempSync(join(tmpdir(), 'rw-limits-'));
 const built = createTestApp({ UPLOAD_DIR: uploadDir });

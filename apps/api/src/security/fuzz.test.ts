@@ -3,11 +3,11 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { listRoutes } from '../lib/routes';
 import { MembershipPlan, Topic, type User } from '../models';
 import { chainListing, exchangeFixture } from '../testing/exchange';
-import { buildPayment } from '../testing/builders';
+import { buildPayment, buildUser } from '../testing/builders';
 import { signedInAs } from '../testing/sign-in';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
 import { resetPostIndex } from '../modules/posts/post-index';
-import { buildUser, createTestApp, resetDb, type Client } from '../testing/test-app';
+import { createTestApp, resetDb, type Client } from '../testing/test-app';
 
 // Property-based input tests (fast-check): random JSON thrown at every state-changing route.
 const built = createTestApp({

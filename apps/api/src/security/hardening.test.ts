@@ -6,8 +6,8 @@ import { settleBackground } from '../lib/background';
 import { EmailToken, OutboxEmail, Session, User } from '../models';
 import { passwords } from '../modules/auth/password-hash';
 import { REDACTED_BODY } from '../modules/mail/outbox.service';
+import { buildUser } from '../testing/builders';
 import {
-  buildUser,
   client,
   createTestApp,
   flushOutbox,

@@ -4,7 +4,8 @@ import { join } from 'node:path';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { ListingPhoto } from '../models';
 import { chainListing, exchangeFixture, grantPaidUp } from '../testing/exchange';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
+import { buildUser } from '../testing/builders';
+import { client, createTestApp, resetDb, type Client } from '../testing/test-app';
 
 const uploadDir = mkdtempSync(join(tmpdir(), 'rw-multipart-'));
 const built = createTestApp({ UPLOAD_DIR: uploadDir });

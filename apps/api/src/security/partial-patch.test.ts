@@ -1,5 +1,6 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
-import { buildUser, client, createTestApp, resetDb } from '../testing/test-app';
+import { buildUser } from '../testing/builders';
+import { client, createTestApp, resetDb } from '../testing/test-app';
 import { resetPostIndex } from '../modules/posts/post-index';
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
 

@@ -3,7 +3,8 @@ import request from 'supertest';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { loadEnv } from '../config/env';
 import { Session, User } from '../models';
-import { buildUser, client, createTestApp, resetDb, TEST_PASSWORD } from '../testing/test-app';
+import { buildUser } from '../testing/builders';
+import { client, createTestApp, resetDb, TEST_PASSWORD } from '../testing/test-app';
 
 const built = createTestApp({ LOGIN_RATE_LIMIT: '3', RESET_RATE_LIMIT: '3' });
 // The production configuration behind an https address, as a club would deploy it.

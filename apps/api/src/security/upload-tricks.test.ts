@@ -12,7 +12,8 @@ import {
   postPhotos,
   testJpeg,
 } from '../testing/exchange';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../testing/test-app';
+import { buildUser } from '../testing/builders';
+import { client, createTestApp, resetDb, type Client } from '../testing/test-app';
 
 // Hostile files, all generated here (no binaries in the repository), sent to both upload routes.
 const uploadDir = mkdtempSync(join(tmpdir(), 'rw-upload-tricks-'));

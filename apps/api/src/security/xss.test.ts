@@ -5,14 +5,8 @@ import { chainListing, exchangeFixture, grantPaidUp } from '../testing/exchange'
 import { docOf, seedTopics } from '../modules/posts/testing/knowledge-fixtures';
 import { OWASP_XSS_FILTER_EVASION_PAYLOADS } from '../modules/posts/testing/owasp-xss-payloads';
 import { resetPostIndex } from '../modules/posts/post-index';
-import {
-  buildUser,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  resetDb,
-  type Client,
-} from '../testing/test-app';
+import { buildUser } from '../testing/builders';
+import { createTestApp, flushOutbox, inbox, resetDb, type Client } from '../testing/test-app';
 import { executableMarkup, visibleText } from './html-check';
 import { signedInAs } from '../testing/sign-in';
 

@@ -1,11 +1,34 @@
 import type { InferCreationAttributes, Model } from 'sequelize';
-import { Boat, Listing, MembershipPlan, Payment, Post, type User } from '../models';
+import bcrypt from 'bcryptjs';
+import type { Role } from '@app/shared';
+import { Boat, Listing, MembershipPlan, Post, User, UserRole, type Payment } from '../models';
+import { createPayment } from '../modules/payments/new-payment';
 import { chainListing } from './exchange';
+import { TEST_PASSWORD } from './test-app';
 
 let seq = 0;
 const next = () => (seq += 1);
 
 type Over<M extends Model> = Partial<InferCreationAttributes<M>>;
+
+// Users keep their own counter (user1…, Test Sailor 1…), apart from the other builders' one.
+let userSeq = 0;
+
+/** A verified user with the given roles (member by default), signing in with TEST_PASSWORD. */
+export async function buildUser(
+  opts: { roles?: Role[]; verified?: boolean; email?: string; displayName?: string } = {},
+) {
+  userSeq += 1;
+  const user = await User.create({
+    email: opts.email ?? `user${userSeq}-${Date.now()}@test.example`,
+    displayName: opts.displayName ?? `Test Sailor ${userSeq}`,
+    passwordHash: await bcrypt.hash(TEST_PASSWORD, 4),
+    emailVerifiedAt: opts.verified === false ? null : new Date(),
+  });
+  for (const role of opts.roles ?? ['member'])
+    await UserRole.create({ userId: user.id, role, grantedById: null });
+  return user;
+}
 
 /** A sailing boat of `owner` (9 m, 1 m bow height), overrides last. */
 export const buildBoat = (owner: Pick<User, 'id'>, over: Over<Boat> = {}) =>
@@ -86,7 +109,7 @@ export const buildPayment = (
   plan: Pick<MembershipPlan, 'id'> | null,
   over: Over<Payment> = {},
 ) =>
-  Payment.create({
+  createPayment({
     userId: member.id,
     planId: plan?.id ?? null,
     method: 'cheque',
@@ -94,14 +117,6 @@ export const buildPayment = (
     amountMinor: 12000,
     currency: 'EUR',
     expectedMinor: 12000,
-    coversFrom: null,
-    coversTo: null,
-    providerSessionId: null,
-    providerPaymentIntentId: null,
-    reference: null,
-    note: null,
-    heldReason: null,
-    recordedById: null,
     paidAt: new Date(),
     ...over,
   });

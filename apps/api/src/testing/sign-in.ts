@@ -2,7 +2,8 @@ import type { Role } from '@app/shared';
 import type { BuiltApp } from '../app';
 import { User } from '../models';
 import { grantPaidUp } from './exchange';
-import { buildUser, client, type Client } from './test-app';
+import { buildUser } from './builders';
+import { client, type Client } from './test-app';
 
 /** Who signs in: a role, several roles, or a user built already. */
 export type SignInWho = Role | readonly Role[] | User;

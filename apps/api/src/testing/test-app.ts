@@ -1,13 +1,11 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
-import bcrypt from 'bcryptjs';
 import request from 'supertest';
 import { inject } from 'vitest';
-import type { Role } from '@app/shared';
 import { createApp, type BuiltApp } from '../app';
 import { loadEnv, type Env } from '../config/env';
 import { createSequelize } from '../db';
 import { createLogger } from '../logger';
-import { initModels, User, UserRole } from '../models';
+import { initModels } from '../models';
 import { settleBackground } from '../lib/background';
 import { createTransport, drainOutbox } from '../modules/mail/outbox.service';
 import { clearReadCaches } from '../caches';
@@ -62,24 +60,6 @@ export async function resetDb() {
 }
 
 export const TEST_PASSWORD = 'correct-horse-battery';
-let seq = 0;
-
-/** A verified user with the given roles (member by default). */
-export async function buildUser(
-  opts: { roles?: Role[]; verified?: boolean; email?: string; displayName?: string } = {},
-) {
-  seq += 1;
-  const user = await User.create({
-    email: opts.email ?? `user${seq}-${Date.now()}@test.example`,
-    displayName: opts.displayName ?? `Test Sailor ${seq}`,
-    passwordHash: await bcrypt.hash(TEST_PASSWORD, 4),
-    emailVerifiedAt: opts.verified === false ? null : new Date(),
-  });
-  for (const role of opts.roles ?? ['member'])
-    await UserRole.create({ userId: user.id, role, grantedById: null });
-  return user;
-}
-
 /** A cookie-keeping client with the CSRF token handling the web client does. */
 export async function client(app: BuiltApp['app']) {
   const agent = request.agent(app);

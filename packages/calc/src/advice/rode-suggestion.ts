@@ -116,12 +116,7 @@ function chainChoice(grade: ChainGrade, loadN: number, floorIn: number): ChainCh
   const spec = chainSpec({ grade, tradeSizeIn });
   const row = CHAIN_ROWS.find((r) => Math.abs(r.tradeSizeIn - tradeSizeIn) < 1e-9);
   return {
-    wllN: spec.wllN,
-    minBreakN: spec.minBreakN,
-    kgPerM: spec.kgPerM,
-    extrapolated: spec.extrapolated,
-    basis: spec.basis,
-    cautions: spec.cautions,
+    ...spec,
     grade,
     tradeSizeIn,
     nominalMm: row?.materialMm ?? tradeSizeIn * MM_PER_IN,

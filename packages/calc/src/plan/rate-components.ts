@@ -45,12 +45,7 @@ export function rateChain(plan: CheckedPlan): PlanChainRating | null {
       : chainSpecMetric({ grade, nominalMm: nominalMm ?? 0, extrapolate: plan.extrapolate }),
   );
   return {
-    wllN: spec.wllN,
-    minBreakN: spec.minBreakN,
-    kgPerM: spec.kgPerM,
-    extrapolated: spec.extrapolated,
-    basis: spec.basis,
-    cautions: spec.cautions,
+    ...spec,
     grade,
     lengthM,
   };

@@ -1,32 +1,18 @@
 import { withFieldPrefix } from '../errors';
-import {
-  SHOCK_NYLON_MIN_M,
-  SHOCK_REDUCTION_FACTOR,
-  SNUBBER_WORKING_FACTOR,
-  STORM_WIND_KN,
-} from '../constants';
+import { SHOCK_NYLON_MIN_M, SHOCK_REDUCTION_FACTOR, STORM_WIND_KN } from '../constants';
 import { STANDARD_CAUTIONS } from '../cautions';
-import { anchorSuggestion, type AnchorSuggestionResult } from '../advice/anchor-suggestion';
-import { anchorMassForHoldingKg, heavyBoatFactor } from '../advice/anchor-holding';
 import type { RodeSuggestionResult } from '../advice/rode-suggestion';
 import type { SnubberSuggestionResult } from '../advice/snubber-suggestion';
-import { weakestLink, type RatedComponent, type WeakestLinkResult } from '../checks/weakest-link';
-import { catenary, type CatenaryResult } from '../geometry/catenary';
-import { scopeRung, type ScopeRung } from '../geometry/scope';
-import { swingRadius, type SwingRadiusResult } from '../geometry/swing-radius';
+import type { WeakestLinkResult } from '../checks/weakest-link';
+import type { CatenaryResult } from '../geometry/catenary';
+import type { ScopeRung } from '../geometry/scope';
+import type { SwingRadiusResult } from '../geometry/swing-radius';
 import { designLoad, type DesignLoadResult } from '../loads/design-load';
-import {
-  recommendTackle,
-  UPLIFT_WARN_DEG,
-  type TackleRecommendation,
-} from '../recommend/recommend-tackle';
-import {
-  BURIAL_BOTTOMS,
-  DEFAULT_BOTTOM,
-  type AnchorType,
-  type BurialBottom,
-} from '../tables/anchor-holding';
+import { recommendTackle, type TackleRecommendation } from '../recommend/recommend-tackle';
+import { anchorCheck, type PlanAnchorCheck } from './plan-anchor-check';
+import { geometryOf } from './plan-geometry';
 import { checkPlanInput, type CheckedPlan, type TacklePlanInput } from './plan-input';
+import { snubberWarnings, weakestLinkOf } from './plan-part-checks';
 import {
   rateChain,
   rateConnector,
@@ -35,19 +21,6 @@ import {
   type PlanConnectorRating,
   type PlanRopeRating,
 } from './rate-components';
-
-/** The plan's anchor against the holding model. */
-export interface PlanAnchorCheck {
-  type: AnchorType;
-  massKg: number;
-  suggestion: AnchorSuggestionResult;
-  /** Mass that holds the load this plan's anchor sees (the peak-credited load at the plan's wind), kg; null on rock and weed. */
-  neededKg: number | null;
-  /** massKg ÷ neededKg. */
-  massMargin: number | null;
-  meetsMinimum: boolean;
-  meetsSuggested: boolean;
-}
 
 /** Everything a plan page shows, from {@link tacklePlan}. */
 export interface TacklePlanResult {
@@ -181,183 +154,5 @@ function recommendationFor(plan: CheckedPlan): TackleRecommendation | null {
     });
   } catch {
     return null;
-  }
-}
-
-function weakestLinkOf(
-  loadN: number,
-  designFactor: number | undefined,
-  chain: PlanChainRating | null,
-  rode: PlanRopeRating | null,
-  connectors: PlanConnectorRating[],
-  warnings: string[],
-): WeakestLinkResult | null {
-  const parts: RatedComponent[] = [];
-  if (chain !== null) parts.push({ label: 'chain', wllN: chain.wllN, minBreakN: chain.minBreakN });
-  if (rode !== null) parts.push({ label: 'rope rode', wllN: rode.wllN, minBreakN: rode.minBreakN });
-  for (const c of connectors) parts.push({ label: c.label, wllN: c.wllN, minBreakN: c.minBreakN });
-  if (parts.length === 0) return null;
-  const result = weakestLink({
-    loadN,
-    components: parts,
-    ...(designFactor === undefined ? {} : { designFactor }),
-  });
-  warnings.push(...result.warnings);
-  if (chain !== null) {
-    for (const c of connectors) {
-      if (c.kind === 'shackle' && c.wllN < chain.wllN) {
-        warnings.push(
-          `${c.label}: its WLL is below the chain’s; a shackle should be at least as strong as the chain (Boat Mechanical Systems Handbook).`,
-        );
-      }
-    }
-  }
-  return result;
-}
-
-function anchorCheck(
-  plan: CheckedPlan,
-  checkLoadN: number,
-  warnings: string[],
-): PlanAnchorCheck | null {
-  const anchor = plan.components.anchor;
-  if (anchor === undefined) return null;
-  const suggestion = withFieldPrefix('boat', () =>
-    anchorSuggestion({
-      loaM: plan.boat.loaM,
-      beamM: plan.boat.beamM,
-      hull: plan.boat.hull,
-      displacementKg: plan.boat.displacementKg,
-      windKn: plan.windKn,
-      anchorType: anchor.type,
-      bottom: plan.bottom,
-      extrapolate: plan.extrapolate,
-    }),
-  );
-  const bottom = plan.bottom ?? DEFAULT_BOTTOM;
-  const burial = (BURIAL_BOTTOMS as readonly string[]).includes(bottom);
-  if (!burial) {
-    warnings.push(
-      'On rock or weed no holding curve applies, so the anchor mass is not checked: holding there is unpredictable.',
-    );
-    return {
-      type: anchor.type,
-      massKg: anchor.massKg,
-      suggestion,
-      neededKg: null,
-      massMargin: null,
-      meetsMinimum: false,
-      meetsSuggested: false,
-    };
-  }
-  const heavy = heavyBoatFactor(plan.boat.loaM, plan.boat.displacementKg);
-  const neededKg = anchorMassForHoldingKg(anchor.type, bottom as BurialBottom, checkLoadN * heavy);
-  const meetsMinimum = anchor.massKg >= neededKg;
-  const storm = plan.windKn >= STORM_WIND_KN;
-  const meetsSuggested = storm
-    ? meetsMinimum
-    : anchor.massKg >= (suggestion.suggestedKg ?? Infinity);
-  if (!meetsMinimum)
-    warnings.push(
-      `The anchor is lighter than the ${neededKg.toFixed(1)} kg our holding model needs at ${plan.windKn} kn: choose a heavier anchor or a more efficient type.`,
-    );
-  else if (!meetsSuggested)
-    warnings.push(
-      `The anchor holds ${plan.windKn} kn but not a 42 kn squall, which a working anchor should survive (${(suggestion.suggestedKg ?? 0).toFixed(1)} kg).`,
-    );
-  return {
-    type: anchor.type,
-    massKg: anchor.massKg,
-    suggestion,
-    neededKg,
-    massMargin: anchor.massKg / neededKg,
-    meetsMinimum,
-    meetsSuggested,
-  };
-}
-
-function geometryOf(
-  plan: CheckedPlan,
-  loadN: number,
-  chain: PlanChainRating | null,
-  rode: PlanRopeRating | null,
-  rodeLengthM: number,
-  heightM: number,
-  warnings: string[],
-): Pick<TacklePlanResult, 'scopeRatio' | 'scopeRung' | 'swingRadius' | 'catenary'> {
-  if (rodeLengthM === 0 || heightM <= 0) {
-    return { scopeRatio: null, scopeRung: null, swingRadius: null, catenary: null };
-  }
-  const ratio = rodeLengthM / heightM;
-  const rung = scopeRung(ratio) ?? null;
-  const lowWaterM = plan.depthM + plan.boat.bowHeightM;
-  if (rodeLengthM <= heightM) {
-    warnings.push('The rode is too short to reach the seabed at high water.');
-    return { scopeRatio: ratio, scopeRung: rung, swingRadius: null, catenary: null };
-  }
-  if (ratio < 3)
-    warnings.push(
-      'Scope is below 3:1, the bare minimum even in light weather (Boat Mechanical Systems Handbook).',
-    );
-  else if (ratio < 5 && plan.windKn >= 30)
-    warnings.push('Scope is below 5:1 for a strong wind (Boat Mechanical Systems Handbook).');
-  else if (ratio < 7 && plan.windKn >= 42)
-    warnings.push('Scope is below 7:1 for a storm (Boat Mechanical Systems Handbook).');
-  const swing =
-    rodeLengthM >= lowWaterM
-      ? swingRadius({
-          rodeM: rodeLengthM,
-          depthM: plan.depthM,
-          bowHeightM: plan.boat.bowHeightM,
-          loaM: plan.boat.loaM,
-        })
-      : null;
-  let shape: CatenaryResult | null = null;
-  if (chain !== null) {
-    shape = catenary({
-      depthM: plan.depthM,
-      bowHeightM: plan.boat.bowHeightM,
-      tideM: plan.tideM,
-      chainKgPerM: chain.kgPerM,
-      horizontalLoadN: loadN,
-      chainLengthM: chain.lengthM,
-      ropeLengthM: rode?.lengthM ?? 0,
-      water: plan.water,
-    });
-    if (shape.anchorAngleDeg > UPLIFT_WARN_DEG) {
-      warnings.push(
-        `Under the design load the chain pulls the anchor ${shape.anchorAngleDeg.toFixed(0)}° upward (we warn above ${UPLIFT_WARN_DEG}°): let out more rode, add chain, or hang a kellet.`,
-      );
-    }
-  }
-  return { scopeRatio: ratio, scopeRung: rung, swingRadius: swing, catenary: shape };
-}
-
-function snubberWarnings(
-  plan: CheckedPlan,
-  snubber: PlanRopeRating,
-  rec: TackleRecommendation,
-  warnings: string[],
-): void {
-  const advice = rec.snubber;
-  if (plan.components.snubber?.material === 'polyester') {
-    warnings.push(
-      'The snubber is polyester, which stretches little: nylon absorbs shock far better.',
-    );
-  }
-  const needBreakN = rec.workingLoadN * SNUBBER_WORKING_FACTOR;
-  if (snubber.minBreakN < needBreakN * 0.95) {
-    warnings.push(
-      `The snubber is thinner than suggested: its breaking strength is below ${SNUBBER_WORKING_FACTOR} × the working (30 kn) load.`,
-    );
-  } else if (snubber.diameterMm > advice.diameterMm * 1.35) {
-    warnings.push(
-      'The snubber is much thicker than needed and will stretch little; at storm winds rig a second snubber or a bridle instead.',
-    );
-  }
-  if (snubber.lengthM < advice.lengthM * 0.9) {
-    warnings.push(
-      `The snubber is short: at least ${advice.lengthM.toFixed(1)} m ${rec.storm ? '(the boat’s length, in a storm)' : '(20 ft or half the boat’s length)'} absorbs shock far better.`,
-    );
   }
 }

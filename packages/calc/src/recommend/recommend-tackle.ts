@@ -1,11 +1,5 @@
-import {
-  NYLON_ANCHORING_FACTOR,
-  SHOCK_NYLON_MIN_M,
-  SHOCK_REDUCTION_FACTOR,
-  STORM_WIND_KN,
-} from '../constants';
+import { SHOCK_REDUCTION_FACTOR, STORM_WIND_KN, UPLIFT_WARN_DEG } from '../constants';
 import { STANDARD_CAUTIONS } from '../cautions';
-import { withFieldPrefix } from '../errors';
 import {
   optionalBoolean,
   optionalNumber,
@@ -16,7 +10,6 @@ import {
 import { anchorSuggestion } from '../advice/anchor-suggestion';
 import { rodeSuggestion, type ChainChoice } from '../advice/rode-suggestion';
 import { snubberSuggestion } from '../advice/snubber-suggestion';
-import { catenary, type CatenaryResult } from '../geometry/catenary';
 import { scopeRung } from '../geometry/scope';
 import { designLoad } from '../loads/design-load';
 import { chainSpec } from '../ratings/chain-spec';
@@ -27,11 +20,11 @@ import { CHAIN_GRADES, CHAIN_GRADE_LABELS, CHAIN_ROWS, type ChainGrade } from '.
 import { inchFractionLabel, tradeSizeMm } from '../units/format';
 
 import type { ReasoningStep, RecommendTackleInput, TackleRecommendation } from './recommendation';
+import { reasoningOf } from './recommendation-reasoning';
+import { rodeLayout } from './rode-layout';
 
 export type { ReasoningStep, RecommendTackleInput, TackleRecommendation } from './recommendation';
 
-/** Pull angle above the seabed at the anchor beyond which Rodewise warns, degrees (about 5°, from memory). */
-export const UPLIFT_WARN_DEG = 5;
 /** Bow-roller height taken when none is given, m. */
 export const DEFAULT_BOW_HEIGHT_M = 1;
 
@@ -41,10 +34,6 @@ export function scopeForWind(windKn: number): number {
   if (windKn <= 48) return 7;
   return 10;
 }
-const SCOPE_STEPS = [5, 7, 10] as const;
-
-const ceilTo = (value: number, step: number) => Math.ceil(value / step - 1e-9) * step;
-const kN = (n: number) => `${(n / 1000).toFixed(1)} kN`;
 
 function gypsyChain(
   gypsy: { grade: ChainGrade; tradeSizeIn?: number } | undefined,
@@ -106,7 +95,6 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
   const rodeLoadN = sizingLoadN * peakFactor;
   const loaM = input.loaM;
   const warnings: string[] = [];
-  const reasoning: ReasoningStep[] = [];
 
   const suggestion = anchorSuggestion({
     ...boat,
@@ -136,43 +124,21 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
 
   const heightM = depthM + bowHeightM + tideM;
   const ladderRatio = scopeForWind(windKn);
-  const layout = (ratio: number) => {
-    let rodeM = ceilTo(ratio * heightM, 1);
-    let chainM = rodeM;
-    let nylonM = 0;
-    if (storm) {
-      chainM = Math.min(rodeM, ceilTo(Math.max(3 * loaM, 3 * heightM), 1));
-      nylonM = Math.max(rodeM - chainM, ceilTo(Math.max(SHOCK_NYLON_MIN_M, loaM), 1));
-      rodeM = chainM + nylonM;
-    }
-    return { ratio, rodeM, chainM, nylonM };
-  };
-  const shapeOf = (l: ReturnType<typeof layout>, kgPerM: number) =>
-    l.rodeM > heightM
-      ? withFieldPrefix('catenary', () =>
-          catenary({
-            depthM,
-            bowHeightM,
-            tideM,
-            chainKgPerM: kgPerM,
-            horizontalLoadN: load.loadN * peakFactor,
-            chainLengthM: l.chainM,
-            ropeLengthM: l.nylonM,
-          }),
-        )
-      : null;
-  let plan = layout(ladderRatio);
-  let shape: CatenaryResult | null = null;
-  let steppedUp = false;
-  if (chosenChain !== null) {
-    shape = shapeOf(plan, chosenChain.kgPerM);
-    for (const next of SCOPE_STEPS) {
-      if (next <= plan.ratio || shape === null || shape.anchorAngleDeg <= UPLIFT_WARN_DEG) continue;
-      plan = layout(next);
-      shape = shapeOf(plan, chosenChain.kgPerM);
-      steppedUp = true;
-    }
-  }
+  const {
+    layout: plan,
+    shape,
+    steppedUp,
+  } = rodeLayout({
+    heightM,
+    depthM,
+    bowHeightM,
+    tideM,
+    loaM,
+    storm,
+    ladderRatio,
+    horizontalLoadN: load.loadN * peakFactor,
+    chainKgPerM: chosenChain === null ? null : chosenChain.kgPerM,
+  });
   const ratio = plan.ratio;
   const rodeLengthM = plan.rodeM;
   const chainLengthM = plan.chainM;
@@ -206,73 +172,36 @@ export function recommendTackle(input: RecommendTackleInput): TackleRecommendati
       'No shackle in the table matches this chain’s WLL: use a rated connector of at least the chain’s WLL.',
     );
 
-  // Reasoning, in plain words with sources.
-  const rowText =
-    load.governedBy === 'beam'
-      ? `entered by beam, which gives a larger load than the length here (the ${load.rowLoaFt.toFixed(1)} ft row)`
-      : `entered by length (the ${load.rowLoaFt.toFixed(1)} ft row)`;
-  reasoning.push({
-    topic: 'load',
-    text:
-      `Design load ${kN(load.loadN)} at ${windKn} kn from the ABYC H-40 table of horizontal loads (values from memory), ${rowText}` +
-      (windKn > 42
-        ? ', scaled with wind speed squared beyond the 42 kn column (extrapolated)'
-        : '') +
-      `. The working gear is sized for ${sizingKn} kn (${kN(sizingLoadN)}), because it must survive a squall.`,
+  const reasoning: ReasoningStep[] = reasoningOf({
+    windKn,
+    load,
+    sizingKn,
+    sizingLoadN,
+    anchorBasis: suggestion.basis,
+    chain,
+    rodeLoadN,
+    fromGypsy: input.gypsy?.tradeSizeIn !== undefined && fromGypsy !== null,
+    rodeBasis: rode.basis,
+    storm,
+    chainLengthM,
+    nylonLengthM,
+    nylon,
+    snubberBasis: snubber.basis,
+    shackle,
+    ratio,
+    heightM,
+    depthM,
+    bowHeightM,
+    tideM,
+    rodeLengthM,
+    steppedUp,
+    ladderRatio,
+    shape,
   });
-  reasoning.push({ topic: 'anchor', text: suggestion.basis });
-  if (chain !== null)
-    reasoning.push({
-      topic: 'chain',
-      text:
-        `${CHAIN_GRADE_LABELS[chain.grade]} ${inchFractionLabel(chain.tradeSizeIn)} (${chain.nominalMm} mm): WLL ${kN(chain.wllN)}, ` +
-        `${chain.marginOnWll.toFixed(2)} × the ${kN(rodeLoadN)} it is sized for. ` +
-        (chain.governedBy === 'practice-floor'
-          ? input.gypsy?.tradeSizeIn !== undefined && fromGypsy !== null
-            ? 'Your gypsy’s size, which carries the load. '
-            : 'The load alone would allow a lighter chain; the practice floor for the boat’s length sets this size. '
-          : '') +
-        (rode.basis.split('Nylon')[0] ?? '').trim(),
-    });
-  if (storm)
-    reasoning.push({
-      topic: 'chain',
-      text: `Storm rode: ${chainLengthM} m of chain at the anchor, then ${nylonLengthM} m of nylon, the stretchy part. With that much nylon in the rode we size chain, nylon and shackle at ${Math.round(SHOCK_REDUCTION_FACTOR * 100)} % of the table load (Rodewise's assumption, below the 50–70 % peak cuts measured for long snubbers, Practical Sailor 2016); the anchor takes no credit.`,
-    });
-  if (nylon !== null)
-    reasoning.push({
-      topic: 'nylon',
-      text:
-        `${inchFractionLabel(nylon.sizeIn)} (${nylon.sizeMm} mm) nylon three-strand, or ${nylon.metricMm} mm metric rope: ` +
-        `${nylon.governedBy === 'handbook-rule' ? 'the handbook rule for the anchor (0.2 in + anchor lb ÷ 185) governs' : `strength governs: wet breaking at least ${NYLON_ANCHORING_FACTOR} × the load`}; wet breaking ${kN(nylon.minBreakN)}, working limit ${kN(nylon.workingLimitN)}. ` +
-        (nylon.role === 'alternative' ? 'Use this size if your rode is chain and rope. ' : '') +
-        'The 49 CFR 393.108 tie-down rating of rope is a cargo rating and is not used for anchoring.',
-    });
-  reasoning.push({ topic: 'snubber', text: snubber.basis });
-  if (shackle !== null && chain !== null)
-    reasoning.push({
-      topic: 'shackle',
-      text: `${inchFractionLabel(shackle.nominalIn)} forged shackle: WLL ${kN(shackle.wllN)}, at least the chain's ${kN(chain.wllN)} (one rule: shackle WLL ≥ chain WLL, Boat Mechanical Systems Handbook; RR-C-271 table, from memory).`,
-    });
-  reasoning.push({
-    topic: 'scope',
-    text:
-      `${ratio}:1 scope on ${heightM.toFixed(1)} m from seabed to bow roller at high water (depth ${depthM} m + bow ${bowHeightM} m + tide ${tideM} m): ${rodeLengthM} m of rode (ladder 5:1 most weather, 7:1 storms, 10:1 severe, Boat Mechanical Systems Handbook)` +
-      (steppedUp
-        ? `; stepped up from ${ladderRatio}:1 so the chain does not lift the anchor more than ${UPLIFT_WARN_DEG}°.`
-        : '.'),
-  });
-  if (shape !== null) {
-    const lifts = shape.anchorAngleDeg > UPLIFT_WARN_DEG;
-    reasoning.push({
-      topic: 'uplift',
-      text: `At ${windKn} kn the pull at the anchor is ${shape.anchorAngleDeg.toFixed(1)}° above the seabed with ${shape.onBottomM.toFixed(1)} m of chain lying on it (catenary after MIT 2.019). We warn above ${UPLIFT_WARN_DEG}° (from memory): beyond that a drag anchor starts to lose holding.`,
-    });
-    if (lifts)
-      warnings.push(
-        `At ${windKn} kn the chain pulls the anchor ${shape.anchorAngleDeg.toFixed(0)}° upward: let out more rode, add chain, or hang a weight (kellet) on the rode.`,
-      );
-  }
+  if (shape !== null && shape.anchorAngleDeg > UPLIFT_WARN_DEG)
+    warnings.push(
+      `At ${windKn} kn the chain pulls the anchor ${shape.anchorAngleDeg.toFixed(0)}° upward: let out more rode, add chain, or hang a weight (kellet) on the rode.`,
+    );
 
   if (suggestion.suggestedKg === null)
     warnings.push(

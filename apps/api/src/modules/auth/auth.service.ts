@@ -25,6 +25,31 @@ const dummyHash = (cost: number) => {
   return h;
 };
 
+/** Queues an e-mail to the member, greeted by name, through the outbox (inside `transaction` when given). */
+const mailMember = (
+  user: Pick<User, 'email' | 'displayName'>,
+  mail: Omit<Parameters<typeof actionEmail>[0], 'to' | 'greeting'>,
+  transaction?: Transaction,
+) =>
+  enqueueEmail(
+    actionEmail({ to: user.email, greeting: `Hello ${user.displayName},`, ...mail }),
+    transaction,
+  );
+
+/** What a member reads after their password changed, however it changed. */
+const PASSWORD_CHANGED_MAIL = {
+  kind: 'password-changed',
+  subject: 'Your Rodewise password was changed',
+  footer: 'If this was not you, reset your password now and tell your club admin.',
+};
+
+/** Logs a password change or reset on the member's own account, in its transaction. */
+const auditPassword = (userId: number, action: string, transaction: Transaction) =>
+  recordAudit(
+    { actorId: userId, area: 'auth', action, subjectType: 'user', subjectId: String(userId) },
+    transaction,
+  );
+
 export const findUserByEmail = (email: string) =>
   User.findOne({
     where: { email: email.trim().toLowerCase() },
@@ -45,19 +70,15 @@ export async function signup(deps: AuthDeps, input: SignupInput): Promise<void> 
     passwords.hash(input.password, deps.bcryptCost),
   ]);
   if (existing) {
-    await enqueueEmail(
-      actionEmail({
-        to: existing.email,
-        kind: 'signup-existing',
-        subject: 'You already have a Rodewise account',
-        greeting: `Hello ${existing.displayName},`,
-        lines: [
-          'Someone (perhaps you) tried to join Rodewise with this e-mail address, which already has an account.',
-        ],
-        actionLabel: 'Reset your password',
-        actionUrl: `${deps.publicUrl}/reset`,
-      }),
-    );
+    await mailMember(existing, {
+      kind: 'signup-existing',
+      subject: 'You already have a Rodewise account',
+      lines: [
+        'Someone (perhaps you) tried to join Rodewise with this e-mail address, which already has an account.',
+      ],
+      actionLabel: 'Reset your password',
+      actionUrl: `${deps.publicUrl}/reset`,
+    });
     return;
   }
   // New members start in the club's units; they can switch on any tackle screen.
@@ -144,18 +165,14 @@ export async function requestPasswordReset(deps: AuthDeps, email: string): Promi
   const user = await findUserByEmail(email);
   if (!user) return;
   const token = await issueToken(user.id, 'reset');
-  await enqueueEmail(
-    actionEmail({
-      to: user.email,
-      kind: 'password-reset',
-      subject: 'Reset your Rodewise password',
-      greeting: `Hello ${user.displayName},`,
-      lines: ['We received a request to reset your password. The link works once, for one hour.'],
-      actionLabel: 'Choose a new password',
-      actionUrl: `${deps.publicUrl}/reset-password?token=${token}`,
-      footer: 'If you did not ask for this, ignore this e-mail: your password stays as it is.',
-    }),
-  );
+  await mailMember(user, {
+    kind: 'password-reset',
+    subject: 'Reset your Rodewise password',
+    lines: ['We received a request to reset your password. The link works once, for one hour.'],
+    actionLabel: 'Choose a new password',
+    actionUrl: `${deps.publicUrl}/reset-password?token=${token}`,
+    footer: 'If you did not ask for this, ignore this e-mail: your password stays as it is.',
+  });
 }
 
 /** Sets a new password from a reset link, signs the user out everywhere, and confirms by e-mail. */
@@ -173,25 +190,13 @@ export async function confirmPasswordReset(
       { transaction: t },
     );
     await Session.destroy({ where: { userId }, transaction: t });
-    await recordAudit(
+    await auditPassword(userId, 'password.reset', t);
+    await mailMember(
+      user,
       {
-        actorId: userId,
-        area: 'auth',
-        action: 'password.reset',
-        subjectType: 'user',
-        subjectId: String(userId),
-      },
-      t,
-    );
-    await enqueueEmail(
-      actionEmail({
-        to: user.email,
-        kind: 'password-changed',
-        subject: 'Your Rodewise password was changed',
-        greeting: `Hello ${user.displayName},`,
+        ...PASSWORD_CHANGED_MAIL,
         lines: ['Your password was just changed and every device was signed out.'],
-        footer: 'If this was not you, reset your password now and tell your club admin.',
-      }),
+      },
       t,
     );
   });
@@ -220,27 +225,15 @@ export async function changePassword(
       where: { userId: user.id, sid: { [Op.ne]: currentSessionId } },
       transaction: t,
     });
-    await recordAudit(
+    await auditPassword(user.id, 'password.change', t);
+    await mailMember(
+      user,
       {
-        actorId: user.id,
-        area: 'auth',
-        action: 'password.change',
-        subjectType: 'user',
-        subjectId: String(user.id),
-      },
-      t,
-    );
-    await enqueueEmail(
-      actionEmail({
-        to: user.email,
-        kind: 'password-changed',
-        subject: 'Your Rodewise password was changed',
-        greeting: `Hello ${user.displayName},`,
+        ...PASSWORD_CHANGED_MAIL,
         lines: [
           'Your password was just changed from your account page. Every other device was signed out; the one you used stays signed in.',
         ],
-        footer: 'If this was not you, reset your password now and tell your club admin.',
-      }),
+      },
       t,
     );
   });

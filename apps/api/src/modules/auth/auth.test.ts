@@ -1,8 +1,8 @@
 import request from 'supertest';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { Session, User } from '../../models';
+import { buildUser } from '../../testing/builders';
 import {
-  buildUser,
   client,
   createTestApp,
   flushOutbox,

@@ -1,6 +1,7 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { Boat } from '../../models';
-import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, resetDb } from '../../testing/test-app';
 
 const built = createTestApp();
 afterAll(() => built.close());

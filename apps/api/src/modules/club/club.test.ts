@@ -1,7 +1,8 @@
 import { afterAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { DEFAULT_CLUB_LOCALE, displayLocale, formatMoney, setDisplayLocale } from '@app/shared';
 import { AuditEvent, Harbor, User } from '../../models';
-import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, resetDb } from '../../testing/test-app';
 import { setSetting } from './club.service';
 
 const built = createTestApp();

@@ -5,7 +5,8 @@ import type { Env } from '../../config/env';
 import { currentUser, requireAuth } from '../../middleware/require-auth';
 import { MembershipPlan } from '../../models';
 import { toPlanDto } from './dues.presenter';
-import * as dues from './dues.service';
+import { checkoutStatus, startCheckout } from './checkout.service';
+import { getMyDues } from './dues.service';
 
 const sessionParam = z.object({
   sessionId: z.string().regex(/^cs_[A-Za-z0-9_]{4,250}$/, 'Unknown checkout'),
@@ -23,15 +24,15 @@ export function duesRouter(env: Env) {
     res.json({ data: plans.map(toPlanDto) });
   });
   r.get('/me', async (req, res) => {
-    res.json({ data: await dues.getMyDues(currentUser(req)) });
+    res.json({ data: await getMyDues(currentUser(req)) });
   });
   r.post('/checkout', async (req, res) => {
     const input = checkoutInputSchema.parse(req.body ?? {});
-    res.status(201).json({ data: await dues.startCheckout(currentUser(req), input, env) });
+    res.status(201).json({ data: await startCheckout(currentUser(req), input, env) });
   });
   r.get('/checkout/:sessionId', async (req, res) => {
     const { sessionId } = sessionParam.parse(req.params);
-    res.json({ data: await dues.checkoutStatus(currentUser(req), sessionId) });
+    res.json({ data: await checkoutStatus(currentUser(req), sessionId) });
   });
   return r;
 }

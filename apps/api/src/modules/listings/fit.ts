@@ -11,6 +11,7 @@ import {
 } from '@app/calc';
 import type { FitBasisDto, FitDto } from '@app/shared';
 import type { Boat } from '../../models';
+import { calcBoatOf } from '../boats/calc-boat';
 import type { GypsySize, ListingRating } from './listing-specs';
 
 /** Design wind used when the member picks none, knots (the ABYC H-40 30-knot column). */
@@ -48,15 +49,11 @@ export function boatNeeds(boat: Boat, windKn = DEFAULT_FIT_WIND_KN): BoatNeeds {
     let r = recs.get(anchorType);
     if (!r) {
       r = recommendTackle({
-        loaM: boat.loaM,
-        hull: boat.hull,
+        ...calcBoatOf(boat),
         windKn,
         anchorType,
         depthM: FIT_DEPTH_M,
-        bowHeightM: boat.bowHeightM,
         extrapolate: true,
-        ...(boat.beamM ? { beamM: boat.beamM } : {}),
-        ...(boat.displacementKg ? { displacementKg: boat.displacementKg } : {}),
       });
       recs.set(anchorType, r);
     }

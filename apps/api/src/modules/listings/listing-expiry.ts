@@ -2,7 +2,7 @@ import { Listing, User } from '../../models';
 import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { refreshListing } from './listing-index';
-import { dueForExpiry, type ExchangeContext } from './listings.service';
+import { dueForExpiry, type ExchangeContext } from './listing-reads.service';
 
 /**
  * Expires every active listing whose 60 days have run out by `at` and queues a renewal e-mail to its seller.

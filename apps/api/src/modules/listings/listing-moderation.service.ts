@@ -6,7 +6,7 @@ import { enqueueEmail } from '../mail/outbox.service';
 import { actionEmail } from '../mail/templates';
 import { DecisionRecord } from '../audit/decision-record';
 import { refreshListing } from './listing-index';
-import { getVisibleListing, listingUrl, type ExchangeContext } from './listings.service';
+import { getVisibleListing, listingUrl, type ExchangeContext } from './listing-reads.service';
 import { canReportListing } from '../../policies/listings';
 
 /** A member reports a listing they can see (not their own); once per member and listing. */

@@ -5,7 +5,7 @@ import { assertImageRoom } from '../uploads/image-quota';
 import { processImage, type ProcessedImage } from '../uploads/image';
 import { getStorage, newKey, thumbKey } from '../uploads/storage';
 import { listingChanged } from './listing-index';
-import { getOwnListing } from './listings.service';
+import { getOwnListing } from './listing-reads.service';
 
 const FIELD = 'photos';
 

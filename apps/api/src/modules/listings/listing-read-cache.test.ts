@@ -1,6 +1,7 @@
 import { afterAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { Harbor, Listing, Membership, MembershipPlan, User } from '../../models';
-import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, resetDb } from '../../testing/test-app';
 import {
   chainListing,
   exchangeFixture,

@@ -3,7 +3,7 @@ import type { ListingDto } from '@app/shared';
 import { AppError } from '../../errors/app-error';
 import { onListingsReread } from './listing-index';
 import { toListingDto } from './listings.presenter';
-import { getVisibleListingPage } from './listings.service';
+import { getVisibleListingPage } from './listing-reads.service';
 
 /**
  * How long a visitor's copy of a listing page may be reused. Writes in this process clear it at once; a change

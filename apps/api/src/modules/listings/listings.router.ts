@@ -24,6 +24,8 @@ import * as photos from './listing-photos.service';
 import { ratingOf } from './listing-specs';
 import { toListingDto, toListingPhotoDto } from './listings.presenter';
 import { searchResponse } from './search-response';
+import * as reads from './listing-reads.service';
+import { markSold } from './listing-sale.service';
 import * as listings from './listings.service';
 import { threadsOfListing } from '../threads/threads.service';
 import { ROLES_MODERATOR } from '../../policies/roles';
@@ -44,11 +46,11 @@ const viewerOf = (req: Request): User | null => req.user ?? null;
 const idOf = (req: Request) => Number(listingParams.parse(req.params).listingId);
 
 /** `/api/listings`: the gear exchange (search, listing life-cycle, photos, reports, moderation). */
-export function listingsRouter(ctx: listings.ExchangeContext) {
+export function listingsRouter(ctx: reads.ExchangeContext) {
   const r = Router();
   const show = async (req: Request, id: number) => {
     const viewer = viewerOf(req);
-    const { listing, seller } = await listings.getVisibleListingPage(viewer, id);
+    const { listing, seller } = await reads.getVisibleListingPage(viewer, id);
     const { fitsBoat, windKn } = fitQuery.parse(req.query);
     const fit =
       fitsBoat && viewer
@@ -57,7 +59,7 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
             boatNeeds(await getOwnBoat(viewer, fitsBoat), windKn ?? DEFAULT_FIT_WIND_KN),
           )
         : undefined;
-    const soldTo = await listings.soldToFor(viewer, listing);
+    const soldTo = await reads.soldToFor(viewer, listing);
     return toListingDto(listing, seller, {
       isMine: viewer?.id === listing.sellerId,
       fit,
@@ -80,8 +82,8 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
   });
   r.get('/mine', requireAuth(), async (req, res) => {
     const actor = currentUser(req);
-    const seller = await listings.sellerOf(actor.id);
-    const mine = await listings.listMine(actor);
+    const seller = await reads.sellerOf(actor.id);
+    const mine = await reads.listMine(actor);
     res.json({ data: mine.map((l) => toListingDto(l, seller, { isMine: true })) });
   });
   r.get('/reports', requireRole(...ROLES_MODERATOR), async (_req, res) => {
@@ -145,12 +147,12 @@ export function listingsRouter(ctx: listings.ExchangeContext) {
   r.post('/:listingId/sold', requireAuth(), async (req, res) => {
     const id = idOf(req);
     const { threadId } = markSoldSchema.parse(req.body ?? {});
-    await listings.markSold(ctx, currentUser(req), id, threadId);
+    await markSold(ctx, currentUser(req), id, threadId);
     res.json({ data: await show(req, id) });
   });
   r.get('/:listingId/threads', requireAuth(), async (req, res) => {
     const id = idOf(req);
-    await listings.getOwnListing(currentUser(req), id);
+    await reads.getOwnListing(currentUser(req), id);
     res.json({ data: await threadsOfListing(currentUser(req), id) });
   });
   r.post(

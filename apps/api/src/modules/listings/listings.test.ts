@@ -5,15 +5,8 @@ import sharp from 'sharp';
 import { afterAll, afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { AuditEvent, Listing, ListingPhoto } from '../../models';
 import { setSetting } from '../club/club.service';
-import {
-  buildUser,
-  client,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  linkIn,
-  resetDb,
-} from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, flushOutbox, inbox, linkIn, resetDb } from '../../testing/test-app';
 import {
   chainListing,
   exchangeFixture,

@@ -15,7 +15,10 @@ import { approvedCommentCounts } from '../posts/post-access';
 import { toCommentDto, toPostSummaryDto } from '../posts/posts.presenter';
 import { toAuditEntryDto, toQueueCommentDto, toReportDto } from './moderation.presenter';
 import { undoDecision } from './decisions.service';
+import { decideComment } from './comment-decisions.service';
 import * as mod from './moderation.service';
+import { decidePost } from './post-decisions.service';
+import { setFlags } from './post-flags.service';
 import { createReport, resolveReport } from './reports.service';
 import { ROLES_MODERATOR, ROLES_MODERATOR_OR_ADMIN } from '../../policies/roles';
 
@@ -66,7 +69,7 @@ export function moderationRouter(ctx: mod.ModContext) {
     res.json({ data: await mod.counts() });
   });
   r.post('/posts/:postId/decision', async (req, res) => {
-    const { row, decision } = await mod.decidePost(
+    const { row, decision } = await decidePost(
       ctx,
       currentUser(req),
       id('postId', req.params),
@@ -75,7 +78,7 @@ export function moderationRouter(ctx: mod.ModContext) {
     res.json({ data: { id: row.id, status: row.status, decisionId: decision.id } });
   });
   r.patch('/posts/:postId/flags', async (req, res) => {
-    const post = await mod.setFlags(
+    const post = await setFlags(
       ctx,
       currentUser(req),
       id('postId', req.params),
@@ -91,7 +94,7 @@ export function moderationRouter(ctx: mod.ModContext) {
     });
   });
   r.post('/comments/:commentId/decision', async (req, res) => {
-    const { row, decision } = await mod.decideComment(
+    const { row, decision } = await decideComment(
       ctx,
       currentUser(req),
       id('commentId', req.params),

@@ -18,7 +18,6 @@ import {
   Refund,
 } from '../../models';
 import {
-  buildUser,
   client,
   createTestApp,
   flushOutbox,
@@ -26,7 +25,7 @@ import {
   resetDb,
   type Client,
 } from '../../testing/test-app';
-import { buildPayment } from '../../testing/builders';
+import { buildPayment, buildUser } from '../../testing/builders';
 
 const SECRET = 'whsec_dues_test_secret';
 const KEY = 'sk_test_dues_test_key';

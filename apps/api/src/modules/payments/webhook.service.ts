@@ -10,6 +10,7 @@ import {
 } from '../dues/ledger-effects';
 import { toIsoDate } from '../dues/calendar';
 import { duesCalendar } from '../dues/dues.service';
+import { createPayment } from './new-payment';
 import { amountMismatchReason, owedOn } from '../dues/owed';
 
 export interface WebhookDeps {
@@ -132,26 +133,19 @@ async function sessionCompleted(
     // Money arrived for a session we did not open: keep it on the ledger for the treasurer, never credit it.
     const userId = Number(session.metadata?.userId);
     if (!Number.isInteger(userId) || userId <= 0) return ignored('unknown-session');
-    const held = await Payment.create(
+    const held = await createPayment(
       {
         userId,
-        planId: null,
         method: 'card',
         status: 'held',
         amountMinor: amount,
         currency: currency.slice(0, 3) || 'XXX',
-        expectedMinor: null,
-        coversFrom: null,
-        coversTo: null,
         providerSessionId: session.id,
         providerPaymentIntentId: intent,
-        reference: null,
-        note: null,
         heldReason: 'Paid through a checkout this club did not open',
-        recordedById: null,
         paidAt: new Date(),
       },
-      { transaction: t },
+      t,
     );
     return paymentSubject(held, 'held');
   }

@@ -1,15 +1,8 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { Notification, OutboxEmail, User } from '../../models';
 import { resetPostIndex } from '../posts/post-index';
-import {
-  buildUser,
-  client,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  linkIn,
-  resetDb,
-} from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, flushOutbox, inbox, linkIn, resetDb } from '../../testing/test-app';
 import { docOf, seedTopics } from './testing/knowledge-fixtures';
 import { OWASP_XSS_FILTER_EVASION_PAYLOADS } from './testing/owasp-xss-payloads';
 import { executableMarkup, visibleText } from '../../security/html-check';

@@ -2,9 +2,9 @@ import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import type { User } from '../../models';
 import { Post } from '../../models';
 import { seedTopics } from './testing/knowledge-fixtures';
-import { buildUser, createTestApp, resetDb } from '../../testing/test-app';
+import { createTestApp, resetDb } from '../../testing/test-app';
 import { highlight, resetPostIndex, searchPosts, snippet } from './post-index';
-import { buildPost } from '../../testing/builders';
+import { buildPost, buildUser } from '../../testing/builders';
 
 const built = createTestApp();
 afterAll(() => built.close());

@@ -1,7 +1,8 @@
 import { afterAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { Comment, Post } from '../../models';
 import { resetPostIndex } from '../posts/post-index';
-import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, resetDb } from '../../testing/test-app';
 import { anonymousPostDetail, clearAnonymousPostCache } from './post-read-cache';
 import { docOf, seedTopics } from './testing/knowledge-fixtures';
 

@@ -1,13 +1,7 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { SavedSearchHit } from '../../models';
-import {
-  buildUser,
-  client,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  resetDb,
-} from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, flushOutbox, inbox, resetDb } from '../../testing/test-app';
 import { chainListing, exchangeFixture, grantPaidUp } from '../../testing/exchange';
 
 const built = createTestApp();

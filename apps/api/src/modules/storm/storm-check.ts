@@ -7,6 +7,8 @@ import {
 } from '@app/calc';
 import { TIGHT_MARGIN_BELOW, type MarginBand, type StormCheckDto } from '@app/shared';
 import type { Boat, StormWatch, TacklePlan } from '../../models';
+import { calcBoatOf } from '../boats/calc-boat';
+import { planInputOf } from '../tackle-plans/plan-compute';
 
 /** Cautions shown with every storm check, before the calc package's own. */
 export const STORM_CAUTIONS: readonly string[] = Object.freeze([
@@ -22,23 +24,16 @@ export function stormPlanInput(
   plan: TacklePlan,
   opts: { windKn: number; depthM: number | null; surgeM: number },
 ): TacklePlanInput {
-  return {
-    boat: {
-      loaM: boat.loaM,
-      hull: boat.hull,
-      bowHeightM: boat.bowHeightM,
-      ...(boat.beamM ? { beamM: boat.beamM } : {}),
-      ...(boat.displacementKg ? { displacementKg: boat.displacementKg } : {}),
-    },
+  // planInputOf extrapolates: storm winds lie beyond the 42 kn column of the load table, which the calc package
+  // scales with V² and flags.
+  return planInputOf(boat, {
     windKn: opts.windKn,
     depthM: opts.depthM ?? plan.depthM,
     // The surge raises the water on top of the tide still to come.
     tideM: plan.tideM + opts.surgeM,
     ...(plan.bottom ? { bottom: plan.bottom } : {}),
-    // Storm winds lie beyond the 42 kn column of the load table: the calc package scales them with V² and flags it.
-    extrapolate: true,
     components: plan.components,
-  };
+  });
 }
 
 /** Storm-specific warnings the calc package does not give: chafe and snubbers (common practice). */
@@ -79,11 +74,7 @@ function recommendationAt(
 ): StormCheckDto['recommended'] {
   try {
     const rec = recommendTackle({
-      loaM: boat.loaM,
-      hull: boat.hull,
-      bowHeightM: boat.bowHeightM,
-      ...(boat.beamM ? { beamM: boat.beamM } : {}),
-      ...(boat.displacementKg ? { displacementKg: boat.displacementKg } : {}),
+      ...calcBoatOf(boat),
       windKn: input.windKn,
       anchorType: plan.components.anchor?.type ?? 'plow',
       ...(plan.bottom ? { bottom: plan.bottom } : {}),

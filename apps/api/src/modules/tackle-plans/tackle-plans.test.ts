@@ -1,7 +1,8 @@
 import { designLoad, planComponentsFrom, recommendTackle, tacklePlan } from '@app/calc';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { TacklePlan } from '../../models';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, resetDb, type Client } from '../../testing/test-app';
 
 const built = createTestApp();
 afterAll(() => built.close());

@@ -16,6 +16,7 @@ import {
 import { owedOn } from '../dues/owed';
 import { duesCalendar } from '../dues/dues.service';
 import { creditMembership, queueReceipt } from '../dues/ledger-effects';
+import { createPayment } from '../payments/new-payment';
 
 type OfflineInput = z.output<typeof offlinePaymentSchema>;
 type ResolveInput = z.output<typeof resolveHeldSchema>;
@@ -100,7 +101,7 @@ export async function recordOfflinePayment(
       coversTo = next.end;
     }
     const expected = q ? q.totalMinor : plan.amountMinor;
-    const payment = await Payment.create(
+    const payment = await createPayment(
       {
         userId: user.id,
         planId: plan.id,
@@ -111,15 +112,12 @@ export async function recordOfflinePayment(
         expectedMinor: expected,
         coversFrom,
         coversTo,
-        providerSessionId: null,
-        providerPaymentIntentId: null,
         reference: input.reference,
         note: input.note || null,
-        heldReason: null,
         recordedById: actor.id,
         paidAt: new Date(`${input.receivedOn}T12:00:00Z`),
       },
-      { transaction: t },
+      t,
     );
     const membership = await creditMembership(payment, t);
     await queueReceipt(payment, deps.env.PUBLIC_URL, t);

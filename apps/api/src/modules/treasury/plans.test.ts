@@ -1,8 +1,8 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Membership, MembershipPlan } from '../../models';
-import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
+import { client, createTestApp, resetDb } from '../../testing/test-app';
 import { calendarView } from './calendar.service';
-import { buildPayment, buildPlan } from '../../testing/builders';
+import { buildPayment, buildPlan, buildUser } from '../../testing/builders';
 
 const built = createTestApp();
 afterAll(() => built.close());

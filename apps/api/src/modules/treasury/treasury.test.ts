@@ -1,15 +1,8 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { AuditEvent, Membership, MembershipPlan, OutboxEmail, Payment } from '../../models';
 import { LEDGER_COLUMNS } from './ledger-csv';
-import {
-  buildUser,
-  client,
-  createTestApp,
-  flushOutbox,
-  inbox,
-  resetDb,
-} from '../../testing/test-app';
-import { buildPayment } from '../../testing/builders';
+import { client, createTestApp, flushOutbox, inbox, resetDb } from '../../testing/test-app';
+import { buildPayment, buildUser } from '../../testing/builders';
 
 const built = createTestApp();
 afterAll(() => built.close());

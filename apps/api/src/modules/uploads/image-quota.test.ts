@@ -5,7 +5,8 @@ import sharp from 'sharp';
 import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { UploadedImage } from '../../models';
 import { resetPostIndex } from '../posts/post-index';
-import { buildUser, client, createTestApp, resetDb, type Client } from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, resetDb, type Client } from '../../testing/test-app';
 import {
   chainListing,
   exchangeFixture,

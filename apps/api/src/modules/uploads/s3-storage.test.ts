@@ -5,7 +5,8 @@ import { join } from 'node:path';
 import S3rver from 's3rver';
 import sharp from 'sharp';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { buildUser, client, createTestApp, resetDb } from '../../testing/test-app';
+import { buildUser } from '../../testing/builders';
+import { client, createTestApp, resetDb } from '../../testing/test-app';
 import { s3Storage } from './s3-storage';
 import { getStorage, keyFromUrl } from './storage';
 
