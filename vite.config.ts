@@ -87,13 +87,38 @@ export function routePreloads(): Plugin {
   };
 }
 
+/**
+ * Adds `<link rel="preload" as="font">` for the faces the first screen sets its text in (regular and bold upright),
+ * so they arrive with the first scripts and text does not reflow when they swap in (layout shift). Italic is
+ * left to load on use.
+ */
+export function fontPreloads(): Plugin {
+  return {
+    name: 'rodewise-font-preloads',
+    apply: 'build',
+    transformIndexHtml: {
+      order: 'post',
+      handler(_html, ctx) {
+        const fonts = Object.keys(ctx.bundle ?? {})
+          .filter((f) => /merriweather-sans-latin-(400|700)-normal-[\w-]+\.woff2$/.test(f))
+          .sort();
+        return fonts.map((f) => ({
+          tag: 'link',
+          attrs: { rel: 'preload', as: 'font', type: 'font/woff2', href: `/${f}`, crossorigin: '' },
+          injectTo: 'head' as const,
+        }));
+      },
+    },
+  };
+}
+
 const apiPort = process.env.API_PORT ?? '4310';
 
 // Vite serves apps/web; in dev /api and /uploads go to the API; the build lands in dist/web, which the API serves.
 export default defineConfig({
   root: fileURLToPath(new URL('./apps/web', import.meta.url)),
   publicDir: fileURLToPath(new URL('./apps/web/public', import.meta.url)),
-  plugins: [react(), tailwindcss(), precompress(), routePreloads()],
+  plugins: [react(), tailwindcss(), precompress(), routePreloads(), fontPreloads()],
   // `@/…` is apps/web/src (the same mapping as apps/web/tsconfig.json's paths).
   resolve: { alias: { '@': fileURLToPath(new URL('./apps/web/src', import.meta.url)) } },
   server: {

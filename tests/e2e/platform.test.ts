@@ -101,6 +101,27 @@ describe('home page', () => {
   });
 });
 
+describe('the first paint', () => {
+  it('preloads the upright faces and paints the header bar before any script has run', async () => {
+    const html = await (await fetch(`${baseUrl()}/`)).text();
+    const fonts = [...html.matchAll(/<link rel="preload" as="font"[^>]* href="([^"]+)"/g)].map(
+      (m) => m[1] ?? '',
+    );
+    expect(fonts).toHaveLength(2);
+    expect(fonts.join(' ')).toMatch(/400-normal.*700-normal/);
+    for (const href of fonts) expect((await fetch(`${baseUrl()}${href}`)).status).toBe(200);
+    // With scripts off, what the browser paints from the HTML alone: the wordmark in the ink-blue bar.
+    const context = await browser.newContext({ javaScriptEnabled: false });
+    const page = await context.newPage();
+    await page.goto(`${baseUrl()}/`);
+    await expect.poll(() => page.locator('header').innerText()).toBe('Rodewise');
+    expect(
+      await page.locator('header').evaluate((el) => getComputedStyle(el).backgroundColor),
+    ).not.toBe('rgba(0, 0, 0, 0)');
+    await context.close();
+  });
+});
+
 describe('joining the club', () => {
   it('signs up, confirms the address from the fake inbox, signs in and out', async () => {
     const page = await browser.newPage({ viewport: { width: 390, height: 844 } });

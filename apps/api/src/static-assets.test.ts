@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import { brotliCompressSync, gzipSync } from 'node:zlib';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { ClubDto } from '@app/shared';
 import { createTestApp, resetDb } from './testing/test-app';
 
 // A built client with the .br and .gz files the build writes beside each asset (vite.config.ts precompress()).
@@ -34,6 +35,8 @@ afterAll(() => {
   built.close();
   rmSync(webDist, { recursive: true, force: true });
 });
+
+const clubOf = async () => (await request(built.app).get('/api/club')).body.data as ClubDto;
 
 const raw = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
   const chunks: Buffer[] = [];
@@ -88,6 +91,36 @@ describe('pages', () => {
     expect(res.status).toBe(200);
     expect(res.headers['cache-control']).toBe('no-cache');
     expect(res.text).toContain('<meta name="rw-locale" content="en-GB|EUR|metric"></head>');
+  });
+
+  it('carry the club and, without a session cookie, that a visitor is asking, as data the browser never runs', async () => {
+    const boot = (html: string) => {
+      const m = html.match(/<script type="application\/json" id="rw-boot">([^<]*)<\/script>/);
+      return m
+        ? (JSON.parse(m[1] ?? '') as { club: { name: string } | null; visitor: boolean })
+        : null;
+    };
+    const visitor = await request(built.app).get('/');
+    expect(visitor.headers.vary).toMatch(/Cookie/i);
+    expect(boot(visitor.text)).toMatchObject({ visitor: true, club: { name: expect.any(String) } });
+    const withCookie = await request(built.app).get('/').set('Cookie', 'rw.sid=s%3Aabc.def');
+    expect(boot(withCookie.text)?.visitor).toBe(false);
+    expect(boot((await request(built.app).get('/').set('Cookie', 'other=1')).text)?.visitor).toBe(
+      true,
+    );
+  });
+
+  it('escape the boot data, so a club name cannot close its element', async () => {
+    const { bootData } = await import('./http/static-assets');
+    const html = bootData(
+      { ...(await clubOf()), name: '</script><script>alert(1)</script>' },
+      true,
+    );
+    expect(html).not.toContain('</script><script>');
+    const json = html.replace(/^<script[^>]*>/, '').replace(/<\/script>$/, '');
+    expect((JSON.parse(json) as { club: { name: string } }).club.name).toBe(
+      '</script><script>alert(1)</script>',
+    );
   });
 
   it('name the screen’s own script files as modulepreload links, so they load beside the entry', async () => {

@@ -4,7 +4,8 @@ import type { RequestHandler } from 'express';
 export const SESSION_COOKIE = 'rw.sid';
 const SAFE = new Set(['GET', 'HEAD', 'OPTIONS']);
 
-const hasCookie = (header: string | undefined, name: string) => {
+/** Whether a Cookie header carries a cookie called `name`. */
+export const hasCookie = (header: string | undefined, name: string) => {
   if (!header) return false;
   for (const part of header.split(';')) {
     const eq = part.indexOf('=');

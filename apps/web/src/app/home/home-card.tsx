@@ -30,3 +30,15 @@ export function HomeCard({ title, more, children }: HomeCardProps) {
 export function HomeEmpty({ children }: { children: ReactNode }) {
   return <p className="text-ink-600">{children}</p>;
 }
+
+/**
+ * A card's waiting line, in a box as tall as the four lines that usually replace it (two each on a phone, where the
+ * titles wrap), so the cards below do not jump down when the list arrives.
+ */
+export function HomeLoading({ children }: { children: ReactNode }) {
+  return (
+    <div className="min-h-46 md:min-h-24">
+      <HomeEmpty>{children}</HomeEmpty>
+    </div>
+  );
+}

@@ -3,7 +3,7 @@ import { formatMoney } from '@app/shared/locale';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { useListingSearch, type ListingFilters } from '@/features/exchange/api/search-listings';
-import { HomeCard, HomeEmpty } from './home-card';
+import { HomeCard, HomeEmpty, HomeLoading } from './home-card';
 
 function ListingLine({ listing, fitsBoat }: { listing: ListingSummaryDto; fitsBoat?: number }) {
   return (
@@ -30,7 +30,7 @@ export function ListingsCard({ title, filters, fitsBoat, empty }: ListingsCardPr
   const listings = search.data?.data ?? [];
   return (
     <HomeCard title={title} more={{ to: paths.exchange.href(), label: 'Browse the exchange' }}>
-      {search.isPending && <HomeEmpty>Looking through the exchange…</HomeEmpty>}
+      {search.isPending && <HomeLoading>Looking through the exchange…</HomeLoading>}
       {search.isError && <HomeEmpty>The exchange could not be searched just now.</HomeEmpty>}
       {search.data && listings.length === 0 && <HomeEmpty>{empty}</HomeEmpty>}
       {listings.length > 0 && (

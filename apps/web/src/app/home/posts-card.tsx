@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { usePosts } from '@/features/knowledge/api/get-posts';
-import { HomeCard, HomeEmpty } from './home-card';
+import { HomeCard, HomeEmpty, HomeLoading } from './home-card';
 import { countOf } from '@/lib/plural';
 
 export interface PostsCardProps {
@@ -19,7 +19,7 @@ export function PostsCard({ title, show }: PostsCardProps) {
       title={title}
       more={{ to: paths.knowledge.href(), label: 'Go to the knowledge base' }}
     >
-      {posts.isPending && <HomeEmpty>Loading posts…</HomeEmpty>}
+      {posts.isPending && <HomeLoading>Loading posts…</HomeLoading>}
       {posts.isError && <HomeEmpty>The posts could not be loaded.</HomeEmpty>}
       {posts.data && list.length === 0 && (
         <HomeEmpty>
