@@ -2,7 +2,8 @@
 // Front-end bundle sizes (called by `npm run bench`): a production build with a manifest into a temporary
 // directory, then, per route, the gzipped JavaScript its first load needs: the entry and its static imports,
 // plus the route's lazy chunk and its static imports. Also names the routes that load the rich-text editor,
-// the summary chart and the treasurer tables. PASS/MISS is printed; a miss never fails the process.
+// the summary chart and the treasurer tables (in their first load or loaded lazily later, the "later" column:
+// lazy parts beyond the shared form schemas). PASS/MISS is printed; a miss never fails the process.
 // Results go to .data/bench/bundle.json for docs/benchmarks.md.
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -59,6 +60,19 @@ function closure(key, seen = new Set()) {
   for (const imp of entry.imports ?? []) closure(imp, seen);
   return seen;
 }
+/**
+ * What a screen can load: its first load and, transitively, what it imports lazily (`import()`), short of the
+ * entry's files (the router imports every screen lazily) and other screens.
+ */
+function reach(key, seen = new Set(), root = key) {
+  const entry = manifest[key];
+  if (!entry || seen.has(entry.file) || entryFiles.has(entry.file)) return seen;
+  if (key !== root && key.startsWith('src/app/routes/')) return seen;
+  seen.add(entry.file);
+  for (const imp of [...(entry.imports ?? []), ...(entry.dynamicImports ?? [])])
+    reach(imp, seen, root);
+  return seen;
+}
 const entryKey = Object.keys(manifest).find((k) => manifest[k].isEntry);
 const entryFiles = closure(entryKey);
 const cssOf = (files) => [
@@ -81,10 +95,24 @@ const rows = routes.map(({ route, file }) => {
   const key = `src/app/routes/${file}.tsx`;
   const files = closure(key, new Set(entryFiles));
   const kb = [...files].reduce((n, f) => n + gzKb(f), 0);
-  const modules = [...files].flatMap((f) => modulesByChunk[f] ?? []);
+  // What the screen loads after its first paint (lazy parts such as the editor), beyond the shared form schemas.
+  const later = [...reach(key)].filter((f) => !files.has(f));
+  const laterKb = later
+    .filter((f) => !(modulesByChunk[f] ?? []).some((id) => id.endsWith('lib/form-schemas.ts')))
+    .reduce((n, f) => n + gzKb(f), 0);
+  const modules = [...files, ...later].flatMap((f) => modulesByChunk[f] ?? []);
   const heavy = HEAVY.filter((h) => modules.some((id) => h.test.test(id))).map((h) => h.name);
   const cssKb = cssOf(files).reduce((n, f) => n + gzKb(f), 0);
-  return { route, file, jsKb: kb, cssKb, chunks: files.size, heavy, found: Boolean(manifest[key]) };
+  return {
+    route,
+    file,
+    jsKb: kb,
+    laterKb,
+    cssKb,
+    chunks: files.size,
+    heavy,
+    found: Boolean(manifest[key]),
+  };
 });
 
 console.log(`production build (vite, manifest) in ${outDir}; sizes gzipped (level 9)`);
@@ -92,11 +120,11 @@ console.log(
   `entry ${manifest[entryKey].file} + static imports: ${entryFiles.size} files, ${[...entryFiles].reduce((n, f) => n + gzKb(f), 0).toFixed(1)} KB`,
 );
 console.log(
-  `${'route'.padEnd(22)} ${'file'.padEnd(18)} ${'JS KB gz'.padStart(9)} ${'CSS KB gz'.padStart(10)} ${'files'.padStart(6)}  heavy parts loaded`,
+  `${'route'.padEnd(22)} ${'file'.padEnd(18)} ${'JS KB gz'.padStart(9)} ${'later'.padStart(6)} ${'CSS KB gz'.padStart(10)} ${'files'.padStart(6)}  heavy parts (first load or later)`,
 );
 for (const r of rows)
   console.log(
-    `${r.route.padEnd(22)} ${r.file.padEnd(18)} ${r.jsKb.toFixed(1).padStart(9)} ${r.cssKb.toFixed(1).padStart(10)} ${String(r.chunks).padStart(6)}  ${r.found ? r.heavy.join(', ') || '-' : 'route chunk not in manifest'}`,
+    `${r.route.padEnd(22)} ${r.file.padEnd(18)} ${r.jsKb.toFixed(1).padStart(9)} ${r.laterKb.toFixed(1).padStart(6)} ${r.cssKb.toFixed(1).padStart(10)} ${String(r.chunks).padStart(6)}  ${r.found ? r.heavy.join(', ') || '-' : 'route chunk not in manifest'}`,
   );
 
 const targets = [];

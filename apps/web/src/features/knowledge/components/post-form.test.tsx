@@ -98,3 +98,17 @@ describe('post editor: an edit of a published post goes back to moderation', () 
     expect(screen.queryByText('Your edit goes back to moderation')).not.toBeInTheDocument();
   });
 });
+
+describe('post editor: the rich-text editor loads after the rest of the form', () => {
+  it('shows the other fields and a placeholder first, then the editor with the waiting text', async () => {
+    renderWithProviders(
+      <PostForm post={published()} topics={topics} boats={[]} onSubmitted={() => undefined} />,
+      { session },
+    );
+    expect(screen.getByLabelText(/title/i)).toHaveValue('Published title');
+    expect(screen.getByText('Loading the editor…')).toBeInTheDocument();
+    const body = await screen.findByRole('textbox', { name: 'Post' });
+    expect(body).toHaveTextContent('Published text');
+    expect(screen.queryByText('Loading the editor…')).not.toBeInTheDocument();
+  });
+});

@@ -1,17 +1,29 @@
 import { formatTime } from '@app/shared/locale';
 import type { CreatePostInput, PostDetailDto, TopicDto } from '@app/shared';
 import type { JSONContent } from '@tiptap/react';
-import { useEffect, useId, useRef, useState } from 'react';
+import { Suspense, useEffect, useId, useRef, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/lib/api-client';
 import { errorMessage } from '@/lib/form-errors';
 import { useSavePost } from '../api/save-post';
-import { RichTextEditor } from './rich-text-editor';
 import { SetupFields } from './setup-fields';
 import { EMPTY_SETUP, fromSetup, toSetupInput, type SetupValues } from './setup-values';
+import { lazyNamed } from '@/lib/lazy-named';
 import { loadFormSchemas, preloadFormSchemas } from '@/lib/lazy-schema';
+
+// The editor (Tiptap and ProseMirror, about 135 KB) is its own chunk: the form paints with its other fields while
+// it loads, and its box keeps the editor's height meanwhile.
+const RichTextEditor = lazyNamed(() => import('./rich-text-editor'), 'RichTextEditor');
+
+function EditorLoading() {
+  return (
+    <div className="flex min-h-60 items-center justify-center rounded-md border border-sand-500 bg-white text-sm text-ink-600">
+      Loading the editor…
+    </div>
+  );
+}
 
 preloadFormSchemas();
 
@@ -218,7 +230,9 @@ export function PostForm({ post, topics: allTopics, boats, onSubmitted }: PostFo
         <span id={bodyLabelId} className="text-sm font-bold">
           Post
         </span>
-        <RichTextEditor labelId={bodyLabelId} initial={body} onChange={touch(setBody)} />
+        <Suspense fallback={<EditorLoading />}>
+          <RichTextEditor labelId={bodyLabelId} initial={body} onChange={touch(setBody)} />
+        </Suspense>
         {errors.body && (
           <p role="alert" className="text-sm font-bold text-flare-700">
             {errors.body}
