@@ -127,7 +127,8 @@ describe('a member sizes, checks, saves and prints a plan', () => {
     expect(await table.locator('tr[aria-current="true"]').count()).toBe(1);
     expect(await table.getByText('Weakest link', { exact: true }).count()).toBe(1);
     await audit(page, 'plan with a fitting');
-    expect(await page.getByTestId('catenary-drawing').count()).toBe(1);
+    // The drawing loads after the rest of the page.
+    await expect.poll(() => page.getByTestId('catenary-drawing').count()).toBe(1);
 
     // Print: the button calls window.print, and print media shows only the card.
     await page.evaluate(() => {

@@ -1,5 +1,5 @@
 import type { RatedComponent, TacklePlanResult } from '@app/calc';
-import { useState } from 'react';
+import { Suspense, useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
@@ -9,7 +9,6 @@ import { Spinner } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { errorMessage } from '@/lib/form-errors';
 import { RequireAuth } from '@/features/auth/components/require-auth';
-import { CatenaryDrawing } from '@/features/calculators/components/catenary-drawing';
 import { WeakestLinkTable } from '@/features/calculators/components/weakest-link-table';
 import { RecommendationColumn } from '@/features/boats/components/recommendation-column';
 import { useDeleteTacklePlan } from '@/features/tackle-plans/api/delete-tackle-plan';
@@ -21,6 +20,13 @@ import { PrintStyles } from '@/features/tackle-plans/components/print-styles';
 import { UnitToggle } from '@/components/units/unit-toggle';
 import { TackleUnits } from './calculators-units';
 import { IdParams } from '../id-params';
+import { lazyNamed } from '@/lib/lazy-named';
+
+// The rode's drawing sits at the foot of the page: it loads after the card and the checks have painted.
+const CatenaryDrawing = lazyNamed(
+  () => import('@/features/calculators/components/catenary-drawing'),
+  'CatenaryDrawing',
+);
 
 /** The parts `tacklePlan` checked, in the order it passed them to `weakestLink`. */
 function linkParts(result: TacklePlanResult): RatedComponent[] {
@@ -117,11 +123,13 @@ function TacklePlanScreen({ planId }: { planId: number }) {
           <h2 id="shape-heading" className="text-xl">
             The rode under the design load
           </h2>
-          <CatenaryDrawing
-            result={result.catenary}
-            waterLevelM={plan.depthM + plan.tideM}
-            hasRope={(plan.components.rode?.lengthM ?? 0) > 0}
-          />
+          <Suspense fallback={<Spinner label="Drawing the rode…" />}>
+            <CatenaryDrawing
+              result={result.catenary}
+              waterLevelM={plan.depthM + plan.tideM}
+              hasRope={(plan.components.rode?.lengthM ?? 0) > 0}
+            />
+          </Suspense>
           <p className="text-xs text-ink-600">{result.catenary.basis}</p>
         </section>
       )}
