@@ -28,4 +28,30 @@ describe('lazy form schemas', () => {
     expect(typeof schemas.zodResolver).toBe('function');
     expect(await loadFormSchemas()).toBe(schemas);
   });
+
+  it('preloads only once the page has loaded and settled, when the browser is idle', async () => {
+    vi.resetModules();
+    vi.useFakeTimers();
+    let imported = 0;
+    vi.doMock('./form-schemas', () => {
+      imported += 1;
+      return {};
+    });
+    const readyState = vi.spyOn(document, 'readyState', 'get').mockReturnValue('loading');
+    try {
+      const { preloadFormSchemas } = await import('./lazy-schema');
+      preloadFormSchemas();
+      await vi.advanceTimersByTimeAsync(10_000);
+      expect(imported).toBe(0); // no load event yet
+      window.dispatchEvent(new Event('load'));
+      await vi.advanceTimersByTimeAsync(1_000);
+      expect(imported).toBe(0); // loaded, not yet settled
+      await vi.advanceTimersByTimeAsync(6_000);
+      await vi.waitFor(() => expect(imported).toBe(1));
+    } finally {
+      readyState.mockRestore();
+      vi.doUnmock('./form-schemas');
+      vi.useRealTimers();
+    }
+  });
 });

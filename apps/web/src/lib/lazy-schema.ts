@@ -17,14 +17,23 @@ export function loadFormSchemas(): Promise<FormSchemaModule> {
 }
 
 /**
- * Fetches the schema chunk when the browser is idle, so a form's first check does not wait for it. Call it at
+ * Fetches the schema chunk when the browser is idle after the page has loaded, so a form's first check does not wait for it. Call it at
  * module level in a form that checks with `loadFormSchemas()` (lazyResolver calls it itself).
  */
+const SETTLE_MS = 2000;
+
 export function preloadFormSchemas() {
-  const start = () => void loadFormSchemas().catch(() => undefined);
   if (typeof window === 'undefined') return;
-  if ('requestIdleCallback' in window) window.requestIdleCallback(start, { timeout: 4000 });
-  else setTimeout(start, 1500);
+  const start = () => void loadFormSchemas().catch(() => undefined);
+  const whenIdle = () => {
+    if ('requestIdleCallback' in window) window.requestIdleCallback(start, { timeout: 4000 });
+    else setTimeout(start, 1500);
+  };
+  // Not before the page has loaded and settled: the screen's first paint must not share the network with this
+  // chunk (about 80 KB). A check made sooner loads it itself (lazyResolver, loadFormSchemas).
+  const later = () => setTimeout(whenIdle, SETTLE_MS);
+  if (document.readyState === 'complete') later();
+  else window.addEventListener('load', later, { once: true });
 }
 
 /**
