@@ -1,12 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-
-const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
-const ts = { type: DataTypes.DATE, allowNull: false };
-const fk = (table: string, onDelete: 'CASCADE' | 'SET NULL' = 'CASCADE') => ({
-  type: DataTypes.INTEGER.UNSIGNED,
-  references: { model: table, key: 'id' },
-  onDelete,
-});
+import { fk, id, ts } from './columns';
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('users', {
@@ -21,9 +14,9 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   });
   await qi.createTable('user_roles', {
     id,
-    user_id: { ...fk('users'), allowNull: false },
+    user_id: fk('users', 'CASCADE', false),
     role: { type: DataTypes.STRING(20), allowNull: false },
-    granted_by_id: { ...fk('users', 'SET NULL'), allowNull: true },
+    granted_by_id: fk('users', 'SET NULL', true),
     created_at: ts,
   });
   await qi.addIndex('user_roles', ['user_id', 'role'], {
@@ -32,7 +25,7 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   });
   await qi.createTable('email_tokens', {
     id,
-    user_id: { ...fk('users'), allowNull: false },
+    user_id: fk('users', 'CASCADE', false),
     kind: { type: DataTypes.STRING(10), allowNull: false },
     token_hash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
     expires_at: ts,
@@ -80,7 +73,7 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addIndex('outbox_emails', ['status', 'next_attempt_at']);
   await qi.createTable('audit_events', {
     id,
-    actor_id: { ...fk('users', 'SET NULL'), allowNull: true },
+    actor_id: fk('users', 'SET NULL', true),
     area: { type: DataTypes.STRING(20), allowNull: false },
     action: { type: DataTypes.STRING(60), allowNull: false },
     subject_type: { type: DataTypes.STRING(40), allowNull: false },

@@ -1,13 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-
-const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
-const ts = { type: DataTypes.DATE, allowNull: false };
-const fk = (table: string, onDelete: 'CASCADE' | 'SET NULL', allowNull: boolean) => ({
-  type: DataTypes.INTEGER.UNSIGNED,
-  allowNull,
-  references: { model: table, key: 'id' },
-  onDelete,
-});
+import { fk, id, ts } from './columns';
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('boats', {

@@ -1,13 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-
-const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
-const ts = { type: DataTypes.DATE, allowNull: false };
-const fk = (table: string, onDelete: 'CASCADE' | 'SET NULL', allowNull: boolean) => ({
-  type: DataTypes.INTEGER.UNSIGNED,
-  allowNull,
-  references: { model: table, key: 'id' },
-  onDelete,
-});
+import { fk, id, ts } from './columns';
 
 // A storm watch: the club's forecast for one named storm or gale, the harbours it affects and the checklist
 // as it stood when the watch opened (later template edits leave a running watch alone). One readiness row per

@@ -61,67 +61,42 @@ interface MemberRow {
   payments: ReadonlyArray<readonly [SeasonYear, number, Method, string | null]>;
 }
 
+/** A MemberRow from its fields in order: e-mail, plan, joined on, paid through, payments. */
+const memberRow = (
+  email: string,
+  plan: string,
+  joinedOn: string,
+  paidThrough: SeasonYear,
+  payments: MemberRow['payments'],
+): MemberRow => ({ email, plan, joinedOn, paidThrough, payments });
+
 /** Members paid up for this year (idris also pays this year with the late fee by mistake, below). */
 const PAID_UP: readonly MemberRow[] = [
-  {
-    email: 'admin@larkspit.example',
-    plan: 'individual',
-    joinedOn: '2016-04-01',
-    paidThrough: 'fy',
-    payments: [
-      ['prev', 3, 'transfer', 'TRF-LS-0412'],
-      ['fy', 2, 'transfer', 'TRF-LS-1187'],
-    ],
-  },
-  {
-    email: 'moderator@larkspit.example',
-    plan: 'family',
-    joinedOn: '2018-06-01',
-    paidThrough: 'fy',
-    payments: [
-      ['prev', 20, 'cheque', 'CHQ 004417'],
-      ['fy', 12, 'cheque', 'CHQ 004590'],
-    ],
-  },
-  {
-    email: 'treasurer@larkspit.example',
-    plan: 'individual',
-    joinedOn: '2015-04-01',
-    paidThrough: 'fy',
-    payments: [['fy', 1, 'cash', 'Receipt book 7, no. 12']],
-  },
-  {
-    email: 'idris@larkspit.example',
-    plan: 'family',
-    joinedOn: '2021-09-01',
-    paidThrough: 'fy',
-    payments: [['prev', 40, 'card', null]],
-  },
+  memberRow('admin@larkspit.example', 'individual', '2016-04-01', 'fy', [
+    ['prev', 3, 'transfer', 'TRF-LS-0412'],
+    ['fy', 2, 'transfer', 'TRF-LS-1187'],
+  ]),
+  memberRow('moderator@larkspit.example', 'family', '2018-06-01', 'fy', [
+    ['prev', 20, 'cheque', 'CHQ 004417'],
+    ['fy', 12, 'cheque', 'CHQ 004590'],
+  ]),
+  memberRow('treasurer@larkspit.example', 'individual', '2015-04-01', 'fy', [
+    ['fy', 1, 'cash', 'Receipt book 7, no. 12'],
+  ]),
+  memberRow('idris@larkspit.example', 'family', '2021-09-01', 'fy', [['prev', 40, 'card', null]]),
 ];
 
 /** Members who paid last year only, and one lapsed two years back. */
 const BEHIND: readonly MemberRow[] = [
-  {
-    email: 'maren@larkspit.example',
-    plan: 'individual',
-    joinedOn: '2020-05-01',
-    paidThrough: 'prev',
-    payments: [['prev', 8, 'card', null]],
-  },
-  {
-    email: 'oriel@larkspit.example',
-    plan: 'individual',
-    joinedOn: '2023-05-01',
-    paidThrough: 'prev',
-    payments: [['prev', 12, 'card', null]],
-  },
-  {
-    email: 'saoirse@larkspit.example',
-    plan: 'junior',
-    joinedOn: '2022-04-01',
-    paidThrough: 'older',
-    payments: [['older', 15, 'cash', 'Receipt book 5, no. 3']],
-  },
+  memberRow('maren@larkspit.example', 'individual', '2020-05-01', 'prev', [
+    ['prev', 8, 'card', null],
+  ]),
+  memberRow('oriel@larkspit.example', 'individual', '2023-05-01', 'prev', [
+    ['prev', 12, 'card', null],
+  ]),
+  memberRow('saoirse@larkspit.example', 'junior', '2022-04-01', 'older', [
+    ['older', 15, 'cash', 'Receipt book 5, no. 3'],
+  ]),
 ];
 
 const ID_ALPHABET = 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789';

@@ -1,56 +1,58 @@
-import { DEFAULT_STORM_CHECKLIST, type PlanComponents } from '@app/shared';
+import { DEFAULT_STORM_CHECKLIST, type PlanComponents, type StormLocation } from '@app/shared';
 import { Boat, StormReadiness, StormWatch, TacklePlan } from '../src/models';
 import type { AreaSeeder } from './seed-context';
 
 const DAY_MS = 86_400_000;
 
-// Invented gear for the demo boats' storm plans (figures are demo data, checked by the app like any plan).
-const PLANS: Array<{
+interface StormPlanRow {
   boat: string;
   name: string;
   depthM: number;
   tideM: number;
   components: PlanComponents;
-}> = [
-  {
-    boat: 'Marram',
-    name: 'Storm at the Brindle anchorage',
-    depthM: 5,
-    tideM: 1.5,
-    components: {
-      anchor: { type: 'plow', massKg: 20 },
-      chain: { grade: 'G43', tradeSizeIn: 0.3125, lengthM: 60 },
-      snubber: { material: 'nylon', diameterMm: 14, lengthM: 8 },
-      connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.375 }],
-    },
-  },
-  {
-    boat: 'Slow Tern',
-    name: 'Hurricane hole',
-    depthM: 4,
-    tideM: 1,
-    components: {
-      anchor: { type: 'claw', massKg: 30 },
-      chain: { grade: 'G70', tradeSizeIn: 0.375, lengthM: 70 },
-      snubber: { material: 'nylon', diameterMm: 18, lengthM: 10 },
-      connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.5 }],
-    },
-  },
-  {
-    boat: 'Greywake',
-    name: 'Everyday',
-    depthM: 4,
-    tideM: 1,
-    components: {
-      anchor: { type: 'fluke', massKg: 8 },
-      chain: { grade: 'G30', tradeSizeIn: 0.25, lengthM: 10 },
-      rode: { material: 'nylon', construction: 'three-strand', diameterMm: 12, lengthM: 40 },
-      connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.25 }],
-    },
-  },
+}
+const stormPlan = (
+  boat: string,
+  name: string,
+  depthM: number,
+  tideM: number,
+  components: PlanComponents,
+): StormPlanRow => ({ boat, name, depthM, tideM, components });
+
+// Invented gear for the demo boats' storm plans (figures are demo data, checked by the app like any plan).
+// Each row: boat, plan name, depth (m), tide range (m), gear.
+const PLANS: StormPlanRow[] = [
+  stormPlan('Marram', 'Storm at the Brindle anchorage', 5, 1.5, {
+    anchor: { type: 'plow', massKg: 20 },
+    chain: { grade: 'G43', tradeSizeIn: 0.3125, lengthM: 60 },
+    snubber: { material: 'nylon', diameterMm: 14, lengthM: 8 },
+    connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.375 }],
+  }),
+  stormPlan('Slow Tern', 'Hurricane hole', 4, 1, {
+    anchor: { type: 'claw', massKg: 30 },
+    chain: { grade: 'G70', tradeSizeIn: 0.375, lengthM: 70 },
+    snubber: { material: 'nylon', diameterMm: 18, lengthM: 10 },
+    connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.5 }],
+  }),
+  stormPlan('Greywake', 'Everyday', 4, 1, {
+    anchor: { type: 'fluke', massKg: 8 },
+    chain: { grade: 'G30', tradeSizeIn: 0.25, lengthM: 10 },
+    rode: { material: 'nylon', construction: 'three-strand', diameterMm: 12, lengthM: 40 },
+    connectors: [{ label: 'anchor shackle', kind: 'shackle', nominalIn: 0.25 }],
+  }),
 ];
 
 const allIds = DEFAULT_STORM_CHECKLIST.map((i) => i.id);
+
+/** One boat's readiness row for a watch, as the demo seeds it. */
+const readiness = (
+  watch: StormWatch,
+  boat: string,
+  location: StormLocation,
+  plan: boolean,
+  ticked: readonly string[],
+  help: boolean,
+) => ({ watch, boat, location, plan, ticked, help });
 
 /** Storm plans for three demo boats, one closed past watch with its lessons and one open watch. */
 export const seedStorm: AreaSeeder = async ({ transaction, users, harbors, now }) => {
@@ -127,48 +129,14 @@ export const seedStorm: AreaSeeder = async ({ transaction, users, harbors, now }
   );
 
   const idris = users.get('idris@larkspit.example');
+  // Each row: watch, boat, where it rides the storm, storm plan linked, checklist items ticked, help wanted.
   const rows = [
-    {
-      watch: past,
-      boat: 'Marram',
-      location: 'own-anchor',
-      plan: true,
-      ticked: allIds,
-      help: false,
-    },
-    {
-      watch: past,
-      boat: 'Slow Tern',
-      location: 'marina-berth',
-      plan: false,
-      ticked: allIds,
-      help: false,
-    },
-    {
-      watch: open,
-      boat: 'Marram',
-      location: 'own-anchor',
-      plan: true,
-      ticked: allIds.slice(0, 3),
-      help: false,
-    },
-    {
-      watch: open,
-      boat: 'Slow Tern',
-      location: 'marina-berth',
-      plan: false,
-      ticked: allIds,
-      help: false,
-    },
-    {
-      watch: open,
-      boat: 'Two Gulls',
-      location: 'club-mooring',
-      plan: false,
-      ticked: allIds.slice(0, 2),
-      help: true,
-    },
-  ] as const;
+    readiness(past, 'Marram', 'own-anchor', true, allIds, false),
+    readiness(past, 'Slow Tern', 'marina-berth', false, allIds, false),
+    readiness(open, 'Marram', 'own-anchor', true, allIds.slice(0, 3), false),
+    readiness(open, 'Slow Tern', 'marina-berth', false, allIds, false),
+    readiness(open, 'Two Gulls', 'club-mooring', false, allIds.slice(0, 2), true),
+  ];
   for (const r of rows) {
     const boat = boats.get(r.boat);
     if (!boat) continue;
