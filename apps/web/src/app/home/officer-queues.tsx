@@ -6,63 +6,50 @@ import { useSummary } from '@/features/treasury/api/get-summary';
 import { HomeCard, HomeEmpty } from './home-card';
 import { countOf } from '@/lib/plural';
 
-function QueueLine({
-  count,
-  one,
-  many,
-  to,
-}: {
-  count: number;
-  one: string;
-  many: string;
-  to: string;
-}) {
+/** One line of a desk: how many wait, the words for one and for several, and where to open them. */
+type QueueRow = readonly [count: number, one: string, many: string, to: string];
+
+function QueueList({ rows }: { rows: readonly QueueRow[] }) {
   return (
-    <li className="flex items-center justify-between gap-3">
-      <span>{countOf(count, one, many)}</span>
-      {count > 0 && (
-        <Link to={to} className="font-bold">
-          Open
-        </Link>
-      )}
-    </li>
+    <ul className="flex flex-col gap-1">
+      {rows.map(([count, one, many, to]) => (
+        <li key={one} className="flex items-center justify-between gap-3">
+          <span>{countOf(count, one, many)}</span>
+          {count > 0 && (
+            <Link to={to} className="font-bold">
+              Open
+            </Link>
+          )}
+        </li>
+      ))}
+    </ul>
   );
 }
 
 /** What waits for a moderator today, with counts. */
 export function ModeratorQueue() {
   const count = useModerationCount(true);
+  const moderation = paths.moderation.href();
   return (
-    <HomeCard
-      title="Moderation desk"
-      more={{ to: paths.moderation.href(), label: 'Go to moderation' }}
-    >
+    <HomeCard title="Moderation desk" more={{ to: moderation, label: 'Go to moderation' }}>
       {count.isPending && <HomeEmpty>Counting what waits…</HomeEmpty>}
       {count.isError && <HomeEmpty>The moderation counts could not be loaded.</HomeEmpty>}
       {count.data && count.data.total === 0 && (
         <HomeEmpty>Nothing waits for a moderator.</HomeEmpty>
       )}
       {count.data && count.data.total > 0 && (
-        <ul className="flex flex-col gap-1">
-          <QueueLine
-            count={count.data.pendingPosts}
-            one="post waiting"
-            many="posts waiting"
-            to={paths.moderation.href()}
-          />
-          <QueueLine
-            count={count.data.pendingComments}
-            one="comment waiting"
-            many="comments waiting"
-            to={paths.moderation.href()}
-          />
-          <QueueLine
-            count={count.data.openReports + count.data.openListingReports}
-            one="open report"
-            many="open reports"
-            to={paths.moderation.href()}
-          />
-        </ul>
+        <QueueList
+          rows={[
+            [count.data.pendingPosts, 'post waiting', 'posts waiting', moderation],
+            [count.data.pendingComments, 'comment waiting', 'comments waiting', moderation],
+            [
+              count.data.openReports + count.data.openListingReports,
+              'open report',
+              'open reports',
+              moderation,
+            ],
+          ]}
+        />
       )}
     </HomeCard>
   );
@@ -72,35 +59,21 @@ export function ModeratorQueue() {
 export function TreasurerQueue() {
   const summary = useSummary();
   const data = summary.data;
+  const treasury = paths.treasury.href();
+  const roster = paths.treasuryRoster.href();
   return (
-    <HomeCard
-      title="Treasurer's desk"
-      more={{ to: paths.treasury.href(), label: 'Go to the treasury' }}
-    >
+    <HomeCard title="Treasurer's desk" more={{ to: treasury, label: 'Go to the treasury' }}>
       {summary.isPending && <HomeEmpty>Adding up the year…</HomeEmpty>}
       {summary.isError && <HomeEmpty>The treasury figures could not be loaded.</HomeEmpty>}
       {data && (
         <>
-          <ul className="flex flex-col gap-1">
-            <QueueLine
-              count={data.heldCount}
-              one="payment held for a check"
-              many="payments held for a check"
-              to={paths.treasury.href()}
-            />
-            <QueueLine
-              count={data.counts.overdue}
-              one="member overdue"
-              many="members overdue"
-              to={paths.treasuryRoster.href()}
-            />
-            <QueueLine
-              count={data.counts.due}
-              one="member due"
-              many="members due"
-              to={paths.treasuryRoster.href()}
-            />
-          </ul>
+          <QueueList
+            rows={[
+              [data.heldCount, 'payment held for a check', 'payments held for a check', treasury],
+              [data.counts.overdue, 'member overdue', 'members overdue', roster],
+              [data.counts.due, 'member due', 'members due', roster],
+            ]}
+          />
           <p className="text-ink-700">
             {formatMoney(data.collectedMinor, data.currency)} collected of{' '}
             {formatMoney(data.expectedMinor, data.currency)} expected this year.

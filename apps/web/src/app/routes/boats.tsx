@@ -1,11 +1,11 @@
 import { Suspense } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
-import { Alert } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Page } from '@/components/ui/page';
+import { QueryStatus } from '@/components/ui/query-status';
 import { Spinner } from '@/components/ui/spinner';
+import { TitledSection } from '@/components/ui/titled-section';
 import { paths } from '@/config/paths';
-import { errorMessage } from '@/lib/form-errors';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useCreateBoat } from '@/features/boats/api/create-boat';
 import { useBoats } from '@/features/boats/api/get-boats';
@@ -29,16 +29,12 @@ function BoatsScreen() {
       intro={<p>Keep a profile of each boat; Rodewise sizes its ground tackle from it.</p>}
     >
       <UnitToggle />
-      <section aria-labelledby="boat-list-heading" className="flex flex-col gap-3">
-        <h2 id="boat-list-heading" className="text-xl">
-          Your boats
-        </h2>
-        {boats.isPending && <Spinner label="Loading your boats…" />}
-        {boats.isError && (
-          <Alert tone="error" title="Couldn't load your boats">
-            <p>{errorMessage(boats.error)}</p>
-          </Alert>
-        )}
+      <TitledSection headingId="boat-list-heading" title="Your boats">
+        <QueryStatus
+          query={boats}
+          loadingLabel="Loading your boats…"
+          errorTitle="Couldn't load your boats"
+        />
         {boats.data?.length === 0 && (
           <EmptyState title="No boats yet">
             Add your boat below to see its ground tackle.
@@ -61,11 +57,12 @@ function BoatsScreen() {
             ))}
           </ul>
         )}
-      </section>
-      <section aria-labelledby="new-boat-heading" className="flex max-w-2xl flex-col gap-3">
-        <h2 id="new-boat-heading" className="text-xl">
-          Add a boat
-        </h2>
+      </TitledSection>
+      <TitledSection
+        headingId="new-boat-heading"
+        title="Add a boat"
+        className="flex max-w-2xl flex-col gap-3"
+      >
         <Suspense fallback={<Spinner label="Loading the form…" />}>
           <BoatForm
             harbors={club.data?.harbors ?? []}
@@ -77,7 +74,7 @@ function BoatsScreen() {
             }}
           />
         </Suspense>
-      </section>
+      </TitledSection>
     </Page>
   );
 }

@@ -1,9 +1,10 @@
+import type { DuesQuoteDto } from '@app/shared';
 import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
-import { Spinner } from '@/components/ui/spinner';
-import { errorMessage } from '@/lib/form-errors';
+import { ErrorAlert, QueryStatus } from '@/components/ui/query-status';
+import { TitledSection } from '@/components/ui/titled-section';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useMyDues } from '@/features/dues/api/get-my-dues';
 import { useStartCheckout } from '@/features/dues/api/start-checkout';
@@ -26,6 +27,16 @@ function DuesScreen() {
   const d = dues.data;
   // A member who has never paid may still pick another plan; the checkout takes the chosen one.
   const otherOffers = d?.offers.filter((o) => o.planId !== d.quote?.planId) ?? [];
+  // A plan the member may join instead, with its own pay button.
+  const offerCard = (o: DuesQuoteDto) => (
+    <QuoteCard
+      key={o.planId}
+      quote={o}
+      payLabel={`Join as ${o.planName}`}
+      onPay={() => pay(o.planId)}
+      isPending={checkout.isPending && payingPlan === o.planId}
+    />
+  );
   return (
     <Page
       title="Dues"
@@ -37,23 +48,21 @@ function DuesScreen() {
           <p>You left the payment page; nothing was charged and your dues are as they were.</p>
         </Alert>
       )}
-      {dues.isPending && <Spinner label="Loading your dues…" />}
-      {dues.isError && (
-        <Alert tone="error" title="Couldn't load your dues">
-          <p>{errorMessage(dues.error)}</p>
-        </Alert>
-      )}
+      <QueryStatus
+        query={dues}
+        loadingLabel="Loading your dues…"
+        errorTitle="Couldn't load your dues"
+      />
       {checkout.isError && (
-        <Alert tone="error" title="Couldn't open the card payment page">
-          <p>{errorMessage(checkout.error)}</p>
-        </Alert>
+        <ErrorAlert title="Couldn't open the card payment page" error={checkout.error} />
       )}
       {d && (
         <>
-          <section aria-labelledby="membership-heading" className="flex flex-col gap-2">
-            <h2 id="membership-heading" className="text-xl">
-              Your membership
-            </h2>
+          <TitledSection
+            headingId="membership-heading"
+            title="Your membership"
+            className="flex flex-col gap-2"
+          >
             {d.membership ? (
               <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
                 <dt className="font-bold">Plan</dt>
@@ -77,11 +86,8 @@ function DuesScreen() {
             ) : (
               <p>You have no membership plan yet. Choose one below to join for this fiscal year.</p>
             )}
-          </section>
-          <section aria-labelledby="owed-heading" className="flex flex-col gap-3">
-            <h2 id="owed-heading" className="text-xl">
-              What is owed
-            </h2>
+          </TitledSection>
+          <TitledSection headingId="owed-heading" title="What is owed">
             {d.quote && (
               <QuoteCard
                 quote={d.quote}
@@ -92,15 +98,7 @@ function DuesScreen() {
             {d.quote && d.membership && !d.membership.paidThrough && otherOffers.length > 0 && (
               <div className="flex flex-col gap-3">
                 <p className="font-bold">Not paid yet, so you can still join on another plan:</p>
-                {otherOffers.map((o) => (
-                  <QuoteCard
-                    key={o.planId}
-                    quote={o}
-                    payLabel={`Join as ${o.planName}`}
-                    onPay={() => pay(o.planId)}
-                    isPending={checkout.isPending && payingPlan === o.planId}
-                  />
-                ))}
+                {otherOffers.map(offerCard)}
               </div>
             )}
             {!d.quote && d.offers.length === 0 && (
@@ -111,29 +109,20 @@ function DuesScreen() {
               </Alert>
             )}
             {!d.quote && d.offers.length > 0 && (
-              <div className="grid gap-3">
-                {d.offers.map((o) => (
-                  <QuoteCard
-                    key={o.planId}
-                    quote={o}
-                    payLabel={`Join as ${o.planName}`}
-                    onPay={() => pay(o.planId)}
-                    isPending={checkout.isPending && payingPlan === o.planId}
-                  />
-                ))}
-              </div>
+              <div className="grid gap-3">{d.offers.map(offerCard)}</div>
             )}
             <p className="text-sm text-ink-700">
               Card payments open the payment provider’s secure page. You can also pay the treasurer
               by cheque, cash or bank transfer.
             </p>
-          </section>
-          <section aria-labelledby="history-heading" className="flex flex-col gap-2">
-            <h2 id="history-heading" className="text-xl">
-              Your payments
-            </h2>
+          </TitledSection>
+          <TitledSection
+            headingId="history-heading"
+            title="Your payments"
+            className="flex flex-col gap-2"
+          >
             <PaymentHistory payments={d.payments} />
-          </section>
+          </TitledSection>
         </>
       )}
     </Page>

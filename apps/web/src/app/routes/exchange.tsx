@@ -1,12 +1,13 @@
-import { Link, useSearchParams } from 'react-router-dom';
+import { useSearchParams } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
+import { LinkButton } from '@/components/ui/link-button';
 import { Page } from '@/components/ui/page';
-import { Spinner } from '@/components/ui/spinner';
+import { QueryStatus } from '@/components/ui/query-status';
+import { TitledSection } from '@/components/ui/titled-section';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
-import { errorMessage } from '@/lib/form-errors';
 import { useCurrentUser } from '@/features/auth/api/get-session';
 import { useBoats } from '@/features/boats/api/get-boats';
 import { useClub } from '@/features/club/api/get-club';
@@ -14,23 +15,8 @@ import { useListingSearch } from '@/features/exchange/api/search-listings';
 import { ListingCard } from '@/features/exchange/components/listing-card';
 import { SaveSearchButton } from '@/features/exchange/components/save-search-button';
 import { SearchFilters } from '@/features/exchange/components/search-filters';
+import { SEARCH_KEYS } from '@/features/exchange/utils/filters';
 import { countOf } from '@/lib/plural';
-
-const KEYS = [
-  'q',
-  'category',
-  'harborId',
-  'condition',
-  'priceMin',
-  'priceMax',
-  'sizeMinMm',
-  'sizeMaxMm',
-  'sort',
-  'fitsBoat',
-  'windKn',
-  'fitsOnly',
-  'page',
-] as const;
 
 /** The exchange: search with filters, "fits my boat" flags, and results. */
 export function ExchangeRoute() {
@@ -39,7 +25,7 @@ export function ExchangeRoute() {
   const club = useClub();
   const boats = useBoats();
   const filters: Record<string, string> = {};
-  for (const k of KEYS) {
+  for (const k of SEARCH_KEYS) {
     const v = params.get(k);
     if (v) filters[k] = v;
   }
@@ -67,18 +53,10 @@ export function ExchangeRoute() {
       <div className="flex flex-wrap gap-3">
         {user && (
           <>
-            <Link
-              to={paths.listingNew.href()}
-              className="inline-flex min-h-11 items-center rounded-md bg-signal-600 px-4 font-bold text-white no-underline hover:bg-signal-700 hover:text-white"
-            >
-              List gear
-            </Link>
-            <Link
-              to={paths.exchangeMine.href()}
-              className="inline-flex min-h-11 items-center rounded-md border border-sand-500 px-4 font-bold no-underline"
-            >
+            <LinkButton to={paths.listingNew.href()}>List gear</LinkButton>
+            <LinkButton to={paths.exchangeMine.href()} variant="outline">
               My listings
-            </Link>
+            </LinkButton>
           </>
         )}
       </div>
@@ -106,16 +84,11 @@ export function ExchangeRoute() {
         </Alert>
       )}
       {user && <SaveSearchButton filters={filters} />}
-      <section aria-labelledby="results-heading" className="flex flex-col gap-3">
-        <h2 id="results-heading" className="text-xl">
-          {meta ? countOf(meta.total, 'listing', 'listings') : 'Listings'}
-        </h2>
-        {search.isPending && <Spinner label="Searching…" />}
-        {search.isError && (
-          <Alert tone="error" title="Search did not work">
-            <p>{errorMessage(search.error)}</p>
-          </Alert>
-        )}
+      <TitledSection
+        headingId="results-heading"
+        title={meta ? countOf(meta.total, 'listing', 'listings') : 'Listings'}
+      >
+        <QueryStatus query={search} loadingLabel="Searching…" errorTitle="Search did not work" />
         {search.data?.data.length === 0 && (
           <EmptyState title="Nothing matches yet">
             Try fewer filters, or save this search to hear about new gear.
@@ -156,7 +129,7 @@ export function ExchangeRoute() {
             </Button>
           </nav>
         )}
-      </section>
+      </TitledSection>
     </Page>
   );
 }

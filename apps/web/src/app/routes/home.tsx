@@ -1,5 +1,5 @@
-import { Link } from 'react-router-dom';
 import { Page } from '@/components/ui/page';
+import { LinkButton } from '@/components/ui/link-button';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/features/auth/api/get-session';
 import { useClub } from '@/features/club/api/get-club';
@@ -17,18 +17,10 @@ function VisitorHome({ clubName }: { clubName: string }) {
         vetted and paying dues.
       </p>
       <div className="flex flex-wrap gap-3">
-        <Link
-          to={paths.signUp.href()}
-          className="inline-flex min-h-11 items-center rounded-md bg-signal-600 px-4 font-bold text-white no-underline hover:bg-signal-700 hover:text-white"
-        >
-          Join the club online
-        </Link>
-        <Link
-          to={paths.signIn.href()}
-          className="inline-flex min-h-11 items-center rounded-md border border-sand-500 bg-sand-50 px-4 font-bold text-ink-900 no-underline hover:bg-sand-200"
-        >
+        <LinkButton to={paths.signUp.href()}>Join the club online</LinkButton>
+        <LinkButton to={paths.signIn.href()} variant="secondary">
           Sign in
-        </Link>
+        </LinkButton>
       </div>
       <div className="grid gap-4 md:grid-cols-2">
         <PostsCard title="Recent posts" show="recent" />

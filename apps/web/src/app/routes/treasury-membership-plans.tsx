@@ -2,9 +2,10 @@ import { Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
+import { QueryStatus } from '@/components/ui/query-status';
 import { Spinner } from '@/components/ui/spinner';
+import { TitledSection } from '@/components/ui/titled-section';
 import { paths } from '@/config/paths';
-import { errorMessage } from '@/lib/form-errors';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { useDuesCalendar, useSaveCalendar } from '@/features/treasury/api/dues-calendar';
 import { useMembershipPlans } from '@/features/treasury/api/get-membership-plans';
@@ -34,28 +35,20 @@ function PlansScreen() {
       <p>
         <Link to={paths.treasury.href()}>Back to the treasury</Link>
       </p>
-      <section aria-labelledby="plans-heading" className="flex flex-col gap-3">
-        <h2 id="plans-heading" className="text-xl">
-          Membership plans
-        </h2>
-        {plans.isPending && <Spinner label="Loading the plans…" />}
-        {plans.isError && (
-          <Alert tone="error" title="Couldn't load the membership plans">
-            <p>{errorMessage(plans.error)}</p>
-          </Alert>
-        )}
+      <TitledSection headingId="plans-heading" title="Membership plans">
+        <QueryStatus
+          query={plans}
+          loadingLabel="Loading the plans…"
+          errorTitle="Couldn't load the membership plans"
+        />
         {plans.data && <MembershipPlanList plans={plans.data} />}
-      </section>
-      <section aria-labelledby="calendar-heading" className="flex flex-col gap-3">
-        <h2 id="calendar-heading" className="text-xl">
-          Fiscal calendar
-        </h2>
-        {calendar.isPending && <Spinner label="Loading the calendar…" />}
-        {calendar.isError && (
-          <Alert tone="error" title="Couldn't load the calendar">
-            <p>{errorMessage(calendar.error)}</p>
-          </Alert>
-        )}
+      </TitledSection>
+      <TitledSection headingId="calendar-heading" title="Fiscal calendar">
+        <QueryStatus
+          query={calendar}
+          loadingLabel="Loading the calendar…"
+          errorTitle="Couldn't load the calendar"
+        />
         {save.isSuccess && (
           <Alert tone="success" title="Calendar saved">
             <p>New quotes and the roster follow the new fiscal year from now on.</p>
@@ -72,7 +65,7 @@ function PlansScreen() {
             />
           </Suspense>
         )}
-      </section>
+      </TitledSection>
     </Page>
   );
 }

@@ -2,10 +2,11 @@ import { Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Page } from '@/components/ui/page';
+import { QueryStatus } from '@/components/ui/query-status';
 import { Spinner } from '@/components/ui/spinner';
+import { TitledSection } from '@/components/ui/titled-section';
 import { paths } from '@/config/paths';
 import { apiUrl } from '@/lib/api-client';
-import { errorMessage } from '@/lib/form-errors';
 import { lazyNamed } from '@/lib/lazy-named';
 import { RequireAuth } from '@/features/auth/components/require-auth';
 import { usePayments } from '@/features/treasury/api/get-payments';
@@ -52,41 +53,39 @@ function TreasuryScreen() {
           Download the ledger (CSV)
         </a>
       </nav>
-      {summary.isPending && <Spinner label="Loading the summary…" />}
-      {summary.isError && (
-        <Alert tone="error" title="Couldn't load the summary">
-          <p>{errorMessage(summary.error)}</p>
-        </Alert>
-      )}
+      <QueryStatus
+        query={summary}
+        loadingLabel="Loading the summary…"
+        errorTitle="Couldn't load the summary"
+      />
       {s && (
-        <section aria-labelledby="summary-heading" className="flex flex-col gap-3">
-          <h2 id="summary-heading" className="text-xl">
-            Fiscal year {s.fiscalYear.label}
-          </h2>
+        <TitledSection headingId="summary-heading" title={`Fiscal year ${s.fiscalYear.label}`}>
           <SummaryTiles summary={s} />
           <p className="text-sm">
             Members: {s.counts.current} current, {s.counts.due} due, {s.counts.overdue} overdue,{' '}
             {s.counts.lapsed} lapsed.
           </p>
           <SummaryChart summary={s} />
-        </section>
+        </TitledSection>
       )}
       {held.length > 0 && (
-        <section aria-labelledby="held-heading" className="flex flex-col gap-2">
-          <h2 id="held-heading" className="text-xl">
-            Held for the treasurer
-          </h2>
+        <TitledSection
+          headingId="held-heading"
+          title="Held for the treasurer"
+          className="flex flex-col gap-2"
+        >
           <p className="text-sm">
             These payments arrived but did not match the plan; they are not credited until you
             decide.
           </p>
           <PaymentsTable payments={held} caption="Held payments" />
-        </section>
+        </TitledSection>
       )}
-      <section aria-labelledby="offline-heading" className="flex flex-col gap-2">
-        <h2 id="offline-heading" className="text-xl">
-          Record a cheque, cash or transfer
-        </h2>
+      <TitledSection
+        headingId="offline-heading"
+        title="Record a cheque, cash or transfer"
+        className="flex flex-col gap-2"
+      >
         {record.isSuccess && (
           <Alert tone="success" title="Payment recorded">
             <p>The member is credited and a receipt is on its way.</p>
@@ -102,16 +101,13 @@ function TreasuryScreen() {
             />
           </Suspense>
         )}
-      </section>
-      <section aria-labelledby="ledger-heading" className="flex flex-col gap-2">
-        <h2 id="ledger-heading" className="text-xl">
-          Ledger
-        </h2>
+      </TitledSection>
+      <TitledSection headingId="ledger-heading" title="Ledger" className="flex flex-col gap-2">
         {payments.isPending && <Spinner label="Loading the ledger…" />}
         {payments.data && (
           <PaymentsTable payments={payments.data} caption="Recent entries, newest first" />
         )}
-      </section>
+      </TitledSection>
     </Page>
   );
 }

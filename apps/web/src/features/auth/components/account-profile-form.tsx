@@ -1,12 +1,11 @@
 import type { UserDto } from '@app/shared';
 import { useId } from 'react';
-import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
-import { applyServerErrors } from '@/lib/form-errors';
 import { useUpdateAccount } from '../api/update-account';
 import { lazyResolver } from '@/lib/lazy-schema';
+import { useAccountForm } from '../hooks/use-account-form';
 
 const resolver = lazyResolver((schemas) => schemas.updateAccountSchema);
 import { AccountForm } from './account-form';
@@ -24,28 +23,19 @@ const UNIT_CHOICES = [
 export function AccountProfileForm({ user }: AccountProfileFormProps) {
   const update = useUpdateAccount();
   const unitErrorId = useId();
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isDirty },
-    reset,
-  } = useForm({
+  const { form, register, errors, frame } = useAccountForm({
     resolver,
     defaultValues: { displayName: user.displayName, unitSystem: user.unitSystem },
-  });
-
-  const onSubmit = handleSubmit(async (input) => {
-    try {
+    fields: ['displayName', 'unitSystem'],
+    send: async (input, { reset }) => {
       const { user: saved } = await update.mutateAsync(input);
       reset({ displayName: saved.displayName, unitSystem: saved.unitSystem });
-    } catch (error) {
-      applyServerErrors(error, setError, ['displayName', 'unitSystem']);
-    }
+    },
   });
+  const { isDirty } = form.formState;
 
   return (
-    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
+    <AccountForm {...frame}>
       {update.isSuccess && !isDirty && <Alert tone="success">Your profile is saved.</Alert>}
       <TextField
         label="Your name"

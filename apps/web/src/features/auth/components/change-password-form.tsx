@@ -1,9 +1,8 @@
-import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { applyServerErrors } from '@/lib/form-errors';
 import { useChangePassword } from '../api/change-password';
 import { lazyResolver } from '@/lib/lazy-schema';
+import { useAccountForm } from '../hooks/use-account-form';
 import { AccountForm, PasswordField } from './account-form';
 
 const resolver = lazyResolver(({ changePasswordSchema, z }) =>
@@ -20,25 +19,18 @@ const EMPTY = { currentPassword: '', newPassword: '', confirmNewPassword: '' };
 /** Changes the password; the current one is asked for again. */
 export function ChangePasswordForm() {
   const change = useChangePassword();
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    formState: { errors },
-  } = useForm({ resolver, defaultValues: EMPTY });
-
-  const onSubmit = handleSubmit(async ({ currentPassword, newPassword }) => {
-    try {
+  const { register, errors, frame } = useAccountForm({
+    resolver,
+    defaultValues: EMPTY,
+    fields: ['currentPassword', 'newPassword'],
+    send: async ({ currentPassword, newPassword }, form) => {
       await change.mutateAsync({ currentPassword, newPassword });
-      reset(EMPTY);
-    } catch (error) {
-      applyServerErrors(error, setError, ['currentPassword', 'newPassword']);
-    }
+      form.reset(EMPTY);
+    },
   });
 
   return (
-    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
+    <AccountForm {...frame}>
       {change.isSuccess && <Alert tone="success">Your password is changed.</Alert>}
       <PasswordField
         label="Current password"

@@ -1,8 +1,7 @@
-import { useForm } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { applyServerErrors } from '@/lib/form-errors';
 import { lazyResolver } from '@/lib/lazy-schema';
+import { useAccountForm } from '../hooks/use-account-form';
 
 const resolver = lazyResolver((schemas) => schemas.resetRequestSchema);
 import { AccountForm, EmailField } from './account-form';
@@ -29,22 +28,11 @@ export function EmailRequestForm({
   doneText,
   defaultEmail = '',
 }: EmailRequestFormProps) {
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors },
-  } = useForm({
+  const { register, errors, frame } = useAccountForm({
     resolver,
     defaultValues: { email: defaultEmail },
-  });
-
-  const onSubmit = handleSubmit(async (input) => {
-    try {
-      await request.mutateAsync(input);
-    } catch (error) {
-      applyServerErrors(error, setError, ['email']);
-    }
+    fields: ['email'],
+    send: (input) => request.mutateAsync(input),
   });
 
   if (request.isSuccess) {
@@ -56,7 +44,7 @@ export function EmailRequestForm({
   }
 
   return (
-    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
+    <AccountForm {...frame}>
       <EmailField error={errors.email?.message} {...register('email')} />
       <Button type="submit" isPending={request.isPending} pendingLabel="Sending…">
         {submitLabel}

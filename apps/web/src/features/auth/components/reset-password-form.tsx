@@ -1,12 +1,11 @@
-import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
-import { applyServerErrors } from '@/lib/form-errors';
 import { useConfirmPasswordReset } from '../api/confirm-password-reset';
 import { lazyResolver } from '@/lib/lazy-schema';
+import { useAccountForm } from '../hooks/use-account-form';
 import { AccountForm, PasswordField } from './account-form';
 
 const resolver = lazyResolver(({ passwordSchema, z }) =>
@@ -32,22 +31,13 @@ function isDeadLink(error: unknown): boolean {
 /** Sets a new password with the token from the e-mailed reset link. */
 export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   const confirm = useConfirmPasswordReset();
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors },
-  } = useForm({
+  const { register, errors, frame } = useAccountForm({
     resolver,
     defaultValues: { password: '', confirmPassword: '' },
-  });
-
-  const onSubmit = handleSubmit(async ({ password }) => {
-    try {
-      await confirm.mutateAsync({ token, password });
-    } catch (error) {
-      if (!isDeadLink(error)) applyServerErrors(error, setError, ['password']);
-    }
+    fields: ['password'],
+    send: ({ password }) => confirm.mutateAsync({ token, password }),
+    // A used or expired link replaces the form with its own message.
+    isShownElsewhere: isDeadLink,
   });
 
   if (confirm.isSuccess) {
@@ -71,7 +61,7 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   }
 
   return (
-    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
+    <AccountForm {...frame}>
       <PasswordField
         label="New password"
         isNew

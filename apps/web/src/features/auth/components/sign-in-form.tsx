@@ -1,15 +1,15 @@
 import type { SessionDto } from '@app/shared';
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
-import { applyServerErrors, errorMessage } from '@/lib/form-errors';
+import { errorMessage } from '@/lib/form-errors';
 import { useLogin } from '../api/login';
 import { useResendVerification } from '../api/resend-verification';
 import { lazyResolver } from '@/lib/lazy-schema';
+import { useAccountForm } from '../hooks/use-account-form';
 
 const resolver = lazyResolver((schemas) => schemas.loginSchema);
 import { AccountForm, EmailField, PasswordField } from './account-form';
@@ -20,34 +20,34 @@ export interface SignInFormProps {
 
 const FIELDS = ['email', 'password'] as const;
 
+const isUnverified = (error: unknown) =>
+  error instanceof ApiError && error.code === 'EMAIL_NOT_VERIFIED';
+
 /** E-mail + password sign-in, with a resend offer when the address is not verified yet. */
 export function SignInForm({ onSignedIn }: SignInFormProps) {
   const login = useLogin();
   const resend = useResendVerification();
   const [unverifiedEmail, setUnverifiedEmail] = useState<string | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors },
-  } = useForm({ resolver, defaultValues: { email: '', password: '' } });
-
-  const onSubmit = handleSubmit(async (input) => {
-    setUnverifiedEmail(null);
-    resend.reset();
-    try {
-      onSignedIn(await login.mutateAsync(input));
-    } catch (error) {
-      if (error instanceof ApiError && error.code === 'EMAIL_NOT_VERIFIED') {
-        setUnverifiedEmail(input.email);
-        return;
+  const { register, errors, frame } = useAccountForm({
+    resolver,
+    defaultValues: { email: '', password: '' },
+    fields: FIELDS,
+    send: async (input) => {
+      setUnverifiedEmail(null);
+      resend.reset();
+      try {
+        onSignedIn(await login.mutateAsync(input));
+      } catch (error) {
+        if (isUnverified(error)) setUnverifiedEmail(input.email);
+        throw error;
       }
-      applyServerErrors(error, setError, FIELDS);
-    }
+    },
+    // An address not confirmed yet gets the resend offer instead of a field message.
+    isShownElsewhere: isUnverified,
   });
 
   return (
-    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
+    <AccountForm {...frame}>
       {unverifiedEmail && (
         <Alert
           tone="warning"

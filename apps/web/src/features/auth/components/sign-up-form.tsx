@@ -1,12 +1,11 @@
-import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { paths } from '@/config/paths';
-import { applyServerErrors } from '@/lib/form-errors';
 import { useSignup } from '../api/signup';
 import { lazyResolver } from '@/lib/lazy-schema';
+import { useAccountForm } from '../hooks/use-account-form';
 
 const resolver = lazyResolver((schemas) => schemas.signupSchema);
 import { AccountForm, EmailField, PasswordField } from './account-form';
@@ -16,22 +15,11 @@ const FIELDS = ['email', 'password', 'displayName'] as const;
 /** Creates an account; on success it asks the person to confirm the address from their inbox. */
 export function SignUpForm() {
   const signup = useSignup();
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors },
-  } = useForm({
+  const { register, errors, frame } = useAccountForm({
     resolver,
     defaultValues: { email: '', password: '', displayName: '' },
-  });
-
-  const onSubmit = handleSubmit(async (input) => {
-    try {
-      await signup.mutateAsync(input);
-    } catch (error) {
-      applyServerErrors(error, setError, FIELDS);
-    }
+    fields: FIELDS,
+    send: (input) => signup.mutateAsync(input),
   });
 
   if (signup.isSuccess) {
@@ -46,7 +34,7 @@ export function SignUpForm() {
   }
 
   return (
-    <AccountForm onSubmit={onSubmit} serverError={errors.root?.server?.message}>
+    <AccountForm {...frame}>
       <TextField
         label="Your name"
         hint="Shown to other members on posts and listings."

@@ -1,9 +1,10 @@
 import { formatDate } from '@app/shared/locale';
 import type { ListingDto } from '@app/shared';
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
+import { TitledSection } from '@/components/ui/titled-section';
 import { errorMessage } from '@/lib/form-errors';
 import { useChangeListingStatus } from '../api/change-listing-status';
 import { useListingThreads } from '../api/get-listing-threads';
@@ -34,24 +35,20 @@ export function OwnerActions({ listing, editHref }: { listing: ListingDto; editH
       },
     );
   return (
-    <section
-      aria-labelledby="owner-heading"
+    <TitledSection
+      headingId="owner-heading"
+      title="Your listing"
       className="flex flex-col gap-3 rounded-lg border border-sand-300 bg-sand-100 p-4"
+      headingClassName="text-lg"
     >
-      <h2 id="owner-heading" className="text-lg">
-        Your listing
-      </h2>
       {listing.expiresAt && listing.status === 'active' && (
         <p className="text-sm">Shows in search until {formatDate(listing.expiresAt)}.</p>
       )}
       <div className="flex flex-wrap items-end gap-2">
         {listing.status !== 'sold' && (
-          <Link
-            to={editHref}
-            className="inline-flex min-h-11 items-center rounded-md border border-sand-500 px-4 font-bold no-underline"
-          >
+          <LinkButton to={editHref} variant="outline">
             Edit and photos
-          </Link>
+          </LinkButton>
         )}
         {listing.status === 'draft' && (
           <Button isPending={change.isPending} onClick={() => act('publish')}>
@@ -101,6 +98,6 @@ export function OwnerActions({ listing, editHref }: { listing: ListingDto; editH
           onCancel={() => setAsking(false)}
         />
       )}
-    </section>
+    </TitledSection>
   );
 }

@@ -6,6 +6,7 @@ import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { useCreateMembershipPlan, useUpdateMembershipPlan } from '../api/save-membership-plan';
 import { Spinner } from '@/components/ui/spinner';
+import { TitledSection } from '@/components/ui/titled-section';
 import { lazyNamed } from '@/lib/lazy-named';
 
 // Opened by Edit or New plan, so the form (and the form library) loads then.
@@ -101,13 +102,13 @@ export function MembershipPlanList({ plans }: { plans: PlanDto[] }) {
         </Alert>
       )}
       {isAdding ? (
-        <section
-          aria-labelledby="new-plan-heading"
+        <TitledSection
+          headingId="new-plan-heading"
+          title="New plan"
+          level={3}
           className="rounded-lg border border-sand-300 p-4"
+          headingClassName="mb-3 text-lg"
         >
-          <h3 id="new-plan-heading" className="mb-3 text-lg">
-            New plan
-          </h3>
           <Suspense fallback={<Spinner label="Loading the form…" />}>
             <MembershipPlanForm
               isPending={create.isPending}
@@ -119,7 +120,7 @@ export function MembershipPlanList({ plans }: { plans: PlanDto[] }) {
               }}
             />
           </Suspense>
-        </section>
+        </TitledSection>
       ) : (
         <div>
           <Button
