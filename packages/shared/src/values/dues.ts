@@ -1,8 +1,8 @@
 // The dues vocabulary: plan kinds, prorations, payment methods and statuses, with the words people read.
+import { labelKeys } from './label-keys';
+
 /** How a plan's annual amount is cut for a member who joins after the fiscal year began. */
-export const PRORATIONS = ['none', 'monthly', 'quarterly', 'daily'] as const;
-export type Proration = (typeof PRORATIONS)[number];
-export const PRORATION_LABELS: Record<Proration, string> = {
+export const PRORATION_LABELS = {
   none: 'Full year, whenever they join',
   monthly: 'By remaining months (the joining month counts)',
   quarterly: 'By remaining quarters (the joining quarter counts)',
@@ -10,16 +10,7 @@ export const PRORATION_LABELS: Record<Proration, string> = {
 };
 
 /** What sort of member a plan is for; the treasurer names the plan itself. */
-export const PLAN_KINDS = [
-  'individual',
-  'family',
-  'junior',
-  'senior',
-  'associate',
-  'other',
-] as const;
-export type PlanKind = (typeof PLAN_KINDS)[number];
-export const PLAN_KIND_LABELS: Record<PlanKind, string> = {
+export const PLAN_KIND_LABELS = {
   individual: 'Individual',
   family: 'Family or household',
   junior: 'Junior',
@@ -28,29 +19,19 @@ export const PLAN_KIND_LABELS: Record<PlanKind, string> = {
   other: 'Other',
 };
 
-export const PAYMENT_METHODS = ['card', 'cheque', 'cash', 'transfer'] as const;
-export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
-export const OFFLINE_METHODS = ['cheque', 'cash', 'transfer'] as const;
-export type OfflineMethod = (typeof OFFLINE_METHODS)[number];
-export const METHOD_LABELS: Record<PaymentMethod, string> = {
+export const METHOD_LABELS = {
   card: 'Card',
   cheque: 'Cheque',
   cash: 'Cash',
   transfer: 'Bank transfer',
 };
 
-/** pending: checkout opened · succeeded: credited · held: money in but not credited until the treasurer decides · dismissed: held and not credited · failed/expired: no money moved. */
-export const PAYMENT_STATUSES = [
-  'pending',
-  'succeeded',
-  'held',
-  'dismissed',
-  'failed',
-  'expired',
-] as const;
-export type PaymentStatus = (typeof PAYMENT_STATUSES)[number];
-/** Ledger statuses as the treasurer reads them. */
-export const PAYMENT_STATUS_LABELS: Record<PaymentStatus, string> = {
+/**
+ * Ledger statuses as the treasurer reads them. pending: checkout opened · succeeded: credited ·
+ * held: money in but not credited until the treasurer decides · dismissed: held and not
+ * credited · failed/expired: no money moved.
+ */
+export const PAYMENT_STATUS_LABELS = {
   pending: 'Checkout open',
   succeeded: 'Credited',
   held: 'Held',
@@ -58,17 +39,28 @@ export const PAYMENT_STATUS_LABELS: Record<PaymentStatus, string> = {
   failed: 'Failed',
   expired: 'Expired',
 };
-export const REFUND_STATUSES = ['pending', 'succeeded', 'failed'] as const;
-export type RefundStatus = (typeof REFUND_STATUSES)[number];
 
 /** Derived from the paid-through date and the club calendar. */
-export const DUES_STATUSES = ['current', 'due', 'overdue', 'lapsed'] as const;
-export type DuesStatus = (typeof DUES_STATUSES)[number];
-export const DUES_STATUS_LABELS: Record<DuesStatus, string> = {
+export const DUES_STATUS_LABELS = {
   current: 'Current',
   due: 'Due',
   overdue: 'Overdue',
   lapsed: 'Lapsed',
 };
 
-// Field schemas the plan, calendar and payment schemas share.
+// The value lists, in the order of their labels above.
+export const PRORATIONS = labelKeys(PRORATION_LABELS);
+export const PLAN_KINDS = labelKeys(PLAN_KIND_LABELS);
+export const PAYMENT_METHODS = labelKeys(METHOD_LABELS);
+export const OFFLINE_METHODS = ['cheque', 'cash', 'transfer'] as const;
+export const PAYMENT_STATUSES = labelKeys(PAYMENT_STATUS_LABELS);
+export const REFUND_STATUSES = ['pending', 'succeeded', 'failed'] as const;
+export const DUES_STATUSES = labelKeys(DUES_STATUS_LABELS);
+
+export type Proration = (typeof PRORATIONS)[number];
+export type PlanKind = (typeof PLAN_KINDS)[number];
+export type PaymentMethod = (typeof PAYMENT_METHODS)[number];
+export type OfflineMethod = (typeof OFFLINE_METHODS)[number];
+export type PaymentStatus = (typeof PAYMENT_STATUSES)[number];
+export type RefundStatus = (typeof REFUND_STATUSES)[number];
+export type DuesStatus = (typeof DUES_STATUSES)[number];

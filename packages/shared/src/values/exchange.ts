@@ -1,17 +1,8 @@
 // Exchange vocabulary and limits, without the schemas: the web app's first load reads these.
+import { labelKeys } from './label-keys';
+
 /** What can be listed on the exchange. */
-export const LISTING_CATEGORIES = [
-  'anchor',
-  'chain',
-  'rode',
-  'connector',
-  'snubber',
-  'windlass',
-  'mooring',
-  'other',
-] as const;
-export type ListingCategory = (typeof LISTING_CATEGORIES)[number];
-export const LISTING_CATEGORY_LABELS: Record<ListingCategory, string> = {
+export const LISTING_CATEGORY_LABELS = {
   anchor: 'Anchors',
   chain: 'Chain',
   rode: 'Rope rode',
@@ -22,9 +13,7 @@ export const LISTING_CATEGORY_LABELS: Record<ListingCategory, string> = {
   other: 'Other',
 };
 
-export const LISTING_CONDITIONS = ['new', 'like-new', 'good', 'fair', 'for-parts'] as const;
-export type ListingCondition = (typeof LISTING_CONDITIONS)[number];
-export const LISTING_CONDITION_LABELS: Record<ListingCondition, string> = {
+export const LISTING_CONDITION_LABELS = {
   new: 'New, unused',
   'like-new': 'Like new',
   good: 'Good, light wear',
@@ -32,9 +21,10 @@ export const LISTING_CONDITION_LABELS: Record<ListingCondition, string> = {
   'for-parts': 'Spares only, not for use',
 };
 
+// The value lists, in the order of their labels above.
+export const LISTING_CATEGORIES = labelKeys(LISTING_CATEGORY_LABELS);
+export const LISTING_CONDITIONS = labelKeys(LISTING_CONDITION_LABELS);
 export const LISTING_STATUSES = ['draft', 'active', 'sold', 'expired', 'withdrawn'] as const;
-export type ListingStatus = (typeof LISTING_STATUSES)[number];
-
 export const CURRENCIES = [
   'EUR',
   'GBP',
@@ -47,7 +37,6 @@ export const CURRENCIES = [
   'DKK',
   'CHF',
 ] as const;
-export type Currency = (typeof CURRENCIES)[number];
 
 export const GALVANIZING_STATES = ['as-new', 'good', 'patchy', 'needs-regalvanizing'] as const;
 export const ROPE_MATERIAL_IDS = ['nylon', 'polyester'] as const;
@@ -62,3 +51,8 @@ export const MAX_LISTING_PHOTOS = 8;
 export const LISTING_LIFETIME_DAYS = 60;
 /** Largest price, in minor units (100 000.00). */
 export const MAX_PRICE_CENTS = 10_000_000;
+
+export type ListingCategory = (typeof LISTING_CATEGORIES)[number];
+export type ListingCondition = (typeof LISTING_CONDITIONS)[number];
+export type ListingStatus = (typeof LISTING_STATUSES)[number];
+export type Currency = (typeof CURRENCIES)[number];
